@@ -1,0 +1,85 @@
+/**
+ * Physical and astronomical constants, in SI unless the name says otherwise.
+ *
+ * Each constant names its source; derived constants show their derivation.
+ * Nothing else in zcell hard-codes a physical number.
+ */
+
+/** Speed of light in vacuum [m/s]. Exact by definition of the metre (SI 2019). */
+export const speedOfLightMPerS = 299_792_458;
+
+/** Speed of light in vacuum [km/s]. Derived: speedOfLightMPerS / 1000. */
+export const speedOfLightKmPerS = speedOfLightMPerS / 1000;
+
+/** Astronomical unit [m]. Exact by IAU 2012 Resolution B2. */
+export const auM = 149_597_870_700;
+
+/** Parsec [m]. IAU 2015 Resolution B2: 1 pc = 648000/π au exactly. */
+export const parsecM = (648_000 / Math.PI) * auM;
+
+/** Megaparsec [m]. Derived: 1e6 pc. */
+export const megaparsecM = 1e6 * parsecM;
+
+/** Megaparsec [km]. Derived: megaparsecM / 1000. */
+export const megaparsecKm = megaparsecM / 1000;
+
+/** Julian year [s]: 365.25 days of 86400 s (IAU; common practice in astronomy). */
+export const julianYearS = 365.25 * 86_400;
+
+/** Gigayear [s]. Derived: 1e9 Julian years. */
+export const secondsPerGyr = 1e9 * julianYearS;
+
+/** Light year [m]: distance light travels in one Julian year (IAU). Derived: c × julianYearS. */
+export const lightYearM = speedOfLightMPerS * julianYearS;
+
+/** Newtonian constant of gravitation [m³ kg⁻¹ s⁻²]. CODATA 2018 recommended value. */
+export const gravitationalConstantSI = 6.6743e-11;
+
+/** Stefan–Boltzmann constant [W m⁻² K⁻⁴]. Exact in SI 2019 (derived from exact h, k, c). */
+export const stefanBoltzmannSI = 5.670374419e-8;
+
+/** Boltzmann constant [eV/K]. CODATA 2018 (exact in SI 2019: k/e = 1.380649e-23 / 1.602176634e-19). */
+export const boltzmannEvPerK = 8.617333262e-5;
+
+/** Nominal solar luminosity [W]. IAU 2015 Resolution B3. */
+export const solarLuminosityW = 3.828e26;
+
+/** Zero point of the absolute bolometric magnitude scale [W]: M_bol = −2.5 log10(L / L0). IAU 2015 Resolution B2. */
+export const bolometricZeroPointW = 3.0128e28;
+
+/** Nominal solar mass parameter GM☉ [m³ s⁻²]. IAU 2015 Resolution B3. */
+export const solarMassParameterSI = 1.3271244e20;
+
+/** Solar mass [kg]. Derived: IAU 2015 B3 nominal GM☉ / G (CODATA 2018) ≈ 1.98841e30 kg. */
+export const solarMassKg = solarMassParameterSI / gravitationalConstantSI;
+
+/** Jansky [W m⁻² Hz⁻¹]. IAU: 1 Jy = 1e-26 W m⁻² Hz⁻¹. */
+export const janskySI = 1e-26;
+
+/** erg [J]. CGS: 1 erg = 1e-7 J. */
+export const ergJ = 1e-7;
+
+/**
+ * AB magnitude offset: m_AB = −2.5 log10(f_ν / (erg s⁻¹ cm⁻² Hz⁻¹)) − 48.60 (Oke & Gunn 1983, ApJ 266, 713).
+ * The zero point this implies is f_ν = 10^(−48.60/2.5) erg s⁻¹ cm⁻² Hz⁻¹ = 3.630781e-20 erg s⁻¹ cm⁻² Hz⁻¹
+ * = 3630.78 Jy (derived: 1 erg s⁻¹ cm⁻² Hz⁻¹ = 1e-3 W m⁻² Hz⁻¹ = 1e23 Jy).
+ */
+export const abMagnitudeOffset = 48.6;
+
+/** Flux density of AB magnitude 0 [Jy]. Derived from abMagnitudeOffset: 1e23 × 10^(−48.6/2.5) ≈ 3630.78 Jy. */
+export const abZeroPointJy = 1e23 * 10 ** (-abMagnitudeOffset / 2.5);
+
+/** Radian per arcsecond. Derived: π / (180 × 3600). */
+export const radPerArcsec = Math.PI / 648_000;
+
+/**
+ * Neutrino to photon temperature ratio after e± annihilation, (4/11)^(1/3)
+ * (standard instantaneous-decoupling result; e.g. Weinberg, Cosmology, 2008, §3.1).
+ */
+export const neutrinoTemperatureRatio = Math.cbrt(4 / 11);
+
+/**
+ * Energy density of one massless neutrino species, with its antiparticle, relative to photons at
+ * Neff = 3: (7/8)(4/11)^(4/3) ≈ 0.2271 (Fermi–Dirac vs Bose–Einstein factor 7/8 times T_ν⁴/T_γ⁴).
+ */
+export const neutrinoToPhotonDensityPerSpecies = (7 / 8) * (4 / 11) ** (4 / 3);

@@ -1,0 +1,39 @@
+/**
+ * zcell core: the public surface of the cosmology engine (plain numbers; RangeError/TypeError).
+ * Every export is listed here by name.
+ */
+export {
+  abZeroPointJy,
+  auM,
+  bolometricZeroPointW,
+  gravitationalConstantSI,
+  julianYearS,
+  megaparsecM,
+  parsecM,
+  radPerArcsec,
+  secondsPerGyr,
+  solarLuminosityW,
+  solarMassKg,
+  speedOfLightKmPerS,
+  speedOfLightMPerS,
+} from "./constants.js";
+export { Cosmology, type DensityComponent, type InvertibleQuantity } from "./Cosmology.js";
+export { fermiDiracDensityFactor } from "./fermiDirac.js";
+export { type ModelParameters, parameterKeys, type ParameterKey } from "./ModelParameters.js";
+export { formatModelSpec, parseModelSpec } from "./modelSpec.js";
+export { NoSolutionError } from "./NoSolutionError.js";
+export {
+  abFluxDensityJy,
+  abMagnitude,
+  absoluteMagnitude,
+  apparentMagnitude,
+  bolometricAbsoluteMagnitude,
+  bolometricLuminosityW,
+  fluxWm2,
+  kCorrectionPowerLawMag,
+  luminosityW,
+  spectralLuminosityWHz,
+} from "./photometry.js";
+export { findPreset, presets, type Preset } from "./presets.js";
+export { checkRedshift } from "./redshift.js";
+export { conversionFactor, convertUnit, parseUnit, type Unit } from "./units.js";

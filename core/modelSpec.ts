@@ -1,0 +1,115 @@
+/**
+ * Model spec text: zcell's own one-line syntax for a cosmological model, as typed in a cell.
+ *
+ *   PRESET                      e.g. PLANCK2018
+ *   PRESET; key=value; ...      e.g. PLANCK2018; H0=73
+ *   key=value; ...              e.g. H0=70; Om=0.3; OL=0.7
+ *
+ * Keys (case-insensitive, spaces ignored, '.' is the decimal point): H0, Om, OL or Ok (not both),
+ * Ob, w0, wa, Tcmb, Neff, mnu (one total mass in eV, or a list `mnu=0.05,0.01,0`). Without a preset,
+ * H0 and Om are required and Tcmb = 0 (no radiation) unless given, Neff = 3.046, mnu = 0, w0 = −1,
+ * wa = 0; a model with neither OL nor Ok is flat.
+ */
+import { parameterKeys, specDefaults, type ModelParameters, type ParameterKey } from "./ModelParameters.js";
+import { findPreset, presets } from "./presets.js";
+
+const numberPattern = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+
+function parseNumber(key: string, text: string): number {
+  if (!numberPattern.test(text)) throw new TypeError(`${key}: "${text}" is not a number (use '.' as the decimal point)`);
+  return Number(text);
+}
+
+function parseMasses(text: string): number[] {
+  const items = text.split(",");
+  if (items.length > 3) throw new TypeError(`mnu: at most three masses, got ${items.length}`);
+  return items
+    .map((item) => parseNumber("mnu", item))
+    .filter((m) => m !== 0)
+    .sort((a, b) => b - a);
+}
+
+const keyByLowerCase = new Map<string, ParameterKey>(parameterKeys.map((k) => [k.toLowerCase(), k]));
+
+/**
+ * Parses model spec text into parameters (syntax only; physical checks happen when the model is built).
+ *
+ * @param text spec text, e.g. "PLANCK2018; H0=73"
+ * @returns the model parameters
+ * @throws TypeError naming the offending key or token
+ * @example parseModelSpec("H0=70; Om=0.3").OL // undefined (flat)
+ */
+export function parseModelSpec(text: string): ModelParameters {
+  if (typeof text !== "string") throw new TypeError("model spec must be text");
+  const parts = text
+    .split(";")
+    .map((part) => part.replace(/\s+/g, ""))
+    .filter((part) => part !== "");
+  if (parts.length === 0) throw new TypeError("empty model spec: give a preset name or key=value pairs");
+  let base: ModelParameters | undefined;
+  const given = new Map<ParameterKey, string>();
+  parts.forEach((part, index) => {
+    const eq = part.indexOf("=");
+    if (eq < 0) {
+      if (index > 0) throw new TypeError(`"${part}" is not key=value (a preset name may only come first)`);
+      const preset = findPreset(part);
+      if (!preset) {
+        throw new TypeError(`unknown preset "${part}": use one of ${presets.map((p) => p.name).join(", ")}`);
+      }
+      base = preset.parameters;
+      return;
+    }
+    const rawKey = part.slice(0, eq);
+    const key = keyByLowerCase.get(rawKey.toLowerCase());
+    if (!key) throw new TypeError(`unknown key "${rawKey}": use ${parameterKeys.join(", ")}`);
+    if (given.has(key)) throw new TypeError(`${key} is given twice`);
+    given.set(key, part.slice(eq + 1));
+  });
+  if (given.has("OL") && given.has("Ok")) throw new TypeError("give OL or Ok, not both");
+  if (!base) {
+    for (const key of ["H0", "Om"] as const) {
+      if (!given.has(key)) throw new TypeError(`${key} is required (or start from a preset, e.g. "PLANCK2018; ...")`);
+    }
+  }
+  const p: ModelParameters = base
+    ? { ...base, mnu: [...base.mnu] }
+    : { ...specDefaults, mnu: [], H0: Number.NaN, Om: Number.NaN };
+  for (const [key, value] of given) {
+    if (key === "mnu") p.mnu = parseMasses(value);
+    else p[key] = parseNumber(key, value);
+  }
+  if (given.has("OL")) delete p.Ok;
+  if (given.has("Ok")) delete p.OL;
+  return p;
+}
+
+function sameMasses(a: readonly number[], b: readonly number[]): boolean {
+  return a.length === b.length && a.every((m, i) => m === b[i]);
+}
+
+/**
+ * Canonical spec text: the shortest spec that rebuilds the same parameters, so that
+ * parseModelSpec(formatModelSpec(p)) equals p. Keys differing from the preset (or from the defaults)
+ * are written in the order H0, Om, OL, Ok, Ob, w0, wa, Tcmb, Neff, mnu; numbers in shortest
+ * round-trip form.
+ *
+ * @param p model parameters
+ * @returns spec text, e.g. "PLANCK2018; H0=73"
+ * @example formatModelSpec(parseModelSpec("om = 0.30 ; H0=70.0")) // "H0=70; Om=0.3"
+ */
+export function formatModelSpec(p: ModelParameters): string {
+  const preset = p.preset ? findPreset(p.preset) : undefined;
+  const base: Partial<ModelParameters> = preset ? preset.parameters : specDefaults;
+  const out: string[] = preset ? [preset.name] : [];
+  for (const key of parameterKeys) {
+    if (key === "mnu") {
+      if (!sameMasses(p.mnu, base.mnu ?? [])) out.push(`mnu=${p.mnu.length ? p.mnu.join(",") : "0"}`);
+      continue;
+    }
+    const value = p[key];
+    if (value === undefined) continue;
+    if (!preset && (key === "H0" || key === "Om")) out.push(`${key}=${value}`);
+    else if (value !== base[key]) out.push(`${key}=${value}`);
+  }
+  return out.join("; ");
+}

@@ -1,0 +1,289 @@
+/**
+ * Unit strings in the FITS standard syntax (FITS 4.0, Pence et al. 2010 A&A 524, A42, §4.3): SI
+ * prefixes, products with ' ', '.' or '*', division '/', powers as 'cm2', 's-1', 'm**2', 'm^2' or
+ * 'm**(-2)', parentheses, and scale factors '10**k'. Recognised units are the IAU/FITS ones the
+ * trade uses plus the aliases astronomers type (Lsun, ly, Msun, µJy, ...).
+ *
+ * Angles are kept as a dimension of their own (rad; sr = rad²) so that 'kpc/arcsec' converts to
+ * 'Mpc/rad' but not to 'kpc'. Temperatures are absolute (K) only.
+ */
+import {
+  auM,
+  ergJ,
+  janskySI,
+  julianYearS,
+  lightYearM,
+  parsecM,
+  solarLuminosityW,
+  solarMassKg,
+} from "./constants.js";
+
+/** Exponents of the base dimensions, in the order m, kg, s, K, rad. */
+type Dimensions = readonly [number, number, number, number, number];
+
+/** A parsed unit: value in SI base units = value in this unit × factor. */
+export interface Unit {
+  /** The text as given. */
+  readonly text: string;
+  /** SI factor: 1 of this unit = factor × the SI base combination. */
+  readonly factor: number;
+  /** Exponents of m, kg, s, K, rad. */
+  readonly dimensions: Dimensions;
+}
+
+type Definition = { factor: number; dimensions: Dimensions; prefixable: boolean };
+
+const none: Dimensions = [0, 0, 0, 0, 0];
+const d = (m: number, kg: number, s: number, K = 0, rad = 0): Dimensions => [m, kg, s, K, rad];
+
+const degree = Math.PI / 180;
+const definitions: Record<string, Definition> = {
+  m: { factor: 1, dimensions: d(1, 0, 0), prefixable: true },
+  g: { factor: 1e-3, dimensions: d(0, 1, 0), prefixable: true },
+  s: { factor: 1, dimensions: d(0, 0, 1), prefixable: true },
+  min: { factor: 60, dimensions: d(0, 0, 1), prefixable: false },
+  h: { factor: 3600, dimensions: d(0, 0, 1), prefixable: false },
+  d: { factor: 86_400, dimensions: d(0, 0, 1), prefixable: false },
+  yr: { factor: julianYearS, dimensions: d(0, 0, 1), prefixable: true },
+  a: { factor: julianYearS, dimensions: d(0, 0, 1), prefixable: true },
+  Hz: { factor: 1, dimensions: d(0, 0, -1), prefixable: true },
+  J: { factor: 1, dimensions: d(2, 1, -2), prefixable: true },
+  erg: { factor: ergJ, dimensions: d(2, 1, -2), prefixable: false },
+  W: { factor: 1, dimensions: d(2, 1, -3), prefixable: true },
+  Jy: { factor: janskySI, dimensions: d(0, 1, -2), prefixable: true },
+  pc: { factor: parsecM, dimensions: d(1, 0, 0), prefixable: true },
+  au: { factor: auM, dimensions: d(1, 0, 0), prefixable: false },
+  AU: { factor: auM, dimensions: d(1, 0, 0), prefixable: false },
+  lyr: { factor: lightYearM, dimensions: d(1, 0, 0), prefixable: true },
+  solLum: { factor: solarLuminosityW, dimensions: d(2, 1, -3), prefixable: false },
+  solMass: { factor: solarMassKg, dimensions: d(0, 1, 0), prefixable: false },
+  K: { factor: 1, dimensions: d(0, 0, 0, 1), prefixable: true },
+  rad: { factor: 1, dimensions: d(0, 0, 0, 0, 1), prefixable: true },
+  deg: { factor: degree, dimensions: d(0, 0, 0, 0, 1), prefixable: false },
+  arcmin: { factor: degree / 60, dimensions: d(0, 0, 0, 0, 1), prefixable: false },
+  arcsec: { factor: degree / 3600, dimensions: d(0, 0, 0, 0, 1), prefixable: false },
+  mas: { factor: degree / 3.6e6, dimensions: d(0, 0, 0, 0, 1), prefixable: false },
+  sr: { factor: 1, dimensions: d(0, 0, 0, 0, 2), prefixable: false },
+};
+
+/** Spellings astronomers type, mapped to FITS symbols. */
+const aliases: Record<string, string> = {
+  ly: "lyr",
+  Gly: "Glyr",
+  Mly: "Mlyr",
+  kly: "klyr",
+  Lsun: "solLum",
+  Msun: "solMass",
+  arcsecond: "arcsec",
+  arcminute: "arcmin",
+};
+
+const prefixes: Record<string, number> = {
+  Y: 1e24, Z: 1e21, E: 1e18, P: 1e15, T: 1e12, G: 1e9, M: 1e6, k: 1e3, h: 1e2, da: 1e1,
+  d: 1e-1, c: 1e-2, m: 1e-3, u: 1e-6, n: 1e-9, p: 1e-12, f: 1e-15, a: 1e-18, z: 1e-21, y: 1e-24,
+};
+
+/** Names of common dimensions, for messages. */
+const dimensionNames: [Dimensions, string][] = [
+  [d(1, 0, 0), "length"],
+  [d(0, 0, 1), "time"],
+  [d(0, 1, 0), "mass"],
+  [d(0, 0, 0, 1), "temperature"],
+  [d(0, 0, 0, 0, 1), "angle"],
+  [d(0, 0, 0, 0, 2), "solid angle"],
+  [d(3, 0, 0), "volume"],
+  [d(2, 1, -3), "power"],
+  [d(2, 1, -2), "energy, or spectral luminosity (W/Hz)"],
+  [d(0, 1, -3), "flux (power per area)"],
+  [d(0, 1, -2), "flux density (power per area per frequency)"],
+  [d(0, 0, -1), "frequency"],
+  [d(1, 0, -1), "speed"],
+  [d(-3, 1, 0), "density"],
+  [d(1, 0, 0, 0, -1), "length per angle"],
+  [d(3, 0, 0, 0, -2), "volume per solid angle"],
+  [d(0, 0, 0), "dimensionless"],
+];
+
+function sameDimensions(a: Dimensions, b: Dimensions): boolean {
+  return a.every((x, i) => Math.abs(x - b[i]) < 1e-12);
+}
+
+/** A dimension in words (or as base units when it has no common name). */
+function describeDimensions(dims: Dimensions): string {
+  const named = dimensionNames.find(([x]) => sameDimensions(x, dims));
+  if (named) return named[1];
+  const base = ["m", "kg", "s", "K", "rad"];
+  return dims.map((e, i) => (e === 0 ? "" : e === 1 ? base[i] : `${base[i]}${e}`)).filter(Boolean).join(" ");
+}
+
+function resolveSymbol(symbol: string, whole: string): { factor: number; dimensions: Dimensions } {
+  const name = aliases[symbol] ?? symbol;
+  const exact = definitions[name];
+  if (exact) return exact;
+  for (const prefix of Object.keys(prefixes).sort((x, y) => y.length - x.length)) {
+    if (name.startsWith(prefix) && name.length > prefix.length) {
+      const def = definitions[name.slice(prefix.length)];
+      if (def?.prefixable) return { factor: prefixes[prefix] * def.factor, dimensions: def.dimensions };
+    }
+  }
+  if (symbol === "mag") throw new TypeError(`"${whole}": magnitudes are logarithmic, not a unit to convert`);
+  throw new TypeError(`unknown unit "${symbol}" in "${whole}"`);
+}
+
+class UnitParser {
+  private i = 0;
+  constructor(private readonly s: string) {}
+
+  parse(): { factor: number; dimensions: number[] } {
+    const result = this.expression();
+    if (this.i < this.s.length) this.fail(`unexpected "${this.s[this.i]}"`);
+    return result;
+  }
+
+  private fail(what: string): never {
+    throw new TypeError(`unit "${this.s}": ${what}`);
+  }
+
+  private peek(): string {
+    return this.s[this.i] ?? "";
+  }
+
+  private skipSpaces(): boolean {
+    const start = this.i;
+    while (this.peek() === " ") this.i++;
+    return this.i > start;
+  }
+
+  private expression(): { factor: number; dimensions: number[] } {
+    this.skipSpaces();
+    let acc = this.term();
+    for (;;) {
+      const spaced = this.skipSpaces();
+      const c = this.peek();
+      if (c === "/") {
+        this.i++;
+        this.skipSpaces();
+        const t = this.term();
+        acc = { factor: acc.factor / t.factor, dimensions: acc.dimensions.map((x, k) => x - t.dimensions[k]) };
+      } else if (c === "." || c === "*" || (spaced && c !== "" && c !== ")")) {
+        if (c === "." || c === "*") this.i++;
+        this.skipSpaces();
+        const t = this.term();
+        acc = { factor: acc.factor * t.factor, dimensions: acc.dimensions.map((x, k) => x + t.dimensions[k]) };
+      } else {
+        return acc;
+      }
+    }
+  }
+
+  private term(): { factor: number; dimensions: number[] } {
+    const c = this.peek();
+    let base: { factor: number; dimensions: number[] };
+    if (c === "(") {
+      this.i++;
+      base = this.expression();
+      this.skipSpaces();
+      if (this.peek() !== ")") this.fail("missing )");
+      this.i++;
+    } else if (this.s.startsWith("10**", this.i) || this.s.startsWith("10^", this.i)) {
+      this.i += this.s.startsWith("10**", this.i) ? 4 : 3;
+      const k = this.integer();
+      return { factor: 10 ** k, dimensions: [...none] };
+    } else {
+      const m = /^[A-Za-zµμ]+/.exec(this.s.slice(this.i));
+      if (!m) this.fail(c === "" ? "a unit is missing" : `unexpected "${c}"`);
+      this.i += m[0].length;
+      const symbol = m[0].replace(/^[µμ]/, "u");
+      const def = resolveSymbol(symbol, this.s);
+      base = { factor: def.factor, dimensions: [...def.dimensions] };
+    }
+    const power = this.power();
+    return power === 1 ? base : { factor: base.factor ** power, dimensions: base.dimensions.map((x) => x * power) };
+  }
+
+  private integer(): number {
+    const m = /^[+-]?\d+/.exec(this.s.slice(this.i));
+    if (!m) this.fail("a whole-number power is expected");
+    this.i += m[0].length;
+    return Number(m[0]);
+  }
+
+  private power(): number {
+    if (this.s.startsWith("**", this.i)) this.i += 2;
+    else if (this.peek() === "^") this.i += 1;
+    else if (!/[-+\d]/.test(this.peek())) return 1;
+    if (this.peek() === "(") {
+      this.i++;
+      const numerator = this.integer();
+      let denominator = 1;
+      if (this.peek() === "/") {
+        this.i++;
+        denominator = this.integer();
+      }
+      if (this.peek() !== ")") this.fail("missing ) after the power");
+      this.i++;
+      return numerator / denominator;
+    }
+    return this.integer();
+  }
+}
+
+const cache = new Map<string, Unit>();
+
+/**
+ * Parses a FITS-style unit string.
+ *
+ * @param text unit text, e.g. "Mpc", "erg/s/cm2", "kpc/arcsec", "km s-1 Mpc-1"
+ * @returns the unit with its SI factor and dimensions
+ * @throws TypeError for unknown symbols or malformed text
+ * @example parseUnit("Mpc").factor // 3.0856775814913673e22
+ */
+export function parseUnit(text: string): Unit {
+  if (typeof text !== "string") throw new TypeError("a unit must be text");
+  const hit = cache.get(text);
+  if (hit) return hit;
+  const trimmed = text.trim();
+  if (trimmed === "") throw new TypeError("empty unit");
+  const parsed = new UnitParser(trimmed).parse();
+  const unit: Unit = {
+    text: trimmed,
+    factor: parsed.factor,
+    dimensions: parsed.dimensions as unknown as Dimensions,
+  };
+  if (cache.size > 1000) cache.clear();
+  cache.set(text, unit);
+  return unit;
+}
+
+/**
+ * Factor that converts a value in one unit into another: value_to = value_from × factor.
+ *
+ * @param from unit text of the input, e.g. "Mpc"
+ * @param to unit text of the output, e.g. "Gly"
+ * @returns the dimensionless factor
+ * @throws TypeError when the units have different dimensions (both are named) or do not parse
+ * @example conversionFactor("Mpc", "kpc") // 1000
+ */
+export function conversionFactor(from: string, to: string): number {
+  const a = parseUnit(from);
+  const b = parseUnit(to);
+  if (!sameDimensions(a.dimensions, b.dimensions)) {
+    throw new TypeError(
+      `cannot convert "${a.text}" (${describeDimensions(a.dimensions)}) to "${b.text}" (${describeDimensions(b.dimensions)})`,
+    );
+  }
+  return a.factor / b.factor;
+}
+
+/**
+ * Converts a value between compatible units.
+ *
+ * @param value the number in unit `from`
+ * @param from unit text, e.g. "pc"
+ * @param to unit text, e.g. "lyr"
+ * @returns the number in unit `to`
+ * @example convertUnit(1, "pc", "lyr") // 3.2615637771674337
+ */
+export function convertUnit(value: number, from: string, to: string): number {
+  return value * conversionFactor(from, to);
+}

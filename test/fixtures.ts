@@ -1,0 +1,14 @@
+/** Models used across the accuracy tests: one of each kind the engine supports. */
+import type { ModelParameters } from "../core/ModelParameters.js";
+
+const lcdm = { w0: -1, wa: 0, Tcmb: 0, Neff: 3.046, mnu: [] as number[] };
+
+/** name → parameters; Tcmb = 2.7255 K is the Fixsen (2009, ApJ 707, 916) value. */
+export const testModels: Record<string, ModelParameters> = {
+  "flat ΛCDM, no radiation": { ...lcdm, H0: 70, Om: 0.3 },
+  "flat ΛCDM + radiation + 0.06 eV ν": { ...lcdm, H0: 67.66, Om: 0.3111, Tcmb: 2.7255, mnu: [0.06] },
+  "open, radiation, massless ν": { ...lcdm, H0: 70, Om: 0.25, OL: 0.6, Tcmb: 2.7255 },
+  "closed, radiation, three massive ν": { ...lcdm, H0: 70, Om: 0.4, OL: 0.8, Tcmb: 2.7255, mnu: [0.1, 0.05, 0.01] },
+  "flat w0–wa, radiation, 0.06 eV ν": { ...lcdm, H0: 68, Om: 0.31, w0: -0.8, wa: -0.5, Tcmb: 2.7255, mnu: [0.06] },
+  "open w0–wa, no radiation": { ...lcdm, H0: 72, Om: 0.2, OL: 0.7, w0: -1.1, wa: 0.3 },
+};

@@ -1,0 +1,32 @@
+/** Shared test helpers: relative-error checks with a readable failure message. */
+import { expect } from "vitest";
+
+/** |actual/expected − 1|, or |actual| when expected is 0. */
+export function relativeError(actual: number, expected: number): number {
+  return expected === 0 ? Math.abs(actual) : Math.abs(actual / expected - 1);
+}
+
+/** Asserts |actual/expected − 1| ≤ tol, naming the case in the failure. */
+export function expectRelative(actual: number, expected: number, tol: number, label = ""): void {
+  const err = relativeError(actual, expected);
+  expect(err, `${label}: got ${actual}, expected ${expected} (rel. error ${err.toExponential(2)} > ${tol})`).toBeLessThanOrEqual(tol);
+}
+
+/** Log-spaced redshifts from 10^lo to 10^hi, `perDecade` a decade. */
+export function logRedshifts(lo: number, hi: number, perDecade: number): number[] {
+  const out: number[] = [];
+  for (let k = lo * perDecade; k <= hi * perDecade; k++) out.push(10 ** (k / perDecade));
+  return out;
+}
+
+/** A small seeded generator (mulberry32), so random tests are repeatable. */
+export function seededRandom(seed: number): () => number {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}

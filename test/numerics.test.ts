@@ -1,0 +1,100 @@
+import { describe, expect, test } from "vitest";
+import { fermiDiracDensityFactor, fermiDiracDensityFactorLogSlope } from "../core/fermiDirac.js";
+import { integrate, kronrod15 } from "../core/quadrature.js";
+import { QuinticTable } from "../core/QuinticTable.js";
+import { expectRelative } from "./helpers.js";
+import { slowFermiDirac, tanhSinh } from "./reference/slowCosmology.js";
+
+describe("Gauss–Kronrod quadrature", () => {
+  // Exactness degrees: K15 integrates polynomials of degree ≤ 22 exactly, G7 degree ≤ 13
+  // (Piessens et al. 1983, QUADPACK §2.2.1); ∫₀¹ xⁿ dx = 1/(n+1).
+  test.each([0, 1, 5, 13, 22])("integrates x^%i exactly on [0, 1]", (n) => {
+    expectRelative(kronrod15((x) => x ** n, 0, 1).value, 1 / (n + 1), 1e-14, `x^${n}`);
+  });
+
+  test("the G7 half alone is exact to degree 13, so the error estimate vanishes there", () => {
+    expect(kronrod15((x) => x ** 13, 0, 1).error).toBeLessThan(1e-15);
+    expect(kronrod15((x) => x ** 20, 0, 1).error).toBeGreaterThan(1e-8);
+  });
+
+  //   integrand              a   b         exact                        source
+  const cases: [string, (x: number) => number, number, number, number, string][] = [
+    ["exp(x)",               (x) => Math.exp(x), 0, 3,   Math.expm1(3),         "calculus"],
+    ["1/(1+x²)",             (x) => 1 / (1 + x * x), 0, 50, Math.atan(50),       "calculus"],
+    ["√x (endpoint branch)", (x) => Math.sqrt(x), 0, 1,  2 / 3,                 "calculus"],
+  ];
+  test.each(cases)("adaptive integral of %s", (_name, f, a, b, exact) => {
+    expectRelative(integrate(f, a, b, 1e-14), exact, 1e-13, _name);
+  });
+});
+
+describe("quintic Hermite table", () => {
+  test("reproduces sin to its h⁶/46080 error bound and matches derivatives", () => {
+    const h = 0.05;
+    const n = 40;
+    const xs = Array.from({ length: n + 1 }, (_, i) => i * h);
+    const table = new QuinticTable(0, h, xs.map(Math.sin), xs.map(Math.cos), xs.map((x) => -Math.sin(x)));
+    let worst = 0;
+    let worstSlope = 0;
+    for (let x = 0; x <= n * h; x += 0.0013) {
+      worst = Math.max(worst, Math.abs(table.value(x) - Math.sin(x)));
+      worstSlope = Math.max(worstSlope, Math.abs(table.derivative(x) - Math.cos(x)));
+    }
+    // Hermite remainder bound h⁶ max|f⁽⁶⁾| / 46080 with |sin⁽⁶⁾| ≤ 1 (standard interpolation theory)
+    expect(worst).toBeLessThanOrEqual((h ** 6 / 46080) * 1.01);
+    expect(worst).toBeGreaterThan(0);
+    expect(worstSlope).toBeLessThan(1e-9);
+    expect(table.node(n)).toBe(Math.sin(n * h));
+  });
+});
+
+describe("Fermi–Dirac density factor F(y)", () => {
+  test("is 1 for massless neutrinos (F(0) = 1 by definition)", () => {
+    expect(fermiDiracDensityFactor(0)).toBe(1);
+    expect(fermiDiracDensityFactorLogSlope(0)).toBe(0);
+  });
+
+  test("matches independent tanh-sinh quadrature to 1e-11 from y = 1e-6 to 1e5", () => {
+    let worst = 0;
+    for (let s = Math.log(1e-6); s <= Math.log(1e5); s += 0.173) {
+      const y = Math.exp(s);
+      const err = Math.abs(fermiDiracDensityFactor(y) / slowFermiDirac(y) - 1);
+      worst = Math.max(worst, err);
+    }
+    expect(worst).toBeLessThan(1e-11);
+  });
+
+  test("is continuous across the table edges y = e⁻¹⁰ and e⁷ (series ↔ table)", () => {
+    for (const s of [-10, 7]) {
+      const y = Math.exp(s);
+      const below = fermiDiracDensityFactor(y * (1 - 1e-12));
+      const above = fermiDiracDensityFactor(y * (1 + 1e-12));
+      // across Δln y = 2e-12, F itself changes by (dF/dln y) × 2e-12
+      const expected = below + 2e-12 * fermiDiracDensityFactorLogSlope(y);
+      expectRelative(above, expected, 2e-13, `edge e^${s}`);
+    }
+  });
+
+  test("its log-slope equals the numerical derivative of the quadrature result", () => {
+    for (const y of [0.01, 0.5, 2, 30, 358, 5000]) {
+      const d = 1e-4;
+      const numeric = (slowFermiDirac(y * Math.exp(d)) - slowFermiDirac(y * Math.exp(-d))) / (2 * d);
+      // central difference: truncation d²/6 ≈ 2e-9, rounding 1e-16 F/d ≈ 1e-12 F relative to a slope that is 1.4e-5 F at y = 0.01
+      expectRelative(fermiDiracDensityFactorLogSlope(y), numeric, 1e-6, `y=${y}`);
+    }
+  });
+
+  // Limits of the integral: small y, F = 1 + 5y²/(7π²) (Taylor expansion, ∫x/(eˣ+1) = π²/12);
+  // large y, F → 180ζ(3)y/(7π⁴) (∫x²/(eˣ+1) = 3ζ(3)/2; Gradshteyn & Ryzhik 3.411.3).
+  test.each([
+    // y      expected                                     tol    source
+    [1e-4,    1 + (5 / (7 * Math.PI ** 2)) * 1e-8,         1e-15, "Taylor series, common practice"],
+    [1e8,     (180 * 1.2020569031595942 * 1e8) / (7 * Math.PI ** 4), 2e-12, "non-relativistic limit, ζ(3) from memory"],
+  ])("limit at y = %d", (y, expected, tol) => {
+    expectRelative(fermiDiracDensityFactor(y), expected, tol, `y=${y}`);
+  });
+
+  test("tanh-sinh reference itself integrates a known integral (∫₀¹ ln x = −1)", () => {
+    expectRelative(tanhSinh(Math.log, 0, 1), -1, 1e-14, "ln");
+  });
+});
