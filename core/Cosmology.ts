@@ -44,7 +44,7 @@ export type InvertibleQuantity =
 /** Tables cover 0 ≤ z ≤ tableMaxRedshift; beyond, the exact integrals are evaluated directly. */
 const tableMaxRedshift = 1e8;
 /** Table panels per unit of ln(1+z); quintic Hermite error ∝ h⁶ (≈ 1e-13 relative, see tests). */
-const panelsPerUnit = 32;
+const panelsPerUnit = 48;
 /**
  * Below this u = ln(1+z) the distance and look-back integrals are evaluated directly (one 15-point
  * Kronrod panel, exact to rounding there): the table's absolute error ∝ u³ near its first node
@@ -101,25 +101,31 @@ function hyperbolicRemainder(y: number, sign: 1 | -1): number {
   return sum;
 }
 
-/** Newton's method safeguarded by bisection on a bracket [lo, hi] with g(lo) ≤ target ≤ g(hi). */
+/**
+ * Newton's method safeguarded by bisection on a bracket [lo, hi] with g(lo) ≤ target ≤ g(hi),
+ * starting from `start` (default: the midpoint).
+ */
 function solveBracketed(
   g: (u: number) => number,
   dg: (u: number) => number,
   target: number,
   lo: number,
   hi: number,
+  start = 0.5 * (lo + hi),
 ): number {
-  let u = 0.5 * (lo + hi);
+  let u = start;
   for (let iteration = 0; iteration < 100; iteration++) {
     const r = g(u) - target;
     if (r === 0) return u;
     if (r < 0) lo = u;
     else hi = u;
-    const slope = dg(u);
-    let next = u - r / slope;
+    const step = r / dg(u);
+    // converged when the Newton step is down to a few ulps (it may then toggle between neighbours)
+    const scale = 5e-16 * Math.abs(u) + 1e-300;
+    if (Math.abs(step) <= scale) return u - step;
+    let next = u - step;
     if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
-    const scale = 2e-16 * Math.abs(next);
-    if (Math.abs(next - u) <= scale || hi - lo <= scale) return next;
+    if (hi - lo <= scale) return next;
     u = next;
   }
   return u;
@@ -181,6 +187,8 @@ export class Cosmology {
   private readonly neutrinoSpeciesDensity: number;
   private readonly massiveY0: Float64Array;
   private readonly sqrtAbsOk: number;
+  /** Sign of the curvature: 1 open, 0 flat, −1 closed (an integer field: cheap to branch on). */
+  private readonly geometry: 1 | 0 | -1;
   private readonly uMax: number;
   private readonly chi: QuinticTable;
   private readonly tau: QuinticTable;
@@ -241,6 +249,7 @@ export class Cosmology {
     this.darkEnergyKind = p.wa !== 0 ? 2 : p.w0 !== -1 ? 1 : 0;
     this.darkEnergyPower = 3 * (1 + p.w0 + p.wa);
     this.sqrtAbsOk = Math.sqrt(Math.abs(this.Ok));
+    this.geometry = this.Ok > 0 ? 1 : this.Ok < 0 ? -1 : 0;
     this.equalityRedshift =
       this.Ogamma > 0
         ? this.coldMatter / (this.Ogamma * (1 + p.Neff * neutrinoToPhotonDensityPerSpecies)) - 1
@@ -503,25 +512,32 @@ export class Cosmology {
     return (3 * hPerS * hPerS) / (8 * Math.PI * gravitationalConstantSI);
   }
 
+  /** χ(u) in units of D_H: the table, or the exact integral below directBelowU and beyond uMax. */
   private chiAtU(u: number): number {
-    if (u < directBelowU) return kronrod15((v) => Math.exp(v) / Math.sqrt(this.e2(Math.exp(v), v)), 0, u).value;
+    if (u < directBelowU) return this.integrateDirect(this.chiIntegrand, 0, u);
     return u <= this.uMax ? this.chi.value(u) : this.chiBeyond(u);
   }
 
-  private chiBeyond(u: number): number {
-    return (
-      this.chi.node(this.chi.panels) +
-      integrate((v) => Math.exp(v) / Math.sqrt(this.e2(Math.exp(v), v)), this.uMax, u, relTolExact)
-    );
+  /** dχ/du = e^u / E. */
+  private readonly chiIntegrand = (v: number): number => Math.exp(v) / Math.sqrt(this.e2(Math.exp(v), v));
+
+  /** dτ/du = 1 / E. */
+  private readonly tauIntegrand = (v: number): number => 1 / Math.sqrt(this.e2(Math.exp(v), v));
+
+  /** One 15-point Kronrod panel: exact to rounding on the short interval [0, u < directBelowU]. */
+  private integrateDirect(f: (v: number) => number, a: number, b: number): number {
+    return kronrod15(f, a, b).value;
   }
 
+  private chiBeyond(u: number): number {
+    return this.chi.node(this.chi.panels) + integrate(this.chiIntegrand, this.uMax, u, relTolExact);
+  }
+
+  /** τ(u) in units of t_H: the table, or the exact integral below directBelowU and beyond uMax. */
   private tauAtU(u: number): number {
-    if (u < directBelowU) return kronrod15((v) => 1 / Math.sqrt(this.e2(Math.exp(v), v)), 0, u).value;
+    if (u < directBelowU) return this.integrateDirect(this.tauIntegrand, 0, u);
     if (u <= this.uMax) return this.tau.value(u);
-    return (
-      this.tau.node(this.tau.panels) +
-      integrate((v) => 1 / Math.sqrt(this.e2(Math.exp(v), v)), this.uMax, u, relTolExact)
-    );
+    return this.tau.node(this.tau.panels) + integrate(this.tauIntegrand, this.uMax, u, relTolExact);
   }
 
   /** Age in units of t_H at u = ln(1+z), from ∫₀^a da/(aE) with a = s² (regular at s = 0). */
@@ -545,9 +561,9 @@ export class Cosmology {
 
   /** S_k(χ) = sinh(√Ωk χ)/√Ωk, χ, or sin(√−Ωk χ)/√−Ωk (Hogg eq. 16, in units of D_H). */
   private transverse(chi: number): number {
-    if (this.Ok > 0) return Math.sinh(this.sqrtAbsOk * chi) / this.sqrtAbsOk;
-    if (this.Ok < 0) return Math.sin(this.sqrtAbsOk * chi) / this.sqrtAbsOk;
-    return chi;
+    if (this.geometry === 0) return chi;
+    const k = this.sqrtAbsOk;
+    return this.geometry > 0 ? Math.sinh(k * chi) / k : Math.sin(k * chi) / k;
   }
 
   /** dS_k/dχ. */
@@ -558,7 +574,7 @@ export class Cosmology {
   }
 
   private u(z: number): number {
-    if (!(z >= 0 && z < Number.POSITIVE_INFINITY)) checkRedshift(z);
+    if (!(z >= 0 && z <= Number.MAX_VALUE)) checkRedshift(z);
     return Math.log1p(z);
   }
 
@@ -654,9 +670,9 @@ export class Cosmology {
 
   /** Comoving volume in units of D_H³ for line-of-sight χ (units of D_H), Hogg eq. 29 in its χ form. */
   private volumeOfChi(chi: number): number {
-    if (this.Ok === 0) return ((4 * Math.PI) / 3) * chi ** 3;
+    if (this.Ok === 0) return ((4 * Math.PI) / 3) * chi * chi * chi;
     const k = this.sqrtAbsOk;
-    return (Math.PI * hyperbolicRemainder(2 * k * chi, this.Ok > 0 ? 1 : -1)) / k ** 3;
+    return (Math.PI * hyperbolicRemainder(2 * k * chi, this.Ok > 0 ? 1 : -1)) / (k * k * k);
   }
 
   /**
@@ -666,7 +682,8 @@ export class Cosmology {
    * @returns Mpc³; e.g. flat: (4π/3) D_M³
    */
   comovingVolumeMpc3(z: number): number {
-    return this.hubbleDistanceMpc ** 3 * this.volumeOfChi(this.chiAtU(this.u(z)));
+    const dh = this.hubbleDistanceMpc;
+    return dh * dh * dh * this.volumeOfChi(this.chiAtU(this.u(z)));
   }
 
   /**
@@ -694,7 +711,8 @@ export class Cosmology {
   comovingVolumeElementMpc3Sr(z: number): number {
     const u = this.u(z);
     const dm = this.transverse(this.chiAtU(u));
-    return (this.hubbleDistanceMpc ** 3 * dm * dm) / Math.sqrt(this.e2(1 + z, u));
+    const dh = this.hubbleDistanceMpc;
+    return (dh * dh * dh * dm * dm) / Math.sqrt(this.e2(1 + z, u));
   }
 
   /**
@@ -746,12 +764,12 @@ export class Cosmology {
   }
 
   /** χ of a transverse comoving distance x (units of D_H) on the lower branch; NoSolutionError past the maximum. */
-  private chiOfTransverse(x: number, label: string): number {
+  private chiOfTransverse(x: number, label: () => string): number {
     if (this.Ok === 0) return x;
     const k = this.sqrtAbsOk;
     if (this.Ok > 0) return Math.asinh(k * x) / k;
     if (k * x > 1) {
-      throw new NoSolutionError(`${label} exceeds its maximum in this closed model (${(this.hubbleDistanceMpc / k).toPrecision(6)} Mpc)`);
+      throw new NoSolutionError(`${label()} exceeds its maximum in this closed model (${(this.hubbleDistanceMpc / k).toPrecision(6)} Mpc)`);
     }
     return Math.asin(k * x) / k;
   }
@@ -779,23 +797,27 @@ export class Cosmology {
       if (sign * table.node(mid) <= sign * target) lo = mid;
       else hi = mid;
     }
+    const vLo = table.node(lo);
+    const vHi = table.node(hi);
+    const start = (lo + (vHi !== vLo ? (target - vLo) / (vHi - vLo) : 0.5)) * table.h;
     return solveBracketed(
       (u) => sign * table.value(u),
       (u) => sign * table.derivative(u),
       sign * target,
       lo * table.h,
       hi * table.h,
+      start,
     );
   }
 
   /** u ≥ uMax where an increasing exact function g reaches target (slow path beyond the tables). */
-  private invertBeyond(g: (u: number) => number, target: number, what: string): number {
+  private invertBeyond(g: (u: number) => number, target: number, what: () => string): number {
     let lo = this.uMax;
     let hi = this.uMax + 1;
     while (g(hi) < target) {
       lo = hi;
       hi = this.uMax + 2 * (hi - this.uMax);
-      if (hi > 690) throw new NoSolutionError(`no redshift has ${what} = ${target}`);
+      if (hi > 690) throw new NoSolutionError(`no redshift has ${what()}`);
     }
     for (let i = 0; i < 200 && hi - lo > 1e-15 * hi; i++) {
       const mid = 0.5 * (lo + hi);
@@ -805,39 +827,57 @@ export class Cosmology {
     return 0.5 * (lo + hi);
   }
 
-  private uOfChi(chi: number, what: string): number {
+  private uOfChi(chi: number, what: () => string): number {
     if (chi <= 0) return 0;
     if (chi <= this.chi.node(this.chi.panels)) return this.invertTable(this.chi, chi, 1);
-    if (chi >= this.horizon()) throw new NoSolutionError(`${what} lies beyond the particle horizon of this model`);
+    if (chi >= this.horizon()) throw new NoSolutionError(`${what()} lies beyond the particle horizon of this model`);
     return this.invertBeyond((u) => this.chiBeyond(u), chi, what);
   }
 
-  private uOfTau(tau: number, what: string): number {
+  private uOfTau(tau: number, what: () => string): number {
     if (tau <= 0) return 0;
     const ageToday = this.ageAtU(0);
-    if (tau >= ageToday) throw new NoSolutionError(`${what} is not below the age of the universe in this model`);
+    if (tau >= ageToday) throw new NoSolutionError(`${what()} is not below the age of the universe in this model`);
     if (this.lnAge && tau > 0.5 * ageToday) return this.uOfAge(ageToday - tau, what);
     if (tau <= this.tau.node(this.tau.panels)) return this.invertTable(this.tau, tau, 1);
     return this.invertBeyond((u) => this.tauAtU(u), tau, what);
   }
 
-  private uOfAge(age: number, what: string): number {
+  private uOfAge(age: number, what: () => string): number {
     const table = this.lnAge;
-    if (!table) throw new NoSolutionError(`${what}: this model has an infinite past, so age does not fix z`);
+    if (!table) throw new NoSolutionError(`${what()}: this model has an infinite past, so age does not fix z`);
     const ageToday = Math.exp(table.node(0));
-    if (age > ageToday) throw new NoSolutionError(`${what} exceeds the age of the universe today in this model`);
-    if (!(age > 0)) throw new NoSolutionError(`${what} must be positive`);
+    if (age > ageToday) throw new NoSolutionError(`${what()} exceeds the age of the universe today in this model`);
+    if (!(age > 0)) throw new NoSolutionError(`${what()} must be positive`);
     const lnT = Math.log(age);
     if (lnT >= table.node(table.panels)) return this.invertTable(table, lnT, -1);
     return this.invertBeyond((u) => -this.ageBeyond(u), -age, what);
   }
 
+  /** D_L/D_H = e^u S_k(χ) or D_A/D_H = e^{−u} S_k(χ) and its u-derivative, for the inverse. */
+  private readonly curves: Record<"DL" | "DA", { g: (u: number) => number; dg: (u: number) => number }> = {
+    DL: {
+      g: (u) => Math.exp(u) * this.transverse(this.chiAtU(u)),
+      dg: (u) => {
+        const chi = this.chiAtU(u);
+        return Math.exp(u) * (this.transverse(chi) + this.transverseSlope(chi) * this.chiSlopeAtU(u));
+      },
+    },
+    DA: {
+      g: (u) => Math.exp(-u) * this.transverse(this.chiAtU(u)),
+      dg: (u) => {
+        const chi = this.chiAtU(u);
+        return Math.exp(-u) * (this.transverseSlope(chi) * this.chiSlopeAtU(u) - this.transverse(chi));
+      },
+    },
+  };
+
   /**
-   * u solving g(u) = target on the lower branch of a quantity evaluated from the χ table
-   * (D_L or D_A), where g may rise to a maximum and fall again.
+   * u solving curve(u) = target on the lower branch of D_L or D_A (units of D_H), which may rise to a
+   * maximum and fall again: node values and the maximum are found once per model and kept.
    */
-  private uOfCurve(key: string, g: (u: number) => number, dg: (u: number) => number, target: number, what: string): number {
-    const dh = this.hubbleDistanceMpc;
+  private uOfCurve(key: "DL" | "DA", target: number, what: () => string): number {
+    const { g, dg } = this.curves[key];
     let inv = this.inverters.get(key);
     const h = this.chi.h;
     if (!inv) {
@@ -866,8 +906,9 @@ export class Cosmology {
     }
     if (target <= 0) return 0;
     if (target > inv.peakValue) {
+      const dh = this.hubbleDistanceMpc;
       throw new NoSolutionError(
-        `${what} exceeds its maximum in this model (${(inv.peakValue * dh).toPrecision(6)} Mpc at z = ${formatRedshift(Math.expm1(inv.peakU))})`,
+        `${what()} exceeds its maximum in this model (${(inv.peakValue * dh).toPrecision(6)} Mpc at z = ${formatRedshift(Math.expm1(inv.peakU))})`,
       );
     }
     const values = inv.values;
@@ -883,24 +924,12 @@ export class Cosmology {
       if (values[mid] <= target) lo = mid;
       else hi = mid;
     }
-    return solveBracketed(g, dg, target, lo * h, hi * h);
+    const start = (lo + (target - values[lo]) / (values[hi] - values[lo])) * h;
+    return solveBracketed(g, dg, target, lo * h, hi * h, start);
   }
 
   private chiSlopeAtU(u: number): number {
-    return u <= this.uMax ? this.chi.derivative(u) : Math.exp(u) / Math.sqrt(this.e2(Math.exp(u), u));
-  }
-
-  private uOfLuminosityDistance(x: number, what: string): number {
-    return this.uOfCurve(
-      "DL",
-      (u) => Math.exp(u) * this.transverse(this.chiAtU(u)),
-      (u) => {
-        const chi = this.chiAtU(u);
-        return Math.exp(u) * (this.transverse(chi) + this.transverseSlope(chi) * this.chiSlopeAtU(u));
-      },
-      x,
-      what,
-    );
+    return u <= this.uMax && u >= directBelowU ? this.chi.derivative(u) : this.chiIntegrand(u);
   }
 
   /**
@@ -917,13 +946,13 @@ export class Cosmology {
   redshiftAt(quantity: InvertibleQuantity, value: number): number {
     if (typeof value !== "number" || Number.isNaN(value)) throw new TypeError("value must be a number");
     const dh = this.hubbleDistanceMpc;
-    const what = `${quantity} = ${value}`;
+    const what = () => `${quantity} = ${value}`; // formatted only for an error message
     if (quantity === "distanceModulus") {
       if (value === Number.NEGATIVE_INFINITY) return 0;
     } else if (value < 0) {
-      throw new NoSolutionError(`${what} is negative: no redshift z ≥ 0 has it`);
+      throw new NoSolutionError(`${what()} is negative: no redshift z ≥ 0 has it`);
     }
-    if (!Number.isFinite(value)) throw new NoSolutionError(`${what}: no finite redshift has it`);
+    if (!Number.isFinite(value)) throw new NoSolutionError(`${what()}: no finite redshift has it`);
     let u: number;
     switch (quantity) {
       case "comovingDistance":
@@ -933,22 +962,13 @@ export class Cosmology {
         u = this.uOfChi(this.chiOfTransverse(value / dh, what), what);
         break;
       case "luminosityDistance":
-        u = this.uOfLuminosityDistance(value / dh, what);
+        u = this.uOfCurve("DL", value / dh, what);
         break;
       case "distanceModulus":
-        u = this.uOfLuminosityDistance(10 ** ((value - 25) / 5) / dh, what);
+        u = this.uOfCurve("DL", 10 ** ((value - 25) / 5) / dh, what);
         break;
       case "angularDiameterDistance":
-        u = this.uOfCurve(
-          "DA",
-          (v) => Math.exp(-v) * this.transverse(this.chiAtU(v)),
-          (v) => {
-            const chi = this.chiAtU(v);
-            return Math.exp(-v) * (this.transverseSlope(chi) * this.chiSlopeAtU(v) - this.transverse(chi));
-          },
-          value / dh,
-          what,
-        );
+        u = this.uOfCurve("DA", value / dh, what);
         break;
       case "lightTravelDistance":
         u = this.uOfTau(value / dh, what);
@@ -960,7 +980,7 @@ export class Cosmology {
         u = this.uOfAge(value / this.hubbleTimeGyr, what);
         break;
       case "comovingVolume":
-        u = this.uOfChi(this.chiOfVolume(value / dh ** 3), what);
+        u = this.uOfChi(this.chiOfVolume(value / (dh * dh * dh)), what);
         break;
       default:
         throw new TypeError(`unknown quantity "${String(quantity)}"`);

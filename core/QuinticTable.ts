@@ -55,7 +55,7 @@ export class QuinticTable {
   /** Interpolated value at x ∈ [x0, xEnd] (the caller keeps x in range). */
   value(x: number): number {
     const s = (x - this.x0) * this.invH;
-    let i = Math.floor(s);
+    let i = s | 0; // s ≥ 0 in range, so truncation is floor
     if (i >= this.panels) i = this.panels - 1;
     else if (i < 0) i = 0;
     const t = s - i;

@@ -1,0 +1,128 @@
+/** Identities, limits and symmetries that hold for every model, checked on every test model. */
+import { describe, expect, test } from "vitest";
+import { speedOfLightKmPerS, megaparsecKm, secondsPerGyr } from "../core/constants.js";
+import { Cosmology, type InvertibleQuantity } from "../core/Cosmology.js";
+import { NoSolutionError } from "../core/NoSolutionError.js";
+import { testModels } from "./fixtures.js";
+import { expectRelative, logRedshifts } from "./helpers.js";
+
+const zs = logRedshifts(-6, 4, 4);
+
+const forward: Record<InvertibleQuantity, (m: Cosmology, z: number) => number> = {
+  comovingDistance: (m, z) => m.comovingDistanceMpc(z),
+  transverseComovingDistance: (m, z) => m.transverseComovingDistanceMpc(z),
+  luminosityDistance: (m, z) => m.luminosityDistanceMpc(z),
+  angularDiameterDistance: (m, z) => m.angularDiameterDistanceMpc(z),
+  lightTravelDistance: (m, z) => m.lightTravelDistanceMpc(z),
+  distanceModulus: (m, z) => m.distanceModulusMag(z),
+  lookbackTime: (m, z) => m.lookbackTimeGyr(z),
+  age: (m, z) => m.ageGyr(z),
+  comovingVolume: (m, z) => m.comovingVolumeMpc3(z),
+};
+
+describe.each(Object.entries(testModels))("identities: %s", (_name, params) => {
+  const m = new Cosmology(params);
+
+  test("inverse redshifts round-trip to |Δz| ≤ 1e-9 (1+z) above the double-precision floor", () => {
+    for (const [q, f] of Object.entries(forward) as [InvertibleQuantity, (m: Cosmology, z: number) => number][]) {
+      for (const z of zs) {
+        if (q === "angularDiameterDistance" || q === "transverseComovingDistance") {
+          // lower branch only: below the maximum of D_A (or of D_M in a closed model)
+          const h = 1e-4 * (1 + z);
+          if (f(m, z + h) <= f(m, z)) continue;
+        }
+        const v = f(m, z);
+        const back = m.redshiftAt(q, v);
+        // The value itself is known to 1 ulp; where the quantity flattens (look-back and age at high z,
+        // volumes and distances near a horizon) that alone moves z by ε|Q| / |dQ/dz|.
+        const dz = 1e-6 * (1 + z);
+        const slope = Math.abs(f(m, z + dz) - f(m, z)) / dz;
+        const floor = (8e-16 * Math.abs(v)) / slope;
+        expect(Math.abs(back - z), `${q} at z=${z}: got ${back}`).toBeLessThanOrEqual(1e-9 * (1 + z) + floor);
+      }
+    }
+  });
+
+  test("D_L = (1+z)² D_A (Etherington reciprocity; Hogg 1999 eq. 21)", () => {
+    for (const z of zs) expectRelative(m.luminosityDistanceMpc(z), (1 + z) ** 2 * m.angularDiameterDistanceMpc(z), 3e-15, `z=${z}`);
+  });
+
+  test("z → 0: D ≈ cz/H0 and t_L ≈ z/H0 (Hubble law)", () => {
+    const z = 1e-9;
+    expectRelative(m.comovingDistanceMpc(z), (speedOfLightKmPerS * z) / m.H0, 2e-9, "D_C");
+    expectRelative(m.lookbackTimeGyr(z), (megaparsecKm / m.H0 / secondsPerGyr) * z, 2e-9, "t_L");
+    expect(m.comovingDistanceMpc(0)).toBe(0);
+    expect(m.comovingVolumeMpc3(0)).toBe(0);
+  });
+
+  test("distances and look-back grow and the age falls with z", () => {
+    let last = { dc: -1, dl: -1, tl: -1, age: Number.POSITIVE_INFINITY, v: -1 };
+    for (const z of logRedshifts(-6, 6, 20)) {
+      const now = {
+        dc: m.comovingDistanceMpc(z),
+        dl: m.luminosityDistanceMpc(z),
+        tl: m.lookbackTimeGyr(z),
+        age: m.ageGyr(z),
+        v: m.comovingVolumeMpc3(z),
+      };
+      expect(now.dc, `D_C at ${z}`).toBeGreaterThan(last.dc);
+      expect(now.dl, `D_L at ${z}`).toBeGreaterThan(last.dl);
+      expect(now.tl, `t_L at ${z}`).toBeGreaterThan(last.tl);
+      expect(now.age, `age at ${z}`).toBeLessThan(last.age);
+      expect(now.v, `V at ${z}`).toBeGreaterThan(last.v);
+      last = now;
+    }
+  });
+
+  test("age today − age(z) = look-back time(z)", () => {
+    for (const z of zs) {
+      expect(Math.abs(m.ageTodayGyr - m.ageGyr(z) - m.lookbackTimeGyr(z))).toBeLessThan(1e-12 * m.ageTodayGyr);
+    }
+  });
+
+  test("light-travel distance = c × look-back time", () => {
+    const cMpcPerGyr = (speedOfLightKmPerS * secondsPerGyr) / megaparsecKm;
+    for (const z of zs) expectRelative(m.lightTravelDistanceMpc(z), cMpcPerGyr * m.lookbackTimeGyr(z), 1e-14, `z=${z}`);
+  });
+
+  test("D_A12 from z1 = 0 is D_A, and the volume element is dV/dz/(4π)", () => {
+    for (const z of [0.01, 0.5, 2, 10]) {
+      expectRelative(m.angularDiameterDistanceBetweenMpc(0, z), m.angularDiameterDistanceMpc(z), 1e-15, `z=${z}`);
+      const h = 1e-5 * z;
+      const dvdz = (m.comovingVolumeMpc3(z + h) - m.comovingVolumeMpc3(z - h)) / (2 * h);
+      expectRelative(m.comovingVolumeElementMpc3Sr(z) * 4 * Math.PI, dvdz, 1e-8, `dV/dz at ${z}`);
+    }
+  });
+
+  test("density parameters sum to 1 at every z and start at the model's Om and Or", () => {
+    for (const z of [0, 0.5, 3, 1100, 1e6]) {
+      const sum = (["m", "de", "k", "r"] as const).reduce((s, c) => s + m.densityParameter(c, z), 0);
+      expect(Math.abs(sum - 1), `z=${z}`).toBeLessThan(1e-13);
+    }
+    expectRelative(m.densityParameter("m", 0), m.Om, 1e-15, "Om");
+    expectRelative(m.densityParameter("r", 0) || 1, m.Or || 1, 1e-15, "Or");
+    expect(m.densityParameter("g", 0) + (m.densityParameter("nu", 0) - m.OnuMassive)).toBeCloseTo(m.Or, 15);
+  });
+
+  test("values past the range of a quantity have no redshift", () => {
+    expect(() => m.redshiftAt("lookbackTime", m.ageTodayGyr * 1.01)).toThrow(NoSolutionError);
+    expect(() => m.redshiftAt("age", m.ageTodayGyr * 1.01)).toThrow(NoSolutionError);
+    expect(() => m.redshiftAt("luminosityDistance", -1)).toThrow(NoSolutionError);
+  });
+});
+
+describe("angular-diameter distance has a maximum", () => {
+  const m = Cosmology.fromSpec("PLANCK2018");
+  test("the lower branch is returned below the maximum, and values above it have no solution", () => {
+    let zPeak = 0;
+    let peak = 0;
+    for (let z = 1; z < 2.5; z += 1e-3) {
+      const da = m.angularDiameterDistanceMpc(z);
+      if (da > peak) [peak, zPeak] = [da, z];
+    }
+    const zLow = m.redshiftAt("angularDiameterDistance", 0.9 * peak);
+    expect(zLow).toBeLessThan(zPeak);
+    expectRelative(m.angularDiameterDistanceMpc(zLow), 0.9 * peak, 1e-13, "lower branch");
+    expect(() => m.redshiftAt("angularDiameterDistance", peak * 1.001)).toThrow(/exceeds its maximum/);
+  });
+});

@@ -1,0 +1,87 @@
+import { describe, expect, test } from "vitest";
+import { Cosmology } from "../core/Cosmology.js";
+import type { ModelParameters } from "../core/ModelParameters.js";
+import { formatModelSpec, parseModelSpec } from "../core/modelSpec.js";
+import { presets } from "../core/presets.js";
+import { seededRandom } from "./helpers.js";
+
+describe("model spec text", () => {
+  test.each([
+    // spec                                   canonical                         (our syntax, issue conventions)
+    ["PLANCK2018",                             "PLANCK2018"],
+    ["planck2018 ; h0 = 73",                   "PLANCK2018; H0=73"],
+    ["H0=70; Om=0.3; OL=0.7",                  "H0=70; Om=0.3; OL=0.7"],
+    [" om = 0.30 ; H0=70.0 ;",                 "H0=70; Om=0.3"],
+    ["H0=70; Om=0.3; Ok=0.1; Tcmb=2.7255",     "H0=70; Om=0.3; Ok=0.1; Tcmb=2.7255"],
+    ["H0=70;Om=0.3;Tcmb=2.7;mnu=0,0.01,0.05",  "H0=70; Om=0.3; Tcmb=2.7; mnu=0.05,0.01"],
+    ["PLANCK2018; mnu=0",                      "PLANCK2018; mnu=0"],
+    ["WMAP9; w0=-0.9; wa=0.1; Neff=3",         "WMAP9; w0=-0.9; wa=0.1; Neff=3"],
+    ["CONCORDANCE; H0=7e1",                    "CONCORDANCE"],
+  ])("%s prints as %s", (spec, canonical) => {
+    expect(formatModelSpec(parseModelSpec(spec))).toBe(canonical);
+  });
+
+  test("a spec without a preset means no radiation, Neff 3.046, no massive ν, Λ, flat", () => {
+    const p = parseModelSpec("H0=70; Om=0.3");
+    expect(p).toEqual({ H0: 70, Om: 0.3, w0: -1, wa: 0, Tcmb: 0, Neff: 3.046, mnu: [] });
+    const m = new Cosmology(p);
+    expect(m.OL).toBeCloseTo(0.7, 15);
+    expect(m.Ok).toBe(0);
+  });
+
+  test("a key given to a preset replaces its value and keeps the rest (PLANCK2018 stays flat)", () => {
+    const m = Cosmology.fromSpec("PLANCK2018; Om=0.3");
+    expect(m.Ok).toBe(0);
+    expect(m.H0).toBe(67.66);
+    expect(Cosmology.fromSpec("PLANCK2018; OL=0.6").Ok).toBeCloseTo(1 - 0.3111 - 0.6 - m.Or, 14);
+  });
+
+  test.each([
+    // spec                           message names
+    ["",                             /empty model spec/],
+    ["PLANK2018",                    /unknown preset "PLANK2018"/],
+    ["H0=70; Om=0.3; Omega=1",       /unknown key "Omega"/],
+    ["H0=70; Om=abc",                /Om: "abc" is not a number/],
+    ["H0=70; Om=0,3",                /Om: "0,3" is not a number/],
+    ["H0=70; Om=0.3; OL=0.7; Ok=0",  /OL or Ok, not both/],
+    ["Om=0.3",                       /H0 is required/],
+    ["H0=70; H0=71; Om=0.3",         /H0 is given twice/],
+    ["H0=70; Om=0.3; PLANCK2018",    /"PLANCK2018" is not key=value/],
+    ["H0=70; Om=0.3; mnu=1,2,3,4",   /mnu: at most three/],
+  ])("%j is rejected: %s", (spec, message) => {
+    expect(() => parseModelSpec(spec)).toThrow(TypeError);
+    expect(() => parseModelSpec(spec)).toThrow(message);
+  });
+
+  test("parse(print(p)) is p for 500 random parameter sets", () => {
+    const rnd = seededRandom(20261201);
+    const pick = <T>(xs: T[]): T => xs[Math.floor(rnd() * xs.length)];
+    const num = () => Number((rnd() * 2 - 0.5).toPrecision(1 + Math.floor(rnd() * 17)));
+    for (let i = 0; i < 500; i++) {
+      const preset = pick([undefined, ...presets.map((x) => x.name)]);
+      const base: ModelParameters = preset
+        ? structuredClone(presets.find((x) => x.name === preset)!.parameters)
+        : { H0: 50 + 50 * rnd(), Om: rnd(), w0: -1, wa: 0, Tcmb: 0, Neff: 3.046, mnu: [] };
+      if (rnd() < 0.5) base.H0 = Number((40 + 60 * rnd()).toFixed(Math.floor(rnd() * 6)));
+      if (rnd() < 0.3) base.Om = Math.abs(num());
+      const curvature = rnd();
+      if (curvature < 0.3) base.OL = num();
+      else if (curvature < 0.5) base.Ok = num();
+      if (rnd() < 0.3) base.w0 = -1 + num();
+      if (rnd() < 0.3) base.wa = num();
+      if (rnd() < 0.3) base.Tcmb = pick([0, 2.7255, 2.725, Math.abs(num())]);
+      if (rnd() < 0.2) base.Neff = Math.abs(num()) * 4;
+      if (rnd() < 0.3) base.mnu = pick([[], [0.06], [0.1, 0.05, 0.01], [0.3, 0.2]]);
+      if (rnd() < 0.2) base.Ob = Math.abs(num()) / 10;
+      const text = formatModelSpec(base);
+      expect(parseModelSpec(text), text).toEqual(base);
+    }
+  });
+
+  test("every preset's canonical spec is its name and rebuilds its parameters", () => {
+    for (const p of presets) {
+      expect(formatModelSpec(p.parameters)).toBe(p.name);
+      expect(parseModelSpec(p.name)).toEqual(p.parameters);
+    }
+  });
+});

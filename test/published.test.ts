@@ -1,0 +1,53 @@
+/** Values published in papers and standards, and rules of thumb of the trade. */
+import { describe, expect, test } from "vitest";
+import { abZeroPointJy, solarLuminosityW } from "../core/constants.js";
+import { Cosmology } from "../core/Cosmology.js";
+import { abFluxDensityJy, abMagnitude, bolometricAbsoluteMagnitude, fluxWm2 } from "../core/photometry.js";
+import { expectRelative } from "./helpers.js";
+
+describe("Planck 2018 (A&A 641, A6, Table 2)", () => {
+  // Posterior means, so compared at 2e-4 (ages) and 1e-3 (z_eq) relative.
+  test.each([
+    // preset           age [Gyr]  z_eq   source
+    ["PLANCK2018",      13.787,    3387,  "Planck 2018 VI Table 2, TT,TE,EE+lowE+lensing+BAO"],
+    ["PLANCK2018CMB",   13.797,    3402,  "Planck 2018 VI Table 2, TT,TE,EE+lowE+lensing"],
+  ])("%s: age today %d Gyr, z_eq %d", (name, age, zeq) => {
+    const m = Cosmology.fromSpec(name);
+    expectRelative(m.ageTodayGyr, age, 2e-4, "age");
+    expectRelative(m.equalityRedshift, zeq, 1e-3, "z_eq");
+  });
+});
+
+describe("IAU 2015 B2/B3 and the AB system", () => {
+  test("the nominal Sun (3.828e26 W) has M_bol = 4.74 (IAU 2015 Resolution B2)", () => {
+    expect(Math.abs(bolometricAbsoluteMagnitude(solarLuminosityW) - 4.74)).toBeLessThan(5e-5);
+  });
+  test("AB magnitude 0 is 3630.78 Jy (Oke & Gunn 1983, m_AB = −2.5 log f_ν − 48.60)", () => {
+    expectRelative(abZeroPointJy, 3630.78, 2e-6, "zero point");
+    expect(Math.abs(abMagnitude(3630.780547701003))).toBeLessThan(1e-12);
+    // 1 µJy is m_AB = 23.90 (−2.5 log10(1e-29) − 48.60; common practice)
+    expect(Math.abs(abMagnitude(1e-6) - 23.9)).toBeLessThan(1e-12);
+  });
+  test("AB magnitude and flux density are inverse", () => {
+    for (const m of [-5, 0, 12.3, 31]) expectRelative(abMagnitude(abFluxDensityJy(m)), m, 1e-14, `m=${m}`);
+  });
+});
+
+describe("rules of thumb (common practice, no source)", () => {
+  test("the universe is about 14 Gyr old in every CMB preset", () => {
+    for (const name of ["PLANCK2018", "PLANCK2018CMB", "PLANCK2015", "WMAP9", "WMAP7"]) {
+      const age = Cosmology.fromSpec(name).ageTodayGyr;
+      expect(age, name).toBeGreaterThan(13.4);
+      expect(age, name).toBeLessThan(14.2);
+    }
+  });
+  test("bolometric flux falls by (1+z)² beyond the inverse square of D_M (energy and arrival rate each ÷ (1+z))", () => {
+    const m = Cosmology.fromSpec("PLANCK2018");
+    const mpc = 3.0856775814913673e22; // m per Mpc (IAU 2015 B2 derived; cross-check of constants)
+    for (const z of [0.1, 1, 5]) {
+      const dm = m.transverseComovingDistanceMpc(z) * mpc;
+      const l = 1e38;
+      expectRelative(fluxWm2(m, l, z), l / (4 * Math.PI * dm * dm) / (1 + z) ** 2, 1e-14, `z=${z}`);
+    }
+  });
+});

@@ -1,0 +1,59 @@
+import { describe, expect, test } from "vitest";
+import { conversionFactor, convertUnit, parseUnit } from "../core/units.js";
+import { expectRelative } from "./helpers.js";
+
+describe("unit conversion", () => {
+  test.each([
+    // value  from            to           expected                 tol     source
+    [1,       "pc",           "lyr",       3.2615637771674337,      1e-15,  "IAU 2015 B2 pc with the Julian-year light year"],
+    [1,       "Mpc",          "m",         3.0856775814913673e22,   1e-15,  "IAU 2015 B2 (648000/π au)"],
+    [1,       "au",           "m",         149597870700,            0,      "IAU 2012 B2 (exact)"],
+    [1,       "Gyr",          "s",         3.15576e16,              1e-15,  "Julian year 365.25 d (IAU)"],
+    [1,       "Jy",           "W/m2/Hz",   1e-26,                   1e-15,  "IAU definition of the jansky"],
+    [1,       "mJy",          "uJy",       1000,                    1e-15,  "SI prefixes"],
+    [1,       "µJy",          "Jy",        1e-6,                    1e-15,  "SI prefixes (micro sign)"],
+    [1,       "μJy",          "Jy",        1e-6,                    1e-15,  "SI prefixes (Greek mu)"],
+    [1,       "erg/s",        "W",         1e-7,                    1e-15,  "CGS erg = 1e-7 J"],
+    [1,       "erg/s/cm2",    "W/m2",      1e-3,                    1e-15,  "CGS to SI"],
+    [1,       "erg s-1 cm-2", "W.m**-2",   1e-3,                    1e-15,  "FITS 4.0 §4.3 syntax"],
+    [1,       "Lsun",         "W",         3.828e26,                1e-15,  "IAU 2015 B3 nominal L☉"],
+    [1,       "solLum",       "erg/s",     3.828e33,                1e-15,  "IAU 2015 B3 nominal L☉"],
+    [1,       "deg2",         "sr",        (Math.PI / 180) ** 2,    1e-15,  "definition of the degree"],
+    [41252.96124941928, "deg2", "sr",      4 * Math.PI,             1e-14,  "whole sky in deg² (from memory: 41253)"],
+    [1,       "kpc/arcsec",   "Mpc/rad",   206.26480624709637,      1e-15,  "648000/π arcsec per rad"],
+    [1,       "Gpc3",         "Mpc3",      1e9,                     1e-15,  "SI prefixes"],
+    [1,       "Gly",          "Mpc",       306.6013937855506,       1e-14,  "Julian-year light year and IAU pc"],
+    [1,       "mas",          "arcsec",    1e-3,                    1e-15,  "milliarcsecond"],
+    [1,       "10**-26 W m**(-2) Hz-1", "Jy", 1,                    1e-15,  "FITS 4.0 §4.3 scale factor"],
+    [1,       "(erg/s)/(cm2)", "W/m2",     1e-3,                    1e-15,  "FITS 4.0 §4.3 parentheses"],
+    [1,       "km/s/Mpc",     "s-1",       1 / 3.0856775814913673e19, 1e-15, "H0 unit to SI"],
+    [1,       "solMass/Mpc3", "kg/m3",     1.988409870698051e30 / 3.0856775814913673e22 ** 3, 1e-12, "IAU 2015 B3 GM☉ / CODATA 2018 G"],
+  ])("%d %s = %d %s", (value, from, to, expected, tol) => {
+    expectRelative(convertUnit(value, from, to), expected, tol, `${from}→${to}`);
+  });
+
+  test("a conversion and its reverse multiply to 1", () => {
+    for (const [a, b] of [["Mpc", "Gly"], ["erg/s/cm2/Hz", "mJy"], ["kpc/arcsec", "pc/mas"], ["Myr", "d"]]) {
+      expectRelative(conversionFactor(a, b) * conversionFactor(b, a), 1, 1e-15, `${a}↔${b}`);
+    }
+  });
+
+  test.each([
+    // from     to       message                                                  (common practice)
+    ["Mpc",     "Gyr",   /cannot convert "Mpc" \(length\) to "Gyr" \(time\)/],
+    ["kpc",     "kpc/arcsec", /\(length\) to "kpc\/arcsec" \(length per angle\)/],
+    ["parsec",  "m",     /unknown unit "parsec"/],
+    ["mag",     "Jy",    /magnitudes are logarithmic/],
+    ["Mpc**",   "m",     /whole-number power/],
+    ["(Mpc",    "m",     /missing \)/],
+    ["",        "m",     /empty unit/],
+  ])("%s → %s is rejected", (from, to, message) => {
+    expect(() => convertUnit(1, from, to)).toThrow(TypeError);
+    expect(() => convertUnit(1, from, to)).toThrow(message);
+  });
+
+  test("units are case-sensitive as in FITS: mpc is a milliparsec", () => {
+    expectRelative(convertUnit(1, "Mpc", "mpc"), 1e9, 1e-15, "Mpc/mpc");
+    expect(parseUnit("Mpc").dimensions).toEqual([1, 0, 0, 0, 0]);
+  });
+});
