@@ -7,6 +7,7 @@ export {
   auM,
   bolometricZeroPointW,
   gravitationalConstantSI,
+  janskySI,
   julianYearS,
   megaparsecM,
   parsecM,

@@ -1,0 +1,56 @@
+/**
+ * The workbook's active cosmology: spec text stored in the workbook's add-in settings (so it
+ * travels with the file), PLANCK2018 until someone applies another. Functions wait until Office has
+ * loaded the settings before they compute with it.
+ */
+import { parseModelSpec } from "../core/index.js";
+import { messages } from "./messages.js";
+
+/** Settings key under which the active model's spec text is stored. */
+export const activeModelSettingKey = "zcell.activeModel";
+/** The model used until a workbook stores another. */
+export const defaultModelSpec = "PLANCK2018";
+
+let ready: Promise<void> | undefined;
+
+/** Resolves once the workbook's settings can be read (at once outside Office). */
+export function whenSettingsReady(): Promise<void> {
+  if (!ready) {
+    const office = (globalThis as { Office?: typeof Office }).Office;
+    ready = office?.onReady ? office.onReady().then(() => undefined) : Promise.resolve();
+  }
+  return ready;
+}
+
+/** The stored spec and, when it is missing or unusable, the fallback with a warning. */
+export interface ActiveModelSetting {
+  /** Spec text to compute with. */
+  spec: string;
+  /** Set when the stored value was unusable and PLANCK2018 is used instead. */
+  warning?: string;
+  /** True when the workbook stores a spec of its own. */
+  stored: boolean;
+}
+
+/** Reads the active model's spec from the settings (call after whenSettingsReady). */
+export function readActiveModel(): ActiveModelSetting {
+  const office = (globalThis as { Office?: typeof Office }).Office;
+  const settings = office?.context?.document?.settings;
+  if (!settings) return { spec: defaultModelSpec, stored: false };
+  let value: unknown;
+  try {
+    value = settings.get(activeModelSettingKey);
+  } catch (e) {
+    return { spec: defaultModelSpec, stored: false, warning: messages.activeModelFallback(String(e)) };
+  }
+  if (value === null || value === undefined) return { spec: defaultModelSpec, stored: false };
+  if (typeof value !== "string") {
+    return { spec: defaultModelSpec, stored: false, warning: messages.activeModelFallback("not text") };
+  }
+  try {
+    parseModelSpec(value);
+    return { spec: value, stored: true };
+  } catch (e) {
+    return { spec: defaultModelSpec, stored: false, warning: messages.activeModelFallback((e as Error).message) };
+  }
+}

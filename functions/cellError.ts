@@ -1,0 +1,38 @@
+/**
+ * Typed worksheet errors. Inside Excel they are CustomFunctions.Error values; elsewhere (unit tests,
+ * the task pane's inspector) plain CellError objects with the same code and message.
+ */
+
+/** The three error values the functions return, by Excel's meaning. */
+export type ErrorKind = "value" | "num" | "na";
+
+/** An error value for one cell: #VALUE! (type/parse), #NUM! (physical domain), #N/A (no solution). */
+export class CellError {
+  constructor(
+    readonly kind: ErrorKind,
+    readonly message: string,
+  ) {}
+
+  /** The error as Excel writes it. */
+  get excelText(): string {
+    return this.kind === "value" ? "#VALUE!" : this.kind === "num" ? "#NUM!" : "#N/A";
+  }
+}
+
+const officeCodes: Record<ErrorKind, string> = { value: "invalidValue", num: "invalidNumber", na: "notAvailable" };
+
+/** Converts a CellError to what Excel expects (CustomFunctions.Error when the runtime has it). */
+export function toHostError(e: CellError): unknown {
+  const runtime = (globalThis as { CustomFunctions?: typeof CustomFunctions }).CustomFunctions;
+  if (!runtime?.Error) return e;
+  const code = (runtime.ErrorCode as unknown as Record<string, string>)[officeCodes[e.kind]];
+  return new runtime.Error(code as CustomFunctions.ErrorCode, e.message);
+}
+
+/** True when a value passed in from a cell is an error value (from Excel or from us). */
+export function isIncomingError(value: unknown): boolean {
+  if (value instanceof CellError) return true;
+  if (typeof value !== "object" || value === null) return false;
+  const runtime = (globalThis as { CustomFunctions?: typeof CustomFunctions }).CustomFunctions;
+  return (runtime?.Error !== undefined && value instanceof runtime.Error) || "errorCode" in value;
+}

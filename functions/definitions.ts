@@ -1,0 +1,243 @@
+/**
+ * Every worksheet function as data: its arguments (in the order of the ZC.* signature) and what one
+ * cell computes, in reference units (Mpc, Gyr, W, W/m2, Jy, rad, Mpc3, sr). The shared wrapper in
+ * `evaluate.ts` does the rest. To add a function, add an entry here and a declaration in functions.ts.
+ */
+import {
+  abFluxDensityJy,
+  abMagnitude,
+  absoluteMagnitude,
+  apparentMagnitude,
+  convertUnit,
+  Cosmology,
+  fluxWm2,
+  formatModelSpec,
+  janskySI,
+  kCorrectionPowerLawMag,
+  luminosityW,
+  parseModelSpec,
+  presets,
+  spectralLuminosityWHz,
+  type DensityComponent,
+  type InvertibleQuantity,
+} from "../core/index.js";
+import { describeModel, versionText } from "./describeModel.js";
+import type { Args, ArgSpec, Cell, FunctionDef } from "./evaluate.js";
+import { messages } from "./messages.js";
+
+const num = (name: string, extra: { default?: number; blankMeansDefault?: boolean } = {}): ArgSpec => ({
+  kind: "number",
+  name,
+  ...extra,
+});
+const model: ArgSpec = { kind: "model", name: "model" };
+/** A unit argument: `reference` is what compute uses, `shown` the default a person sees. */
+const unit = (name: string, reference: string, shown = reference, applies = "result"): ArgSpec => ({
+  kind: "unit",
+  name,
+  unit: reference,
+  default: shown,
+  applies,
+});
+const z = num("z");
+const zToday = num("z", { default: 0 });
+
+const m = (a: Args) => a.model as Cosmology;
+const n = (a: Args, name: string) => a[name] as number;
+
+/** A function of z and the model only, with an optional output unit. */
+function ofRedshift(
+  name: string,
+  reference: string | undefined,
+  f: (model: Cosmology, z: number) => number,
+  zArg = z,
+  shown = reference,
+): FunctionDef {
+  return {
+    name,
+    args: reference ? [zArg, model, unit("unit", reference, shown)] : [zArg, model],
+    compute: (a) => f(m(a), n(a, "z")),
+  };
+}
+
+/** ZC.REDSHIFT quantity names → core quantity and the unit its value is given in by default. */
+const inverses: Record<string, { quantity: InvertibleQuantity; unit?: string }> = {
+  DIST_LUM: { quantity: "luminosityDistance", unit: "Mpc" },
+  DIST_LOS: { quantity: "comovingDistance", unit: "Mpc" },
+  DIST_TRANS: { quantity: "transverseComovingDistance", unit: "Mpc" },
+  DIST_ANG: { quantity: "angularDiameterDistance", unit: "Mpc" },
+  DIST_LIGHT: { quantity: "lightTravelDistance", unit: "Mpc" },
+  MODULUS: { quantity: "distanceModulus" },
+  LOOKBACK: { quantity: "lookbackTime", unit: "Gyr" },
+  AGE: { quantity: "age", unit: "Gyr" },
+  VOLUME: { quantity: "comovingVolume", unit: "Mpc3" },
+};
+
+/** ZC.PARAM names → value. */
+const parameters: Record<string, (model: Cosmology) => number> = {
+  H0: (x) => x.H0,
+  h: (x) => x.h,
+  Om: (x) => x.Om,
+  OL: (x) => x.OL,
+  Ok: (x) => x.Ok,
+  Or: (x) => x.Or,
+  Ob: (x) => {
+    if (!Number.isFinite(x.Ob)) throw new RangeError(messages.notGiven("Ob"));
+    return x.Ob;
+  },
+  w0: (x) => x.w0,
+  wa: (x) => x.wa,
+  Tcmb: (x) => x.Tcmb,
+  Neff: (x) => x.Neff,
+  mnu: (x) => x.mnuTotalEv,
+  age0: (x) => x.ageTodayGyr,
+  tH: (x) => x.hubbleTimeGyr,
+  DH: (x) => x.hubbleDistanceMpc,
+  zeq: (x) => {
+    if (!Number.isFinite(x.equalityRedshift)) throw new RangeError(messages.noEquality);
+    return x.equalityRedshift;
+  },
+};
+
+const components: readonly DensityComponent[] = ["m", "de", "k", "r", "g", "nu"];
+const fullSkySr = 4 * Math.PI;
+
+const list: FunctionDef[] = [
+  ofRedshift("DIST_LUM", "Mpc", (x, zz) => x.luminosityDistanceMpc(zz)),
+  ofRedshift("DIST_ANG", "Mpc", (x, zz) => x.angularDiameterDistanceMpc(zz)),
+  ofRedshift("DIST_LOS", "Mpc", (x, zz) => x.comovingDistanceMpc(zz)),
+  ofRedshift("DIST_TRANS", "Mpc", (x, zz) => x.transverseComovingDistanceMpc(zz)),
+  {
+    name: "DIST_BETWEEN",
+    args: [num("z1"), num("z2"), model, unit("unit", "Mpc")],
+    compute: (a) => m(a).angularDiameterDistanceBetweenMpc(n(a, "z1"), n(a, "z2")),
+  },
+  ofRedshift("DIST_LIGHT", "Mpc", (x, zz) => x.lightTravelDistanceMpc(zz)),
+  ofRedshift("MODULUS", undefined, (x, zz) => {
+    if (zz === 0) throw new RangeError("z = 0 puts the source at zero distance: give z > 0");
+    return x.distanceModulusMag(zz);
+  }),
+  ofRedshift("LOOKBACK", "Gyr", (x, zz) => x.lookbackTimeGyr(zz)),
+  ofRedshift("AGE", "Gyr", (x, zz) => x.ageGyr(zz), zToday),
+  ofRedshift("HUBBLE", "km/s/Mpc", (x, zz) => x.hubbleParameterKmSMpc(zz), zToday),
+  {
+    name: "OMEGA",
+    args: [{ kind: "text", name: "component", choices: components }, zToday, model],
+    compute: (a) => m(a).densityParameter(a.component as DensityComponent, n(a, "z")),
+  },
+  ofRedshift("CMB_TEMP", undefined, (x, zz) => x.cmbTemperatureK(zz), zToday),
+  ofRedshift("RHO_CRIT", "kg/m3", (x, zz) => x.criticalDensityKgM3(zz), zToday),
+  ofRedshift("ANG_SCALE", "Mpc/rad", (x, zz) => x.angularDiameterDistanceMpc(zz), z, "kpc/arcsec"),
+  {
+    name: "SIZE",
+    args: [num("angle"), z, model, unit("angle_unit", "rad", "arcsec", "angle"), unit("size_unit", "Mpc", "kpc")],
+    compute: (a) => m(a).properSizeMpc(n(a, "angle"), n(a, "z")),
+  },
+  {
+    name: "ANGLE",
+    args: [num("size"), z, model, unit("size_unit", "Mpc", "kpc", "size"), unit("angle_unit", "rad", "arcsec")],
+    compute: (a) => m(a).angleRad(n(a, "size"), n(a, "z")),
+  },
+  ofRedshift("VOLUME", "Mpc3", (x, zz) => x.comovingVolumeMpc3(zz), z, "Gpc3"),
+  {
+    name: "VOLUME_SHELL",
+    args: [num("z1"), num("z2"), num("area", { default: fullSkySr, blankMeansDefault: true }), model, unit("unit", "Mpc3", "Gpc3"), unit("area_unit", "sr", "deg2", "area")],
+    compute: (a) => m(a).comovingVolumeShellMpc3(n(a, "z1"), n(a, "z2"), n(a, "area")),
+  },
+  ofRedshift("VOLUME_ELEMENT", "Mpc3/sr", (x, zz) => x.comovingVolumeElementMpc3Sr(zz)),
+  {
+    name: "LUMINOSITY",
+    args: [num("flux"), z, model, unit("flux_unit", "W/m2", "W/m2", "flux"), unit("lum_unit", "W")],
+    compute: (a) => luminosityW(m(a), n(a, "flux"), n(a, "z")),
+  },
+  {
+    name: "FLUX",
+    args: [num("lum"), z, model, unit("lum_unit", "W", "W", "lum"), unit("flux_unit", "W/m2")],
+    compute: (a) => fluxWm2(m(a), n(a, "lum"), n(a, "z")),
+  },
+  {
+    name: "LUMINOSITY_NU",
+    args: [num("flux_density"), z, num("alpha"), model, unit("in_unit", "Jy", "Jy", "flux_density"), unit("out_unit", "W/Hz")],
+    compute: (a) => spectralLuminosityWHz(m(a), n(a, "flux_density") * janskySI, n(a, "z"), n(a, "alpha")),
+  },
+  {
+    name: "KCORRECTION",
+    args: [z, num("alpha")],
+    compute: (a) => kCorrectionPowerLawMag(n(a, "z"), n(a, "alpha")),
+  },
+  {
+    name: "MAG_ABS",
+    args: [num("m"), z, num("kcorr", { default: 0, blankMeansDefault: true }), model],
+    compute: (a) => absoluteMagnitude(m(a), n(a, "m"), n(a, "z"), n(a, "kcorr")),
+  },
+  {
+    name: "MAG_APP",
+    args: [num("M"), z, num("kcorr", { default: 0, blankMeansDefault: true }), model],
+    compute: (a) => apparentMagnitude(m(a), n(a, "M"), n(a, "z"), n(a, "kcorr")),
+  },
+  {
+    name: "MAG_AB",
+    args: [num("flux_density"), unit("unit", "Jy", "Jy", "flux_density")],
+    compute: (a) => abMagnitude(n(a, "flux_density")),
+  },
+  {
+    name: "FLUX_AB",
+    args: [num("m_ab"), unit("unit", "Jy")],
+    compute: (a) => abFluxDensityJy(n(a, "m_ab")),
+  },
+  {
+    name: "REDSHIFT",
+    args: [num("value"), { kind: "text", name: "quantity", choices: Object.keys(inverses), scalar: true }, model, { kind: "text", name: "unit", scalar: true, optional: true }],
+    compute: (a) => {
+      const inverse = inverses[a.quantity as string];
+      let value = n(a, "value");
+      const given = a.unit as string;
+      if (given !== "") {
+        if (!inverse.unit) throw new TypeError(`unit: ${a.quantity as string} is in magnitudes and takes no unit`);
+        value = convertUnit(value, given, inverse.unit);
+      }
+      return m(a).redshiftAt(inverse.quantity, value);
+    },
+  },
+  {
+    name: "CONVERT",
+    args: [num("value"), { kind: "text", name: "from", scalar: true }, { kind: "text", name: "to", scalar: true }],
+    compute: (a) => convertUnit(n(a, "value"), a.from as string, a.to as string),
+  },
+  {
+    name: "MODEL",
+    args: ["H0", "Om", "OL", "w0", "wa", "Tcmb", "Neff", "mnu", "Ob"].map(
+      (name): ArgSpec => ({ kind: "numberOrText", name }),
+    ),
+    compute: (a) => {
+      const keys = ["H0", "Om", "OL", "w0", "wa", "Tcmb", "Neff", "mnu", "Ob"];
+      const spec = keys.filter((k) => a[k] !== undefined).map((k) => `${k}=${String(a[k])}`).join("; ");
+      const p = parseModelSpec(spec);
+      new Cosmology(p); // validates the physics, so a bad model errors here, not later
+      return formatModelSpec(p);
+    },
+  },
+  {
+    name: "PARAM",
+    args: [{ kind: "text", name: "name", choices: Object.keys(parameters) }, model],
+    compute: (a) => parameters[a.name as string](m(a)),
+  },
+  {
+    name: "PRESETS",
+    args: [],
+    table: (): Cell[][] => [["preset", "description and source"], ...presets.map((p) => [p.name, p.description])],
+  },
+  {
+    name: "DESCRIBE",
+    args: [model],
+    compute: (a) => describeModel(m(a)),
+  },
+  {
+    name: "VERSION",
+    args: [],
+    table: (): Cell[][] => [[versionText()]],
+  },
+];
+
+/** The worksheet functions by name (without the ZC. namespace). */
+export const definitions: Readonly<Record<string, FunctionDef>> = Object.fromEntries(list.map((d) => [d.name, d]));

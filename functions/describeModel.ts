@@ -1,0 +1,55 @@
+/**
+ * Plain-words descriptions for people: one line per model (ZC.DESCRIBE, the task pane) and the
+ * engine conventions (ZC.VERSION), so that every number a reader sees states its assumptions.
+ */
+import { type Cosmology } from "../core/index.js";
+import packageJson from "../package.json";
+
+/** zcell's version, from package.json. */
+export const zcellVersion: string = packageJson.version;
+
+const fmt = (x: number, digits = 6) => Number(x.toPrecision(digits)).toString();
+
+/** The model's kind in words: flat/open/closed, Λ or w0–wa, with or without radiation. */
+function kindOf(m: Cosmology): string {
+  const geometry = m.Ok === 0 ? "flat" : m.Ok > 0 ? "open" : "closed";
+  const darkEnergy = m.wa !== 0 || m.w0 !== -1 ? "w0–wa dark energy" : "ΛCDM";
+  return `${geometry} ${darkEnergy}`;
+}
+
+/**
+ * One line describing a model with every parameter shown.
+ * @example "PLANCK2018: flat ΛCDM; H0 = 67.66 km/s/Mpc; Om = 0.3111 (matter incl. massive ν) ..."
+ */
+export function describeModel(m: Cosmology): string {
+  const neutrinos =
+    m.Tcmb === 0
+      ? "no radiation (Tcmb = 0: no photons, no neutrinos)"
+      : `Tcmb = ${fmt(m.Tcmb)} K; Neff = ${fmt(m.Neff)}; ` +
+        (m.parameters.mnu.length === 0
+          ? "massless neutrinos"
+          : `neutrino masses ${m.parameters.mnu.map((x) => fmt(x)).join(", ")} eV (exact Fermi–Dirac; others massless)`);
+  const age = Number.isFinite(m.ageTodayGyr) ? `${fmt(m.ageTodayGyr, 5)} Gyr` : "infinite (no big bang)";
+  return [
+    `${m.spec}: ${kindOf(m)}`,
+    `H0 = ${fmt(m.H0)} km/s/Mpc`,
+    `Om = ${fmt(m.Om)} (matter incl. massive ν)`,
+    `OL = ${fmt(m.OL)}`,
+    `Ok = ${fmt(m.Ok)}`,
+    `Or = ${m.Or.toPrecision(4)} (photons + massless ν)`,
+    ...(Number.isFinite(m.Ob) ? [`Ob = ${fmt(m.Ob)}`] : []),
+    `w0 = ${fmt(m.w0)}`,
+    `wa = ${fmt(m.wa)}`,
+    neutrinos,
+    `age today ${age}`,
+  ].join("; ");
+}
+
+/** zcell's version and the engine's conventions, for provenance in shared workbooks. */
+export function versionText(): string {
+  return (
+    `zcell ${zcellVersion}; distances per Hogg (1999); Om includes massive neutrinos; ` +
+    `neutrinos exact Fermi–Dirac with T_ν = (4/11)^(1/3) Tcmb and Neff/3 per species; ` +
+    `w(a) = w0 + wa(1 − a); constants CODATA 2018 / IAU 2015; relative accuracy ≤ 1e-10 for z ≤ 1e4`
+  );
+}

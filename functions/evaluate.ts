@@ -1,0 +1,292 @@
+/**
+ * The one shared wrapper behind every worksheet function: coerces arguments, broadcasts ranges,
+ * resolves models and units, maps core errors to Excel errors and cleans results (NaN/±Infinity →
+ * #NUM!, −0 → 0). Each custom function is a declaration in `definitions.ts` evaluated here.
+ *
+ * `evaluate` is synchronous and host-free, so the task pane's cell inspector can ask it why a cell
+ * holds an error: the CellError it returns carries the explanation.
+ */
+import { Cosmology, conversionFactor, NoSolutionError } from "../core/index.js";
+import { readActiveModel, whenSettingsReady, type ActiveModelSetting } from "./activeModel.js";
+import { CellError, isIncomingError, toHostError } from "./cellError.js";
+import { messages } from "./messages.js";
+import { isBlank, keyValueBlockSpec } from "./modelArgument.js";
+import { modelFor } from "./modelCache.js";
+
+/** What a worksheet cell can hold as a result. */
+export type Cell = number | string | CellError;
+
+/** How one argument is read. */
+export type ArgSpec =
+  | {
+      /** A number (or range of numbers). */
+      kind: "number";
+      name: string;
+      /** Value when the argument is omitted; absent means the argument is required. */
+      default?: number;
+      /** A blank cell inside the argument means the default (instead of a blank result). */
+      blankMeansDefault?: boolean;
+    }
+  | { kind: "model"; name: string }
+  | {
+      /** Text (or range of text), optionally one of fixed choices (matched case-insensitively). */
+      kind: "text";
+      name: string;
+      choices?: readonly string[];
+      /** Scalar: read once, not broadcast. */
+      scalar?: boolean;
+      /** Scalar and may be omitted or blank (read as ""). */
+      optional?: boolean;
+    }
+  | {
+      /** A number or text, passed through (e.g. mnu as "0.05,0.01"). */
+      kind: "numberOrText";
+      name: string;
+      default?: number | string;
+    }
+  | {
+      /**
+       * A unit (scalar text, `default` when blank): converts the named number argument from it into
+       * the reference unit `unit` the computation uses, or, with applies "result", the result from
+       * `unit` into it.
+       */
+      kind: "unit";
+      name: string;
+      unit: string;
+      default: string;
+      applies: string;
+    };
+
+/** The resolved arguments of one cell, by name (units already applied). */
+export type Args = Record<string, number | string | Cosmology | undefined>;
+
+/** A worksheet function as data: its arguments and what it computes for one cell. */
+export interface FunctionDef {
+  /** Name as typed after "ZC.", e.g. "DIST_LUM". */
+  name: string;
+  args: ArgSpec[];
+  /** The value for one cell, in the reference units of the unit arguments. */
+  compute?: (a: Args) => number | string;
+  /** For functions that return a whole table at once (ZC.PRESETS). */
+  table?: () => Cell[][];
+}
+
+const maxCells = 4_194_304;
+const blank = "";
+
+type Prepared = { spec: ArgSpec; matrix: unknown[][] | undefined; rows: number; cols: number };
+
+/** Normalises a raw argument to a matrix (undefined when omitted). */
+function toMatrix(raw: unknown): unknown[][] | undefined {
+  if (raw === undefined || raw === null) return undefined;
+  if (Array.isArray(raw)) {
+    if (raw.length === 0) return undefined;
+    return Array.isArray(raw[0]) ? (raw as unknown[][]) : [raw as unknown[]];
+  }
+  return [[raw]];
+}
+
+function classify(e: unknown, fn: string): CellError {
+  if (e instanceof CellError) return e;
+  if (e instanceof NoSolutionError) return new CellError("na", e.message);
+  if (e instanceof RangeError) return new CellError("num", e.message);
+  if (e instanceof TypeError) return new CellError("value", e.message);
+  return new CellError("value", messages.internal(fn, e instanceof Error ? e.message : String(e)));
+}
+
+function unitFactor(spec: Extract<ArgSpec, { kind: "unit" }>, raw: unknown): number {
+  const given = toMatrix(raw)?.[0]?.[0];
+  const text = isBlank(given) ? spec.default : given;
+  if (typeof text !== "string") throw new CellError("value", messages.notText(spec.name, text));
+  try {
+    return spec.applies === "result" ? conversionFactor(spec.unit, text) : conversionFactor(text, spec.unit);
+  } catch (e) {
+    throw new CellError("value", messages.unitArgument(spec.name, (e as Error).message));
+  }
+}
+
+/**
+ * Evaluates a function over its (possibly range) arguments.
+ *
+ * @param def the function's declaration
+ * @param raw the arguments as Excel passes them (numbers, text, booleans, null, or 2-D arrays)
+ * @param active the workbook's active model setting (blank/omitted model arguments use it)
+ * @returns the result matrix: numbers, text, "" for blank, CellError for a bad cell
+ */
+export function evaluate(def: FunctionDef, raw: readonly unknown[], active: ActiveModelSetting): Cell[][] {
+  try {
+    if (def.table) return def.table();
+    return evaluateCells(def, raw, active);
+  } catch (e) {
+    return [[classify(e, def.name)]];
+  }
+}
+
+function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: ActiveModelSetting): Cell[][] {
+  const compute = def.compute!;
+  const inputFactors = new Map<string, number>();
+  let resultFactor = 1;
+  const prepared: Prepared[] = [];
+  const scalars: Args = {};
+  def.args.forEach((spec, index) => {
+    const value = raw[index];
+    if (spec.kind === "unit") {
+      const factor = unitFactor(spec, value);
+      if (spec.applies === "result") resultFactor *= factor;
+      else inputFactors.set(spec.applies, factor);
+      return;
+    }
+    if (spec.kind === "text" && spec.scalar) {
+      const text = toMatrix(value)?.[0]?.[0];
+      scalars[spec.name] = spec.optional && isBlank(text) ? "" : readText(spec, text);
+      return;
+    }
+    let matrix = toMatrix(value);
+    if (spec.kind === "model" && matrix) {
+      const block = keyValueBlockSpec(matrix);
+      if (block !== undefined) matrix = [[block]];
+    }
+    if (!matrix && spec.kind === "number" && spec.default === undefined) {
+      throw new CellError("value", `${spec.name} is required`);
+    }
+    prepared.push({ spec, matrix, rows: matrix?.length ?? 1, cols: matrix?.[0]?.length ?? 1 });
+  });
+
+  let rows = 1;
+  let cols = 1;
+  let rowsFrom = prepared[0];
+  let colsFrom = prepared[0];
+  for (const p of prepared) {
+    if (p.rows !== 1) {
+      if (rows !== 1 && p.rows !== rows) {
+        throw new CellError("value", messages.shapes(rowsFrom.spec.name, rowsFrom.rows, rowsFrom.cols, p.spec.name, p.rows, p.cols));
+      }
+      rows = p.rows;
+      rowsFrom = p;
+    }
+    if (p.cols !== 1) {
+      if (cols !== 1 && p.cols !== cols) {
+        throw new CellError("value", messages.shapes(colsFrom.spec.name, colsFrom.rows, colsFrom.cols, p.spec.name, p.rows, p.cols));
+      }
+      cols = p.cols;
+      colsFrom = p;
+    }
+  }
+  if (rows * cols > maxCells) throw new CellError("value", messages.tooLarge(rows * cols));
+
+  const models = new Map<string, Cosmology | CellError>();
+  const modelOf = (spec: string): Cosmology | CellError => {
+    let m = models.get(spec);
+    if (m === undefined) {
+      try {
+        m = modelFor(spec);
+      } catch (e) {
+        const err = classify(e, def.name);
+        m = new CellError(err.kind, messages.model(err.message));
+      }
+      models.set(spec, m);
+    }
+    return m;
+  };
+
+  const args: Args = { ...scalars };
+  const out: Cell[][] = new Array(rows);
+  for (let r = 0; r < rows; r++) {
+    const row: Cell[] = new Array(cols);
+    for (let c = 0; c < cols; c++) {
+      let cell: Cell | undefined;
+      for (let k = 0; k < prepared.length && cell === undefined; k++) {
+        const p = prepared[k];
+        const value = p.matrix ? p.matrix[p.rows === 1 ? 0 : r][p.cols === 1 ? 0 : c] : undefined;
+        const read = readArg(p, value, active, modelOf, inputFactors);
+        if (read instanceof CellError || read === blank) cell = read;
+        else args[p.spec.name] = read;
+      }
+      if (cell === undefined) {
+        try {
+          const result = compute(args);
+          cell = typeof result === "number" ? cleanNumber(result * resultFactor, def.name) : result;
+        } catch (e) {
+          cell = classify(e, def.name);
+        }
+      }
+      row[c] = cell;
+    }
+    out[r] = row;
+  }
+  return out;
+}
+
+/** Reads one cell of a broadcast argument: its value, "" for a blank result, or an error. */
+function readArg(
+  p: Prepared,
+  value: unknown,
+  active: ActiveModelSetting,
+  modelOf: (spec: string) => Cosmology | CellError,
+  inputFactors: Map<string, number>,
+): number | string | Cosmology | CellError | undefined {
+  const spec = p.spec;
+  if (isIncomingError(value)) return new CellError("value", messages.inputError(spec.name));
+  switch (spec.kind) {
+    case "model": {
+      if (isBlank(value)) return modelOf(active.spec);
+      if (typeof value !== "string") return new CellError("value", messages.model(messages.notText("model", value)));
+      const block = value.trim();
+      return modelOf(block === "" ? active.spec : block);
+    }
+    case "number": {
+      if (isBlank(value)) {
+        if (p.matrix && !spec.blankMeansDefault) return blank;
+        if (spec.default === undefined) return blank;
+        return spec.default;
+      }
+      if (typeof value !== "number") return new CellError("value", messages.notANumber(spec.name, value));
+      if (!Number.isFinite(value)) return new CellError("num", messages.notFinite(spec.name));
+      const factor = inputFactors.get(spec.name);
+      return factor === undefined ? value : value * factor;
+    }
+    case "numberOrText": {
+      if (isBlank(value)) return spec.default;
+      if (typeof value === "number" || typeof value === "string") return value;
+      return new CellError("value", messages.notANumber(spec.name, value));
+    }
+    case "text": {
+      if (isBlank(value)) return blank;
+      try {
+        return readText(spec, value);
+      } catch (e) {
+        return classify(e, spec.name);
+      }
+    }
+    default:
+      return undefined;
+  }
+}
+
+function readText(spec: Extract<ArgSpec, { kind: "text" }>, value: unknown): string {
+  if (typeof value !== "string") throw new CellError("value", messages.notText(spec.name, value));
+  const text = value.trim();
+  if (!spec.choices) return text;
+  const match = spec.choices.find((c) => c.toLowerCase() === text.toLowerCase());
+  if (!match) throw new CellError("value", messages.choice(spec.name, text, spec.choices));
+  return match;
+}
+
+function cleanNumber(x: number, fn: string): number | CellError {
+  if (!Number.isFinite(x)) return new CellError("num", messages.notFiniteResult(fn));
+  return x === 0 ? 0 : x;
+}
+
+/**
+ * What a custom function returns to Excel: waits for the workbook's settings, evaluates, and turns
+ * CellErrors into host error values. Never throws.
+ */
+export async function callFromSheet(def: FunctionDef, raw: readonly unknown[]): Promise<unknown[][]> {
+  try {
+    await whenSettingsReady();
+    const cells = evaluate(def, raw, readActiveModel());
+    return cells.map((row) => row.map((cell) => (cell instanceof CellError ? toHostError(cell) : cell)));
+  } catch (e) {
+    return [[toHostError(classify(e, def.name))]];
+  }
+}

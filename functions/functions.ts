@@ -1,0 +1,461 @@
+/**
+ * The ZC.* worksheet functions: each is its JSDoc (read by the metadata plugin to build
+ * functions.json) plus one line handing the arguments to the shared wrapper. Arguments marked
+ * "range" broadcast: a single value or a range, and a column against a row makes a table.
+ * Omitted or blank `model` means the workbook's active cosmology (PLANCK2018 until one is applied).
+ */
+/* eslint-disable @typescript-eslint/no-explicit-any */
+import { callFromSheet } from "./evaluate.js";
+import { definitions as d } from "./definitions.js";
+
+/**
+ * Luminosity distance D_L = (1+z) D_M (Hogg 1999), in Mpc unless a unit is given.
+ * @customfunction DIST_LUM DIST_LUM
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param [model] Cosmology: preset name, model spec, or key/value block; blank = workbook's active model.
+ * @param [unit] Output unit, default "Mpc" (e.g. "Gpc", "Gly", "m").
+ * @returns Luminosity distance (Mpc by default).
+ */
+export function DIST_LUM(z: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+  return callFromSheet(d.DIST_LUM, [z, model, unit]);
+}
+
+/**
+ * Angular-diameter distance D_A = D_M / (1+z), in Mpc unless a unit is given.
+ * @customfunction DIST_ANG DIST_ANG
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [unit] Output unit, default "Mpc".
+ * @returns Angular-diameter distance (Mpc by default).
+ */
+export function DIST_ANG(z: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+  return callFromSheet(d.DIST_ANG, [z, model, unit]);
+}
+
+/**
+ * Line-of-sight comoving distance D_C, in Mpc unless a unit is given.
+ * @customfunction DIST_LOS DIST_LOS
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [unit] Output unit, default "Mpc".
+ * @returns Line-of-sight comoving distance (Mpc by default).
+ */
+export function DIST_LOS(z: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+  return callFromSheet(d.DIST_LOS, [z, model, unit]);
+}
+
+/**
+ * Transverse comoving distance D_M, in Mpc unless a unit is given.
+ * @customfunction DIST_TRANS DIST_TRANS
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [unit] Output unit, default "Mpc".
+ * @returns Transverse comoving distance (Mpc by default).
+ */
+export function DIST_TRANS(z: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+  return callFromSheet(d.DIST_TRANS, [z, model, unit]);
+}
+
+/**
+ * Angular-diameter distance of a source at z2 seen from z1 (lens to source), in Mpc.
+ * @customfunction DIST_BETWEEN DIST_BETWEEN
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z1 Redshift of the observer (e.g. a lens), ≥ 0 (value or range).
+ * @param z2 Redshift of the source, ≥ z1 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [unit] Output unit, default "Mpc".
+ * @returns Angular-diameter distance from z1 to z2 (Mpc by default).
+ */
+export function DIST_BETWEEN(z1: any[][], z2: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+  return callFromSheet(d.DIST_BETWEEN, [z1, z2, model, unit]);
+}
+
+/**
+ * Light-travel distance: c times the look-back time, in Mpc unless a unit is given.
+ * @customfunction DIST_LIGHT DIST_LIGHT
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [unit] Output unit, default "Mpc" (e.g. "Gly").
+ * @returns Light-travel distance (Mpc by default).
+ */
+export function DIST_LIGHT(z: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+  return callFromSheet(d.DIST_LIGHT, [z, model, unit]);
+}
+
+/**
+ * Distance modulus μ = 5 log10(D_L / 10 pc), in magnitudes.
+ * @customfunction MODULUS MODULUS
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshift, > 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @returns Distance modulus (mag).
+ */
+export function MODULUS(z: any[][], model?: any[][]): Promise<any[][]> {
+  return callFromSheet(d.MODULUS, [z, model]);
+}
+
+/**
+ * Look-back time to redshift z, in Gyr unless a unit is given.
+ * @customfunction LOOKBACK LOOKBACK
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [unit] Output unit, default "Gyr" (e.g. "Myr", "yr").
+ * @returns Look-back time (Gyr by default).
+ */
+export function LOOKBACK(z: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+  return callFromSheet(d.LOOKBACK, [z, model, unit]);
+}
+
+/**
+ * Age of the universe at redshift z (today if z is omitted), in Gyr unless a unit is given.
+ * @customfunction AGE AGE
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param [z] Redshift, ≥ 0 (value or range); omitted = today.
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [unit] Output unit, default "Gyr".
+ * @returns Age at z (Gyr by default).
+ */
+export function AGE(z?: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+  return callFromSheet(d.AGE, [z, model, unit]);
+}
+
+/**
+ * Hubble parameter H(z), in km/s/Mpc unless a unit is given.
+ * @customfunction HUBBLE HUBBLE
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param [z] Redshift, ≥ 0 (value or range); omitted = today (H0).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [unit] Output unit, default "km/s/Mpc" (e.g. "s-1").
+ * @returns H(z) (km/s/Mpc by default).
+ */
+export function HUBBLE(z?: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+  return callFromSheet(d.HUBBLE, [z, model, unit]);
+}
+
+/**
+ * Density parameter of one component at z: "m" (matter incl. massive ν), "de", "k", "r" (photons + massless ν), "g" (photons), "nu" (all ν).
+ * @customfunction OMEGA OMEGA
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param component "m", "de", "k", "r", "g" or "nu" (value or range).
+ * @param [z] Redshift, ≥ 0 (value or range); omitted = today.
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @returns Density parameter (dimensionless).
+ */
+export function OMEGA(component: any[][], z?: any[][], model?: any[][]): Promise<any[][]> {
+  return callFromSheet(d.OMEGA, [component, z, model]);
+}
+
+/**
+ * CMB temperature at redshift z, Tcmb (1+z), in K.
+ * @customfunction CMB_TEMP CMB_TEMP
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param [z] Redshift, ≥ 0 (value or range); omitted = today.
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @returns Temperature (K).
+ */
+export function CMB_TEMP(z?: any[][], model?: any[][]): Promise<any[][]> {
+  return callFromSheet(d.CMB_TEMP, [z, model]);
+}
+
+/**
+ * Critical density 3H(z)²/(8πG), in kg/m3 unless a unit is given.
+ * @customfunction RHO_CRIT RHO_CRIT
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param [z] Redshift, ≥ 0 (value or range); omitted = today.
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [unit] Output unit, default "kg/m3" (e.g. "solMass/Mpc3", "g/cm3").
+ * @returns Critical density (kg/m3 by default).
+ */
+export function RHO_CRIT(z?: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+  return callFromSheet(d.RHO_CRIT, [z, model, unit]);
+}
+
+/**
+ * Proper size per unit angle at z (angular scale), in kpc/arcsec unless a unit is given.
+ * @customfunction ANG_SCALE ANG_SCALE
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshift, > 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [unit] Output unit, default "kpc/arcsec" (e.g. "Mpc/deg").
+ * @returns Angular scale (kpc/arcsec by default).
+ */
+export function ANG_SCALE(z: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+  return callFromSheet(d.ANG_SCALE, [z, model, unit]);
+}
+
+/**
+ * Proper size subtending an angle at z, in kpc unless a unit is given (angle in arcsec by default).
+ * @customfunction SIZE SIZE
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param angle Angle, ≥ 0, in arcsec by default (value or range).
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [angle_unit] Unit of angle, default "arcsec".
+ * @param [size_unit] Output unit, default "kpc".
+ * @returns Proper size (kpc by default).
+ */
+export function SIZE(angle: any[][], z: any[][], model?: any[][], angle_unit?: string, size_unit?: string): Promise<any[][]> {
+  return callFromSheet(d.SIZE, [angle, z, model, angle_unit, size_unit]);
+}
+
+/**
+ * Angle subtended by a proper size at z, in arcsec unless a unit is given (size in kpc by default).
+ * @customfunction ANGLE ANGLE
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param size Proper size, ≥ 0, in kpc by default (value or range).
+ * @param z Redshift, > 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [size_unit] Unit of size, default "kpc".
+ * @param [angle_unit] Output unit, default "arcsec".
+ * @returns Angle (arcsec by default).
+ */
+export function ANGLE(size: any[][], z: any[][], model?: any[][], size_unit?: string, angle_unit?: string): Promise<any[][]> {
+  return callFromSheet(d.ANGLE, [size, z, model, size_unit, angle_unit]);
+}
+
+/**
+ * All-sky comoving volume within redshift z, in Gpc3 unless a unit is given.
+ * @customfunction VOLUME VOLUME
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [unit] Output unit, default "Gpc3" (e.g. "Mpc3").
+ * @returns Comoving volume (Gpc3 by default).
+ */
+export function VOLUME(z: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+  return callFromSheet(d.VOLUME, [z, model, unit]);
+}
+
+/**
+ * Comoving volume between z1 and z2 over a sky area (all sky if omitted), in Gpc3 (area in deg2).
+ * @customfunction VOLUME_SHELL VOLUME_SHELL
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z1 Inner redshift, ≥ 0 (value or range).
+ * @param z2 Outer redshift, ≥ z1 (value or range).
+ * @param [area] Sky area, in deg2 by default; omitted = whole sky (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [unit] Output unit, default "Gpc3".
+ * @param [area_unit] Unit of area, default "deg2" (e.g. "sr", "arcmin2").
+ * @returns Shell volume (Gpc3 by default).
+ */
+export function VOLUME_SHELL(z1: any[][], z2: any[][], area?: any[][], model?: any[][], unit?: string, area_unit?: string): Promise<any[][]> {
+  return callFromSheet(d.VOLUME_SHELL, [z1, z2, area, model, unit, area_unit]);
+}
+
+/**
+ * Comoving volume element dV/dz/dΩ = D_H D_M² / E(z), in Mpc3/sr unless a unit is given.
+ * @customfunction VOLUME_ELEMENT VOLUME_ELEMENT
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [unit] Output unit, default "Mpc3/sr" (e.g. "Mpc3/deg2").
+ * @returns Volume element (Mpc3/sr by default).
+ */
+export function VOLUME_ELEMENT(z: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+  return callFromSheet(d.VOLUME_ELEMENT, [z, model, unit]);
+}
+
+/**
+ * Bolometric luminosity L = 4π D_L² F, in W (flux in W/m2) unless units are given.
+ * @customfunction LUMINOSITY LUMINOSITY
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param flux Bolometric flux, ≥ 0, in W/m2 by default (value or range).
+ * @param z Redshift, > 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [flux_unit] Unit of flux, default "W/m2" (e.g. "erg/s/cm2").
+ * @param [lum_unit] Output unit, default "W" (e.g. "erg/s", "Lsun").
+ * @returns Luminosity (W by default).
+ */
+export function LUMINOSITY(flux: any[][], z: any[][], model?: any[][], flux_unit?: string, lum_unit?: string): Promise<any[][]> {
+  return callFromSheet(d.LUMINOSITY, [flux, z, model, flux_unit, lum_unit]);
+}
+
+/**
+ * Bolometric flux F = L / (4π D_L²), in W/m2 (luminosity in W) unless units are given.
+ * @customfunction FLUX FLUX
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param lum Luminosity, ≥ 0, in W by default (value or range).
+ * @param z Redshift, > 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [lum_unit] Unit of luminosity, default "W" (e.g. "Lsun").
+ * @param [flux_unit] Output unit, default "W/m2" (e.g. "erg/s/cm2").
+ * @returns Flux (W/m2 by default).
+ */
+export function FLUX(lum: any[][], z: any[][], model?: any[][], lum_unit?: string, flux_unit?: string): Promise<any[][]> {
+  return callFromSheet(d.FLUX, [lum, z, model, lum_unit, flux_unit]);
+}
+
+/**
+ * Rest-frame spectral luminosity for a power law S_ν ∝ ν^alpha: 4π D_L² S_ν (1+z)^−(1+alpha), in W/Hz (flux density in Jy).
+ * @customfunction LUMINOSITY_NU LUMINOSITY_NU
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param flux_density Observed flux density, ≥ 0, in Jy by default (value or range).
+ * @param z Redshift, > 0 (value or range).
+ * @param alpha Spectral index of S_ν ∝ ν^alpha, e.g. -0.7 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [in_unit] Unit of flux density, default "Jy" (e.g. "mJy", "uJy").
+ * @param [out_unit] Output unit, default "W/Hz" (e.g. "erg/s/Hz").
+ * @returns Spectral luminosity (W/Hz by default).
+ */
+export function LUMINOSITY_NU(flux_density: any[][], z: any[][], alpha: any[][], model?: any[][], in_unit?: string, out_unit?: string): Promise<any[][]> {
+  return callFromSheet(d.LUMINOSITY_NU, [flux_density, z, alpha, model, in_unit, out_unit]);
+}
+
+/**
+ * K-correction of a power law S_ν ∝ ν^alpha: K = −2.5 (1+alpha) log10(1+z), for M = m − μ − K (mag).
+ * @customfunction KCORRECTION KCORRECTION
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param alpha Spectral index of S_ν ∝ ν^alpha (value or range).
+ * @returns K-correction (mag).
+ */
+export function KCORRECTION(z: any[][], alpha: any[][]): Promise<any[][]> {
+  return callFromSheet(d.KCORRECTION, [z, alpha]);
+}
+
+/**
+ * Absolute magnitude M = m − μ − K.
+ * @customfunction MAG_ABS MAG_ABS
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param m Apparent magnitude (value or range).
+ * @param z Redshift, > 0 (value or range).
+ * @param [kcorr] K-correction in mag, default 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @returns Absolute magnitude (mag).
+ */
+export function MAG_ABS(m: any[][], z: any[][], kcorr?: any[][], model?: any[][]): Promise<any[][]> {
+  return callFromSheet(d.MAG_ABS, [m, z, kcorr, model]);
+}
+
+/**
+ * Apparent magnitude m = M + μ + K.
+ * @customfunction MAG_APP MAG_APP
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param M Absolute magnitude (value or range).
+ * @param z Redshift, > 0 (value or range).
+ * @param [kcorr] K-correction in mag, default 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @returns Apparent magnitude (mag).
+ */
+export function MAG_APP(M: any[][], z: any[][], kcorr?: any[][], model?: any[][]): Promise<any[][]> {
+  return callFromSheet(d.MAG_APP, [M, z, kcorr, model]);
+}
+
+/**
+ * AB magnitude of a flux density: −2.5 log10(f_ν / 3630.78 Jy).
+ * @customfunction MAG_AB MAG_AB
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param flux_density Flux density, > 0, in Jy by default (value or range).
+ * @param [unit] Unit of flux density, default "Jy" (e.g. "uJy", "erg/s/cm2/Hz").
+ * @returns AB magnitude (mag).
+ */
+export function MAG_AB(flux_density: any[][], unit?: string): Promise<any[][]> {
+  return callFromSheet(d.MAG_AB, [flux_density, unit]);
+}
+
+/**
+ * Flux density of an AB magnitude, in Jy unless a unit is given.
+ * @customfunction FLUX_AB FLUX_AB
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param m_ab AB magnitude (value or range).
+ * @param [unit] Output unit, default "Jy" (e.g. "uJy").
+ * @returns Flux density (Jy by default).
+ */
+export function FLUX_AB(m_ab: any[][], unit?: string): Promise<any[][]> {
+  return callFromSheet(d.FLUX_AB, [m_ab, unit]);
+}
+
+/**
+ * Redshift at which a quantity takes a value (inverse): quantity is "DIST_LUM", "DIST_LOS", "DIST_TRANS", "DIST_ANG" (lower branch), "DIST_LIGHT", "MODULUS", "LOOKBACK", "AGE" or "VOLUME".
+ * @customfunction REDSHIFT REDSHIFT
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param value Value of the quantity, in its default unit unless one is given (value or range).
+ * @param quantity Name of the function inverted, e.g. "DIST_LUM".
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [unit] Unit of value; default that of the quantity (Mpc, Gyr, or Mpc3 for VOLUME).
+ * @returns Redshift.
+ */
+export function REDSHIFT(value: any[][], quantity: string, model?: any[][], unit?: string): Promise<any[][]> {
+  return callFromSheet(d.REDSHIFT, [value, quantity, model, unit]);
+}
+
+/**
+ * Converts a value between astronomical units (pc, Mpc, ly, au, erg/s, Lsun, Jy, deg2, ...).
+ * @customfunction CONVERT CONVERT
+ * @helpurl https://localhost:3000/help.html#units
+ * @param value Value (value or range).
+ * @param from Unit of value, e.g. "Mpc".
+ * @param to Wanted unit, e.g. "Gly".
+ * @returns The value in the wanted unit.
+ */
+export function CONVERT(value: any[][], from: string, to: string): Promise<any[][]> {
+  return callFromSheet(d.CONVERT, [value, from, to]);
+}
+
+/**
+ * Canonical model spec text from parameters (for the model argument of the other functions).
+ * @customfunction MODEL MODEL
+ * @helpurl https://localhost:3000/help.html#model-spec
+ * @param H0 Hubble constant, km/s/Mpc.
+ * @param Om Matter density today, massive neutrinos included.
+ * @param [OL] Dark-energy density today; omitted = flat.
+ * @param [w0] Dark-energy equation of state today, default -1.
+ * @param [wa] Its slope, w(a) = w0 + wa(1 − a), default 0.
+ * @param [Tcmb] CMB temperature in K, default 0 (no radiation).
+ * @param [Neff] Effective number of neutrino species, default 3.046.
+ * @param [mnu] Neutrino mass in eV (one massive species), or a list as text "0.05,0.01"; default 0.
+ * @param [Ob] Baryon density today (informational).
+ * @returns Model spec text.
+ */
+export function MODEL(H0: any, Om: any, OL?: any, w0?: any, wa?: any, Tcmb?: any, Neff?: any, mnu?: any, Ob?: any): Promise<any[][]> {
+  return callFromSheet(d.MODEL, [H0, Om, OL, w0, wa, Tcmb, Neff, mnu, Ob]);
+}
+
+/**
+ * A parameter or derived value of a model: H0, h, Om, OL, Ok, Or, Ob, w0, wa, Tcmb, Neff, mnu, age0 (Gyr), tH (Gyr), DH (Mpc), zeq.
+ * @customfunction PARAM PARAM
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param name Parameter name, e.g. "age0" (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @returns The parameter's value.
+ */
+export function PARAM(name: any[][], model?: any[][]): Promise<any[][]> {
+  return callFromSheet(d.PARAM, [name, model]);
+}
+
+/**
+ * Table of the built-in parameter sets: name and a one-line description with its source.
+ * @customfunction PRESETS PRESETS
+ * @helpurl https://localhost:3000/help.html#presets
+ * @returns Two columns: preset name, description.
+ */
+export function PRESETS(): Promise<any[][]> {
+  return callFromSheet(d.PRESETS, []);
+}
+
+/**
+ * One line of plain words describing a model, all parameters shown.
+ * @customfunction DESCRIBE DESCRIBE
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @returns Description text.
+ */
+export function DESCRIBE(model?: any[][]): Promise<any[][]> {
+  return callFromSheet(d.DESCRIBE, [model]);
+}
+
+/**
+ * zcell's version and the engine's conventions, for provenance in shared workbooks.
+ * @customfunction VERSION VERSION
+ * @helpurl https://localhost:3000/help.html#conventions
+ * @returns Version text.
+ */
+export function VERSION(): Promise<any[][]> {
+  return callFromSheet(d.VERSION, []);
+}

@@ -1,0 +1,29 @@
+/**
+ * Every message the worksheet functions show (Excel shows it with the error value). Core errors keep
+ * their own words; these add what only the adapter knows: which argument, which cell, which shape.
+ */
+export const messages = {
+  notANumber: (arg: string, value: unknown) => `${arg}: ${describeValue(value)} where a number belongs`,
+  notFinite: (arg: string) => `${arg}: not a finite number`,
+  notText: (arg: string, value: unknown) => `${arg}: ${describeValue(value)} where text belongs`,
+  inputError: (arg: string) => `${arg}: the input cell holds an error`,
+  shapes: (a: string, ra: number, ca: number, b: string, rb: number, cb: number) =>
+    `ranges do not fit together: ${a} is ${ra}×${ca} and ${b} is ${rb}×${cb} (use equal sizes, a single cell, or a row against a column)`,
+  tooLarge: (cells: number) => `the result would have ${cells} cells; at most 1,048,576 are allowed`,
+  unitArgument: (arg: string, detail: string) => `${arg}: ${detail}`,
+  choice: (arg: string, value: string, choices: readonly string[]) =>
+    `${arg}: "${value}" is not one of ${choices.join(", ")}`,
+  notFiniteResult: (fn: string) => `${fn}: the result is not a finite number for these arguments`,
+  model: (detail: string) => `model: ${detail}`,
+  notGiven: (what: string) => `${what} is not given in this model`,
+  noEquality: "zeq: this model has no radiation (Tcmb = 0), so no matter–radiation equality",
+  internal: (fn: string, detail: string) => `${fn}: unexpected problem (${detail}); please report it`,
+  activeModelFallback: (detail: string) =>
+    `the workbook's stored cosmology could not be read (${detail}); using PLANCK2018 until one is applied`,
+} as const;
+
+function describeValue(value: unknown): string {
+  if (typeof value === "string") return `text "${value.length > 40 ? `${value.slice(0, 40)}…` : value}"`;
+  if (typeof value === "boolean") return value ? "TRUE" : "FALSE";
+  return String(value);
+}
