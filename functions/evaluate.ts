@@ -81,7 +81,8 @@ function toMatrix(raw: unknown): unknown[][] | undefined {
   if (raw === undefined || raw === null) return undefined;
   if (Array.isArray(raw)) {
     if (raw.length === 0) return undefined;
-    return Array.isArray(raw[0]) ? (raw as unknown[][]) : [raw as unknown[]];
+    if (!Array.isArray(raw[0])) return [raw as unknown[]];
+    return raw[0].length === 0 ? undefined : (raw as unknown[][]);
   }
   return [[raw]];
 }
@@ -189,15 +190,28 @@ function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: Active
     return m;
   };
 
+  // One args object of fixed shape for every cell; single-cell arguments are read once, up front.
   const args: Args = { ...scalars };
+  for (const p of prepared) args[p.spec.name] = undefined;
+  let constantCell: Cell | undefined;
+  const varying: Prepared[] = [];
+  for (const p of prepared) {
+    if (p.rows !== 1 || p.cols !== 1) {
+      varying.push(p);
+      continue;
+    }
+    const read = readArg(p, p.matrix?.[0][0], active, modelOf, inputFactors);
+    if (read instanceof CellError || read === blank) constantCell ??= read;
+    else args[p.spec.name] = read;
+  }
   const out: Cell[][] = new Array(rows);
   for (let r = 0; r < rows; r++) {
     const row: Cell[] = new Array(cols);
     for (let c = 0; c < cols; c++) {
-      let cell: Cell | undefined;
-      for (let k = 0; k < prepared.length && cell === undefined; k++) {
-        const p = prepared[k];
-        const value = p.matrix ? p.matrix[p.rows === 1 ? 0 : r][p.cols === 1 ? 0 : c] : undefined;
+      let cell: Cell | undefined = constantCell;
+      for (let k = 0; k < varying.length && cell === undefined; k++) {
+        const p = varying[k];
+        const value = p.matrix![p.rows === 1 ? 0 : r][p.cols === 1 ? 0 : c];
         const read = readArg(p, value, active, modelOf, inputFactors);
         if (read instanceof CellError || read === blank) cell = read;
         else args[p.spec.name] = read;
@@ -284,8 +298,11 @@ function cleanNumber(x: number, fn: string): number | CellError {
 export async function callFromSheet(def: FunctionDef, raw: readonly unknown[]): Promise<unknown[][]> {
   try {
     await whenSettingsReady();
-    const cells = evaluate(def, raw, readActiveModel());
-    return cells.map((row) => row.map((cell) => (cell instanceof CellError ? toHostError(cell) : cell)));
+    const cells: unknown[][] = evaluate(def, raw, readActiveModel());
+    for (const row of cells) {
+      for (let c = 0; c < row.length; c++) if (row[c] instanceof CellError) row[c] = toHostError(row[c] as CellError);
+    }
+    return cells;
   } catch (e) {
     return [[toHostError(classify(e, def.name))]];
   }

@@ -1,0 +1,123 @@
+/**
+ * The production bundle in a simulated host: dist/functions.js loaded in a bare JS context with only
+ * stub `CustomFunctions` and `Office` globals (no DOM), as Excel's custom-functions runtime would.
+ */
+import { readFileSync } from "node:fs";
+import { fileURLToPath } from "node:url";
+import vm from "node:vm";
+import { beforeAll, describe, expect, test } from "vitest";
+import { Cosmology, convertUnit } from "../core/index.js";
+import { expectRelative } from "./helpers.js";
+
+const dist = fileURLToPath(new URL("../dist/", import.meta.url));
+
+class HostError {
+  constructor(
+    readonly code: string,
+    readonly message?: string,
+  ) {}
+}
+
+type Registered = (...args: unknown[]) => Promise<unknown[][]>;
+
+/** Loads the bundle with the given workbook settings; returns the functions it associated. */
+function loadBundle(settings: Record<string, unknown>): Map<string, Registered> {
+  const associated = new Map<string, Registered>();
+  const CustomFunctions = {
+    associate: (id: string, fn: Registered) => associated.set(id, fn),
+    Error: HostError,
+    ErrorCode: { invalidValue: "#VALUE!", notAvailable: "#N/A", invalidNumber: "#NUM!" },
+  };
+  let resolveReady: (() => void) | undefined;
+  const Office = {
+    onReady: () => new Promise<void>((r) => (resolveReady = r)),
+    context: { document: { settings: { get: (key: string) => settings[key] ?? null } } },
+  };
+  const context = vm.createContext({ CustomFunctions, Office });
+  vm.runInContext(readFileSync(`${dist}functions.js`, "utf8"), context, { filename: "functions.js" });
+  setTimeout(() => resolveReady?.(), 20); // Office reads the settings a little later
+  return associated;
+}
+
+const metadata = JSON.parse(readFileSync(`${dist}functions.json`, "utf8")) as {
+  functions: { id: string; name: string; parameters: { name: string; optional?: boolean }[] }[];
+};
+
+describe("dist/functions.js in a bare host", () => {
+  let fns: Map<string, Registered>;
+  beforeAll(() => {
+    fns = loadBundle({ "zcell.activeModel": "WMAP9" });
+  });
+
+  test("registers every function in functions.json, with the metadata's arity", () => {
+    expect(metadata.functions.length).toBe(34);
+    for (const f of metadata.functions) {
+      const fn = fns.get(f.id);
+      expect(fn, f.id).toBeTypeOf("function");
+      expect(fn!.length, f.id).toBe(f.parameters.length);
+      expect(f.name).toBe(f.id);
+    }
+    expect(fns.size).toBe(metadata.functions.length);
+  });
+
+  test("waits for the workbook's settings before computing with its model", async () => {
+    const started = Date.now();
+    const [[age]] = await fns.get("AGE")!();
+    expect(Date.now() - started).toBeGreaterThanOrEqual(10);
+    expect(age).toBe(Cosmology.fromSpec("WMAP9").ageTodayGyr);
+  });
+
+  const wmap9 = Cosmology.fromSpec("WMAP9");
+  const p18 = Cosmology.fromSpec("PLANCK2018");
+  test.each([
+    // function       args                              expected                                  tol     source
+    ["DIST_LUM",      [[[1]]],                          wmap9.luminosityDistanceMpc(1),           1e-15,  "core, workbook model WMAP9"],
+    ["DIST_LUM",      [[[1]], [["PLANCK2018"]], "Gpc"], p18.luminosityDistanceMpc(1) / 1000,      1e-15,  "core, explicit model"],
+    ["AGE",           [[[0]], [["PLANCK2018"]]],        13.787,                                   2e-4,   "Planck 2018 VI Table 2"],
+    ["HUBBLE",        [undefined, [["PLANCK2018"]]],    67.66,                                    1e-15,  "Planck 2018 VI Table 2"],
+    ["CONVERT",       [[[1]], "pc", "lyr"],             3.2615637771674337,                       1e-15,  "IAU 2015 B2 pc, Julian year"],
+    ["MAG_AB",        [[[3630.780547701003]]],          0,                                        1e-12,  "Oke & Gunn 1983 zero point (absolute check)"],
+    ["REDSHIFT",      [[[wmap9.comovingDistanceMpc(3)]], "DIST_LOS"], 3,                          1e-12,  "round trip through the core"],
+    ["ANG_SCALE",     [[[1]], [["PLANCK2018"]]],        convertUnit(p18.angularDiameterDistanceMpc(1), "Mpc/rad", "kpc/arcsec"), 1e-15, "core"],
+  ])("%s %j", async (name, args, expected, tol) => {
+    const [[got]] = await fns.get(name)!(...(args as unknown[]));
+    if (expected === 0) expect(Math.abs(got as number)).toBeLessThan(tol);
+    else expectRelative(got as number, expected, tol, name);
+  });
+
+  test("errors reach the host as its own error values with messages", async () => {
+    const [[neg]] = await fns.get("DIST_LUM")!([[-1]]);
+    expect(neg).toBeInstanceOf(HostError);
+    expect((neg as HostError).code).toBe("#NUM!");
+    expect((neg as HostError).message).toMatch(/blueshifted/);
+    const [[na]] = await fns.get("REDSHIFT")!([[1e3]], "AGE");
+    expect((na as HostError).code).toBe("#N/A");
+    const [[bad]] = await fns.get("DIST_LUM")!([["x"]]);
+    expect((bad as HostError).code).toBe("#VALUE!");
+  });
+
+  test("a 100k-row column of ZC.DIST_LUM computes through the registered function", async () => {
+    const n = 100_000;
+    const column = Array.from({ length: n }, (_, i) => [(10 * i) / n]);
+    let started = performance.now();
+    const result = await fns.get("DIST_LUM")!(column, [["PLANCK2018"]]);
+    const first = performance.now() - started;
+    started = performance.now();
+    await fns.get("DIST_LUM")!(column, [["PLANCK2018"]]);
+    const again = performance.now() - started;
+    console.log(
+      `host simulation: 100k-row ZC.DIST_LUM ${first.toFixed(0)} ms on first use (shared tables and model built), ` +
+        `${again.toFixed(0)} ms recalculated (${((again * 1e6) / n).toFixed(0)} ns/row)`,
+    );
+    expect(result.length).toBe(n);
+    for (const i of [0, 1, 777, 50_000, n - 1]) expect(result[i][0]).toBe(p18.luminosityDistanceMpc(column[i][0]));
+  });
+});
+
+describe("workbook settings that cannot be used", () => {
+  test("corrupt settings fall back to PLANCK2018", async () => {
+    const fns = loadBundle({ "zcell.activeModel": "H0=; nonsense" });
+    const [[age]] = await fns.get("AGE")!();
+    expect(age).toBe(Cosmology.fromSpec("PLANCK2018").ageTodayGyr);
+  });
+});

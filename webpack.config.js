@@ -1,0 +1,81 @@
+// Build: functions.js (self-contained: registers every ZC.* function), functions.json (metadata
+// from the JSDoc), taskpane.html/.js (shared runtime page), help.html (from README.md), the
+// manifest and icons. `--env url=https://host/path/` rewrites every https://localhost:3000/ URL.
+import CopyWebpackPlugin from "copy-webpack-plugin";
+import CustomFunctionsMetadataPlugin from "custom-functions-metadata-plugin";
+import HtmlWebpackPlugin from "html-webpack-plugin";
+import { marked } from "marked";
+import { fileURLToPath } from "node:url";
+
+const devUrl = "https://localhost:3000/";
+const root = fileURLToPath(new URL(".", import.meta.url));
+
+function helpPage(markdown) {
+  const body = marked.parse(markdown, { async: false });
+  return `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>zcell help</title>
+<meta http-equiv="Content-Security-Policy" content="default-src 'self'; img-src 'self' data:"></head>
+<body>${body}</body></html>`;
+}
+
+export default (env = {}, argv = {}) => {
+  const base = env.url ? (env.url.endsWith("/") ? env.url : `${env.url}/`) : devUrl;
+  const rewrite = (text) => text.replaceAll(devUrl, base).replaceAll(devUrl.slice(0, -1), base.slice(0, -1));
+  const production = argv.mode === "production";
+  return {
+    mode: production ? "production" : "development",
+    devtool: production ? false : "source-map",
+    context: root,
+    entry: {
+      functions: "./functions/functions.ts",
+      taskpane: "./taskpane/taskpane.ts",
+    },
+    output: {
+      path: `${root}dist`,
+      filename: "[name].js",
+      clean: true,
+    },
+    target: ["web", "es2020"],
+    resolve: {
+      extensions: [".ts", ".js"],
+      extensionAlias: { ".js": [".ts", ".js"] },
+    },
+    module: {
+      rules: [{ test: /\.ts$/, loader: "ts-loader", options: { transpileOnly: true }, exclude: /node_modules/ }],
+    },
+    optimization: { splitChunks: false, runtimeChunk: false },
+    performance: { hints: false },
+    plugins: [
+      new CustomFunctionsMetadataPlugin({ output: "functions.json", input: "./functions/functions.ts" }),
+      new HtmlWebpackPlugin({
+        filename: "taskpane.html",
+        template: "./taskpane/taskpane.html",
+        chunks: ["functions", "taskpane"],
+        chunksSortMode: "manual",
+        scriptLoading: "defer",
+      }),
+      new CopyWebpackPlugin({
+        patterns: [
+          { from: "manifest/manifest.xml", to: "manifest.xml", transform: (content) => rewrite(content.toString()) },
+          { from: "manifest/assets", to: "assets" },
+          { from: "README.md", to: "help.html", transform: (content) => helpPage(content.toString()) },
+        ],
+      }),
+      {
+        // functions.json carries help URLs: point them at the same host as the manifest
+        apply(compiler) {
+          compiler.hooks.thisCompilation.tap("RewriteMetadataUrls", (compilation) => {
+            compilation.hooks.processAssets.tap(
+              { name: "RewriteMetadataUrls", stage: compilation.constructor.PROCESS_ASSETS_STAGE_OPTIMIZE },
+              () => {
+                const asset = compilation.getAsset("functions.json");
+                if (!asset) return;
+                const { RawSource } = compiler.webpack.sources;
+                compilation.updateAsset("functions.json", new RawSource(rewrite(asset.source.source().toString())));
+              },
+            );
+          });
+        },
+      },
+    ],
+  };
+};
