@@ -19,7 +19,11 @@ function helpPage(markdown) {
 
 export default (env = {}, argv = {}) => {
   const base = env.url ? (env.url.endsWith("/") ? env.url : `${env.url}/`) : devUrl;
-  const rewrite = (text) => text.replaceAll(devUrl, base).replaceAll(devUrl.slice(0, -1), base.slice(0, -1));
+  const origin = new URL(base).origin;
+  const rewrite = (text) =>
+    text
+      .replaceAll("<AppDomain>https://localhost:3000</AppDomain>", `<AppDomain>${origin}</AppDomain>`)
+      .replaceAll(devUrl, base);
   const production = argv.mode === "production";
   return {
     mode: production ? "production" : "development",
