@@ -4,6 +4,7 @@
 import CopyWebpackPlugin from "copy-webpack-plugin";
 import CustomFunctionsMetadataPlugin from "custom-functions-metadata-plugin";
 import HtmlWebpackPlugin from "html-webpack-plugin";
+import { generateCustomFunctionsMetadata } from "custom-functions-metadata";
 import { marked } from "marked";
 import { fileURLToPath } from "node:url";
 
@@ -17,7 +18,13 @@ function helpPage(markdown) {
 <body>${body}</body></html>`;
 }
 
-export default (env = {}, argv = {}) => {
+/** Name and description of each worksheet function, for the pane's reference outside Excel. */
+async function functionList() {
+  const result = await generateCustomFunctionsMetadata([`${root}functions/functions.ts`], false);
+  return JSON.parse(result.metadataJson).functions.map((f) => ({ name: f.id, description: f.description }));
+}
+
+export default async (env = {}, argv = {}) => {
   const base = env.url ? (env.url.endsWith("/") ? env.url : `${env.url}/`) : devUrl;
   const origin = new URL(base).origin;
   const rewrite = (text) =>
@@ -49,6 +56,7 @@ export default (env = {}, argv = {}) => {
     optimization: { splitChunks: false, runtimeChunk: false },
     performance: { hints: false },
     plugins: [
+      new (await import("webpack")).default.DefinePlugin({ __ZC_FUNCTIONS__: JSON.stringify(await functionList()) }),
       new CustomFunctionsMetadataPlugin({ output: "functions.json", input: "./functions/functions.ts" }),
       new HtmlWebpackPlugin({
         filename: "taskpane.html",
@@ -61,6 +69,7 @@ export default (env = {}, argv = {}) => {
         patterns: [
           { from: "manifest/manifest.xml", to: "manifest.xml", transform: (content) => rewrite(content.toString()) },
           { from: "manifest/assets", to: "assets" },
+          { from: "taskpane/taskpane.css", to: "taskpane.css" },
           { from: "README.md", to: "help.html", transform: (content) => helpPage(content.toString()) },
         ],
       }),

@@ -79,7 +79,7 @@ describe("dist/functions.js in a bare host", () => {
     ["MAG_AB",        [[[3630.780547701003]]],          0,                                        1e-12,  "Oke & Gunn 1983 zero point (absolute check)"],
     ["REDSHIFT",      [[[wmap9.comovingDistanceMpc(3)]], "DIST_LOS"], 3,                          1e-12,  "round trip through the core"],
     ["ANG_SCALE",     [[[1]], [["PLANCK2018"]]],        convertUnit(p18.angularDiameterDistanceMpc(1), "Mpc/rad", "kpc/arcsec"), 1e-15, "core"],
-  ])("%s %j", async (name, args, expected, tol) => {
+  ])("%s %j", async (name, args, expected, tol, _source) => {
     const [[got]] = await fns.get(name)!(...(args as unknown[]));
     if (expected === 0) expect(Math.abs(got as number)).toBeLessThan(tol);
     else expectRelative(got as number, expected, tol, name);

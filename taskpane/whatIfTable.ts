@@ -1,0 +1,94 @@
+/**
+ * What-if tables: a header row of models and one live broadcasting ZC formula (a column of
+ * redshifts against the row of models), never values.
+ */
+
+/** Quantities of z the table offers: ZC function name → label with its default unit. */
+export const tableQuantities: Record<string, string> = {
+  DIST_LUM: "luminosity distance (Mpc)",
+  DIST_ANG: "angular-diameter distance (Mpc)",
+  DIST_LOS: "line-of-sight comoving distance (Mpc)",
+  DIST_TRANS: "transverse comoving distance (Mpc)",
+  DIST_LIGHT: "light-travel distance (Mpc)",
+  MODULUS: "distance modulus (mag)",
+  LOOKBACK: "look-back time (Gyr)",
+  AGE: "age at z (Gyr)",
+  HUBBLE: "Hubble parameter (km/s/Mpc)",
+  ANG_SCALE: "angular scale (kpc/arcsec)",
+  VOLUME: "comoving volume (Gpc3)",
+  VOLUME_ELEMENT: "volume element (Mpc3/sr)",
+  CMB_TEMP: "CMB temperature (K)",
+  RHO_CRIT: "critical density (kg/m3)",
+};
+
+/** Column letters of a 1-based column number. */
+export function columnName(n: number): string {
+  let s = "";
+  for (let k = n; k > 0; k = Math.floor((k - 1) / 26)) s = String.fromCharCode(65 + ((k - 1) % 26)) + s;
+  return s;
+}
+
+/** 1-based column number of column letters. */
+export function columnNumber(name: string): number {
+  return [...name.toUpperCase()].reduce((n, ch) => n * 26 + ch.charCodeAt(0) - 64, 0);
+}
+
+/** Redshifts start, start+step, … ≤ stop (at most 10,000). */
+export function redshiftSteps(start: number, stop: number, step: number): number[] {
+  if (![start, stop, step].every(Number.isFinite)) throw new RangeError("start, stop and step must be numbers");
+  if (start < 0) throw new RangeError("start must be ≥ 0 (redshifts are not negative)");
+  if (!(step > 0)) throw new RangeError("step must be > 0");
+  if (stop < start) throw new RangeError("stop must be ≥ start");
+  const n = Math.floor((stop - start) / step + 1e-9) + 1;
+  if (n > 10_000) throw new RangeError(`that is ${n} rows; at most 10,000`);
+  return Array.from({ length: n }, (_, i) => Number((start + i * step).toPrecision(12)));
+}
+
+/** A table to write: its top-left cell, the block (formulas start with "="), and the area it will fill. */
+export interface TablePlan {
+  /** Address of the top-left cell of `cells`, e.g. "C3". */
+  anchor: string;
+  cells: (string | number)[][];
+  /** The whole area the table occupies once the formula spills, e.g. "C3:F12". */
+  area: string;
+}
+
+/**
+ * Plans a what-if table with its own redshift column at `anchor` (row, column 1-based):
+ * "z" and the models across the first row, the redshifts down the first column, and one formula
+ * `=ZC.Q(z-range, model-row)` that spills over the body.
+ */
+export function planTableWithRedshifts(quantity: string, redshifts: number[], models: string[], row: number, col: number): TablePlan {
+  checkModels(models);
+  const zCol = columnName(col);
+  const first = columnName(col + 1);
+  const last = columnName(col + models.length);
+  const zRange = `$${zCol}$${row + 1}:$${zCol}$${row + redshifts.length}`;
+  const modelRow = `$${first}$${row}:$${last}$${row}`;
+  const cells: (string | number)[][] = [["z", ...models]];
+  redshifts.forEach((z, i) => cells.push([z, ...models.map((_, j) => (i === 0 && j === 0 ? `=ZC.${quantity}(${zRange},${modelRow})` : ""))]));
+  return { anchor: `${zCol}${row}`, cells, area: `${zCol}${row}:${last}${row + redshifts.length}` };
+}
+
+/**
+ * Plans a what-if table for redshifts already in a column (`zRange`, e.g. "B5:B40", top cell at
+ * `row`, column `col`): the models go in the row above, from the next column on, and the formula in
+ * the first body cell.
+ */
+export function planTableForColumn(quantity: string, zRange: { row: number; col: number; rows: number }, models: string[]): TablePlan {
+  checkModels(models);
+  if (zRange.row < 2) throw new RangeError("select redshifts below a header row: the model names go in the row above");
+  const header = zRange.row - 1;
+  const first = columnName(zRange.col + 1);
+  const last = columnName(zRange.col + models.length);
+  const zCol = columnName(zRange.col);
+  const zs = `$${zCol}$${zRange.row}:$${zCol}$${zRange.row + zRange.rows - 1}`;
+  const modelRow = `$${first}$${header}:$${last}$${header}`;
+  const cells: (string | number)[][] = [models, [`=ZC.${quantity}(${zs},${modelRow})`, ...models.slice(1).map(() => "")]];
+  return { anchor: `${first}${header}`, cells, area: `${first}${header}:${last}${zRange.row + zRange.rows - 1}` };
+}
+
+function checkModels(models: string[]): void {
+  if (models.length === 0) throw new RangeError("give at least one model");
+  if (models.length > 8) throw new RangeError("at most eight models");
+}

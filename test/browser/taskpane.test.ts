@@ -1,0 +1,193 @@
+/**
+ * The built task pane in a real browser (Debian chromium driven by playwright-core), against a fake
+ * Office/Excel host injected in place of office.js: an in-memory workbook with formulas and values,
+ * selection events and settings. Driven as a person would; screenshots of each panel in light and
+ * dark theme go to test-artifacts/screenshots (git-ignored).
+ */
+import { existsSync, mkdirSync, readFileSync } from "node:fs";
+import { createServer, type Server } from "node:http";
+import { extname, join } from "node:path";
+import { fileURLToPath } from "node:url";
+import { chromium, type Browser, type Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, test } from "vitest";
+
+const root = fileURLToPath(new URL("../../", import.meta.url));
+const dist = `${root}dist/`;
+const shots = `${root}test-artifacts/screenshots/`;
+const chromiumPath = "/usr/bin/chromium";
+const fakeOffice = readFileSync(`${root}test/browser/fakeOffice.js`, "utf8");
+
+function browserAvailable(): boolean {
+  if (existsSync(chromiumPath)) return true;
+  const hint = "Debian chromium is not installed: apt-get install -y chromium to run the browser tests";
+  if (process.env.CI === "true") throw new Error(`CI needs ${hint}`);
+  console.warn(`skipping: ${hint}`);
+  return false;
+}
+
+const light = { bodyBackgroundColor: "#ffffff", bodyForegroundColor: "#242424", controlBackgroundColor: "#ffffff", controlForegroundColor: "#242424" };
+const dark = { bodyBackgroundColor: "#1f1f1f", bodyForegroundColor: "#f0f0f0", controlBackgroundColor: "#2b2b2b", controlForegroundColor: "#f0f0f0" };
+
+/** The invented workbook the pane is shown: redshifts, ZC formulas and the values Excel would show. */
+const workbook = {
+  Sheet1: {
+    A1: { value: "z" }, B1: { value: "D_L [Mpc]" },
+    A2: { value: 0.5 }, B2: { formula: "=ZC.DIST_LUM(A2)", value: 2919.6 },
+    A3: { value: 1 }, B3: { formula: '=ZC.DIST_LUM(A3,"H0=70; Om=0; OL=2")', value: "#NUM!" },
+    C2: { formula: "=ZC.MAG_ABS(22, A2, ZC.KCORRECTION(A2, -0.5))", value: -20.3 },
+    E5: { value: "occupied" },
+  },
+};
+
+describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host", () => {
+  let server: Server;
+  let base = "";
+  let browser: Browser;
+
+  beforeAll(async () => {
+    mkdirSync(shots, { recursive: true });
+    server = createServer((req, res) => {
+      const path = new URL(req.url ?? "/", "http://localhost").pathname;
+      const file = join(dist, path === "/" ? "taskpane.html" : path);
+      if (!file.startsWith(dist) || !existsSync(file)) {
+        res.writeHead(404).end();
+        return;
+      }
+      const type = { ".html": "text/html", ".js": "text/javascript", ".css": "text/css", ".png": "image/png" }[extname(file)];
+      res.writeHead(200, { "content-type": type ?? "application/octet-stream" }).end(readFileSync(file));
+    });
+    await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
+    const address = server.address();
+    base = `http://127.0.0.1:${typeof address === "object" && address ? address.port : 0}/`;
+    browser = await chromium.launch({
+      executablePath: chromiumPath,
+      args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--no-first-run"],
+    });
+  });
+
+  afterAll(async () => {
+    await browser?.close();
+    await new Promise((r) => server?.close(r));
+  });
+
+  async function openPane(theme: object, settings: Record<string, unknown>, officeAvailable = true): Promise<Page> {
+    const page = await browser.newPage({ viewport: { width: 320, height: 900 } });
+    const errors: string[] = [];
+    page.on("pageerror", (e) => errors.push(String(e)));
+    (page as unknown as { errors: string[] }).errors = errors;
+    await page.route("https://appsforoffice.microsoft.com/**", (route) =>
+      officeAvailable ? route.fulfill({ contentType: "text/javascript", body: fakeOffice }) : route.abort(),
+    );
+    await page.addInitScript((init) => {
+      (window as unknown as { __fakeInit: unknown }).__fakeInit = init;
+    }, { theme, settings, sheets: structuredClone(workbook), selection: "Sheet1!B2" });
+    await page.goto(`${base}taskpane.html`);
+    return page;
+  }
+
+  const fake = (page: Page, expr: string) => page.evaluate(`JSON.parse(JSON.stringify(window.__fake.${expr}))`);
+
+  for (const [themeName, theme] of [["light", light], ["dark", dark]] as const) {
+    test(`workbook cosmology (${themeName}): shows the stored model, validates, applies and recalculates`, async () => {
+      const page = await openPane(theme, { "zcell.activeModel": "WMAP9" });
+      await page.getByRole("tab", { name: "Cosmology" }).waitFor();
+      expect(await page.locator("#model-badge").textContent()).toBe("Workbook model: WMAP9");
+      expect(await page.locator("#f-H0").inputValue()).toBe("69.32");
+      await page.selectOption("#preset", "PLANCK2018");
+      await page.fill("#f-H0", "-5");
+      await expect.poll(() => page.locator("#e-H0").textContent()).toMatch(/H0 must be a positive number/);
+      expect(await page.getByRole("button", { name: "Apply to workbook" }).isDisabled()).toBe(true);
+      await page.fill("#f-H0", "73");
+      expect(await page.locator("#spec").inputValue()).toBe("PLANCK2018; H0=73");
+      expect(await page.locator("#derived").textContent()).toMatch(/Age today/);
+      await page.screenshot({ path: `${shots}cosmology-${themeName}.png`, fullPage: true });
+      await page.getByRole("button", { name: "Apply to workbook" }).click();
+      await expect.poll(() => page.locator("#apply-status").textContent()).toBe("Applied PLANCK2018; H0=73; 3 formulas recalculated.");
+      expect(await fake(page, "saved")).toEqual({ "zcell.activeModel": "PLANCK2018; H0=73" });
+      expect(await fake(page, "calculations")).toEqual(["Full"]);
+      expect((page as unknown as { errors: string[] }).errors).toEqual([]);
+      await page.close();
+    });
+
+    test(`this cell (${themeName}): explains a ZC cell and the reason for an error`, async () => {
+      const page = await openPane(theme, {});
+      await page.getByRole("tab", { name: "This cell" }).click();
+      await expect.poll(() => page.locator("#cell-explanation").textContent()).toMatch(/D_L = \(1\+z\)·D_M/);
+      const text = await page.locator("#cell-explanation").textContent();
+      expect(text).toMatch(/PLANCK2018 \(the workbook's model\)/);
+      expect(text).toMatch(/Om is all matter today, massive neutrinos included/);
+      expect(text).toMatch(/relative error ≤ 1e-10/);
+      expect(text).toMatch(/A2 → 0.5/);
+      await page.screenshot({ path: `${shots}cell-${themeName}.png`, fullPage: true });
+      await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!B3"));
+      await expect.poll(() => page.locator("#cell-explanation").textContent()).toMatch(/Why the error#NUM! — model: no big bang/);
+      await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!C2"));
+      await expect.poll(() => page.locator("#cell-explanation").textContent()).toMatch(/K-correction sign: M = m − μ − K/);
+      await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!A2"));
+      await expect.poll(() => page.locator("#cell-explanation").textContent()).toBe("This cell has no ZC formula.");
+      await page.close();
+    });
+
+    test(`tables (${themeName}): inserts live formulas and refuses to overwrite without confirmation`, async () => {
+      const page = await openPane(theme, {});
+      await page.getByRole("tab", { name: "Tables" }).click();
+      await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!D10"));
+      await page.fill("#table-stop", "1");
+      await page.fill("#table-step", "0.25");
+      await page.screenshot({ path: `${shots}tables-${themeName}.png`, fullPage: true });
+      await page.getByRole("button", { name: "Insert table" }).click();
+      await expect.poll(() => page.locator("#table-status").textContent()).toMatch(/Inserted a 5-row table/);
+      const cells = (await fake(page, "sheets.Sheet1")) as Record<string, { formula?: string; value?: unknown }>;
+      expect(cells.D10.value).toBe("z");
+      expect([cells.E10.value, cells.F10.value, cells.G10.value]).toEqual(["PLANCK2018", "WMAP9", "PLANCK2018; H0=73"]);
+      expect([cells.D11.value, cells.D12.value, cells.D13.value, cells.D14.value, cells.D15]).toEqual([0.1, 0.35, 0.6, 0.85, undefined]);
+      expect(cells.E11.formula).toBe("=ZC.DIST_LUM($D$11:$D$14,$E$10:$G$10)");
+      // the selected-column mode with E5 occupied asks first
+      await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!D6:D8"));
+      await page.check("#source-selection");
+      await page.getByRole("button", { name: "Insert table" }).click();
+      await expect.poll(() => page.locator("#table-confirm-text").textContent()).toMatch(/1 cell in E5:G8 are not empty/);
+      await page.getByRole("button", { name: "Cancel" }).first().click();
+      expect(((await fake(page, "sheets.Sheet1")) as Record<string, { value?: unknown }>).E5.value).toBe("occupied");
+      await page.getByRole("button", { name: "Insert table" }).click();
+      await page.getByRole("button", { name: "Overwrite" }).click();
+      await expect.poll(async () => ((await fake(page, "sheets.Sheet1")) as Record<string, { formula?: string }>).E6?.formula).toBe("=ZC.DIST_LUM($D$6:$D$8,$E$5:$G$5)");
+      await page.close();
+    });
+
+    test(`freeze (${themeName}): replaces ZC formulas by values with provenance notes`, async () => {
+      const page = await openPane(theme, { "zcell.activeModel": "WMAP9" });
+      await page.getByRole("tab", { name: "Freeze" }).click();
+      await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!A2:C2"));
+      await page.getByRole("button", { name: "Freeze selection…" }).click();
+      await expect.poll(() => page.locator("#freeze-confirm-text").textContent()).toMatch(/Replace 2 ZC formulas by their values.*Undo/);
+      await page.screenshot({ path: `${shots}freeze-${themeName}.png`, fullPage: true });
+      await page.getByRole("button", { name: "Freeze", exact: true }).click();
+      await expect.poll(() => page.locator("#freeze-status").textContent()).toMatch(/Froze 2 cells; formula, model and version are in each cell's note/);
+      const cells = (await fake(page, "sheets.Sheet1")) as Record<string, { formula?: string; value?: unknown }>;
+      expect(cells.B2).toEqual({ value: 2919.6 });
+      expect(cells.C2).toEqual({ value: -20.3 });
+      const notes = (await fake(page, "notes")) as { address: string; text: string }[];
+      expect(notes.map((n) => n.address)).toEqual(["'Sheet1'!B2", "'Sheet1'!C2"]);
+      expect(notes[0].text).toMatch(/^Frozen by zcell \d+\.\d+\.\d+ on \d{4}-\d\d-\d\d\.\nFormula: =ZC.DIST_LUM\(A2\)\nModel: WMAP9/);
+      await page.close();
+    });
+  }
+
+  test("corrupt settings fall back to PLANCK2018 with a visible warning and nothing overwritten", async () => {
+    const page = await openPane(light, { "zcell.activeModel": "H0=abc" });
+    await expect.poll(() => page.locator("#settings-warning").textContent()).toMatch(/could not be read.*Nothing has been overwritten/);
+    expect(await page.locator("#model-badge").textContent()).toBe("Workbook model: PLANCK2018");
+    expect(await fake(page, "saved")).toBe(null);
+    await page.close();
+  });
+
+  test("outside Office the page says it runs inside Excel and lists the functions", async () => {
+    const page = await openPane(light, {}, false);
+    await expect.poll(() => page.locator("#outside-office").isVisible()).toBe(true);
+    expect(await page.locator("#outside-office h2").textContent()).toBe("zcell runs inside Excel");
+    expect(await page.locator("#reference dt").count()).toBe(34);
+    await page.screenshot({ path: `${shots}outside-office.png`, fullPage: true });
+    await page.close();
+  });
+});
