@@ -171,7 +171,13 @@ async function explainCall(
     raw.push(value);
     const unitSpec = def.args.find((a) => a.kind === "unit" && a.applies === spec.name);
     const unit = unitSpec?.kind === "unit" ? unitSpec.default : undefined;
-    args.push({ name: spec.name, text: text || "(omitted)", value: known ? showValue(value) : "computed by Excel", unit });
+    let shown = known ? showValue(value) : "computed by Excel";
+    if (value === undefined || value === "") {
+      if (spec.kind === "unit") shown = `default "${spec.default}"`;
+      else if (spec.kind === "model") shown = "the workbook's model";
+      else if (spec.kind === "number" && spec.default !== undefined) shown = `default ${spec.default}`;
+    }
+    args.push({ name: spec.name, text: text || "(omitted)", value: shown, unit });
   }
   const modelIndex = def.args.findIndex((a) => a.kind === "model");
   let model: CallExplanation["model"];

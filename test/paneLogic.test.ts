@@ -1,0 +1,79 @@
+/** The pane's logic without a host: the model form, table plans, provenance notes, theme contrast. */
+import { describe, expect, test } from "vitest";
+import { derivedValues, formFromSpec, modelFromForm } from "../taskpane/modelForm.js";
+import { provenanceNote } from "../taskpane/provenanceNote.js";
+import { contrast } from "../taskpane/theme.js";
+import { columnName, columnNumber, planTableForColumn, redshiftSteps } from "../taskpane/whatIfTable.js";
+
+describe("model form", () => {
+  test("shows a preset and gives back its canonical spec; an edit is a change to the preset", () => {
+    const form = formFromSpec("PLANCK2018");
+    expect(form.OL).toBe("flat");
+    expect(modelFromForm(form).spec).toBe("PLANCK2018");
+    expect(modelFromForm({ ...form, H0: "73" }).spec).toBe("PLANCK2018; H0=73");
+    // without a preset the defaults (w0 = −1, wa = 0, Tcmb = 0, Neff = 3.046, mnu = 0) are left out
+    expect(modelFromForm({ ...form, preset: "", OL: "0.7", Tcmb: "0", mnu: "0", Ob: "" }).spec).toBe("H0=67.66; Om=0.3111; OL=0.7");
+  });
+
+  test("puts the core's own message on the field that is wrong", () => {
+    const form = formFromSpec("PLANCK2018");
+    expect(modelFromForm({ ...form, H0: "abc" }).errors.H0).toBe('H0: "abc" is not a number (use \'.\' as the decimal point)');
+    expect(modelFromForm({ ...form, H0: "-1" }).errors.H0).toMatch(/^H0 must be a positive number/);
+    expect(modelFromForm({ ...form, preset: "", Tcmb: "0", mnu: "0", OL: "2", Om: "0", Ob: "" }).errors.model).toMatch(/^no big bang/);
+    expect(modelFromForm({ ...form, Ob: "0.9" }).errors.Ob).toMatch(/^Ob must be between 0 and Om/);
+  });
+
+  test("derived values include the age and z_eq, and say when there is no radiation", () => {
+    const d = derivedValues(modelFromForm(formFromSpec("PLANCK2018")).model!);
+    expect(d.find((x) => x.label === "Age today")!.value).toBe("13.787 Gyr"); // Planck 2018 VI Table 2: 13.787
+    expect(derivedValues(modelFromForm(formFromSpec("CONCORDANCE")).model!).find((x) => x.label.startsWith("Matter"))!.value).toBe("none (Tcmb = 0)");
+  });
+});
+
+describe("what-if tables", () => {
+  test("column names round-trip (A, Z, AA, XFD: Excel's 16384 columns, common practice)", () => {
+    for (const [n, s] of [[1, "A"], [26, "Z"], [27, "AA"], [16384, "XFD"]] as const) {
+      expect(columnName(n)).toBe(s);
+      expect(columnNumber(s)).toBe(n);
+    }
+  });
+
+  test("redshift steps are inclusive of stop and refuse nonsense", () => {
+    expect(redshiftSteps(0, 1, 0.25)).toEqual([0, 0.25, 0.5, 0.75, 1]);
+    expect(redshiftSteps(0.1, 0.3, 0.1)).toEqual([0.1, 0.2, 0.3]);
+    expect(() => redshiftSteps(-1, 1, 0.1)).toThrow(/not negative/);
+    expect(() => redshiftSteps(0, 1, 0)).toThrow(/step must be > 0/);
+    expect(() => redshiftSteps(0, 1e6, 1)).toThrow(/at most 10,000/);
+  });
+
+  test("a selected column gets the models in the row above and one formula beside it", () => {
+    const plan = planTableForColumn("AGE", { row: 2, col: 1, rows: 39 }, ["PLANCK2018", "WMAP9", "EDS"]);
+    expect(plan.anchor).toBe("B1");
+    expect(plan.cells).toEqual([["PLANCK2018", "WMAP9", "EDS"], ["=ZC.AGE($A$2:$A$40,$B$1:$D$1)", "", ""]]);
+    expect(plan.area).toBe("B1:D40");
+    expect(() => planTableForColumn("AGE", { row: 1, col: 1, rows: 3 }, ["EDS"])).toThrow(/below a header row/);
+    expect(() => planTableForColumn("AGE", { row: 2, col: 1, rows: 3 }, Array(9).fill("EDS"))).toThrow(/at most eight/);
+  });
+});
+
+describe("provenance and contrast", () => {
+  test("the note carries formula, every model and the version", () => {
+    const note = provenanceNote("=ZC.DIST_LUM(A2)", ["WMAP9", "WMAP9"], "0.1.0", "2026-12-01");
+    expect(note).toBe(
+      "Frozen by zcell 0.1.0 on 2026-12-01.\nFormula: =ZC.DIST_LUM(A2)\nModel: WMAP9\nValue computed under that cosmology; recompute with the add-in if the model changes.",
+    );
+  });
+
+  test.each([
+    // foreground  background  (the pane's palettes; WCAG 2.1 AA needs ≥ 4.5)
+    ["#242424", "#ffffff"], ["#595959", "#ffffff"], ["#ffffff", "#0f6cbd"], ["#b10e1c", "#ffffff"], ["#4d3800", "#fff4ce"],
+    ["#f0f0f0", "#1f1f1f"], ["#c8c8c8", "#1f1f1f"], ["#0a0a0a", "#479ef5"], ["#ff99a4", "#1f1f1f"], ["#ffe8a3", "#463100"],
+    ["#0f6cbd", "#ffffff"], ["#479ef5", "#1f1f1f"],
+  ])("text %s on %s has contrast ≥ 4.5:1", (fg, bg) => {
+    expect(contrast(fg, bg)).toBeGreaterThanOrEqual(4.5);
+  });
+
+  test("contrast of black on white is 21:1 (WCAG 2.1 definition)", () => {
+    expect(contrast("#000000", "#ffffff")).toBeCloseTo(21, 10);
+  });
+});
