@@ -5,7 +5,7 @@
  */
 import { describe, expect, test } from "vitest";
 import { Cosmology } from "../core/Cosmology.js";
-import { testModels } from "./fixtures.js";
+import { distanceQuantities, testModels } from "./fixtures.js";
 import { logRedshifts, relativeError } from "./helpers.js";
 import { SlowCosmology } from "./reference/slowCosmology.js";
 
@@ -17,15 +17,7 @@ const ranges = [
   { label: "1e5…1e7",  zs: outer, tol: 1e-8 },
 ];
 
-const quantities = [
-  "comovingDistanceMpc",
-  "transverseComovingDistanceMpc",
-  "angularDiameterDistanceMpc",
-  "luminosityDistanceMpc",
-  "lookbackTimeGyr",
-  "ageGyr",
-  "comovingVolumeMpc3",
-] as const;
+const quantities = distanceQuantities;
 type Quantity = (typeof quantities)[number];
 
 describe.each(Object.entries(testModels))("fast path matches the slow path: %s", (name, params) => {

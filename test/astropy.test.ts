@@ -16,6 +16,7 @@
 import { describe, expect, test } from "vitest";
 import { Cosmology } from "../core/Cosmology.js";
 import type { ModelParameters } from "../core/ModelParameters.js";
+import { distanceQuantities } from "./fixtures.js";
 import { relativeError } from "./helpers.js";
 import { referenceAvailable, runPythonReference } from "./reference/python.js";
 
@@ -33,16 +34,7 @@ const models: Record<string, ModelParameters> = {
   "flat w0–wa, 0.2 eV ν": { ...lcdm, H0: 70, Om: 0.3, w0: -0.8, wa: -0.6, Tcmb: 2.7255, mnu: [0.2] },
 };
 const redshifts = [1e-3, 0.01, 0.1, 0.5, 1, 2, 3, 5, 10, 100];
-const quantities = [
-  "comovingDistanceMpc",
-  "transverseComovingDistanceMpc",
-  "angularDiameterDistanceMpc",
-  "luminosityDistanceMpc",
-  "lookbackTimeGyr",
-  "ageGyr",
-  "comovingVolumeMpc3",
-  "efunc",
-] as const;
+const quantities = [...distanceQuantities, "efunc"] as const;
 
 type Reply = { results: Record<string, Record<(typeof quantities)[number], number[]>> };
 

@@ -12,3 +12,14 @@ export const testModels: Record<string, ModelParameters> = {
   "flat w0–wa, radiation, 0.06 eV ν": { ...lcdm, H0: 68, Om: 0.31, w0: -0.8, wa: -0.5, Tcmb: 2.7255, mnu: [0.06] },
   "open w0–wa, no radiation": { ...lcdm, H0: 72, Om: 0.2, OL: 0.7, w0: -1.1, wa: 0.3 },
 };
+
+/** The distance, time and volume methods every accuracy comparison checks. */
+export const distanceQuantities = [
+  "comovingDistanceMpc",
+  "transverseComovingDistanceMpc",
+  "angularDiameterDistanceMpc",
+  "luminosityDistanceMpc",
+  "lookbackTimeGyr",
+  "ageGyr",
+  "comovingVolumeMpc3",
+] as const;

@@ -4,40 +4,12 @@
  */
 import { readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
-import vm from "node:vm";
 import { beforeAll, describe, expect, test } from "vitest";
 import { Cosmology, convertUnit } from "../core/index.js";
 import { expectRelative } from "./helpers.js";
+import { HostError, loadBundle, type Registered } from "./reference/hostBundle.js";
 
 const dist = fileURLToPath(new URL("../dist/", import.meta.url));
-
-class HostError {
-  constructor(
-    readonly code: string,
-    readonly message?: string,
-  ) {}
-}
-
-type Registered = (...args: unknown[]) => Promise<unknown[][]>;
-
-/** Loads the bundle with the given workbook settings; returns the functions it associated. */
-function loadBundle(settings: Record<string, unknown>): Map<string, Registered> {
-  const associated = new Map<string, Registered>();
-  const CustomFunctions = {
-    associate: (id: string, fn: Registered) => associated.set(id, fn),
-    Error: HostError,
-    ErrorCode: { invalidValue: "#VALUE!", notAvailable: "#N/A", invalidNumber: "#NUM!" },
-  };
-  let resolveReady: (() => void) | undefined;
-  const Office = {
-    onReady: () => new Promise<void>((r) => (resolveReady = r)),
-    context: { document: { settings: { get: (key: string) => settings[key] ?? null } } },
-  };
-  const context = vm.createContext({ CustomFunctions, Office });
-  vm.runInContext(readFileSync(`${dist}functions.js`, "utf8"), context, { filename: "functions.js" });
-  setTimeout(() => resolveReady?.(), 20); // Office reads the settings a little later
-  return associated;
-}
 
 const metadata = JSON.parse(readFileSync(`${dist}functions.json`, "utf8")) as {
   functions: { id: string; name: string; parameters: { name: string; optional?: boolean }[] }[];
@@ -46,7 +18,7 @@ const metadata = JSON.parse(readFileSync(`${dist}functions.json`, "utf8")) as {
 describe("dist/functions.js in a bare host", () => {
   let fns: Map<string, Registered>;
   beforeAll(() => {
-    fns = loadBundle({ "zcell.activeModel": "WMAP9" });
+    fns = loadBundle({ "zcell.activeModel": "WMAP9" }, 20); // Office reads the settings a little later
   });
 
   test("registers every function in functions.json, with the metadata's arity", () => {
