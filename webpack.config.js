@@ -11,8 +11,13 @@ import { fileURLToPath } from "node:url";
 const devUrl = "https://localhost:3000/";
 const root = fileURLToPath(new URL(".", import.meta.url));
 
+/** README as a page; headings get ids (GitHub-style slugs) so that help links can point at sections. */
 function helpPage(markdown) {
-  const body = marked.parse(markdown, { async: false });
+  const slug = (html) =>
+    html.replace(/<[^>]+>/g, "").trim().toLowerCase().replace(/[^\p{L}\p{N}\s-]/gu, "").replace(/\s+/g, "-");
+  const body = marked
+    .parse(markdown, { async: false })
+    .replace(/<h([1-6])>(.*?)<\/h\1>/g, (_, level, inner) => `<h${level} id="${slug(inner)}">${inner}</h${level}>`);
   return `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>zcell help</title>
 <meta http-equiv="Content-Security-Policy" content="default-src 'self'; img-src 'self' data:"></head>
 <body>${body}</body></html>`;

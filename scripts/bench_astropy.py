@@ -9,7 +9,7 @@ import time
 
 import astropy.units as u
 import numpy as np
-from astropy.cosmology import FlatLambdaCDM
+from astropy.cosmology import FlatLambdaCDM, z_at_value
 
 
 def main():
@@ -30,6 +30,12 @@ def main():
             t0 = time.perf_counter()
             f(z)
             timings[label] = (time.perf_counter() - t0) / n * 1e9
+        # the inverse: z from D_L, one value at a time (astropy solves each separately)
+        targets = cosmo.luminosity_distance(z[:50])
+        t0 = time.perf_counter()
+        for d in targets:
+            z_at_value(cosmo.luminosity_distance, d, zmin=1e-8, zmax=20)
+        timings["inverseDL"] = (time.perf_counter() - t0) / len(targets) * 1e9
         out[name] = timings
     json.dump(out, sys.stdout)
 

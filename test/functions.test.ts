@@ -171,3 +171,16 @@ describe("results are clean", () => {
     expectError(one("AGE", 1, "H0=70; Om=0; OL=1"), "num", /not a finite number/);
   });
 });
+
+describe("model cache", () => {
+  test("keeps at most 64 compiled models and builds a repeated spec once", async () => {
+    const { cachedModelCount, modelFor } = await import("../functions/modelCache.js");
+    for (let i = 0; i < 100; i++) modelFor(`H0=${60 + i / 10}; Om=0.3`);
+    expect(cachedModelCount()).toBe(64);
+    const a = modelFor("WMAP7");
+    for (let i = 0; i < 63; i++) modelFor(`H0=${50 + i / 10}; Om=0.3`);
+    expect(modelFor("WMAP7")).toBe(a); // still cached: it was used most recently before the 63 others
+    for (let i = 0; i < 64; i++) modelFor(`H0=${40 + i / 10}; Om=0.3`);
+    expect(modelFor("WMAP7")).not.toBe(a); // evicted, rebuilt
+  });
+});

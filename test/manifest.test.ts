@@ -128,3 +128,13 @@ describe("manifest.xml", () => {
     expect(urls.filter((u) => !u.startsWith("https://astro.example.org/zcell/"))).toEqual(["https://astro.example.org"]);
   });
 });
+
+describe("help links", () => {
+  test("every function's help URL points at a section that exists in help.html", () => {
+    const help = readFileSync(`${root}dist/help.html`, "utf8");
+    const metadata = JSON.parse(readFileSync(`${root}dist/functions.json`, "utf8")) as { functions: { helpUrl: string }[] };
+    const anchors = new Set(metadata.functions.map((f) => new URL(f.helpUrl).hash.slice(1)));
+    expect(anchors.size).toBeGreaterThan(3);
+    for (const anchor of anchors) expect(help, anchor).toMatch(new RegExp(`id="?${anchor}"?[ >]`));
+  });
+});
