@@ -180,7 +180,6 @@ export class Cosmology {
   readonly equalityRedshift: number;
 
   private readonly coldMatter: number;
-  private readonly darkEnergy: number;
   private readonly darkEnergyKind: 0 | 1 | 2;
   private readonly darkEnergyPower: number;
   private readonly masslessNeutrinos: number;
@@ -245,7 +244,6 @@ export class Cosmology {
       this.OL = 1 - p.Om - this.Or;
       this.Ok = 0;
     }
-    this.darkEnergy = this.OL;
     this.darkEnergyKind = p.wa !== 0 ? 2 : p.w0 !== -1 ? 1 : 0;
     this.darkEnergyPower = 3 * (1 + p.w0 + p.wa);
     this.sqrtAbsOk = Math.sqrt(Math.abs(this.Ok));
@@ -258,7 +256,7 @@ export class Cosmology {
       { coefficient: this.coldMatter, power: 3 },
       { coefficient: this.Or + massive.length * this.neutrinoSpeciesDensity, power: 4 },
       { coefficient: this.Ok, power: 2 },
-      { coefficient: this.darkEnergy, power: this.darkEnergyPower },
+      { coefficient: this.OL, power: this.darkEnergyPower },
     ];
 
     this.checkBigBang();
@@ -351,7 +349,7 @@ export class Cosmology {
   private e2(zp: number, lnZp: number): number {
     const zp2 = zp * zp;
     let e2 = zp2 * (this.coldMatter * zp + this.Or * zp2 + this.Ok);
-    if (this.darkEnergy !== 0) e2 += this.darkEnergy * this.darkEnergyFactor(zp, lnZp);
+    if (this.OL !== 0) e2 += this.OL * this.darkEnergyFactor(zp, lnZp);
     const y0 = this.massiveY0;
     if (y0.length > 0) {
       let nu = 0;
@@ -372,9 +370,9 @@ export class Cosmology {
   private de2dz(zp: number, lnZp: number): number {
     const zp2 = zp * zp;
     let d = zp * (3 * this.coldMatter * zp + 4 * this.Or * zp2 + 2 * this.Ok);
-    if (this.darkEnergy !== 0) {
+    if (this.OL !== 0) {
       const w = this.w0 + this.wa * (1 - 1 / zp);
-      d += (this.darkEnergy * this.darkEnergyFactor(zp, lnZp) * 3 * (1 + w)) / zp;
+      d += (this.OL * this.darkEnergyFactor(zp, lnZp) * 3 * (1 + w)) / zp;
     }
     const y0 = this.massiveY0;
     for (let i = 0; i < y0.length; i++) {
@@ -476,7 +474,7 @@ export class Cosmology {
         density = this.coldMatter * zp ** 3 + massive;
         break;
       case "de":
-        density = this.darkEnergy * this.darkEnergyFactor(zp, lnZp);
+        density = this.OL * this.darkEnergyFactor(zp, lnZp);
         break;
       case "k":
         density = this.Ok * zp * zp;
