@@ -3,6 +3,9 @@
  * workbook cosmology, this cell, what-if tables, freeze — to the host through excelHost.ts.
  * Outside Office the page says so and lists the worksheet functions.
  */
+import "@fluentui/web-components/button.js";
+import { setTheme } from "@fluentui/web-components";
+import { webDarkTheme, webLightTheme } from "@fluentui/tokens";
 import { parseModelSpec, presets } from "../core/index.js";
 import { defaultModelSpec, readActiveModel } from "../functions/activeModel.js";
 import { zcellVersion } from "../functions/describeModel.js";
@@ -97,7 +100,7 @@ function refreshForm(): void {
   }
   currentSpec = result.spec;
   $<HTMLInputElement>("spec").value = result.spec ?? "";
-  $<HTMLButtonElement>("apply").disabled = !result.spec;
+  ($("apply") as HTMLElement & { disabled: boolean }).disabled = !result.spec;
 }
 
 function setupCosmology(): void {
@@ -348,7 +351,8 @@ async function start(): Promise<void> {
   if (!office) return showOutsideOffice();
   const info = await office.onReady();
   if (info.host !== office.HostType.Excel) return showOutsideOffice();
-  applyOfficeTheme(office.context.officeTheme);
+  const dark = applyOfficeTheme(office.context.officeTheme);
+  setTheme(dark ? webDarkTheme : webLightTheme);
   $("in-excel").hidden = false;
   setupTabs();
   setupCosmology();

@@ -20,9 +20,12 @@ export function contrast(a: string, b: string): number {
   return (hi + 0.05) / (lo + 0.05);
 }
 
-/** Applies Office's theme colours where they keep contrast, and the dark palette on dark backgrounds. */
-export function applyOfficeTheme(theme: Office.OfficeTheme | undefined): void {
-  if (!theme?.bodyBackgroundColor) return;
+/**
+ * Applies Office's theme colours where they keep contrast, and the dark palette on dark backgrounds.
+ * @returns true when the theme is dark
+ */
+export function applyOfficeTheme(theme: Office.OfficeTheme | undefined): boolean {
+  if (!theme?.bodyBackgroundColor) return false;
   const root = document.documentElement;
   const dark = luminance(theme.bodyBackgroundColor) < 0.2;
   root.classList.toggle("dark", dark);
@@ -32,4 +35,5 @@ export function applyOfficeTheme(theme: Office.OfficeTheme | undefined): void {
     root.style.setProperty("--bg", bg);
     root.style.setProperty("--fg", fg);
   }
+  return dark;
 }

@@ -96,12 +96,12 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await page.selectOption("#preset", "PLANCK2018");
       await page.fill("#f-H0", "-5");
       await expect.poll(() => page.locator("#e-H0").textContent()).toMatch(/H0 must be a positive number/);
-      expect(await page.getByRole("button", { name: "Apply to workbook" }).isDisabled()).toBe(true);
+      expect(await page.locator("#apply").evaluate((b) => (b as HTMLButtonElement).disabled)).toBe(true);
       await page.fill("#f-H0", "73");
       expect(await page.locator("#spec").inputValue()).toBe("PLANCK2018; H0=73");
       expect(await page.locator("#derived").textContent()).toMatch(/Age today/);
       await page.screenshot({ path: `${shots}cosmology-${themeName}.png`, fullPage: true });
-      await page.getByRole("button", { name: "Apply to workbook" }).click();
+      await page.locator("#apply").click();
       await expect.poll(() => page.locator("#apply-status").textContent()).toBe("Applied PLANCK2018; H0=73; 3 formulas recalculated.");
       expect(await fake(page, "saved")).toEqual({ "zcell.activeModel": "PLANCK2018; H0=73" });
       expect(await fake(page, "calculations")).toEqual(["Full"]);
@@ -135,7 +135,7 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await page.fill("#table-stop", "1");
       await page.fill("#table-step", "0.25");
       await page.screenshot({ path: `${shots}tables-${themeName}.png`, fullPage: true });
-      await page.getByRole("button", { name: "Insert table" }).click();
+      await page.locator("#insert-table").click();
       await expect.poll(() => page.locator("#table-status").textContent()).toMatch(/Inserted a 5-row table/);
       const cells = (await fake(page, "sheets.Sheet1")) as Record<string, { formula?: string; value?: unknown }>;
       expect(cells.D10.value).toBe("z");
@@ -145,12 +145,12 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       // the selected-column mode with E5 occupied asks first
       await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!D6:D8"));
       await page.check("#source-selection");
-      await page.getByRole("button", { name: "Insert table" }).click();
+      await page.locator("#insert-table").click();
       await expect.poll(() => page.locator("#table-confirm-text").textContent()).toMatch(/1 cell in E5:G8 are not empty/);
-      await page.getByRole("button", { name: "Cancel" }).first().click();
+      await page.locator("#table-cancel").click();
       expect(((await fake(page, "sheets.Sheet1")) as Record<string, { value?: unknown }>).E5.value).toBe("occupied");
-      await page.getByRole("button", { name: "Insert table" }).click();
-      await page.getByRole("button", { name: "Overwrite" }).click();
+      await page.locator("#insert-table").click();
+      await page.locator("#table-overwrite").click();
       await expect.poll(async () => ((await fake(page, "sheets.Sheet1")) as Record<string, { formula?: string }>).E6?.formula).toBe("=ZC.DIST_LUM($D$6:$D$8,$E$5:$G$5)");
       await page.close();
     });
@@ -159,10 +159,10 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       const page = await openPane(theme, { "zcell.activeModel": "WMAP9" });
       await page.getByRole("tab", { name: "Freeze" }).click();
       await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!A2:C2"));
-      await page.getByRole("button", { name: "Freeze selection…" }).click();
+      await page.locator("#freeze").click();
       await expect.poll(() => page.locator("#freeze-confirm-text").textContent()).toMatch(/Replace 2 ZC formulas by their values.*Undo/);
       await page.screenshot({ path: `${shots}freeze-${themeName}.png`, fullPage: true });
-      await page.getByRole("button", { name: "Freeze", exact: true }).click();
+      await page.locator("#freeze-go").click();
       await expect.poll(() => page.locator("#freeze-status").textContent()).toMatch(/Froze 2 cells; formula, model and version are in each cell's note/);
       const cells = (await fake(page, "sheets.Sheet1")) as Record<string, { formula?: string; value?: unknown }>;
       expect(cells.B2).toEqual({ value: 2919.6 });
@@ -173,6 +173,19 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await page.close();
     });
   }
+
+  test("every control has a role and an accessible name in Chromium's accessibility tree", async () => {
+    const page = await openPane(light, {});
+    await page.locator("#apply").waitFor();
+    const cdp = await page.context().newCDPSession(page);
+    const { nodes } = (await cdp.send("Accessibility.getFullAXTree")) as { nodes: { role?: { value: string }; name?: { value: string }; ignored?: boolean }[] };
+    const named = (role: string) => nodes.filter((n) => !n.ignored && n.role?.value === role).map((n) => n.name?.value ?? "");
+    expect(named("button")).toEqual(expect.arrayContaining(["Copy", "Apply to workbook"]));
+    expect(named("tab")).toEqual(["Cosmology", "This cell", "Tables", "Freeze"]);
+    expect(named("textbox").every((name) => name.length > 0)).toBe(true);
+    expect(named("combobox").every((name) => name.length > 0)).toBe(true);
+    await page.close();
+  });
 
   test("corrupt settings fall back to PLANCK2018 with a visible warning and nothing overwritten", async () => {
     const page = await openPane(light, { "zcell.activeModel": "H0=abc" });
