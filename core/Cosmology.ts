@@ -384,20 +384,18 @@ export class Cosmology {
 
   /** Highest power of (1+z) in E² with a non-zero coefficient. */
   private leadingPower(): number {
-    let power = Number.NEGATIVE_INFINITY;
-    for (const t of this.leadingTerms()) power = t.power;
-    return power;
+    return this.leadingTerm()?.power ?? Number.NEGATIVE_INFINITY;
   }
 
-  /** The terms of E² of the highest power with non-zero summed coefficient (as one term). */
-  private leadingTerms(): Term[] {
+  /** The terms of E² of the highest power with non-zero summed coefficient, summed into one. */
+  private leadingTerm(): Term | undefined {
     const byPower = new Map<number, number>();
     for (const t of this.terms) if (t.coefficient !== 0) byPower.set(t.power, (byPower.get(t.power) ?? 0) + t.coefficient);
     let best: Term | undefined;
     for (const [power, coefficient] of byPower) {
       if (coefficient !== 0 && (!best || power > best.power)) best = { coefficient, power };
     }
-    return best ? [best] : [];
+    return best;
   }
 
   /** Throws RangeError naming the redshift where E² ≤ 0, if anywhere on z ≥ 0. */
@@ -418,7 +416,7 @@ export class Cosmology {
       }
       previous = z;
     }
-    const leading = this.leadingTerms()[0];
+    const leading = this.leadingTerm();
     if (failure === undefined && leading && leading.coefficient < 0) failure = Number.POSITIVE_INFINITY;
     if (failure === undefined) return;
     let where: string;

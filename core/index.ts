@@ -36,5 +36,5 @@ export {
   spectralLuminosityWHz,
 } from "./photometry.js";
 export { findPreset, presets, type Preset } from "./presets.js";
-export { checkRedshift } from "./redshift.js";
+export { checkRedshift, checkSourceRedshift } from "./redshift.js";
 export { conversionFactor, convertUnit, parseUnit, type Unit } from "./units.js";

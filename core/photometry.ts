@@ -5,7 +5,7 @@
  */
 import { abMagnitudeOffset, bolometricZeroPointW, megaparsecM } from "./constants.js";
 import type { Cosmology } from "./Cosmology.js";
-import { checkRedshift } from "./redshift.js";
+import { checkRedshift, checkSourceRedshift } from "./redshift.js";
 
 function requireNonNegative(name: string, value: number, unit: string): void {
   if (typeof value !== "number" || Number.isNaN(value)) throw new TypeError(`${name} must be a number`);
@@ -19,8 +19,7 @@ function requireFiniteNumber(name: string, value: number): void {
 
 /** 4π D_L² [m²], requiring z > 0 (a source at z = 0 is at zero distance). */
 function sphereAreaM2(model: Cosmology, z: number): number {
-  checkRedshift(z);
-  if (z === 0) throw new RangeError("z = 0 puts the source at zero distance: give z > 0");
+  checkSourceRedshift(z);
   const dl = model.luminosityDistanceMpc(z) * megaparsecM;
   return 4 * Math.PI * dl * dl;
 }
@@ -88,8 +87,7 @@ export function kCorrectionPowerLawMag(z: number, alpha: number): number {
 export function absoluteMagnitude(model: Cosmology, apparentMag: number, z: number, kCorrectionMag = 0): number {
   requireFiniteNumber("m", apparentMag);
   requireFiniteNumber("kcorr", kCorrectionMag);
-  checkRedshift(z);
-  if (z === 0) throw new RangeError("z = 0 puts the source at zero distance: give z > 0");
+  checkSourceRedshift(z);
   return apparentMag - model.distanceModulusMag(z) - kCorrectionMag;
 }
 
@@ -104,8 +102,7 @@ export function absoluteMagnitude(model: Cosmology, apparentMag: number, z: numb
 export function apparentMagnitude(model: Cosmology, absoluteMag: number, z: number, kCorrectionMag = 0): number {
   requireFiniteNumber("M", absoluteMag);
   requireFiniteNumber("kcorr", kCorrectionMag);
-  checkRedshift(z);
-  if (z === 0) throw new RangeError("z = 0 puts the source at zero distance: give z > 0");
+  checkSourceRedshift(z);
   return absoluteMag + model.distanceModulusMag(z) + kCorrectionMag;
 }
 

@@ -15,3 +15,14 @@ export function checkRedshift(z: number, name = "z"): void {
   }
   if (!Number.isFinite(z)) throw new RangeError(`${name} must be finite`);
 }
+
+/**
+ * Throws unless z is a usable redshift of a source at a distance: finite and > 0 (at z = 0 the
+ * luminosity distance is 0, so fluxes and magnitudes are undefined).
+ *
+ * @param z redshift, dimensionless
+ */
+export function checkSourceRedshift(z: number): void {
+  checkRedshift(z);
+  if (z === 0) throw new RangeError("z = 0 puts the source at zero distance: give z > 0");
+}

@@ -6,6 +6,7 @@
 import {
   abFluxDensityJy,
   abMagnitude,
+  checkSourceRedshift,
   absoluteMagnitude,
   apparentMagnitude,
   convertUnit,
@@ -114,7 +115,7 @@ const list: FunctionDef[] = [
   },
   ofRedshift("DIST_LIGHT", "Mpc", (x, zz) => x.lightTravelDistanceMpc(zz)),
   ofRedshift("MODULUS", undefined, (x, zz) => {
-    if (zz === 0) throw new RangeError("z = 0 puts the source at zero distance: give z > 0");
+    checkSourceRedshift(zz);
     return x.distanceModulusMag(zz);
   }),
   ofRedshift("LOOKBACK", "Gyr", (x, zz) => x.lookbackTimeGyr(zz)),
