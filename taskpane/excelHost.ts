@@ -5,6 +5,7 @@
  * in a mock host.
  */
 import { activeModelSettingKey } from "../functions/activeModel.js";
+import { callsZcFunction } from "../functions/storedFormula.js";
 
 /** A rectangle of cells as the pane sees it. */
 export interface RangeSnapshot {
@@ -14,11 +15,6 @@ export interface RangeSnapshot {
   columnCount: number;
   formulas: unknown[][];
   values: unknown[][];
-}
-
-/** True when a formula calls a ZC function. */
-export function hasZcCall(formula: unknown): boolean {
-  return typeof formula === "string" && formula.startsWith("=") && /\bZC\.[A-Z_]+\s*\(/i.test(formula);
 }
 
 function settings(): Office.Settings {
@@ -56,7 +52,7 @@ export async function recalculateWorkbook(): Promise<number> {
     let count = 0;
     for (const range of used) {
       if (range.isNullObject) continue;
-      for (const row of range.formulas) for (const f of row) if (hasZcCall(f)) count++;
+      for (const row of range.formulas) for (const f of row) if (callsZcFunction(f)) count++;
     }
     context.workbook.application.calculate(Excel.CalculationType.full);
     await context.sync();

@@ -9,9 +9,9 @@ import { webDarkTheme, webLightTheme } from "@fluentui/tokens";
 import { parseModelSpec, presets } from "../core/index.js";
 import { defaultModelSpec, readActiveModel } from "../functions/activeModel.js";
 import { zcellVersion } from "../functions/describeModel.js";
+import { callsZcFunction } from "../functions/storedFormula.js";
 import {
   freezeCells,
-  hasZcCall,
   onSelectionChanged,
   readActiveCell,
   readModelSetting,
@@ -182,7 +182,7 @@ async function explainActiveCell(): Promise<void> {
     $("cell-address").textContent = cell.spillAnchor
       ? `${cell.address}: part of a spilled range; explaining its anchor ${cell.spillAnchor}.`
       : cell.address;
-    if (!hasZcCall(formula)) {
+    if (!callsZcFunction(formula)) {
       out.replaceChildren(el("p", "This cell has no ZC formula."));
       return;
     }
@@ -298,7 +298,7 @@ function setupFreeze(): void {
       for (let r = 0; r < selection.rowCount; r++) {
         for (let c = 0; c < selection.columnCount; c++) {
           const formula = selection.formulas[r][c];
-          if (!hasZcCall(formula)) continue;
+          if (!callsZcFunction(formula)) continue;
           const calls = await explainFormula(String(formula), read, active);
           const models = calls.flatMap((x) => (x.model ? [x.model.spec] : []));
           cells.push({

@@ -1,26 +1,117 @@
-/** npm run demo writes a workbook whose formulas are live ZC calls over the invented catalogue. */
+/**
+ * npm run demo writes a workbook that Excel can bind: read as raw XML (the form Excel reads), every
+ * ZC formula is in the stored spelling `_xldudf_ZC_…` (how Excel saves an add-in function; see
+ * ../shared notes and OfficeDev/office-js issue 3558), every formula cell has a cached value, and the
+ * README's tour describes the file as it is.
+ */
 import { execFileSync } from "node:child_process";
+import { readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
-import ExcelJS from "exceljs";
-import { describe, expect, test } from "vitest";
+import JSZip from "jszip";
+import { beforeAll, describe, expect, test } from "vitest";
+import { parseStrictXml, type ManifestElement as XmlElement } from "../scripts/checkManifest.js";
+import { Cosmology } from "../core/index.js";
+import { storedFormula } from "../functions/storedFormula.js";
+import { expectRelative } from "./helpers.js";
 
 const root = fileURLToPath(new URL("..", import.meta.url));
 
-describe("demo workbook", () => {
-  test("holds ZC formulas (not values) over sources marked as invented", async () => {
-    execFileSync(process.execPath, [`${root}node_modules/tsx/dist/cli.mjs`, "scripts/demo.ts"], { cwd: root, stdio: "ignore" });
-    const wb = new ExcelJS.Workbook();
-    await wb.xlsx.readFile(`${root}demo/zcell-demo.xlsx`);
-    const sheet = wb.getWorksheet("Catalogue (invented)")!;
-    expect(String(sheet.getCell("A1").value)).toMatch(/INVENTED/);
-    const formula = (sheet.getCell("F3").value as { formula: string }).formula;
-    expect(formula).toBe("ZC.DIST_LUM(B3)");
-    const formulas: string[] = [];
-    wb.eachSheet((s) => s.eachRow((row) => row.eachCell((c) => {
-      const v = c.value as { formula?: string };
-      if (v && typeof v === "object" && v.formula) formulas.push(v.formula);
-    })));
-    expect(formulas.length).toBeGreaterThan(60);
-    expect(formulas.every((f) => f.startsWith("ZC."))).toBe(true);
+interface SheetCell { formula?: string; value?: string; type?: string }
+/** Sheet name → cell address → formula, cached value text and cell type, from the raw sheet XML. */
+const sheets = new Map<string, Map<string, SheetCell>>();
+
+const textOf = (e: XmlElement | undefined) => (e ? e.text + e.children.map((c) => textOf(c)).join("") : undefined);
+
+beforeAll(async () => {
+  execFileSync(process.execPath, [`${root}node_modules/tsx/dist/cli.mjs`, "scripts/demo.ts"], { cwd: root, stdio: "ignore" });
+  const zip = await JSZip.loadAsync(readFileSync(`${root}demo/zcell-demo.xlsx`));
+  const book = parseStrictXml(await zip.file("xl/workbook.xml")!.async("string"));
+  const rels = parseStrictXml(await zip.file("xl/_rels/workbook.xml.rels")!.async("string"));
+  const strings = zip.file("xl/sharedStrings.xml")
+    ? parseStrictXml(await zip.file("xl/sharedStrings.xml")!.async("string")).children.map((si) => textOf(si) ?? "")
+    : [];
+  for (const s of book.children.find((c) => c.name === "sheets")!.children) {
+    const target = rels.children.find((r) => r.attributes.Id === s.attributes["r:id"])!.attributes.Target;
+    const xml = parseStrictXml(await zip.file(`xl/${target.replace(/^\/xl\//, "")}`)!.async("string"));
+    const cells = new Map<string, SheetCell>();
+    for (const row of xml.children.find((c) => c.name === "sheetData")!.children) {
+      for (const c of row.children) {
+        const f = c.children.find((x) => x.name === "f");
+        const v = c.children.find((x) => x.name === "v");
+        const value = c.attributes.t === "s" ? strings[Number(textOf(v))] : c.attributes.t === "inlineStr" ? textOf(c) : textOf(v);
+        cells.set(c.attributes.r, { formula: textOf(f), value, type: c.attributes.t });
+      }
+    }
+    sheets.set(s.attributes.name, cells);
+  }
+});
+
+const formulaCells = () => [...sheets.entries()].flatMap(([sheet, cells]) => [...cells].filter(([, c]) => c.formula !== undefined).map(([address, c]) => ({ sheet, address, ...c })));
+
+describe("demo workbook, read as Excel reads it", () => {
+  test("holds the invented catalogue, marked as invented, and three sheets", () => {
+    expect([...sheets.keys()]).toEqual(["Catalogue (invented)", "What-if", "Model in cells"]);
+    expect(sheets.get("Catalogue (invented)")!.get("A1")!.value).toMatch(/^INVENTED/);
+    expect(sheets.get("Catalogue (invented)")!.get("A3")!.value).toBe("INV-01");
+  });
+
+  test("every formula calls ZC in the stored spelling, never the bare ZC. name", () => {
+    const all = formulaCells();
+    expect(all.length).toBe(12 * 6 + 1 + 8 * 3 + 1);
+    for (const c of all) {
+      expect(c.formula, `${c.sheet}!${c.address}`).toMatch(/^_xldudf_ZC_[A-Z_]+\(/);
+      expect(c.formula, `${c.sheet}!${c.address}`).not.toMatch(/(^|[^_\w])ZC\./);
+    }
+  });
+
+  test("every formula cell carries a cached value: a finite number, or text for DESCRIBE", () => {
+    for (const c of formulaCells()) {
+      expect(c.value, `${c.sheet}!${c.address}`).toBeDefined();
+      if (c.type === "str") expect(c.formula).toBe("_xldudf_ZC_DESCRIBE()");
+      else expect(Number.isFinite(Number(c.value)), `${c.sheet}!${c.address} = ${c.value}`).toBe(true);
+    }
+  });
+
+  test("the README's catalogue table names the file's headers (row 2) and formulas (row 3)", () => {
+    const readme = readFileSync(`${root}README.md`, "utf8");
+    const table = readme.slice(readme.indexOf("<!-- demo-tour:start"), readme.indexOf("<!-- demo-tour:end"));
+    const rows = [...table.matchAll(/^\| ([A-Z]) \| ([^|]+) \| `=([^`]+)` \|/gm)];
+    expect(rows.length).toBe(6);
+    const cells = sheets.get("Catalogue (invented)")!;
+    for (const [, column, header, formula] of rows) {
+      expect(cells.get(`${column}2`)!.value, column).toBe(header.trim());
+      expect(cells.get(`${column}3`)!.formula, column).toBe(storedFormula(formula));
+    }
+    const [, first, last] = /rows (\d+)–(\d+) the twelve sources/.exec(readme)!;
+    expect(cells.get(`A${first}`)!.value).toBe("INV-01");
+    expect(cells.get(`A${last}`)!.value).toBe("INV-12");
+    expect(cells.get(`A${Number(last) + 1}`)).toBeUndefined();
+    const [, describeRow] = /Row (\d+) holds `=ZC.DESCRIBE\(\)`/.exec(readme)!;
+    expect(cells.get(`B${describeRow}`)!.formula).toBe("_xldudf_ZC_DESCRIBE()");
+  });
+
+  test("the README's what-if and model-in-cells descriptions match the file", () => {
+    const readme = readFileSync(`${root}README.md`, "utf8");
+    const whatIf = sheets.get("What-if")!;
+    expect(["B1", "C1", "D1"].map((a) => whatIf.get(a)!.value)).toEqual(["PLANCK2018", "WMAP9", "PLANCK2018; H0=73"]);
+    expect(readme).toContain("the models `PLANCK2018`, `WMAP9` and `PLANCK2018; H0=73` in B1:D1");
+    const [, typed] = /in B2:D9 one formula per cell, `=([^`]+)`/.exec(readme)!;
+    expect(whatIf.get("B2")!.formula).toBe(storedFormula(typed));
+    for (const column of ["B", "C", "D"]) for (let r = 2; r <= 9; r++) {
+      expect(whatIf.get(`${column}${r}`)!.formula).toBe(storedFormula(`ZC.DIST_LUM($A${r},${column}$1)`));
+    }
+    expect(whatIf.get("A10")).toBeUndefined();
+    expect(readme).toContain("spills the same 8×3 table");
+    const [, inCells] = /passed as\n`model` is one model: `=([^`]+)` in B6/.exec(readme)!;
+    expect(sheets.get("Model in cells")!.get("B6")!.formula).toBe(storedFormula(inCells));
+  });
+
+  test("cached D_L values are the engine's under PLANCK2018, the model of a new workbook", () => {
+    // reference: core Cosmology (checked against mpmath and astropy in its own tests), same model
+    const p18 = Cosmology.fromSpec("PLANCK2018");
+    const cells = sheets.get("Catalogue (invented)")!;
+    for (let r = 3; r <= 14; r++) {
+      expectRelative(Number(cells.get(`F${r}`)!.value), p18.luminosityDistanceMpc(Number(cells.get(`B${r}`)!.value)), 1e-15, `F${r}`);
+    }
   });
 });

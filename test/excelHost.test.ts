@@ -9,7 +9,6 @@ import { beforeEach, describe, expect, test } from "vitest";
 import { readActiveModel } from "../functions/activeModel.js";
 import {
   freezeCells,
-  hasZcCall,
   readActiveCell,
   readModelSetting,
   readReference,
@@ -111,17 +110,6 @@ describe("Excel interactions", () => {
     fake = install({ settings: {}, sheets: sheets(), excelApi: 1.17 });
     expect(await freezeCells("Other sheet", [{ address: "C4", value: 13.8, note: "p" }])).toBe("comment");
     expect(fake.comments).toEqual([{ address: "'Other sheet'!C4", text: "p" }]);
-  });
-
-  test.each([
-    // formula                     ZC call?
-    ["=ZC.DIST_LUM(A2)",           true],
-    ["=1+zc.age ()",               true],
-    ["=SUM(A1:A3)",                false],
-    ["ZC.DIST_LUM(A2)",            false],
-    [42,                           false],
-  ])("hasZcCall(%j) is %s", (formula, expected) => {
-    expect(hasZcCall(formula)).toBe(expected);
   });
 
   test("splits sheet-qualified addresses", () => {

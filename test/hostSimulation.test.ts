@@ -3,13 +3,13 @@
  * stub `CustomFunctions` and `Office` globals (no DOM), as Excel's custom-functions runtime would.
  */
 import { readFileSync } from "node:fs";
-import { fileURLToPath } from "node:url";
 import { beforeAll, describe, expect, test } from "vitest";
 import { Cosmology, convertUnit } from "../core/index.js";
 import { expectRelative } from "./helpers.js";
+import { testBuildDir } from "./testBuild.js";
 import { HostError, loadBundle, type Registered } from "./reference/hostBundle.js";
 
-const dist = fileURLToPath(new URL("../dist/", import.meta.url));
+const dist = testBuildDir;
 
 const metadata = JSON.parse(readFileSync(`${dist}functions.json`, "utf8")) as {
   functions: { id: string; name: string; parameters: { name: string; optional?: boolean }[] }[];

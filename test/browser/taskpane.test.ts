@@ -9,10 +9,11 @@ import { createServer, type Server } from "node:http";
 import { extname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { chromium, type Browser, type Page } from "playwright-core";
+import { testBuildDir } from "../testBuild.js";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 
 const root = fileURLToPath(new URL("../../", import.meta.url));
-const dist = `${root}dist/`;
+const dist = testBuildDir;
 const shots = `${root}test-artifacts/screenshots/`;
 const chromiumPath = "/usr/bin/chromium";
 const fakeOffice = readFileSync(`${root}test/browser/fakeOffice.js`, "utf8");

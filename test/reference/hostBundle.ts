@@ -1,10 +1,10 @@
 /**
- * Loads the production bundle dist/functions.js the way Excel's custom-functions runtime would: in a
+ * Loads the production bundle functions.js (the tests' build) the way Excel's custom-functions runtime would: in a
  * bare JS context whose only globals are stub `CustomFunctions` and `Office` (no DOM).
  */
 import { readFileSync } from "node:fs";
-import { fileURLToPath } from "node:url";
 import vm from "node:vm";
+import { testBuildDir } from "../testBuild.js";
 
 /** The host's error value, as the stub CustomFunctions.Error makes it. */
 export class HostError {
@@ -23,7 +23,6 @@ export type Registered = (...args: unknown[]) => Promise<unknown[][]>;
  * @returns the registered functions by id
  */
 export function loadBundle(settings: Record<string, unknown>, settingsDelayMs = 0): Map<string, Registered> {
-  const dist = fileURLToPath(new URL("../../dist/", import.meta.url));
   const associated = new Map<string, Registered>();
   const CustomFunctions = {
     associate: (id: string, fn: Registered) => associated.set(id, fn),
@@ -35,6 +34,6 @@ export function loadBundle(settings: Record<string, unknown>, settingsDelayMs = 
     context: { document: { settings: { get: (key: string) => settings[key] ?? null } } },
   };
   const context = vm.createContext({ CustomFunctions, Office });
-  vm.runInContext(readFileSync(`${dist}functions.js`, "utf8"), context, { filename: "functions.js" });
+  vm.runInContext(readFileSync(`${testBuildDir}functions.js`, "utf8"), context, { filename: "functions.js" });
   return associated;
 }
