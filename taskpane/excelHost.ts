@@ -1,11 +1,13 @@
 /**
  * Everything the task pane asks of Excel, in one place: the workbook's settings, recalculation,
- * the active cell and selection, reading referenced values, writing tables, freezing with notes.
+ * the active cell and selection, reading referenced values, writing tables, freezing with notes and
+ * thawing them, finding and re-entering ZC formulas that Excel has not bound (#NAME?).
  * Uses only Office.js (the pane's logic never touches Office objects directly), so tests can stand
  * in a mock host.
  */
 import { activeModelSettingKey } from "../functions/activeModel.js";
-import { callsZcFunction } from "../functions/storedFormula.js";
+import { callsZcFunction, typedFormula } from "../functions/storedFormula.js";
+import { columnName, qualifiedAddress, splitAddress, topLeft } from "./cellAddress.js";
 
 /** A rectangle of cells as the pane sees it. */
 export interface RangeSnapshot {
@@ -97,15 +99,6 @@ export function readSelection(): Promise<RangeSnapshot> {
   return snapshot((context) => context.workbook.getSelectedRange());
 }
 
-/** Splits "Sheet 1!A1:B2" or "'My sheet'!A1" into sheet name (or undefined) and address. */
-export function splitAddress(reference: string): { sheet?: string; address: string } {
-  const bang = reference.lastIndexOf("!");
-  if (bang < 0) return { address: reference };
-  let sheet = reference.slice(0, bang);
-  if (sheet.startsWith("'")) sheet = sheet.slice(1, -1).replaceAll("''", "'");
-  return { sheet, address: reference.slice(bang + 1) };
-}
-
 /**
  * Values of a reference as written in a formula (relative to `defaultSheet` when it names none).
  * @param reference e.g. "B2", "$A$2:$A$40", "'My sheet'!B2", or a defined name
@@ -134,24 +127,203 @@ export function notesSupported(): boolean {
 }
 
 /**
- * Replaces the given cells' formulas by their values and attaches a note (or comment) to each.
- * @param sheet worksheet name
- * @param cells cell address (e.g. "C4") → value to keep and note text
- * @returns "note" or "comment", whichever carried the provenance
+ * Whether Excel can record an add-in's changes as one undo step: `Excel.run({ mergeUndoGroup: true })`
+ * came with ExcelApi 1.20 (learn.microsoft.com/office/dev/add-ins/excel/excel-add-ins-undo-capabilities).
  */
-export async function freezeCells(sheet: string, cells: { address: string; value: unknown; note: string }[]): Promise<"note" | "comment"> {
-  const kind = notesSupported() ? "note" : "comment";
-  await Excel.run(async (context) => {
+export function undoGroupSupported(): boolean {
+  return Office.context.requirements.isSetSupported("ExcelApi", "1.20");
+}
+
+/**
+ * Runs a batch as one undo step where the host supports it. An API in the batch that cannot join an
+ * undo group makes Excel throw `UndoNotSupported` (same source); the batch then runs again without
+ * the group, so the work is done and the caller says that Undo does not cover it.
+ * @returns the batch's result and whether it ran as one undo step
+ */
+async function runAsOneUndoStep<T>(batch: (context: Excel.RequestContext) => Promise<T>): Promise<{ result: T; oneUndoStep: boolean }> {
+  if (undoGroupSupported()) {
+    try {
+      return { result: await Excel.run({ mergeUndoGroup: true }, batch), oneUndoStep: true };
+    } catch (e) {
+      if ((e as { code?: string }).code !== "UndoNotSupported") throw e;
+    }
+  }
+  return { result: await Excel.run(batch), oneUndoStep: false };
+}
+
+/** A frozen cell: its value to keep and the provenance note to attach. */
+export interface FreezeCell {
+  address: string;
+  value: unknown;
+  note: string;
+}
+
+/**
+ * Replaces the given cells' formulas by their values and attaches a note (or comment) to each, as one
+ * undo step where the host allows.
+ * @param sheet worksheet name
+ * @param cells cell address (e.g. "C4"), value to keep and note text
+ * @returns which kind of annotation carried the provenance, and whether Excel's Undo reverts it in one step
+ */
+export async function freezeCells(sheet: string, cells: FreezeCell[]): Promise<{ carrier: "note" | "comment"; oneUndoStep: boolean }> {
+  const carrier = notesSupported() ? "note" : "comment";
+  const { oneUndoStep } = await runAsOneUndoStep(async (context) => {
     const ws = context.workbook.worksheets.getItem(sheet);
     for (const cell of cells) {
       ws.getRange(cell.address).values = [[cell.value]];
-      const qualified = `'${sheet.replaceAll("'", "''")}'!${cell.address}`;
-      if (kind === "note") (ws as unknown as { notes: { add(a: string, t: string): void } }).notes.add(qualified, cell.note);
+      const qualified = qualifiedAddress(sheet, cell.address);
+      if (carrier === "note") ws.notes.add(qualified, cell.note);
       else context.workbook.comments.add(qualified, cell.note);
     }
     await context.sync();
   });
-  return kind;
+  return { carrier, oneUndoStep };
+}
+
+/**
+ * The note (or, where notes are missing, the comment) on each given cell of a sheet.
+ * @param sheet worksheet name
+ * @param addresses cell addresses such as "C4"
+ * @returns address → annotation text, for the cells that have one
+ */
+export async function readAnnotations(sheet: string, addresses: string[]): Promise<Map<string, string>> {
+  return Excel.run(async (context) => {
+    const ws = context.workbook.worksheets.getItem(sheet);
+    const found = new Map<string, string>();
+    if (notesSupported()) {
+      const notes = addresses.map((address) => ({ address, note: ws.notes.getItemOrNullObject(qualifiedAddress(sheet, address)).load("content") }));
+      await context.sync();
+      for (const { address, note } of notes) if (!note.isNullObject) found.set(address, note.content);
+      return found;
+    }
+    ws.comments.load("items/content");
+    await context.sync();
+    const located = ws.comments.items.map((comment) => ({ comment, where: comment.getLocation().load("address") }));
+    await context.sync();
+    const wanted = new Set(addresses);
+    for (const { comment, where } of located) {
+      const address = splitAddress(where.address).address.replaceAll("$", "");
+      if (wanted.has(address)) found.set(address, comment.content);
+    }
+    return found;
+  });
+}
+
+/**
+ * Brings frozen cells back to life: writes each formula again and removes the provenance annotation,
+ * as one undo step where the host allows.
+ * @param sheet worksheet name
+ * @param cells cell address and the formula to restore
+ * @returns whether Excel's Undo reverts it in one step
+ */
+export async function thawCells(sheet: string, cells: { address: string; formula: string }[]): Promise<{ oneUndoStep: boolean }> {
+  const notes = notesSupported();
+  const { oneUndoStep } = await runAsOneUndoStep(async (context) => {
+    const ws = context.workbook.worksheets.getItem(sheet);
+    for (const cell of cells) ws.getRange(cell.address).formulas = [[cell.formula]];
+    if (notes) {
+      for (const cell of cells) ws.notes.getItemOrNullObject(qualifiedAddress(sheet, cell.address)).delete();
+    } else {
+      ws.comments.load("items");
+      await context.sync();
+      const located = ws.comments.items.map((comment) => ({ comment, where: comment.getLocation().load("address") }));
+      await context.sync();
+      const restored = new Set(cells.map((c) => c.address));
+      for (const { comment, where } of located) {
+        if (restored.has(splitAddress(where.address).address.replaceAll("$", ""))) comment.delete();
+      }
+    }
+    await context.sync();
+  });
+  return { oneUndoStep };
+}
+
+/** A ZC formula that Excel shows as #NAME?: saved or typed while zcell was not loaded. */
+export interface UnboundFormula {
+  sheet: string;
+  /** Cell address on the sheet, e.g. "B3". */
+  address: string;
+  /** The formula as Excel reports it (either spelling). */
+  formula: string;
+}
+
+/** Cells read in one request while scanning a used range (a large sheet is read in row chunks). */
+export const scanChunkCells = 50_000;
+
+/**
+ * Finds, in the used range of every sheet, the cells whose formula calls a ZC function (typed or
+ * stored spelling) and whose value is #NAME?.
+ * @returns the cells, and the sheets among theirs that are protected (nothing can be re-entered there)
+ */
+export async function findUnboundFormulas(): Promise<{ formulas: UnboundFormula[]; protectedSheets: string[] }> {
+  return Excel.run(async (context) => {
+    const sheets = context.workbook.worksheets;
+    sheets.load("items/name");
+    await context.sync();
+    const used = sheets.items.map((sheet) => {
+      sheet.protection.load("protected");
+      return { sheet, range: sheet.getUsedRangeOrNullObject().load("address,rowCount,columnCount") };
+    });
+    await context.sync();
+    const formulas: UnboundFormula[] = [];
+    const protectedSheets: string[] = [];
+    for (const { sheet, range } of used) {
+      if (range.isNullObject) continue;
+      const origin = topLeft(splitAddress(range.address).address);
+      const rowsPerChunk = Math.max(1, Math.floor(scanChunkCells / range.columnCount));
+      const before = formulas.length;
+      for (let r0 = 0; r0 < range.rowCount; r0 += rowsPerChunk) {
+        const rows = Math.min(rowsPerChunk, range.rowCount - r0);
+        const chunk = range.getCell(r0, 0).getResizedRange(rows - 1, range.columnCount - 1).load("formulas,values");
+        await context.sync();
+        const values = chunk.values;
+        chunk.formulas.forEach((row, i) =>
+          row.forEach((formula, j) => {
+            if (values[i][j] === "#NAME?" && callsZcFunction(formula)) {
+              formulas.push({ sheet: sheet.name, address: `${columnName(origin.col + j)}${origin.row + r0 + i}`, formula: String(formula) });
+            }
+          }),
+        );
+      }
+      if (sheet.protection.protected && formulas.length > before) protectedSheets.push(sheet.name);
+    }
+    return { formulas, protectedSheets };
+  });
+}
+
+/** Formulas written between two requests while re-entering. */
+const reenterBatch = 1_000;
+
+/**
+ * Enters each formula again (in the typed spelling, `ZC.NAME(`), which makes Excel bind it to the
+ * loaded add-in. Cells on protected sheets are left as they are.
+ * @returns the number re-entered and the number left alone, by sheet
+ */
+export async function reenterFormulas(formulas: UnboundFormula[]): Promise<{ reentered: Map<string, number>; leftAlone: Map<string, number> }> {
+  return Excel.run(async (context) => {
+    const names = [...new Set(formulas.map((f) => f.sheet))];
+    const protection = names.map((name) => context.workbook.worksheets.getItem(name).protection.load("protected"));
+    await context.sync();
+    const locked = new Set(names.filter((_, i) => protection[i].protected));
+    const reentered = new Map<string, number>();
+    const leftAlone = new Map<string, number>();
+    const tally = (map: Map<string, number>, sheet: string) => map.set(sheet, (map.get(sheet) ?? 0) + 1);
+    let pending = 0;
+    for (const f of formulas) {
+      if (locked.has(f.sheet)) {
+        tally(leftAlone, f.sheet);
+        continue;
+      }
+      context.workbook.worksheets.getItem(f.sheet).getRange(f.address).formulas = [[typedFormula(f.formula)]];
+      tally(reentered, f.sheet);
+      if (++pending === reenterBatch) {
+        await context.sync();
+        pending = 0;
+      }
+    }
+    await context.sync();
+    return { reentered, leftAlone };
+  });
 }
 
 /** Calls `handler` whenever the user selects other cells. */

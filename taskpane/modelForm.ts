@@ -48,6 +48,20 @@ export function formFromSpec(spec: string): FormValues {
   };
 }
 
+/**
+ * A field's text as a person would type it: each number to at most 6 significant digits
+ * ("0.048974681618696" → "0.0489747"), a list item by item, other text ("flat", "") as it is.
+ */
+export function shownText(exact: string): string {
+  return exact
+    .split(",")
+    .map((part) => {
+      const x = Number(part);
+      return part.trim() !== "" && Number.isFinite(x) ? String(Number(x.toPrecision(6))) : part;
+    })
+    .join(",");
+}
+
 /** Result of reading the form: the model, or messages for the fields that are wrong. */
 export interface FormResult {
   spec?: string;

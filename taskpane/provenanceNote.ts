@@ -18,3 +18,25 @@ export function provenanceNote(formula: string, models: string[], version: strin
     "Value computed under that cosmology; recompute with the add-in if the model changes.",
   ].join("\n");
 }
+
+/** What a provenance note records, read back from its text. */
+export interface Provenance {
+  /** The ZC formula before freezing, with its "=". */
+  formula: string;
+  /** The spec text of each model it used (none when it needed no cosmology). */
+  models: string[];
+}
+
+/**
+ * Reads a note written by `provenanceNote` (undefined for any other text, so a person's own notes
+ * are never taken for ours).
+ * @param text the note's (or comment's) content
+ */
+export function parseProvenanceNote(text: string): Provenance | undefined {
+  const lines = text.split(/\r?\n/);
+  if (!/^Frozen by zcell \S+ on /.test(lines[0] ?? "")) return undefined;
+  const formula = lines.find((l) => l.startsWith("Formula: ="))?.slice("Formula: ".length);
+  const model = lines.find((l) => l.startsWith("Model: "))?.slice("Model: ".length);
+  if (!formula || model === undefined) return undefined;
+  return { formula, models: model.startsWith("none (") ? [] : model.split(" | ") };
+}

@@ -2,6 +2,7 @@
  * What-if tables: a header row of models and one live broadcasting ZC formula (a column of
  * redshifts against the row of models), never values.
  */
+import { columnName } from "./cellAddress.js";
 
 /** Quantities of z the table offers: ZC function name → label with its default unit. */
 export const tableQuantities: Record<string, string> = {
@@ -20,18 +21,6 @@ export const tableQuantities: Record<string, string> = {
   CMB_TEMP: "CMB temperature (K)",
   RHO_CRIT: "critical density (kg/m3)",
 };
-
-/** Column letters of a 1-based column number. */
-export function columnName(n: number): string {
-  let s = "";
-  for (let k = n; k > 0; k = Math.floor((k - 1) / 26)) s = String.fromCharCode(65 + ((k - 1) % 26)) + s;
-  return s;
-}
-
-/** 1-based column number of column letters. */
-export function columnNumber(name: string): number {
-  return [...name.toUpperCase()].reduce((n, ch) => n * 26 + ch.charCodeAt(0) - 64, 0);
-}
 
 /** Redshifts start, start+step, … ≤ stop (at most 10,000). */
 export function redshiftSteps(start: number, stop: number, step: number): number[] {

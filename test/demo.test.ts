@@ -20,7 +20,7 @@ interface SheetCell { formula?: string; value?: string; type?: string }
 /** Sheet name → cell address → formula, cached value text and cell type, from the raw sheet XML. */
 const sheets = new Map<string, Map<string, SheetCell>>();
 
-const textOf = (e: XmlElement | undefined) => (e ? e.text + e.children.map((c) => textOf(c)).join("") : undefined);
+const textOf = (e: XmlElement | undefined): string | undefined => (e ? e.text + e.children.map((c) => textOf(c)).join("") : undefined);
 
 beforeAll(async () => {
   execFileSync(process.execPath, [`${root}node_modules/tsx/dist/cli.mjs`, "scripts/demo.ts"], { cwd: root, stdio: "ignore" });

@@ -8,15 +8,20 @@ import { fileURLToPath } from "node:url";
 import { beforeEach, describe, expect, test } from "vitest";
 import { readActiveModel } from "../functions/activeModel.js";
 import {
+  findUnboundFormulas,
   freezeCells,
+  readAnnotations,
+  reenterFormulas,
+  scanChunkCells,
+  thawCells,
   readActiveCell,
   readModelSetting,
   readReference,
   recalculateWorkbook,
-  splitAddress,
   writeBlock,
   writeModelSetting,
 } from "../taskpane/excelHost.js";
+import { splitAddress } from "../taskpane/cellAddress.js";
 import { planTableWithRedshifts } from "../taskpane/whatIfTable.js";
 
 const fakeSource = readFileSync(fileURLToPath(new URL("./browser/fakeOffice.js", import.meta.url)), "utf8");
@@ -28,6 +33,8 @@ type Fake = {
   notes: { address: string; text: string }[];
   comments: { address: string; text: string }[];
   selection: string;
+  runs: unknown[];
+  reads: number[];
 };
 const g = globalThis as unknown as { window: { __fakeInit?: unknown; __fake: Fake } };
 
@@ -104,14 +111,101 @@ describe("Excel interactions", () => {
   });
 
   test("freezing writes values and attaches notes (ExcelApi 1.18), or comments where notes are missing", async () => {
-    expect(await freezeCells("Sheet1", [{ address: "B2", value: 2919.6, note: "provenance" }])).toBe("note");
+    expect(await freezeCells("Sheet1", [{ address: "B2", value: 2919.6, note: "provenance" }])).toEqual({ carrier: "note", oneUndoStep: false });
     expect(fake.sheets.Sheet1.B2).toEqual({ value: 2919.6 });
     expect(fake.notes).toEqual([{ address: "'Sheet1'!B2", text: "provenance" }]);
     fake = install({ settings: {}, sheets: sheets(), excelApi: 1.17 });
-    expect(await freezeCells("Other sheet", [{ address: "C4", value: 13.8, note: "p" }])).toBe("comment");
+    expect(await freezeCells("Other sheet", [{ address: "C4", value: 13.8, note: "p" }])).toEqual({ carrier: "comment", oneUndoStep: false });
     expect(fake.comments).toEqual([{ address: "'Other sheet'!C4", text: "p" }]);
   });
 
+  // ExcelApi 1.20 brought Excel.run({ mergeUndoGroup: true }); an API that cannot join throws
+  // UndoNotSupported (learn.microsoft.com/office/dev/add-ins/excel/excel-add-ins-undo-capabilities)
+  test.each([
+    // ExcelApi  host refuses the group   runs asked for                                  one undo step
+    [1.18,       false,                   [null],                                         false],
+    [1.20,       false,                   [{ mergeUndoGroup: true }],                     true],
+    [1.20,       true,                    [{ mergeUndoGroup: true }, null],               false],
+  ])("freezing with ExcelApi %s (UndoNotSupported: %s) runs as %j", async (excelApi, undoNotSupported, runs, oneUndoStep) => {
+    fake = install({ settings: {}, sheets: sheets(), excelApi, undoNotSupported });
+    const result = await freezeCells("Sheet1", [{ address: "B2", value: 2919.6, note: "n" }]);
+    expect(fake.runs).toEqual(runs);
+    expect(result.oneUndoStep).toBe(oneUndoStep);
+    expect(fake.sheets.Sheet1.B2).toEqual({ value: 2919.6 });
+    expect(fake.notes.length).toBe(1);
+  });
+
+  test.each([
+    // ExcelApi  carrier
+    [1.18,       "note"],
+    [1.17,       "comment"],
+  ])("thawing (ExcelApi %s) reads the %s, writes the formula back and removes the annotation", async (excelApi, carrier) => {
+    fake = install({ settings: {}, sheets: sheets(), excelApi });
+    await freezeCells("Other sheet", [{ address: "C4", value: 13.8, note: "Frozen by zcell 0.1.0 on 2026-12-01.\nFormula: =zc.age()\nModel: WMAP9" }]);
+    expect(fake.sheets["Other sheet"].C4).toEqual({ value: 13.8 });
+    const found = await readAnnotations("Other sheet", ["C4", "C5"]);
+    expect([...found.keys()]).toEqual(["C4"]);
+    expect(found.get("C4")).toMatch(/^Frozen by zcell/);
+    await thawCells("Other sheet", [{ address: "C4", formula: "=zc.age()" }]);
+    expect(fake.sheets["Other sheet"].C4.formula).toBe("=zc.age()");
+    expect(carrier === "note" ? fake.notes : fake.comments).toEqual([]);
+  });
+});
+
+describe("formulas waiting for zcell (#NAME?)", () => {
+  const stuck = () => ({
+    Catalogue: {
+      A3: { value: 0.5 },
+      B3: { formula: "=_xldudf_ZC_DIST_LUM(A3)", value: "#NAME?" },
+      C3: { formula: "=ZC.LOOKBACK(A3)", value: "#NAME?" },
+      D3: { formula: "=ZC.AGE(A3)", value: 8.6 },
+      E3: { formula: "=NOSUCH(A3)", value: "#NAME?" },
+      F3: { formula: '="ZC.AGE(1)"', value: "ZC.AGE(1)" },
+    },
+    Locked: { B2: { formula: "=ZC.DIST_LUM(1)", value: "#NAME?" } },
+    Empty: {},
+  });
+
+  test("finds ZC formulas showing #NAME? in either spelling, and names protected sheets", async () => {
+    install({ settings: {}, sheets: stuck(), protectedSheets: ["Locked"] });
+    const scan = await findUnboundFormulas();
+    expect(scan.formulas).toEqual([
+      { sheet: "Catalogue", address: "B3", formula: "=_xldudf_ZC_DIST_LUM(A3)" },
+      { sheet: "Catalogue", address: "C3", formula: "=ZC.LOOKBACK(A3)" },
+      { sheet: "Locked", address: "B2", formula: "=ZC.DIST_LUM(1)" },
+    ]);
+    expect(scan.protectedSheets).toEqual(["Locked"]);
+  });
+
+  test("re-enters them in the typed spelling and leaves protected sheets unchanged", async () => {
+    const fake = install({ settings: {}, sheets: stuck(), protectedSheets: ["Locked"] });
+    const { reentered, leftAlone } = await reenterFormulas((await findUnboundFormulas()).formulas);
+    expect([...reentered]).toEqual([["Catalogue", 2]]);
+    expect([...leftAlone]).toEqual([["Locked", 1]]);
+    expect(fake.sheets.Catalogue.B3.formula).toBe("=ZC.DIST_LUM(A3)");
+    expect(fake.sheets.Catalogue.C3.formula).toBe("=ZC.LOOKBACK(A3)");
+    expect(fake.sheets.Locked.B2).toEqual({ formula: "=ZC.DIST_LUM(1)", value: "#NAME?" });
+    expect((await findUnboundFormulas()).formulas.map((f) => f.sheet)).toEqual(["Locked"]);
+  });
+
+  test("reads a large used range in chunks of at most scanChunkCells cells", async () => {
+    const big: Record<string, { formula?: string; value?: unknown }> = {};
+    for (let r = 1; r <= 40_000; r++) {
+      big[`A${r}`] = { value: r / 1000 };
+      big[`B${r}`] = r % 1000 === 0 ? { formula: `=_xldudf_ZC_DIST_LUM(A${r})`, value: "#NAME?" } : { formula: `=ZC.DIST_LUM(A${r})`, value: 1 };
+      big[`C${r}`] = { value: "x" };
+    }
+    const fake = install({ settings: {}, sheets: { Big: big } });
+    const scan = await findUnboundFormulas();
+    expect(scan.formulas.length).toBe(40);
+    expect(scan.formulas[39]).toEqual({ sheet: "Big", address: "B40000", formula: "=_xldudf_ZC_DIST_LUM(A40000)" });
+    expect(fake.reads.reduce((a: number, b: number) => a + b, 0)).toBe(120_000);
+    expect(Math.max(...fake.reads)).toBeLessThanOrEqual(scanChunkCells);
+    expect(fake.reads.length).toBe(Math.ceil(120_000 / scanChunkCells));
+  });
+});
+
+describe("addresses", () => {
   test("splits sheet-qualified addresses", () => {
     expect(splitAddress("'It''s'!A1:B2")).toEqual({ sheet: "It's", address: "A1:B2" });
     expect(splitAddress("B2")).toEqual({ address: "B2" });

@@ -3,7 +3,8 @@ import { describe, expect, test } from "vitest";
 import { derivedValues, formFromSpec, modelFromForm } from "../taskpane/modelForm.js";
 import { provenanceNote } from "../taskpane/provenanceNote.js";
 import { contrast } from "../taskpane/theme.js";
-import { columnName, columnNumber, planTableForColumn, redshiftSteps } from "../taskpane/whatIfTable.js";
+import { columnName, columnNumber } from "../taskpane/cellAddress.js";
+import { planTableForColumn, redshiftSteps } from "../taskpane/whatIfTable.js";
 
 describe("model form", () => {
   test("shows a preset and gives back its canonical spec; an edit is a change to the preset", () => {

@@ -11,6 +11,10 @@
     notes: [],
     comments: [],
     handlers: [],
+    // what the pane asked for: the options of each Excel.run, and the cell count of each formulas read
+    runs: [],
+    reads: [],
+    protectedSheets: init.protectedSheets || [],
     select(address) {
       this.selection = address;
       for (const h of this.handlers) h({ type: "documentSelectionChanged" });
@@ -52,14 +56,23 @@
       return out;
     };
     const local = key(area.r0, area.c0) + (area.r1 !== area.r0 || area.c1 !== area.c0 ? ":" + key(area.r1, area.c1) : "");
+    const writable = () => {
+      if (fake.protectedSheets.includes(sheetName)) throw Object.assign(new Error("The cell or chart you're trying to change is on a protected sheet."), { code: "AccessDenied" });
+    };
     return {
       isNullObject: false,
       address: (/[^A-Za-z0-9_]/.test(sheetName) ? "'" + sheetName + "'" : sheetName) + "!" + local,
       rowCount: area.r1 - area.r0 + 1,
       columnCount: area.c1 - area.c0 + 1,
-      load() { return this; },
+      load(props) {
+        if (typeof props === "string" && props.split(",").includes("formulas")) fake.reads.push(this.rowCount * this.columnCount);
+        return this;
+      },
+      getCell(r, c) { return makeRange(sheetName, { r0: area.r0 + r, c0: area.c0 + c, r1: area.r0 + r, c1: area.c0 + c }); },
+      getResizedRange(dr, dc) { return makeRange(sheetName, { r0: area.r0, c0: area.c0, r1: area.r1 + dr, c1: area.c1 + dc }); },
       get formulas() { return grid((x) => (x ? (x.formula !== undefined ? x.formula : x.value) : "")); },
       set formulas(m) {
+        writable();
         m.forEach((row, i) => row.forEach((v, j) => {
           const k = key(area.r0 + i, area.c0 + j);
           if (typeof v === "string" && v.startsWith("=")) cells[k] = { formula: v, value: 0 };
@@ -69,6 +82,7 @@
       },
       get values() { return grid((x) => (x ? x.value : "")); },
       set values(m) {
+        writable();
         m.forEach((row, i) => row.forEach((v, j) => (cells[key(area.r0 + i, area.c0 + j)] = { value: v })));
       },
       getSpillParentOrNullObject() { return { isNullObject: true, load() { return this; } }; },
@@ -82,12 +96,43 @@
       getUsedRangeOrNullObject() {
         const keys = Object.keys(fake.sheets[name] || {});
         if (!keys.length) return { isNullObject: true, load() { return this; } };
-        const ps = keys.map((k) => parse(k));
-        const area = { r0: Math.min(...ps.map((p) => p.r0)), c0: Math.min(...ps.map((p) => p.c0)), r1: Math.max(...ps.map((p) => p.r0)), c1: Math.max(...ps.map((p) => p.c0)) };
+        const area = { r0: Infinity, c0: Infinity, r1: 0, c1: 0 };
+        for (const k of keys) {
+          const p = parse(k);
+          area.r0 = Math.min(area.r0, p.r0); area.c0 = Math.min(area.c0, p.c0);
+          area.r1 = Math.max(area.r1, p.r0); area.c1 = Math.max(area.c1, p.c0);
+        }
         return makeRange(name, area);
       },
-      notes: { add(address, text) { fake.notes.push({ address, text }); } },
+      protection: { get protected() { return fake.protectedSheets.includes(name); }, load() { return this; } },
+      notes: {
+        add(address, text) { fake.notes.push({ address, text }); },
+        getItemOrNullObject(address) {
+          const note = fake.notes.find((n) => sameCell(n.address, address, name));
+          return {
+            isNullObject: !note,
+            content: note ? note.text : undefined,
+            load() { return this; },
+            delete() { if (note) fake.notes.splice(fake.notes.indexOf(note), 1); },
+          };
+        },
+      },
+      comments: {
+        load() { return this; },
+        get items() {
+          return fake.comments.filter((c) => (parse(c.address).sheet || name) === name).map((c) => ({
+            content: c.text,
+            getLocation() { return { address: c.address, load() { return this; } }; },
+            delete() { fake.comments.splice(fake.comments.indexOf(c), 1); },
+          }));
+        },
+      },
     };
+  }
+  // two addresses name the same cell (the second relative to `sheet` when it names none)
+  function sameCell(a, b, sheet) {
+    const p = parse(a), q = parse(b);
+    return (p.sheet || sheet) === (q.sheet || sheet) && p.r0 === q.r0 && p.c0 === q.c0;
   }
   const selectedSheet = () => parse(fake.selection).sheet || "Sheet1";
   function context() {
@@ -133,7 +178,15 @@
   };
   window.Excel = {
     CalculationType: { full: "Full", recalculate: "Recalculate" },
-    run: async (callback) => callback(context()),
+    // Excel.run(batch) or Excel.run(options, batch); a merged undo group fails where init.undoNotSupported says so
+    run: async (options, callback) => {
+      if (typeof options === "function") { callback = options; options = undefined; }
+      fake.runs.push(options || null);
+      if (options && options.mergeUndoGroup && init.undoNotSupported) {
+        throw Object.assign(new Error("This operation cannot be undone."), { code: "UndoNotSupported" });
+      }
+      return callback(context());
+    },
   };
   window.CustomFunctions = {
     associate() {},

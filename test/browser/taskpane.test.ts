@@ -17,6 +17,18 @@ const dist = testBuildDir;
 const shots = `${root}test-artifacts/screenshots/`;
 const chromiumPath = "/usr/bin/chromium";
 const fakeOffice = readFileSync(`${root}test/browser/fakeOffice.js`, "utf8");
+const axeSource = readFileSync(`${root}node_modules/axe-core/axe.min.js`, "utf8");
+
+/** axe-core's violations of the WCAG 2.0–2.2 A/AA rules and of its best practices, as "rule: targets". */
+async function axeViolations(page: Page): Promise<string[]> {
+  return page.evaluate(async () => {
+    const axe = (window as unknown as { axe: { run(ctx: Document, opts: object): Promise<{ passes: unknown[]; violations: { id: string; nodes: { target: string[] }[] }[] }> } }).axe;
+    const tags = ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22a", "wcag22aa", "best-practice"];
+    const result = await axe.run(document, { runOnly: { type: "tag", values: tags } });
+    if (result.passes.length < 10) throw new Error(`axe checked too little: ${result.passes.length} rules passed`);
+    return result.violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
+  });
+}
 
 function browserAvailable(): boolean {
   if (existsSync(chromiumPath)) return true;
@@ -71,7 +83,7 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
     await new Promise((r) => server?.close(r));
   });
 
-  async function openPane(theme: object, settings: Record<string, unknown>, officeAvailable = true): Promise<Page> {
+  async function openPane(theme: object, settings: Record<string, unknown>, officeAvailable = true, host: object = {}): Promise<Page> {
     const page = await browser.newPage({ viewport: { width: 320, height: 900 } });
     const errors: string[] = [];
     page.on("pageerror", (e) => errors.push(String(e)));
@@ -81,7 +93,7 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
     );
     await page.addInitScript((init) => {
       (window as unknown as { __fakeInit: unknown }).__fakeInit = init;
-    }, { theme, settings, sheets: structuredClone(workbook), selection: "Sheet1!B2" });
+    }, { theme, settings, sheets: structuredClone(workbook), selection: "Sheet1!B2", ...host });
     await page.goto(`${base}taskpane.html`);
     return page;
   }
@@ -94,6 +106,10 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await page.getByRole("tab", { name: "Cosmology" }).waitFor();
       expect(await page.locator("#model-badge").textContent()).toBe("Workbook model: WMAP9");
       expect(await page.locator("#f-H0").inputValue()).toBe("69.32");
+      await page.selectOption("#preset", "PLANCK2018");
+      // shown as a person types it (≤ 6 significant digits); the exact value stays behind it
+      expect(await page.locator("#f-Ob").inputValue()).toBe("0.0489747");
+      expect(await page.locator("#spec").inputValue()).toBe("PLANCK2018");
       await page.selectOption("#preset", "PLANCK2018");
       await page.fill("#f-H0", "-5");
       await expect.poll(() => page.locator("#e-H0").textContent()).toMatch(/H0 must be a positive number/);
@@ -156,24 +172,92 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await page.close();
     });
 
-    test(`freeze (${themeName}): replaces ZC formulas by values with provenance notes`, async () => {
+    test(`freeze and thaw (${themeName}): values with provenance notes, then the formulas back`, async () => {
       const page = await openPane(theme, { "zcell.activeModel": "WMAP9" });
       await page.getByRole("tab", { name: "Freeze" }).click();
+      // ExcelApi 1.18 here: no undo group, so the pane must not promise Ctrl+Z
+      expect(await page.locator("#undo-hint").textContent()).toMatch(/cannot record an add-in's changes as one undo step.*do not count on Ctrl\+Z/);
       await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!A2:C2"));
       await page.locator("#freeze").click();
-      await expect.poll(() => page.locator("#freeze-confirm-text").textContent()).toMatch(/Replace 2 ZC formulas by their values.*Undo/);
+      await expect.poll(() => page.locator("#freeze-confirm-text").textContent()).toMatch(/Replace 2 ZC formulas by their values.*Thaw brings them back later/);
+      expect(await page.locator("#freeze-confirm-text").textContent()).not.toMatch(/Undo/);
       await page.screenshot({ path: `${shots}freeze-${themeName}.png`, fullPage: true });
       await page.locator("#freeze-go").click();
-      await expect.poll(() => page.locator("#freeze-status").textContent()).toMatch(/Froze 2 cells; formula, model and version are in each cell's note/);
+      await expect.poll(() => page.locator("#freeze-status").textContent()).toMatch(/Froze 2 cells; formula, model and version are in each cell's note. Thaw brings the formulas back/);
       const cells = (await fake(page, "sheets.Sheet1")) as Record<string, { formula?: string; value?: unknown }>;
       expect(cells.B2).toEqual({ value: 2919.6 });
       expect(cells.C2).toEqual({ value: -20.3 });
       const notes = (await fake(page, "notes")) as { address: string; text: string }[];
       expect(notes.map((n) => n.address)).toEqual(["'Sheet1'!B2", "'Sheet1'!C2"]);
       expect(notes[0].text).toMatch(/^Frozen by zcell \d+\.\d+\.\d+ on \d{4}-\d\d-\d\d\.\nFormula: =ZC.DIST_LUM\(A2\)\nModel: WMAP9/);
+      await page.locator("#thaw").click();
+      await expect.poll(() => page.locator("#thaw-status").textContent()).toMatch(/Thawed 2 cells: the ZC formulas are back and their notes removed. They compute under the workbook's model \(WMAP9\)/);
+      await page.screenshot({ path: `${shots}thaw-${themeName}.png`, fullPage: true });
+      const after = (await fake(page, "sheets.Sheet1")) as Record<string, { formula?: string }>;
+      expect([after.B2.formula, after.C2.formula]).toEqual(["=ZC.DIST_LUM(A2)", "=ZC.MAG_ABS(22, A2, ZC.KCORRECTION(A2, -0.5))"]);
+      expect(await fake(page, "notes")).toEqual([]);
+      await page.locator("#thaw").click();
+      await expect.poll(() => page.locator("#thaw-status").textContent()).toMatch(/The selection has no frozen cells/);
+      expect((page as unknown as { errors: string[] }).errors).toEqual([]);
+      await page.close();
+    });
+
+    test(`freeze (${themeName}) where ExcelApi 1.20 merges the undo group: one undo step, said so`, async () => {
+      const page = await openPane(theme, {}, true, { excelApi: 1.2 });
+      await page.getByRole("tab", { name: "Freeze" }).click();
+      expect(await page.locator("#undo-hint").textContent()).toMatch(/Excel's Undo \(Ctrl\+Z \/ ⌘Z\) reverts a freeze in one step here/);
+      await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!B2"));
+      await page.locator("#freeze").click();
+      await page.locator("#freeze-go").click();
+      await expect.poll(() => page.locator("#freeze-status").textContent()).toMatch(/Froze 1 cell;.*Excel's Undo reverts it in one step/);
+      expect(await fake(page, "runs")).toContainEqual({ mergeUndoGroup: true });
+      await page.close();
+    });
+
+    test(`formulas waiting for zcell (${themeName}): found when the pane opens, entered again on request`, async () => {
+      const sheets = {
+        Catalogue: {
+          A3: { value: 0.5 },
+          B3: { formula: "=_xldudf_ZC_DIST_LUM(A3)", value: "#NAME?" },
+          C3: { formula: "=ZC.LOOKBACK(A3)", value: "#NAME?" },
+        },
+        Locked: { B2: { formula: "=ZC.AGE()", value: "#NAME?" } },
+      };
+      const page = await openPane(theme, {}, true, { sheets, protectedSheets: ["Locked"], selection: "Catalogue!A3" });
+      await expect.poll(() => page.locator("#repair").isVisible()).toBe(true);
+      expect(await page.locator("#repair-text").textContent()).toMatch(/^3 ZC formulas show #NAME\? on Catalogue \(2\), Locked \(1\).*1 formula on protected sheet Locked cannot be entered again/);
+      expect(await page.locator("#repair-go").textContent()).toBe("Enter 2 formulas again");
+      await page.screenshot({ path: `${shots}repair-${themeName}.png`, fullPage: true });
+      await page.locator("#repair-go").click();
+      await expect.poll(() => page.locator("#repair-status").textContent()).toMatch(/^Entered 2 formulas again on Catalogue \(2\). Left alone on protected sheets: Locked \(1\). None of them shows #NAME\? now./);
+      const after = (await fake(page, "sheets")) as Record<string, Record<string, { formula?: string; value?: unknown }>>;
+      expect(after.Catalogue.B3.formula).toBe("=ZC.DIST_LUM(A3)");
+      expect(after.Locked.B2).toEqual({ formula: "=ZC.AGE()", value: "#NAME?" });
+      await page.screenshot({ path: `${shots}repair-done-${themeName}.png`, fullPage: true });
+      await page.close();
+    });
+
+    test(`axe-core (${themeName}): no WCAG 2.2 A/AA or best-practice violation on any panel`, async () => {
+      const sheets = { ...structuredClone(workbook), Other: { A1: { formula: "=ZC.AGE()", value: "#NAME?" } } };
+      const page = await openPane(theme, {}, true, { sheets });
+      await expect.poll(() => page.locator("#repair").isVisible()).toBe(true);
+      await page.evaluate(axeSource);
+      for (const tab of ["Cosmology", "This cell", "Tables", "Freeze"]) {
+        await page.getByRole("tab", { name: tab }).click();
+        if (tab === "This cell") await expect.poll(() => page.locator("#cell-explanation").textContent()).toMatch(/D_L/);
+        expect(await axeViolations(page), tab).toEqual([]);
+      }
       await page.close();
     });
   }
+
+  test("axe-core: the outside-Office page has no WCAG 2.2 A/AA or best-practice violation", async () => {
+    const page = await openPane(light, {}, false);
+    await expect.poll(() => page.locator("#outside-office").isVisible()).toBe(true);
+    await page.evaluate(axeSource);
+    expect(await axeViolations(page)).toEqual([]);
+    await page.close();
+  });
 
   test("every control has a role and an accessible name in Chromium's accessibility tree", async () => {
     const page = await openPane(light, {});

@@ -1,0 +1,49 @@
+/**
+ * The "This cell" panel: the active cell's ZC formula explained call by call — equation, arguments
+ * with units, model, conventions, method, and the result or the reason for an error.
+ */
+import { readActiveModel } from "../functions/activeModel.js";
+import { callsZcFunction } from "../functions/storedFormula.js";
+import { splitAddress } from "./cellAddress.js";
+import { $, el } from "./dom.js";
+import { readActiveCell, readReference } from "./excelHost.js";
+import { explainFormula, type CallExplanation } from "./explainCall.js";
+
+/** Explains the active cell when the panel is showing (called on selection changes and tab switches). */
+export async function explainActiveCell(): Promise<void> {
+  if ($("panel-cell").hidden) return;
+  const out = $("cell-explanation");
+  try {
+    const cell = await readActiveCell();
+    const formula = cell.formulas[0]?.[0];
+    const sheet = splitAddress(cell.address).sheet ?? "";
+    $("cell-address").textContent = cell.spillAnchor
+      ? `${cell.address}: part of a spilled range; explaining its anchor ${cell.spillAnchor}.`
+      : cell.address;
+    if (!callsZcFunction(formula)) {
+      out.replaceChildren(el("p", "This cell has no ZC formula."));
+      return;
+    }
+    const read = async (ref: string) => (await readReference(ref, sheet)).values;
+    const calls = await explainFormula(String(formula), read, readActiveModel(), cell.values[0]?.[0]);
+    out.replaceChildren(el("p", "Formula:"), el("code", String(formula)), ...calls.map(renderCall));
+  } catch (e) {
+    out.replaceChildren(el("p", `Could not read the cell: ${(e as Error).message}`, "error"));
+  }
+}
+
+function renderCall(c: CallExplanation): HTMLElement {
+  const box = el("article", undefined, "call");
+  box.append(el("h3", `${c.name}: ${c.summary}`));
+  const dl = document.createElement("dl");
+  const add = (term: string, value: string, cls?: string) => dl.append(el("dt", term), el("dd", value, cls));
+  add("Computes", c.equation);
+  for (const a of c.args) add(a.name, `${a.text} → ${a.value}${a.unit ? ` [${a.unit}]` : ""}`);
+  if (c.model) add("Model", `${c.model.spec} (${c.model.source}): ${c.model.description}`);
+  if (c.conventions.length) add("Conventions", c.conventions.join(" "));
+  add("Method", c.method);
+  add(c.isError ? "Why the error" : "Result", c.result, c.isError ? "result-error" : undefined);
+  box.append(dl);
+  return box;
+}
+
