@@ -1,85 +1,101 @@
-// npm start: build, serve dist/ at https://localhost:3000 with a development certificate, then
-// sideload into desktop Excel where one exists, or print the steps to load it in Excel on the web.
+// npm start: build (production, with source maps beside it), serve it at https://localhost:3000
+// with a development certificate, and print how to load it into Excel. A second npm start while
+// our server runs says so; a port held by another program is an error, never a false success.
 import { execFileSync, spawn, spawnSync } from "node:child_process";
-import { existsSync, mkdirSync, openSync, writeFileSync } from "node:fs";
-import { get } from "node:https";
+import { existsSync, mkdirSync, openSync, readFileSync, writeFileSync } from "node:fs";
 import { platform } from "node:os";
-import { fileURLToPath } from "node:url";
+import { join } from "node:path";
+import { nssTrustSteps, selfSignedLeaf } from "./devCertificate.mjs";
+import { isZcellServer, pidFile, portTaken, recordedPid, serverConfig, servedPid } from "./serverState.mjs";
 
-const root = fileURLToPath(new URL("..", import.meta.url));
-const certs = `${root}.certs/`;
-const port = 3000;
-mkdirSync(certs, { recursive: true });
+const { root, port, stateDir, dist } = serverConfig;
+const url = `https://localhost:${port}/`;
+mkdirSync(stateDir, { recursive: true });
 
-console.log("building (development) …");
-execFileSync(process.execPath, [`${root}node_modules/webpack/bin/webpack.js`, "--mode", "development"], { cwd: root, stdio: ["ignore", "ignore", "inherit"] });
+const running = recordedPid();
+if (running !== undefined && isZcellServer(running)) {
+  console.log(`zcell is already running at ${url} (pid ${running}); npm stop ends it.`);
+  process.exit(0);
+}
+if (await portTaken(port)) {
+  const other = await servedPid(port);
+  console.error(
+    other !== undefined
+      ? `port ${port} is held by a zcell server (pid ${other}) that this folder did not start; end it, or set ZCELL_PORT.`
+      : `port ${port} is taken by another program (not a zcell server); free it, or set ZCELL_PORT to another port.`,
+  );
+  process.exit(1);
+}
+
+if (process.env.ZCELL_NO_BUILD !== "1") {
+  console.log("building (production, with source maps) …");
+  execFileSync(process.execPath, [`${root}node_modules/webpack/bin/webpack.js`, "--mode", "production", "--devtool", "source-map"], {
+    cwd: root,
+    stdio: ["ignore", "ignore", "inherit"],
+  });
+}
 
 const has = (cmd) => spawnSync("sh", ["-c", `command -v ${cmd}`], { stdio: "ignore" }).status === 0;
 
-/** The Office dev-certs tooling where it can install its CA; otherwise a self-signed certificate of our own. */
+/** The Office dev-certs tooling where it can install its CA; otherwise a self-signed leaf of our own. */
 async function certificate() {
-  const canInstallCa = platform() !== "linux" || has("sudo");
-  if (canInstallCa) {
+  const tryDevCerts = process.env.ZCELL_CERT !== "self" && (platform() !== "linux" || has("sudo"));
+  if (tryDevCerts) {
     try {
       const devCerts = await import("office-addin-dev-certs");
       await devCerts.ensureCertificatesAreInstalled();
       const options = await devCerts.getHttpsServerOptions();
-      writeFileSync(`${certs}dev.key`, options.key);
-      writeFileSync(`${certs}dev.crt`, options.cert);
-      return { key: `${certs}dev.key`, cert: `${certs}dev.crt`, trusted: true };
+      writeFileSync(join(stateDir, "dev.key"), options.key, { mode: 0o600 });
+      writeFileSync(join(stateDir, "dev.crt"), options.cert);
+      const { caCertificatePath } = await import("office-addin-dev-certs/lib/defaults.js");
+      return { key: join(stateDir, "dev.key"), cert: join(stateDir, "dev.crt"), ca: caCertificatePath };
     } catch (e) {
       console.log(`Office dev-certs could not install its CA (${e.message ?? e}); using a self-signed certificate.`);
     }
   }
-  const key = `${certs}localhost.key`;
-  const cert = `${certs}localhost.crt`;
-  if (!existsSync(key) || !existsSync(cert)) {
-    const selfsigned = (await import("selfsigned")).default;
-    const pems = selfsigned.generate([{ name: "commonName", value: "localhost" }], {
-      keySize: 2048,
-      days: 365,
-      algorithm: "sha256",
-      extensions: [
-        { name: "basicConstraints", cA: true },
-        { name: "subjectAltName", altNames: [{ type: 2, value: "localhost" }, { type: 7, ip: "127.0.0.1" }] },
-      ],
-    });
-    writeFileSync(key, pems.private);
-    writeFileSync(cert, pems.cert);
-  }
-  return { key, cert, trusted: false };
+  return selfSignedLeaf(stateDir);
 }
 
-const { key, cert, trusted } = await certificate();
-const log = openSync(`${certs}server.log`, "a");
-const server = spawn(process.execPath, [`${root}scripts/server.mjs`, key, cert, String(port)], { detached: true, stdio: ["ignore", log, log] });
+const { key, cert, ca } = await certificate();
+const log = openSync(join(stateDir, "server.log"), "a");
+const server = spawn(process.execPath, [`${root}scripts/server.mjs`, key, cert, String(port), dist], { detached: true, stdio: ["ignore", log, log] });
+let exited = false;
+server.on("exit", () => (exited = true));
+
+// ready when the server on the port reports the pid we started; failed when our process ends first
+for (let tries = 0; ; tries++) {
+  if ((await servedPid(port)) === server.pid) break;
+  if (exited || tries > 100) {
+    if (!exited) server.kill();
+    const tail = existsSync(join(stateDir, "server.log")) ? readFileSync(join(stateDir, "server.log"), "utf8").trim().split("\n").slice(-3).join("\n") : "";
+    console.error(`the zcell server did not start at ${url}${tail ? `:\n${tail}` : ""}`);
+    process.exit(1);
+  }
+  await new Promise((r) => setTimeout(r, 100));
+}
 server.unref();
-writeFileSync(`${certs}server.pid`, String(server.pid));
+writeFileSync(pidFile(), String(server.pid));
 
-await new Promise((resolve, reject) => {
-  let tries = 0;
-  const probe = () =>
-    get(`https://localhost:${port}/manifest.xml`, { rejectUnauthorized: false }, (res) => {
-      res.resume();
-      resolve();
-    }).on("error", () => (++tries > 50 ? reject(new Error("server did not start; see .certs/server.log")) : setTimeout(probe, 100)));
-  probe();
-});
-
-console.log(`\nzcell is served at https://localhost:${port}/ (npm stop ends it).`);
-if (!trusted) {
+console.log(`\nzcell is served at ${url} (pid ${server.pid}; npm stop ends it).`);
+if (ca) {
+  if (platform() === "linux") {
+    console.log(`\nOffice's dev-certs tooling put its CA (${ca}) into the system store only. For the browser:\n${nssTrustSteps(ca, true)}`);
+  }
+} else {
   console.log(`
-The certificate is self-signed (${cert}). Trust it once, as you prefer:
-  - Debian/Ubuntu system store:  cp ${cert} /usr/local/share/ca-certificates/zcell-localhost.crt && update-ca-certificates
-  - Chrome/Edge on Linux:        certutil -d sql:$HOME/.pki/nssdb -A -t "C,," -n zcell-localhost -i ${cert}
-  - or open https://localhost:${port}/manifest.xml in the browser you use for Excel and accept the warning.`);
+The certificate is self-signed (${cert}). Trust it once:
+${nssTrustSteps(cert, false)}
+  Other programs on Debian/Ubuntu (system store):
+    sudo cp "${cert}" /usr/local/share/ca-certificates/zcell-localhost.crt && sudo update-ca-certificates
+  Or open ${url}manifest.xml in the browser you use for Excel and accept the warning.`);
 }
 if (platform() === "win32" || platform() === "darwin") {
   console.log(`
-Desktop Excel: Insert → Add-ins → My Add-ins → Upload My Add-in → ${root}dist/manifest.xml
+Desktop Excel: Insert → Add-ins → My Add-ins → Upload My Add-in → ${join(dist, "manifest.xml")}
 (on Windows you can also share the dist folder as a trusted add-in catalogue).`);
 }
 console.log(`
-Excel on the web: open a workbook at office.com → Home → Add-ins → More Add-ins → Upload My Add-in,
-and upload ${root}dist/manifest.xml. Then type =ZC.DIST_LUM(1) in a cell.
-Results use the workbook's cosmology (PLANCK2018 until you choose another in the zcell pane).`);
+Excel on the web (on this machine: the server listens on 127.0.0.1 only): open a workbook at
+office.com → Home → Add-ins → More Add-ins → Upload My Add-in, and upload ${join(dist, "manifest.xml")}.
+Then type =ZC.DIST_LUM(1) in a cell. Results use the workbook's cosmology (PLANCK2018 until you
+choose another in the zcell pane).`);

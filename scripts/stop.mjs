@@ -1,17 +1,15 @@
-// npm stop: ends the server that npm start left running.
-import { existsSync, readFileSync, rmSync } from "node:fs";
-import { fileURLToPath } from "node:url";
+// npm stop: ends the zcell server that npm start left running, and nothing else.
+import { rmSync } from "node:fs";
+import { isZcellServer, pidFile, recordedPid } from "./serverState.mjs";
 
-const pidFile = fileURLToPath(new URL("../.certs/server.pid", import.meta.url));
-if (!existsSync(pidFile)) {
-  console.log("no zcell server is running (no .certs/server.pid)");
+const pid = recordedPid();
+if (pid === undefined) {
+  console.log("no zcell server is running (npm start records none)");
+} else if (!isZcellServer(pid)) {
+  console.log(`the zcell server (pid ${pid}) had already stopped; pid ${pid} is not a zcell server now, so it is left alone`);
+  rmSync(pidFile(), { force: true });
 } else {
-  const pid = Number(readFileSync(pidFile, "utf8"));
-  try {
-    process.kill(pid);
-    console.log(`stopped the zcell server (pid ${pid})`);
-  } catch {
-    console.log(`the zcell server (pid ${pid}) had already stopped`);
-  }
-  rmSync(pidFile);
+  process.kill(pid);
+  console.log(`stopped the zcell server (pid ${pid})`);
+  rmSync(pidFile(), { force: true });
 }
