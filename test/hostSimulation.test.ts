@@ -15,7 +15,7 @@ const metadata = JSON.parse(readFileSync(`${dist}functions.json`, "utf8")) as {
   functions: { id: string; name: string; parameters: { name: string; optional?: boolean }[] }[];
 };
 
-describe("dist/functions.js in a bare host", () => {
+describe("the built functions.js in a bare host", () => {
   let fns: Map<string, Registered>;
   beforeAll(() => {
     fns = loadBundle({ "zcell.activeModel": "WMAP9" }, 20); // Office reads the settings a little later

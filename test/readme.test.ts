@@ -1,7 +1,16 @@
-/** The README's function reference is generated from the code: it fails here when they drift apart. */
+/**
+ * The README against the files it describes: the generated function reference, and the claims a
+ * newcomer relies on (Node version, commands, packages CI installs, where builds and the server go).
+ */
 import { readFileSync } from "node:fs";
+import { fileURLToPath } from "node:url";
 import { describe, expect, test } from "vitest";
 import { functionReference, readmePath, withReference } from "../scripts/functionReference.js";
+import { testBuildDir } from "./testBuild.js";
+
+const root = fileURLToPath(new URL("..", import.meta.url));
+const readme = () => readFileSync(readmePath, "utf8");
+const file = (path: string) => readFileSync(`${root}${path}`, "utf8");
 
 describe("README", () => {
   test("its function reference matches functions/functions.ts (run npm run docs after changing them)", async () => {
@@ -11,5 +20,35 @@ describe("README", () => {
 
   test("states the caution that results depend on the assumed cosmology", () => {
     expect(readFileSync(readmePath, "utf8")).toMatch(/Every number zcell gives depends on the assumed cosmology/);
+  });
+
+  test("names the Node version package.json requires, and the engines of the build tools allow it", () => {
+    const pkg = JSON.parse(file("package.json")) as { engines: { node: string } };
+    expect(pkg.engines.node).toBe(">=20.19");
+    expect(readme()).toContain("**Node.js 20.19 or newer**");
+    const lock = JSON.parse(file("package-lock.json")) as { packages: Record<string, { engines?: { node?: string } }> };
+    expect(lock.packages["node_modules/vite"].engines?.node).toMatch(/\^20\.19\.0/);
+  });
+
+  test("every npm command it names is a script of package.json", () => {
+    const scripts = Object.keys((JSON.parse(file("package.json")) as { scripts: Record<string, string> }).scripts);
+    const named = new Set([...readme().matchAll(/npm (?:run )?([a-z:]+)/g)].map((m) => m[1]).filter((n) => !["install", "warns", "ci"].includes(n)));
+    expect(named.size).toBeGreaterThan(5);
+    for (const name of named) expect(scripts, name).toContain(name);
+  });
+
+  test("the Debian packages it says CI installs are the ones .ci/run installs", () => {
+    const installed = /apt-get install -y -qq ([^>]+)>/.exec(file(".ci/run"))![1].trim().split(/\s+/);
+    const [, said] = /`apt-get install ([^`]+)`/.exec(readme().replaceAll("\n", " "))!;
+    expect(said.split(/\s+/).sort()).toEqual([...installed].sort());
+  });
+
+  test("where builds, tests and the server go is what the scripts do", () => {
+    expect(readme()).toContain("it builds into\n`test-artifacts/build/`");
+    expect(testBuildDir.endsWith("test-artifacts/build/")).toBe(true);
+    expect(file("scripts/server.mjs")).toMatch(/\.listen\(Number\(portText\), "127\.0\.0\.1"/);
+    expect(readme()).toContain("The server listens on 127.0.0.1 only");
+    expect(file("scripts/serverState.mjs")).toContain("process.env.ZCELL_PORT");
+    expect(file("scripts/start.mjs")).toContain('"--mode", "production", "--devtool", "source-map"');
   });
 });
