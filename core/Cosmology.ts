@@ -27,7 +27,7 @@ import { checkRedshift } from "./redshift.js";
 import { NoSolutionError } from "./NoSolutionError.js";
 
 /** Density components of `densityParameter`: matter (massive ν included), dark energy, curvature, radiation (photons + massless ν), photons, all neutrinos. */
-export type DensityComponent = "m" | "de" | "k" | "r" | "g" | "nu";
+export type DensityComponent = "matter" | "darkenergy" | "curvature" | "radiation" | "photons" | "neutrinos";
 
 /** Quantities that `redshiftAt` can invert, in the units of the matching method. */
 export type InvertibleQuantity =
@@ -65,6 +65,10 @@ function requireFinite(key: string, value: unknown, unit: string, test: (v: numb
 /** Throws RangeError naming the first parameter outside its domain. */
 function checkParameters(p: ModelParameters): void {
   requireFinite("H0", p.H0, " km/s/Mpc", (v) => v > 0, "a positive number");
+  if (p.H0 < 10 || p.H0 > 1000) {
+    const hint = p.H0 < 10 ? ` (H0 is in km/s/Mpc: h = ${p.H0} is H0=${Number((100 * p.H0).toPrecision(6))})` : "";
+    throw new RangeError(`H0 = ${p.H0} km/s/Mpc is outside 10 … 1000 km/s/Mpc${hint}`);
+  }
   requireFinite("Om", p.Om, "", (v) => v >= 0, "≥ 0");
   if (p.OL !== undefined && p.Ok !== undefined) throw new RangeError("give OL or Ok, not both");
   if (p.OL !== undefined) requireFinite("OL", p.OL, "", () => true, "a finite number");
@@ -79,6 +83,32 @@ function checkParameters(p: ModelParameters): void {
   if (p.Tcmb === 0 && p.mnu.some((m) => m > 0)) {
     throw new RangeError("mnu > 0 needs Tcmb > 0: the neutrino density is set by the CMB temperature");
   }
+}
+
+/** How an inverse's error message names the value asked for and quotes the model's limits. */
+export interface InverseWording {
+  /** The value asked for, e.g. "look-back time 20 Gyr". */
+  asked: () => string;
+  /** A limit of the model, given in the quantity's own unit (Mpc, mag, Gyr, Mpc³), as text. */
+  limit: (value: number) => string;
+}
+
+const quantityWords: Record<InvertibleQuantity, [words: string, unit: string]> = {
+  comovingDistance: ["comoving distance", "Mpc"],
+  transverseComovingDistance: ["transverse comoving distance", "Mpc"],
+  luminosityDistance: ["luminosity distance", "Mpc"],
+  distanceModulus: ["distance modulus", "mag"],
+  angularDiameterDistance: ["angular-diameter distance", "Mpc"],
+  lightTravelDistance: ["light-travel distance", "Mpc"],
+  lookbackTime: ["look-back time", "Gyr"],
+  age: ["age", "Gyr"],
+  comovingVolume: ["comoving volume", "Mpc3"],
+};
+
+function defaultWording(quantity: InvertibleQuantity, value: number): InverseWording {
+  const [words, unit] = quantityWords[quantity] ?? [String(quantity), ""];
+  const text = (v: number) => `${Number(v.toPrecision(6))} ${unit}`;
+  return { asked: () => `${words} ${text(value)}`, limit: text };
 }
 
 function formatRedshift(z: number): string {
@@ -331,16 +361,16 @@ export class Cosmology {
 
   /**
    * Builds a model from spec text (see `parseModelSpec`).
-   * @param spec e.g. "PLANCK2018", "PLANCK2018; H0=73" or "H0=70; Om=0.3; OL=0.7"
+   * @param spec e.g. "P18-BAO", "P18-BAO; H0=73" or "H0=70; Om=0.3; OL=0.7"
    * @returns the compiled model
    * @throws TypeError for malformed text, RangeError for unphysical parameters
-   * @example Cosmology.fromSpec("PLANCK2018").ageTodayGyr // 13.7866
+   * @example Cosmology.fromSpec("P18-BAO").ageTodayGyr // 13.7866
    */
   static fromSpec(spec: string): Cosmology {
     return new Cosmology(parseModelSpec(spec));
   }
 
-  /** Canonical spec text of this model (see `formatModelSpec`). @example "PLANCK2018; H0=73" */
+  /** Canonical spec text of this model (see `formatModelSpec`). @example "P18-BAO; H0=73" */
   get spec(): string {
     return formatModelSpec(this.parameters);
   }
@@ -435,8 +465,8 @@ export class Cosmology {
     throw new RangeError(`no big bang: H²(z) ≤ 0 ${where} (the model bounces); check Om, OL/Ok, w0, wa`);
   }
 
-  /** Dimensionless expansion rate E(z) = H(z)/H0. @param z redshift ≥ 0 @example new Cosmology(EdS).efunc(3) // 8 */
-  efunc(z: number): number {
+  /** Dimensionless expansion rate E(z) = H(z)/H0. @param z redshift ≥ 0 @example new Cosmology(EdS).expansionRate(3) // 8 */
+  expansionRate(z: number): number {
     checkRedshift(z);
     return Math.sqrt(this.e2(1 + z, Math.log1p(z)));
   }
@@ -444,19 +474,20 @@ export class Cosmology {
   /**
    * Hubble parameter H(z) = H0 E(z) [km s⁻¹ Mpc⁻¹] (Hogg 1999 eq. 14).
    * @param z redshift ≥ 0
-   * @returns H(z) in km/s/Mpc; e.g. PLANCK2018 at z = 0: 67.66
+   * @returns H(z) in km/s/Mpc; e.g. P18-BAO at z = 0: 67.66
    */
   hubbleParameterKmSMpc(z: number): number {
-    return this.H0 * this.efunc(z);
+    return this.H0 * this.expansionRate(z);
   }
 
   /**
-   * Density parameter Ω_x(z) = ρ_x(z)/ρ_crit(z) of one component. "m" counts massive neutrinos with
-   * matter at every z (the Om convention) and "r" is photons plus massless species, so
-   * m + de + k + r = 1; "nu" is all neutrinos (massless and massive), "g" photons.
-   * @param component "m", "de", "k", "r", "g" or "nu"
+   * Density parameter Ω_x(z) = ρ_x(z)/ρ_crit(z) of one component. "matter" counts massive neutrinos
+   * with matter at every z (the Om convention) and "radiation" is photons plus massless species, so
+   * matter + darkenergy + curvature + radiation = 1; "neutrinos" is all neutrinos (massless and
+   * massive), "photons" the CMB alone.
+   * @param component "matter", "darkenergy", "curvature", "radiation", "photons" or "neutrinos"
    * @param z redshift ≥ 0
-   * @returns dimensionless density parameter; e.g. "m" at z = 0 equals Om
+   * @returns dimensionless density parameter; e.g. "matter" at z = 0 equals Om
    */
   densityParameter(component: DensityComponent, z: number): number {
     checkRedshift(z);
@@ -468,31 +499,31 @@ export class Cosmology {
     for (const y0 of this.massiveY0) massive += this.neutrinoSpeciesDensity * zp4 * fermiDiracDensityFactor(y0 / zp);
     let density: number;
     switch (component) {
-      case "m":
+      case "matter":
         density = this.coldMatter * zp ** 3 + massive;
         break;
-      case "de":
+      case "darkenergy":
         density = this.OL * this.darkEnergyFactor(zp, lnZp);
         break;
-      case "k":
+      case "curvature":
         density = this.Ok * zp * zp;
         break;
-      case "r":
+      case "radiation":
         density = this.Or * zp4;
         break;
-      case "g":
+      case "photons":
         density = this.Ogamma * zp4;
         break;
-      case "nu":
+      case "neutrinos":
         density = this.masslessNeutrinos * zp4 + massive;
         break;
       default:
-        throw new TypeError(`unknown component "${String(component)}": use m, de, k, r, g or nu`);
+        throw new TypeError(`unknown component "${String(component)}": use matter, darkenergy, curvature, radiation, photons or neutrinos`);
     }
     return density / e2;
   }
 
-  /** CMB temperature at z, T(z) = Tcmb (1+z) [K]. @param z redshift ≥ 0 @returns K; PLANCK2018 at z = 1: 5.451 */
+  /** CMB temperature at z, T(z) = Tcmb (1+z) [K]. @param z redshift ≥ 0 @returns K; P18-BAO at z = 1: 5.451 */
   cmbTemperatureK(z: number): number {
     checkRedshift(z);
     return this.Tcmb * (1 + z);
@@ -638,12 +669,13 @@ export class Cosmology {
   }
 
   /**
-   * Distance modulus μ = 5 log10(D_L / 10 pc) (Hogg 1999 eq. 25).
+   * Distance modulus μ = 5 log10(|D_L| / 10 pc) (Hogg 1999 eq. 25). Past the antipode of a closed
+   * model D_L < 0 (the image is inverted) while the flux still falls as 1/(4π D_L²), so |D_L| is used.
    * @param z redshift > 0 (z = 0 gives −Infinity)
    * @returns mag; e.g. D_L = 10 Mpc gives 30
    */
   distanceModulusMag(z: number): number {
-    return 5 * Math.log10(this.luminosityDistanceMpc(z)) + 25;
+    return 5 * Math.log10(Math.abs(this.luminosityDistanceMpc(z))) + 25;
   }
 
   /**
@@ -658,7 +690,7 @@ export class Cosmology {
   /**
    * Age of the universe at z: t = t_H ∫₀^{1/(1+z)} da/(a E(a)), integrated in a (not to z = ∞).
    * @param z redshift ≥ 0
-   * @returns Gyr (Infinity if the past is infinitely long, e.g. de Sitter); e.g. PLANCK2018 at z = 0: 13.787
+   * @returns Gyr (Infinity if the past is infinitely long, e.g. de Sitter); e.g. P18-BAO at z = 0: 13.787
    */
   ageGyr(z: number): number {
     return this.hubbleTimeGyr * this.ageAtU(this.u(z));
@@ -760,12 +792,12 @@ export class Cosmology {
   }
 
   /** χ of a transverse comoving distance x (units of D_H) on the lower branch; NoSolutionError past the maximum. */
-  private chiOfTransverse(x: number, label: () => string): number {
+  private chiOfTransverse(x: number, w: InverseWording): number {
     if (this.Ok === 0) return x;
     const k = this.sqrtAbsOk;
     if (this.Ok > 0) return Math.asinh(k * x) / k;
     if (k * x > 1) {
-      throw new NoSolutionError(`${label()} exceeds its maximum in this closed model (${(this.hubbleDistanceMpc / k).toPrecision(6)} Mpc)`);
+      throw new NoSolutionError(`${w.asked()} exceeds its maximum in this closed model (${w.limit(this.hubbleDistanceMpc / k)})`);
     }
     return Math.asin(k * x) / k;
   }
@@ -807,13 +839,13 @@ export class Cosmology {
   }
 
   /** u ≥ uMax where an increasing exact function g reaches target (slow path beyond the tables). */
-  private invertBeyond(g: (u: number) => number, target: number, what: () => string): number {
+  private invertBeyond(g: (u: number) => number, target: number, w: InverseWording): number {
     let lo = this.uMax;
     let hi = this.uMax + 1;
     while (g(hi) < target) {
       lo = hi;
       hi = this.uMax + 2 * (hi - this.uMax);
-      if (hi > 690) throw new NoSolutionError(`no redshift has ${what()}`);
+      if (hi > 690) throw new NoSolutionError(`no redshift has ${w.asked()}`);
     }
     for (let i = 0; i < 200 && hi - lo > 1e-15 * hi; i++) {
       const mid = 0.5 * (lo + hi);
@@ -823,31 +855,36 @@ export class Cosmology {
     return 0.5 * (lo + hi);
   }
 
-  private uOfChi(chi: number, what: () => string): number {
+  private uOfChi(chi: number, w: InverseWording): number {
     if (chi <= 0) return 0;
     if (chi <= this.chi.node(this.chi.panels)) return this.invertTable(this.chi, chi, 1);
-    if (chi >= this.horizon()) throw new NoSolutionError(`${what()} lies beyond the particle horizon of this model`);
-    return this.invertBeyond((u) => this.chiBeyond(u), chi, what);
+    if (chi >= this.horizon()) throw new NoSolutionError(`${w.asked()} lies beyond the particle horizon of this model`);
+    return this.invertBeyond((u) => this.chiBeyond(u), chi, w);
   }
 
-  private uOfTau(tau: number, what: () => string): number {
+  /** @param scale the quantity's unit per t_H (t_H in Gyr for look-back, D_H in Mpc for light travel) */
+  private uOfTau(tau: number, w: InverseWording, scale: number): number {
     if (tau <= 0) return 0;
     const ageToday = this.ageAtU(0);
-    if (tau >= ageToday) throw new NoSolutionError(`${what()} is not below the age of the universe in this model`);
-    if (this.lnAge && tau > 0.5 * ageToday) return this.uOfAge(ageToday - tau, what);
+    if (tau >= ageToday) {
+      throw new NoSolutionError(`${w.asked()} is not below the age of the universe in this model (${w.limit(ageToday * scale)})`);
+    }
+    if (this.lnAge && tau > 0.5 * ageToday) return this.uOfAge(ageToday - tau, w);
     if (tau <= this.tau.node(this.tau.panels)) return this.invertTable(this.tau, tau, 1);
-    return this.invertBeyond((u) => this.tauAtU(u), tau, what);
+    return this.invertBeyond((u) => this.tauAtU(u), tau, w);
   }
 
-  private uOfAge(age: number, what: () => string): number {
+  private uOfAge(age: number, w: InverseWording): number {
     const table = this.lnAge;
-    if (!table) throw new NoSolutionError(`${what()}: this model has an infinite past, so age does not fix z`);
+    if (!table) throw new NoSolutionError(`${w.asked()}: this model has an infinite past, so age does not fix z`);
     const ageToday = Math.exp(table.node(0));
-    if (age > ageToday) throw new NoSolutionError(`${what()} exceeds the age of the universe today in this model`);
-    if (!(age > 0)) throw new NoSolutionError(`${what()} must be positive`);
+    if (age > ageToday) {
+      throw new NoSolutionError(`${w.asked()} exceeds the age of the universe today in this model (${w.limit(ageToday * this.hubbleTimeGyr)})`);
+    }
+    if (!(age > 0)) throw new NoSolutionError(`${w.asked()} must be positive`);
     const lnT = Math.log(age);
     if (lnT >= table.node(table.panels)) return this.invertTable(table, lnT, -1);
-    return this.invertBeyond((u) => -this.ageBeyond(u), -age, what);
+    return this.invertBeyond((u) => -this.ageBeyond(u), -age, w);
   }
 
   /** D_L/D_H = e^u S_k(χ) or D_A/D_H = e^{−u} S_k(χ) and its u-derivative, for the inverse. */
@@ -872,7 +909,7 @@ export class Cosmology {
    * u solving curve(u) = target on the lower branch of D_L or D_A (units of D_H), which may rise to a
    * maximum and fall again: node values and the maximum are found once per model and kept.
    */
-  private uOfCurve(key: "DL" | "DA", target: number, what: () => string): number {
+  private uOfCurve(key: "DL" | "DA", target: number, w: InverseWording): number {
     const { g, dg } = this.curves[key];
     let inv = this.inverters.get(key);
     const h = this.chi.h;
@@ -904,14 +941,14 @@ export class Cosmology {
     if (target > inv.peakValue) {
       const dh = this.hubbleDistanceMpc;
       throw new NoSolutionError(
-        `${what()} exceeds its maximum in this model (${(inv.peakValue * dh).toPrecision(6)} Mpc at z = ${formatRedshift(Math.expm1(inv.peakU))})`,
+        `${w.asked()} exceeds its maximum in this model (${w.limit(inv.peakValue * dh)} at z = ${formatRedshift(Math.expm1(inv.peakU))})`,
       );
     }
     const values = inv.values;
     const last = values.length - 1;
     if (target > values[last]) {
       if (Number.isFinite(inv.peakU)) return solveBracketed(g, dg, target, last * h, inv.peakU);
-      return this.invertBeyond(g, target, what);
+      return this.invertBeyond(g, target, w);
     }
     let lo = 0;
     let hi = last;
@@ -935,48 +972,50 @@ export class Cosmology {
    *
    * @param quantity which function to invert
    * @param value its value, in that function's unit (Mpc, mag, Gyr or Mpc³)
+   * @param wording how an error message names the value asked for and quotes the model's limits
+   *   (default: in words and the function's unit, e.g. "look-back time 20 Gyr")
    * @returns redshift z ≥ 0
    * @throws NoSolutionError (a RangeError) when no redshift gives the value
    * @example model.redshiftAt("luminosityDistance", model.luminosityDistanceMpc(1)) // 1
    */
-  redshiftAt(quantity: InvertibleQuantity, value: number): number {
+  redshiftAt(quantity: InvertibleQuantity, value: number, wording?: InverseWording): number {
     if (typeof value !== "number" || Number.isNaN(value)) throw new TypeError("value must be a number");
     const dh = this.hubbleDistanceMpc;
-    const what = () => `${quantity} = ${value}`; // formatted only for an error message
+    const w = wording ?? defaultWording(quantity, value);
     if (quantity === "distanceModulus") {
       if (value === Number.NEGATIVE_INFINITY) return 0;
     } else if (value < 0) {
-      throw new NoSolutionError(`${what()} is negative: no redshift z ≥ 0 has it`);
+      throw new NoSolutionError(`${w.asked()} is negative: no redshift z ≥ 0 has it`);
     }
-    if (!Number.isFinite(value)) throw new NoSolutionError(`${what()}: no finite redshift has it`);
+    if (!Number.isFinite(value)) throw new NoSolutionError(`${w.asked()}: no finite redshift has it`);
     let u: number;
     switch (quantity) {
       case "comovingDistance":
-        u = this.uOfChi(value / dh, what);
+        u = this.uOfChi(value / dh, w);
         break;
       case "transverseComovingDistance":
-        u = this.uOfChi(this.chiOfTransverse(value / dh, what), what);
+        u = this.uOfChi(this.chiOfTransverse(value / dh, w), w);
         break;
       case "luminosityDistance":
-        u = this.uOfCurve("DL", value / dh, what);
+        u = this.uOfCurve("DL", value / dh, w);
         break;
       case "distanceModulus":
-        u = this.uOfCurve("DL", 10 ** ((value - 25) / 5) / dh, what);
+        u = this.uOfCurve("DL", 10 ** ((value - 25) / 5) / dh, { asked: w.asked, limit: (mpc) => w.limit(5 * Math.log10(mpc) + 25) });
         break;
       case "angularDiameterDistance":
-        u = this.uOfCurve("DA", value / dh, what);
+        u = this.uOfCurve("DA", value / dh, w);
         break;
       case "lightTravelDistance":
-        u = this.uOfTau(value / dh, what);
+        u = this.uOfTau(value / dh, w, dh);
         break;
       case "lookbackTime":
-        u = this.uOfTau(value / this.hubbleTimeGyr, what);
+        u = this.uOfTau(value / this.hubbleTimeGyr, w, this.hubbleTimeGyr);
         break;
       case "age":
-        u = this.uOfAge(value / this.hubbleTimeGyr, what);
+        u = this.uOfAge(value / this.hubbleTimeGyr, w);
         break;
       case "comovingVolume":
-        u = this.uOfChi(this.chiOfVolume(value / (dh * dh * dh)), what);
+        u = this.uOfChi(this.chiOfVolume(value / (dh * dh * dh)), w);
         break;
       default:
         throw new TypeError(`unknown quantity "${String(quantity)}"`);

@@ -18,10 +18,10 @@ export {
   speedOfLightKmPerS,
   speedOfLightMPerS,
 } from "./constants.js";
-export { Cosmology, type DensityComponent, type InvertibleQuantity } from "./Cosmology.js";
+export { Cosmology, type DensityComponent, type InverseWording, type InvertibleQuantity } from "./Cosmology.js";
 export { fermiDiracDensityFactor } from "./fermiDirac.js";
 export { type ModelParameters, parameterKeys, type ParameterKey } from "./ModelParameters.js";
-export { formatModelSpec, parseModelSpec } from "./modelSpec.js";
+export { formatModelSpec, parseModelSpec, withChanges, type NamedModels } from "./modelSpec.js";
 export { NoSolutionError } from "./NoSolutionError.js";
 export {
   abFluxDensityJy,

@@ -1,8 +1,8 @@
 /**
  * Model spec text: zcell's own one-line syntax for a cosmological model, as typed in a cell.
  *
- *   PRESET                      e.g. PLANCK2018
- *   PRESET; key=value; ...      e.g. PLANCK2018; H0=73
+ *   PRESET                      e.g. P18-BAO
+ *   PRESET; key=value; ...      e.g. P18-BAO; H0=73
  *   key=value; ...              e.g. H0=70; Om=0.3; OL=0.7
  *
  * Keys (case-insensitive, spaces ignored, '.' is the decimal point): H0, Om, OL or Ok (not both),
@@ -31,15 +31,24 @@ function parseMasses(text: string): number[] {
 
 const keyByLowerCase = new Map<string, ParameterKey>(parameterKeys.map((k) => [k.toLowerCase(), k]));
 
+/** Models named outside the built-in presets (e.g. defined in a workbook), usable as a spec's base. */
+export interface NamedModels {
+  /** The parameters of the model with this name (case-insensitive), or undefined. */
+  find(name: string): ModelParameters | undefined;
+  /** Their names, for messages. */
+  names: readonly string[];
+}
+
 /**
  * Parses model spec text into parameters (syntax only; physical checks happen when the model is built).
  *
- * @param text spec text, e.g. "PLANCK2018; H0=73"
+ * @param text spec text, e.g. "P18-BAO; H0=73"
+ * @param named further models a spec may start from, after the built-in presets
  * @returns the model parameters
  * @throws TypeError naming the offending key or token
  * @example parseModelSpec("H0=70; Om=0.3").OL // undefined (flat)
  */
-export function parseModelSpec(text: string): ModelParameters {
+export function parseModelSpec(text: string, named?: NamedModels): ModelParameters {
   if (typeof text !== "string") throw new TypeError("model spec must be text");
   const parts = text
     .split(";")
@@ -52,12 +61,16 @@ export function parseModelSpec(text: string): ModelParameters {
     const eq = part.indexOf("=");
     if (eq < 0) {
       if (index > 0) throw new TypeError(`"${part}" is not key=value (a preset name may only come first)`);
-      const preset = findPreset(part);
+      const preset = findPreset(part)?.parameters ?? named?.find(part);
       if (!preset) {
-        throw new TypeError(`unknown preset "${part}": use one of ${presets.map((p) => p.name).join(", ")}`);
+        const known = [...presets.map((p) => p.name), ...(named?.names ?? [])];
+        throw new TypeError(`unknown preset "${part}": use one of ${known.join(", ")}`);
       }
-      base = preset.parameters;
+      base = preset;
       return;
+    }
+    if (part.indexOf("=", eq + 1) >= 0) {
+      throw new TypeError(`"${part}" holds several keys: separate keys with ';', e.g. "H0=70; Om=0.3; OL=0.7"`);
     }
     const rawKey = part.slice(0, eq);
     const key = keyByLowerCase.get(rawKey.toLowerCase());
@@ -68,7 +81,7 @@ export function parseModelSpec(text: string): ModelParameters {
   if (given.has("OL") && given.has("Ok")) throw new TypeError("give OL or Ok, not both");
   if (!base) {
     for (const key of ["H0", "Om"] as const) {
-      if (!given.has(key)) throw new TypeError(`${key} is required (or start from a preset, e.g. "PLANCK2018; ...")`);
+      if (!given.has(key)) throw new TypeError(`${key} is required (or start from a preset, e.g. "P18-BAO; ...")`);
     }
   }
   const p: ModelParameters = base
@@ -83,6 +96,33 @@ export function parseModelSpec(text: string): ModelParameters {
   return p;
 }
 
+/**
+ * A model with some parameters changed: each key (case-insensitive) takes the value given, as a
+ * number or as spec text ("0.05,0.01" for mnu). Giving OL drops Ok and giving Ok drops OL.
+ *
+ * @param p the model to start from (not changed)
+ * @param changes key and value pairs, e.g. [["H0", 73]]
+ * @returns the changed parameters
+ * @throws TypeError naming an unknown key, a key given twice or a value that is not a number
+ * @example formatModelSpec(withChanges(parseModelSpec("P18-BAO"), [["H0", 73]])) // "P18-BAO; H0=73"
+ */
+export function withChanges(p: ModelParameters, changes: readonly (readonly [string, number | string])[]): ModelParameters {
+  const out: ModelParameters = { ...p, mnu: [...p.mnu] };
+  const seen = new Set<ParameterKey>();
+  for (const [rawKey, value] of changes) {
+    const key = keyByLowerCase.get(rawKey.trim().toLowerCase());
+    if (!key) throw new TypeError(`unknown key "${rawKey}": use ${parameterKeys.join(", ")}`);
+    if (seen.has(key)) throw new TypeError(`${key} is given twice`);
+    seen.add(key);
+    const text = String(value).replace(/\s+/g, "");
+    if (key === "mnu") out.mnu = parseMasses(text);
+    else out[key] = parseNumber(key, text);
+    if (key === "OL") delete out.Ok;
+    if (key === "Ok") delete out.OL;
+  }
+  return out;
+}
+
 function sameMasses(a: readonly number[], b: readonly number[]): boolean {
   return a.length === b.length && a.every((m, i) => m === b[i]);
 }
@@ -94,7 +134,7 @@ function sameMasses(a: readonly number[], b: readonly number[]): boolean {
  * round-trip form.
  *
  * @param p model parameters
- * @returns spec text, e.g. "PLANCK2018; H0=73"
+ * @returns spec text, e.g. "P18-BAO; H0=73"
  * @example formatModelSpec(parseModelSpec("om = 0.30 ; H0=70.0")) // "H0=70; Om=0.3"
  */
 export function formatModelSpec(p: ModelParameters): string {

@@ -29,7 +29,7 @@ function sphereAreaM2(model: Cosmology, z: number): number {
  * @param model the cosmology
  * @param fluxWm2 bolometric flux [W m⁻²], ≥ 0
  * @param z redshift > 0
- * @returns luminosity [W]; e.g. F = 1e-15 W/m² at z = 1 in PLANCK2018: 5.519e38 W
+ * @returns luminosity [W]; e.g. F = 1e-15 W/m² at z = 1 in P18-BAO: 5.519e38 W
  */
 export function luminosityW(model: Cosmology, fluxWm2: number, z: number): number {
   requireNonNegative("flux", fluxWm2, "W/m2");

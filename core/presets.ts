@@ -25,41 +25,45 @@ function preset(name: string, description: string, p: Omit<ModelParameters, "pre
 
 const planckNeff = 3.046;
 
-/** The presets by name. */
+/**
+ * The presets by name. The names say the data combination: P18-BAO (Planck 2018 CMB with lensing and
+ * BAO, the default), P18-CMB (Planck 2018 CMB with lensing), P15-EXT (Planck 2015 with external data),
+ * W9-ALL (WMAP nine-year with every external set), W7-BAO (WMAP seven-year with BAO and H0).
+ */
 export const presets: readonly Preset[] = [
   preset(
-    "PLANCK2018",
-    "Planck 2018 VI (A&A 641, A6) Table 2, TT,TE,EE+lowE+lensing+BAO; flat, Σmν = 0.06 eV in one species",
+    "P18-BAO",
+    "H0 67.66, Ωm 0.3111 (incl. one 0.06 eV ν), flat — Planck 2018 VI, A&A 641, A6, Table 2, CMB+lensing+BAO",
     { H0: 67.66, Om: 0.3111, Ob: 0.02242 / 0.6766 ** 2, w0: -1, wa: 0, Tcmb: 2.7255, Neff: planckNeff, mnu: [0.06] },
   ),
   preset(
-    "PLANCK2018CMB",
-    "Planck 2018 VI (A&A 641, A6) Table 2, TT,TE,EE+lowE+lensing; flat, Σmν = 0.06 eV in one species",
+    "P18-CMB",
+    "H0 67.36, Ωm 0.3153 (incl. one 0.06 eV ν), flat — Planck 2018 VI, A&A 641, A6, Table 2, CMB+lensing",
     { H0: 67.36, Om: 0.3153, Ob: 0.02237 / 0.6736 ** 2, w0: -1, wa: 0, Tcmb: 2.7255, Neff: planckNeff, mnu: [0.06] },
   ),
   preset(
-    "PLANCK2015",
-    "Planck 2015 XIII (A&A 594, A13) Table 4, TT,TE,EE+lowP+lensing+ext; flat, Σmν = 0.06 eV in one species",
+    "P15-EXT",
+    "H0 67.74, Ωm 0.3089 (incl. one 0.06 eV ν), flat — Planck 2015 XIII, A&A 594, A13, Table 4, CMB+lensing+external",
     { H0: 67.74, Om: 0.3089, Ob: 0.0486, w0: -1, wa: 0, Tcmb: 2.7255, Neff: planckNeff, mnu: [0.06] },
   ),
   preset(
-    "WMAP9",
-    "Hinshaw et al. 2013 (ApJS 208, 19) Table 4, WMAP+eCMB+BAO+H0; flat, massless neutrinos",
+    "W9-ALL",
+    "H0 69.32, Ωm 0.2865, massless ν, flat — WMAP nine-year, Hinshaw et al. 2013, ApJS 208, 19, Table 4, +eCMB+BAO+H0",
     { H0: 69.32, Om: 0.2865, Ob: 0.04628, w0: -1, wa: 0, Tcmb: 2.725, Neff: 3.04, mnu: [] },
   ),
   preset(
-    "WMAP7",
-    "Komatsu et al. 2011 (ApJS 192, 18) Table 1, WMAP+BAO+H0; flat, massless neutrinos",
+    "W7-BAO",
+    "H0 70.4, Ωm 0.272, massless ν, flat — WMAP seven-year, Komatsu et al. 2011, ApJS 192, 18, Table 1, +BAO+H0",
     { H0: 70.4, Om: 0.272, Ob: 0.0455, w0: -1, wa: 0, Tcmb: 2.725, Neff: 3.04, mnu: [] },
   ),
   preset(
     "CONCORDANCE",
-    "Round-number flat ΛCDM (common practice, no source): H0 = 70, Om = 0.3, OL = 0.7, no radiation",
+    "H0 70, Ωm 0.3, ΩΛ 0.7, no radiation, flat — round numbers, common practice (no source)",
     { H0: 70, Om: 0.3, w0: -1, wa: 0, Tcmb: 0, Neff: planckNeff, mnu: [] },
   ),
   preset(
     "EDS",
-    "Einstein–de Sitter: flat, matter only (Om = 1), H0 = 70, no radiation",
+    "H0 70, Ωm 1, no dark energy, no radiation, flat — Einstein–de Sitter (matter only)",
     { H0: 70, Om: 1, w0: -1, wa: 0, Tcmb: 0, Neff: planckNeff, mnu: [] },
   ),
 ];

@@ -1,15 +1,16 @@
 /**
  * The workbook's active cosmology: spec text stored in the workbook's add-in settings (so it
- * travels with the file), PLANCK2018 until someone applies another. Functions wait until Office has
+ * travels with the file), P18-BAO until someone applies another. Functions wait until Office has
  * loaded the settings before they compute with it.
  */
 import { parseModelSpec } from "../core/index.js";
 import { messages } from "./messages.js";
+import { noWorkbookModels, readWorkbookModels, workbookModelsSettingKey, type WorkbookModels } from "./workbookModels.js";
 
 /** Settings key under which the active model's spec text is stored. */
 export const activeModelSettingKey = "zcell.activeModel";
 /** The model used until a workbook stores another. */
-export const defaultModelSpec = "PLANCK2018";
+export const defaultModelSpec = "P18-BAO";
 
 let ready: Promise<void> | undefined;
 
@@ -26,31 +27,35 @@ export function whenSettingsReady(): Promise<void> {
 export interface ActiveModelSetting {
   /** Spec text to compute with. */
   spec: string;
-  /** Set when the stored value was unusable and PLANCK2018 is used instead. */
+  /** Set when the stored value was unusable and P18-BAO is used instead. */
   warning?: string;
   /** True when the workbook stores a spec of its own. */
   stored: boolean;
+  /** The models defined in this workbook (none when omitted). */
+  models?: WorkbookModels;
 }
 
-/** Reads the active model's spec from the settings (call after whenSettingsReady). */
+/** Reads the active model's spec and the workbook's own models from the settings (call after whenSettingsReady). */
 export function readActiveModel(): ActiveModelSetting {
   const office = (globalThis as { Office?: typeof Office }).Office;
   const settings = office?.context?.document?.settings;
-  if (!settings) return { spec: defaultModelSpec, stored: false };
+  if (!settings) return { spec: defaultModelSpec, stored: false, models: noWorkbookModels };
   let value: unknown;
+  let models = noWorkbookModels;
   try {
+    models = readWorkbookModels(settings.get(workbookModelsSettingKey));
     value = settings.get(activeModelSettingKey);
   } catch (e) {
-    return { spec: defaultModelSpec, stored: false, warning: messages.activeModelFallback(String(e)) };
+    return { spec: defaultModelSpec, stored: false, models, warning: messages.activeModelFallback(String(e)) };
   }
-  if (value === null || value === undefined) return { spec: defaultModelSpec, stored: false };
+  if (value === null || value === undefined) return { spec: defaultModelSpec, stored: false, models };
   if (typeof value !== "string") {
-    return { spec: defaultModelSpec, stored: false, warning: messages.activeModelFallback("not text") };
+    return { spec: defaultModelSpec, stored: false, models, warning: messages.activeModelFallback("not text") };
   }
   try {
-    parseModelSpec(value);
-    return { spec: value, stored: true };
+    parseModelSpec(value, models.named);
+    return { spec: value, stored: true, models };
   } catch (e) {
-    return { spec: defaultModelSpec, stored: false, warning: messages.activeModelFallback((e as Error).message) };
+    return { spec: defaultModelSpec, stored: false, models, warning: messages.activeModelFallback((e as Error).message) };
   }
 }

@@ -7,6 +7,7 @@ import {
   abFluxDensityJy,
   abMagnitude,
   checkSourceRedshift,
+  conversionFactor,
   absoluteMagnitude,
   apparentMagnitude,
   convertUnit,
@@ -16,21 +17,22 @@ import {
   janskySI,
   kCorrectionPowerLawMag,
   luminosityW,
-  parseModelSpec,
   presets,
   spectralLuminosityWHz,
   type DensityComponent,
   type InvertibleQuantity,
+  withChanges,
 } from "../core/index.js";
 import { describeModel, versionText } from "./describeModel.js";
 import type { Args, ArgSpec, Cell, FunctionDef } from "./evaluate.js";
-import { messages } from "./messages.js";
+import { formatValue, messages } from "./messages.js";
 
-const num = (name: string, extra: { default?: number; blankMeansDefault?: boolean } = {}): ArgSpec => ({
-  kind: "number",
-  name,
-  ...extra,
-});
+type NumberOptions = Omit<Extract<ArgSpec, { kind: "number" }>, "kind" | "name">;
+const num = (name: string, extra: NumberOptions = {}): ArgSpec => ({ kind: "number", name, ...extra });
+/** A physical amount that cannot be negative (flux, luminosity, size). */
+const amount = (name: string) => num(name, { min: 0 });
+/** A magnitude (catalogue flags of |m| ≥ 50 give #N/A). */
+const mag = (name: string, extra: NumberOptions = {}) => num(name, { magnitude: true, ...extra });
 const model: ArgSpec = { kind: "model", name: "model" };
 /** A unit argument: `reference` is what compute uses, `shown` the default a person sees. */
 const unit = (name: string, reference: string, shown = reference, applies = "result"): ArgSpec => ({
@@ -61,18 +63,34 @@ function ofRedshift(
   };
 }
 
-/** ZC.REDSHIFT quantity names → core quantity and the unit its value is given in by default. */
-const inverses: Record<string, { quantity: InvertibleQuantity; unit?: string }> = {
-  DIST_LUM: { quantity: "luminosityDistance", unit: "Mpc" },
-  DIST_LOS: { quantity: "comovingDistance", unit: "Mpc" },
-  DIST_TRANS: { quantity: "transverseComovingDistance", unit: "Mpc" },
-  DIST_ANG: { quantity: "angularDiameterDistance", unit: "Mpc" },
-  DIST_LIGHT: { quantity: "lightTravelDistance", unit: "Mpc" },
+/**
+ * ZC.REDSHIFT quantity names → core quantity, the unit the core takes and the unit a value is read in
+ * when none is given (the default unit of the function inverted).
+ */
+const inverses: Record<string, { quantity: InvertibleQuantity; unit?: string; shown?: string }> = {
+  DIST_LUM: { quantity: "luminosityDistance", unit: "Mpc", shown: "Mpc" },
+  DIST_LOS: { quantity: "comovingDistance", unit: "Mpc", shown: "Mpc" },
+  DIST_TRANS: { quantity: "transverseComovingDistance", unit: "Mpc", shown: "Mpc" },
+  DIST_ANG: { quantity: "angularDiameterDistance", unit: "Mpc", shown: "Mpc" },
+  DIST_LIGHT: { quantity: "lightTravelDistance", unit: "Mpc", shown: "Mpc" },
   MODULUS: { quantity: "distanceModulus" },
-  LOOKBACK: { quantity: "lookbackTime", unit: "Gyr" },
-  AGE: { quantity: "age", unit: "Gyr" },
-  VOLUME: { quantity: "comovingVolume", unit: "Mpc3" },
+  LOOKBACK: { quantity: "lookbackTime", unit: "Gyr", shown: "Gyr" },
+  AGE: { quantity: "age", unit: "Gyr", shown: "Gyr" },
+  VOLUME: { quantity: "comovingVolume", unit: "Mpc3", shown: "Gpc3" },
 };
+
+/** ZC.REDSHIFT: the redshift at which a quantity takes a value given in the user's unit. */
+function invert(model: Cosmology, name: string, value: number, given: string): number {
+  const inverse = inverses[name];
+  if (given !== "" && !inverse.unit) throw new TypeError(`unit: ${name} is in magnitudes and takes no unit`);
+  const unit = given || inverse.shown || "mag";
+  const toCore = inverse.unit ? conversionFactor(unit, inverse.unit) : 1;
+  const shown = (v: number) => `${formatValue(v)} ${unit}`;
+  return model.redshiftAt(inverse.quantity, value * toCore, {
+    asked: () => `${name} = ${shown(value)}`,
+    limit: (coreValue) => shown(coreValue / toCore),
+  });
+}
 
 /** ZC.PARAM names → value. */
 const parameters: Record<string, (model: Cosmology) => number> = {
@@ -100,8 +118,10 @@ const parameters: Record<string, (model: Cosmology) => number> = {
   },
 };
 
-const components: readonly DensityComponent[] = ["m", "de", "k", "r", "g", "nu"];
+const components: readonly DensityComponent[] = ["matter", "darkenergy", "curvature", "radiation", "photons", "neutrinos"];
 const fullSkySr = 4 * Math.PI;
+/** Key/value pairs ZC.MODEL takes after its base model. */
+const modelPairs = 6;
 
 const list: FunctionDef[] = [
   ofRedshift("DIST_LUM", "Mpc", (x, zz) => x.luminosityDistanceMpc(zz)),
@@ -127,38 +147,42 @@ const list: FunctionDef[] = [
     compute: (a) => m(a).densityParameter(a.component as DensityComponent, n(a, "z")),
   },
   ofRedshift("CMB_TEMP", undefined, (x, zz) => x.cmbTemperatureK(zz), zToday),
-  ofRedshift("RHO_CRIT", "kg/m3", (x, zz) => x.criticalDensityKgM3(zz), zToday),
-  ofRedshift("ANG_SCALE", "Mpc/rad", (x, zz) => x.angularDiameterDistanceMpc(zz), z, "kpc/arcsec"),
+  ofRedshift("CRIT_DENSITY", "kg/m3", (x, zz) => x.criticalDensityKgM3(zz), zToday),
+  ofRedshift("PROPER_SCALE", "Mpc/rad", (x, zz) => x.angularDiameterDistanceMpc(zz), z, "kpc/arcsec"),
   {
     name: "SIZE",
-    args: [num("angle"), z, model, unit("angle_unit", "rad", "arcsec", "angle"), unit("size_unit", "Mpc", "kpc")],
+    args: [num("angle", { min: 0, max: { value: Math.PI, what: "180°" } }), z, model, unit("angle_unit", "rad", "arcsec", "angle"), unit("size_unit", "Mpc", "kpc")],
     compute: (a) => m(a).properSizeMpc(n(a, "angle"), n(a, "z")),
   },
   {
     name: "ANGLE",
-    args: [num("size"), z, model, unit("size_unit", "Mpc", "kpc", "size"), unit("angle_unit", "rad", "arcsec")],
+    args: [amount("size"), z, model, unit("size_unit", "Mpc", "kpc", "size"), unit("angle_unit", "rad", "arcsec")],
     compute: (a) => m(a).angleRad(n(a, "size"), n(a, "z")),
   },
   ofRedshift("VOLUME", "Mpc3", (x, zz) => x.comovingVolumeMpc3(zz), z, "Gpc3"),
   {
     name: "VOLUME_SHELL",
-    args: [num("z1"), num("z2"), num("area", { default: fullSkySr, blankMeansDefault: true }), model, unit("unit", "Mpc3", "Gpc3"), unit("area_unit", "sr", "deg2", "area")],
+    args: [
+      num("z1"), num("z2"),
+      num("area", { default: fullSkySr, blankMeansDefault: true, min: 0, max: { value: fullSkySr, what: "the whole sky" } }),
+      model, unit("unit", "Mpc3", "Gpc3"), unit("area_unit", "sr", "deg2", "area"),
+    ],
     compute: (a) => m(a).comovingVolumeShellMpc3(n(a, "z1"), n(a, "z2"), n(a, "area")),
   },
   ofRedshift("VOLUME_ELEMENT", "Mpc3/sr", (x, zz) => x.comovingVolumeElementMpc3Sr(zz)),
   {
     name: "LUMINOSITY",
-    args: [num("flux"), z, model, unit("flux_unit", "W/m2", "W/m2", "flux"), unit("lum_unit", "W")],
+    args: [amount("flux"), z, model, unit("flux_unit", "W/m2", "W/m2", "flux"), unit("lum_unit", "W")],
     compute: (a) => luminosityW(m(a), n(a, "flux"), n(a, "z")),
   },
   {
     name: "FLUX",
-    args: [num("lum"), z, model, unit("lum_unit", "W", "W", "lum"), unit("flux_unit", "W/m2")],
+    args: [amount("lum"), z, model, unit("lum_unit", "W", "W", "lum"), unit("flux_unit", "W/m2")],
     compute: (a) => fluxWm2(m(a), n(a, "lum"), n(a, "z")),
   },
   {
     name: "LUMINOSITY_NU",
-    args: [num("flux_density"), z, num("alpha"), model, unit("in_unit", "Jy", "Jy", "flux_density"), unit("out_unit", "W/Hz")],
+    args: [amount("flux_density"), z, num("alpha"), model, unit("in_unit", "Jy", "Jy", "flux_density"), unit("out_unit", "W/Hz")],
     compute: (a) => spectralLuminosityWHz(m(a), n(a, "flux_density") * janskySI, n(a, "z"), n(a, "alpha")),
   },
   {
@@ -168,37 +192,28 @@ const list: FunctionDef[] = [
   },
   {
     name: "MAG_ABS",
-    args: [num("m"), z, num("kcorr", { default: 0, blankMeansDefault: true }), model],
+    args: [mag("m"), z, num("kcorr", { default: 0, blankMeansDefault: true }), model],
     compute: (a) => absoluteMagnitude(m(a), n(a, "m"), n(a, "z"), n(a, "kcorr")),
   },
   {
     name: "MAG_APP",
-    args: [num("M"), z, num("kcorr", { default: 0, blankMeansDefault: true }), model],
+    args: [mag("M"), z, num("kcorr", { default: 0, blankMeansDefault: true }), model],
     compute: (a) => apparentMagnitude(m(a), n(a, "M"), n(a, "z"), n(a, "kcorr")),
   },
   {
     name: "MAG_AB",
-    args: [num("flux_density"), unit("unit", "Jy", "Jy", "flux_density")],
+    args: [num("flux_density", { min: 0, minExclusive: true }), unit("unit", "Jy", "Jy", "flux_density")],
     compute: (a) => abMagnitude(n(a, "flux_density")),
   },
   {
     name: "FLUX_AB",
-    args: [num("m_ab"), unit("unit", "Jy")],
+    args: [mag("m_ab"), unit("unit", "Jy")],
     compute: (a) => abFluxDensityJy(n(a, "m_ab")),
   },
   {
     name: "REDSHIFT",
     args: [num("value"), { kind: "text", name: "quantity", choices: Object.keys(inverses), scalar: true }, model, { kind: "text", name: "unit", scalar: true, optional: true }],
-    compute: (a) => {
-      const inverse = inverses[a.quantity as string];
-      let value = n(a, "value");
-      const given = a.unit as string;
-      if (given !== "") {
-        if (!inverse.unit) throw new TypeError(`unit: ${a.quantity as string} is in magnitudes and takes no unit`);
-        value = convertUnit(value, given, inverse.unit);
-      }
-      return m(a).redshiftAt(inverse.quantity, value);
-    },
+    compute: (a) => invert(m(a), a.quantity as string, n(a, "value"), a.unit as string),
   },
   {
     name: "CONVERT",
@@ -207,13 +222,26 @@ const list: FunctionDef[] = [
   },
   {
     name: "MODEL",
-    args: ["H0", "Om", "OL", "w0", "wa", "Tcmb", "Neff", "mnu", "Ob"].map(
-      (name): ArgSpec => ({ kind: "numberOrText", name }),
-    ),
+    args: [
+      model,
+      ...Array.from({ length: modelPairs }, (_, i): ArgSpec[] => [
+        { kind: "text", name: `key${i + 1}`, optional: true },
+        { kind: "numberOrText", name: `value${i + 1}` },
+      ]).flat(),
+    ],
     compute: (a) => {
-      const keys = ["H0", "Om", "OL", "w0", "wa", "Tcmb", "Neff", "mnu", "Ob"];
-      const spec = keys.filter((k) => a[k] !== undefined).map((k) => `${k}=${String(a[k])}`).join("; ");
-      const p = parseModelSpec(spec);
+      const changes: [string, number | string][] = [];
+      for (let i = 1; i <= modelPairs; i++) {
+        const key = a[`key${i}`] as string | undefined;
+        const value = a[`value${i}`] as number | string | undefined;
+        if (!key) {
+          if (value !== undefined) throw new TypeError(messages.pairWithoutKey(i));
+          continue;
+        }
+        if (value === undefined) throw new TypeError(`key${i} "${key}" has no value${i}`);
+        changes.push([key, value]);
+      }
+      const p = withChanges(m(a).parameters, changes);
       new Cosmology(p); // validates the physics, so a bad model errors here, not later
       return formatModelSpec(p);
     },
@@ -226,7 +254,11 @@ const list: FunctionDef[] = [
   {
     name: "PRESETS",
     args: [],
-    table: (): Cell[][] => [["preset", "description and source"], ...presets.map((p) => [p.name, p.description])],
+    table: (active): Cell[][] => [
+      ["preset", "description and source"],
+      ...presets.map((p) => [p.name, p.description]),
+      ...[...(active.models?.specs ?? [])].map(([name, spec]) => [name, `defined in this workbook: ${spec}`]),
+    ],
   },
   {
     name: "DESCRIBE",

@@ -10,16 +10,21 @@ export const zcellVersion: string = packageJson.version;
 
 const fmt = (x: number, digits = 6) => Number(x.toPrecision(digits)).toString();
 
-/** The model's kind in words: flat/open/closed, Λ or w0–wa, with or without radiation. */
+/**
+ * The model that is there, in words: geometry, then its contents ("flat: matter + Λ + radiation",
+ * "flat: matter only", "closed: matter + w0–wa dark energy").
+ */
 function kindOf(m: Cosmology): string {
   const geometry = m.Ok === 0 ? "flat" : m.Ok > 0 ? "open" : "closed";
-  const darkEnergy = m.wa !== 0 || m.w0 !== -1 ? "w0–wa dark energy" : "ΛCDM";
-  return `${geometry} ${darkEnergy}`;
+  const parts = ["matter"];
+  if (m.OL !== 0) parts.push(m.wa !== 0 || m.w0 !== -1 ? "w0–wa dark energy" : "Λ");
+  if (m.Tcmb > 0) parts.push("radiation");
+  return `${geometry}: ${parts.length === 1 ? "matter only" : parts.join(" + ")}`;
 }
 
 /**
  * One line describing a model with every parameter shown.
- * @example "PLANCK2018: flat ΛCDM; H0 = 67.66 km/s/Mpc; Om = 0.3111 (matter incl. massive ν) ..."
+ * @example "P18-BAO: flat: matter + Λ + radiation; H0 = 67.66 km/s/Mpc; Om = 0.3111 (matter incl. massive ν) ..."
  */
 export function describeModel(m: Cosmology): string {
   const neutrinos =
@@ -36,7 +41,7 @@ export function describeModel(m: Cosmology): string {
     `Om = ${fmt(m.Om)} (matter incl. massive ν)`,
     `OL = ${fmt(m.OL)}`,
     `Ok = ${fmt(m.Ok)}`,
-    `Or = ${m.Or.toPrecision(4)} (photons + massless ν)`,
+    m.Or === 0 ? "Or = 0 (no radiation)" : `Or = ${m.Or.toPrecision(4)} (photons + massless ν)`,
     ...(Number.isFinite(m.Ob) ? [`Ob = ${fmt(m.Ob)}`] : []),
     `w0 = ${fmt(m.w0)}`,
     `wa = ${fmt(m.wa)}`,

@@ -6,7 +6,7 @@
  * `evaluate` is synchronous and host-free, so the task pane's cell inspector can ask it why a cell
  * holds an error: the CellError it returns carries the explanation.
  */
-import { Cosmology, conversionFactor, NoSolutionError } from "../core/index.js";
+import { Cosmology, conversionFactor, formatModelSpec, NoSolutionError, parseModelSpec } from "../core/index.js";
 import { readActiveModel, whenSettingsReady, type ActiveModelSetting } from "./activeModel.js";
 import { CellError, isIncomingError, toHostError } from "./cellError.js";
 import { messages } from "./messages.js";
@@ -26,6 +26,14 @@ export type ArgSpec =
       default?: number;
       /** A blank cell inside the argument means the default (instead of a blank result). */
       blankMeansDefault?: boolean;
+      /** Smallest allowed value, in the reference unit (checked in the unit the user gave). */
+      min?: number;
+      /** `min` itself is not allowed. */
+      minExclusive?: boolean;
+      /** Largest allowed value, in the reference unit, and what it is (e.g. "180°"). */
+      max?: { value: number; what: string };
+      /** A magnitude: |value| ≥ 50 is a catalogue's missing-value flag (#N/A). */
+      magnitude?: boolean;
     }
   | { kind: "model"; name: string }
   | {
@@ -35,7 +43,7 @@ export type ArgSpec =
       choices?: readonly string[];
       /** Scalar: read once, not broadcast. */
       scalar?: boolean;
-      /** Scalar and may be omitted or blank (read as ""). */
+      /** May be omitted or blank: read as "" when scalar, as absent otherwise (no blank result). */
       optional?: boolean;
     }
   | {
@@ -68,13 +76,18 @@ export interface FunctionDef {
   /** The value for one cell, in the reference units of the unit arguments. */
   compute?: (a: Args) => number | string;
   /** For functions that return a whole table at once (ZC.PRESETS). */
-  table?: () => Cell[][];
+  table?: (active: ActiveModelSetting) => Cell[][];
 }
 
 const maxCells = 4_194_304;
 const blank = "";
 
 type Prepared = { spec: ArgSpec; matrix: unknown[][] | undefined; rows: number; cols: number };
+/** How a number argument is converted into its reference unit: the factor and the unit the user gave. */
+type Conversion = { factor: number; unit: string };
+
+/** Text that Excel's own functions would read as a number (CSV and archive pastes). */
+const numberText = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 
 /** Normalises a raw argument to a matrix (undefined when omitted). */
 function toMatrix(raw: unknown): unknown[][] | undefined {
@@ -95,12 +108,35 @@ function classify(e: unknown, fn: string): CellError {
   return new CellError("value", messages.internal(fn, e instanceof Error ? e.message : String(e)));
 }
 
-function unitFactor(spec: Extract<ArgSpec, { kind: "unit" }>, raw: unknown): number {
+/** The error as the sheet shows it, naming the function (one object per distinct error of a call). */
+function inFunction(e: CellError, fn: string, seen: Map<CellError, CellError>): CellError {
+  let named = seen.get(e);
+  if (!named) {
+    const message = messages.inFunction(fn, e.message);
+    named = message === e.message ? e : new CellError(e.kind, message);
+    seen.set(e, named);
+  }
+  return named;
+}
+
+/**
+ * The spec text a model argument stands for: a name defined in the workbook (alone or with changes)
+ * becomes the canonical spec of its parameters, so that the model cache never keeps a stale meaning.
+ */
+function resolvedSpec(text: string, active: ActiveModelSetting): string {
+  const models = active.models;
+  if (!models || models.specs.size === 0) return text;
+  const first = text.split(";", 1)[0].trim().toUpperCase();
+  return models.specs.has(first) ? formatModelSpec(parseModelSpec(text, models.named)) : text;
+}
+
+function unitConversion(spec: Extract<ArgSpec, { kind: "unit" }>, raw: unknown): Conversion {
   const given = toMatrix(raw)?.[0]?.[0];
   const text = isBlank(given) ? spec.default : given;
   if (typeof text !== "string") throw new CellError("value", messages.notText(spec.name, text));
   try {
-    return spec.applies === "result" ? conversionFactor(spec.unit, text) : conversionFactor(text, spec.unit);
+    const factor = spec.applies === "result" ? conversionFactor(spec.unit, text) : conversionFactor(text, spec.unit);
+    return { factor, unit: text.trim() };
   } catch (e) {
     throw new CellError("value", messages.unitArgument(spec.name, (e as Error).message));
   }
@@ -116,25 +152,25 @@ function unitFactor(spec: Extract<ArgSpec, { kind: "unit" }>, raw: unknown): num
  */
 export function evaluate(def: FunctionDef, raw: readonly unknown[], active: ActiveModelSetting): Cell[][] {
   try {
-    if (def.table) return def.table();
+    if (def.table) return def.table(active);
     return evaluateCells(def, raw, active);
   } catch (e) {
-    return [[classify(e, def.name)]];
+    return [[inFunction(classify(e, def.name), def.name, new Map())]];
   }
 }
 
 function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: ActiveModelSetting): Cell[][] {
   const compute = def.compute!;
-  const inputFactors = new Map<string, number>();
+  const inputFactors = new Map<string, Conversion>();
   let resultFactor = 1;
   const prepared: Prepared[] = [];
   const scalars: Args = {};
   def.args.forEach((spec, index) => {
     const value = raw[index];
     if (spec.kind === "unit") {
-      const factor = unitFactor(spec, value);
-      if (spec.applies === "result") resultFactor *= factor;
-      else inputFactors.set(spec.applies, factor);
+      const conversion = unitConversion(spec, value);
+      if (spec.applies === "result") resultFactor *= conversion.factor;
+      else inputFactors.set(spec.applies, conversion);
       return;
     }
     if (spec.kind === "text" && spec.scalar) {
@@ -180,7 +216,7 @@ function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: Active
     let m = models.get(spec);
     if (m === undefined) {
       try {
-        m = modelFor(spec);
+        m = modelFor(resolvedSpec(spec, active));
       } catch (e) {
         const err = classify(e, def.name);
         m = new CellError(err.kind, messages.model(err.message));
@@ -204,6 +240,7 @@ function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: Active
     if (read instanceof CellError || read === blank) constantCell ??= read;
     else args[p.spec.name] = read;
   }
+  const named = new Map<CellError, CellError>();
   const out: Cell[][] = new Array(rows);
   for (let r = 0; r < rows; r++) {
     const row: Cell[] = new Array(cols);
@@ -224,7 +261,7 @@ function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: Active
           cell = classify(e, def.name);
         }
       }
-      row[c] = cell;
+      row[c] = cell instanceof CellError ? inFunction(cell, def.name, named) : cell;
     }
     out[r] = row;
   }
@@ -237,7 +274,7 @@ function readArg(
   value: unknown,
   active: ActiveModelSetting,
   modelOf: (spec: string) => Cosmology | CellError,
-  inputFactors: Map<string, number>,
+  inputFactors: Map<string, Conversion>,
 ): number | string | Cosmology | CellError | undefined {
   const spec = p.spec;
   if (isIncomingError(value)) return new CellError("value", messages.inputError(spec.name));
@@ -254,18 +291,30 @@ function readArg(
         if (spec.default === undefined) return blank;
         return spec.default;
       }
-      if (typeof value !== "number") return new CellError("value", messages.notANumber(spec.name, value));
-      if (!Number.isFinite(value)) return new CellError("num", messages.notFinite(spec.name));
-      const factor = inputFactors.get(spec.name);
-      return factor === undefined ? value : value * factor;
+      let x = value;
+      if (typeof x === "string" && numberText.test(x.trim())) x = Number(x.trim());
+      if (typeof x !== "number") return new CellError("value", messages.notANumber(spec.name, value));
+      if (!Number.isFinite(x)) return new CellError("num", messages.notFinite(spec.name));
+      if (spec.magnitude && Math.abs(x) >= 50) return new CellError("na", messages.missingMagnitude(spec.name, x));
+      const conversion = inputFactors.get(spec.name);
+      const factor = conversion?.factor ?? 1;
+      const reference = x * factor;
+      if (spec.min !== undefined && (spec.minExclusive ? !(reference > spec.min) : !(reference >= spec.min))) {
+        return new CellError("num", messages.belowMin(spec.name, x, conversion?.unit ?? "", spec.min / factor, spec.minExclusive === true));
+      }
+      if (spec.max !== undefined && reference > spec.max.value) {
+        return new CellError("num", messages.aboveMax(spec.name, x, conversion?.unit ?? "", spec.max.value / factor, spec.max.what));
+      }
+      return reference;
     }
     case "numberOrText": {
       if (isBlank(value)) return spec.default;
+      if (typeof value === "string" && numberText.test(value.trim())) return Number(value.trim());
       if (typeof value === "number" || typeof value === "string") return value;
       return new CellError("value", messages.notANumber(spec.name, value));
     }
     case "text": {
-      if (isBlank(value)) return blank;
+      if (isBlank(value)) return spec.optional ? undefined : blank;
       try {
         return readText(spec, value);
       } catch (e) {

@@ -2,7 +2,7 @@
  * The ZC.* worksheet functions: each is its JSDoc (read by the metadata plugin to build
  * functions.json) plus one line handing the arguments to the shared wrapper. Arguments marked
  * "range" broadcast: a single value or a range, and a column against a row makes a table.
- * Omitted or blank `model` means the workbook's active cosmology (PLANCK2018 until one is applied).
+ * Omitted or blank `model` means the workbook's active cosmology (P18-BAO until one is applied).
  */
 /* eslint-disable @typescript-eslint/no-explicit-any */
 import { callFromSheet } from "./evaluate.js";
@@ -139,10 +139,10 @@ export function HUBBLE(z?: any[][], model?: any[][], unit?: string): Promise<any
 }
 
 /**
- * Density parameter of one component at z: "m" (matter incl. massive ν), "de", "k", "r" (photons + massless ν), "g" (photons), "nu" (all ν).
+ * Density parameter of one component at z: "matter" (incl. massive ν), "darkenergy", "curvature", "radiation" (photons + massless ν), "photons" or "neutrinos" (all ν).
  * @customfunction OMEGA OMEGA
  * @helpurl https://localhost:3000/help.html#function-reference
- * @param component "m", "de", "k", "r", "g" or "nu" (value or range).
+ * @param component "matter", "darkenergy", "curvature", "radiation", "photons" or "neutrinos" (value or range).
  * @param [z] Redshift, ≥ 0 (value or range); omitted = today.
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @returns Density parameter (dimensionless).
@@ -165,28 +165,28 @@ export function CMB_TEMP(z?: any[][], model?: any[][]): Promise<any[][]> {
 
 /**
  * Critical density 3H(z)²/(8πG), in kg/m3 unless a unit is given.
- * @customfunction RHO_CRIT RHO_CRIT
+ * @customfunction CRIT_DENSITY CRIT_DENSITY
  * @helpurl https://localhost:3000/help.html#function-reference
  * @param [z] Redshift, ≥ 0 (value or range); omitted = today.
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [unit] Output unit, default "kg/m3" (e.g. "solMass/Mpc3", "g/cm3").
  * @returns Critical density (kg/m3 by default).
  */
-export function RHO_CRIT(z?: any[][], model?: any[][], unit?: string): Promise<any[][]> {
-  return callFromSheet(d.RHO_CRIT, [z, model, unit]);
+export function CRIT_DENSITY(z?: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+  return callFromSheet(d.CRIT_DENSITY, [z, model, unit]);
 }
 
 /**
- * Proper size per unit angle at z (angular scale), in kpc/arcsec unless a unit is given.
- * @customfunction ANG_SCALE ANG_SCALE
+ * Proper size per unit angle at z (proper scale), in kpc/arcsec unless a unit is given.
+ * @customfunction PROPER_SCALE PROPER_SCALE
  * @helpurl https://localhost:3000/help.html#function-reference
  * @param z Redshift, > 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [unit] Output unit, default "kpc/arcsec" (e.g. "Mpc/deg").
- * @returns Angular scale (kpc/arcsec by default).
+ * @returns Proper scale (kpc/arcsec by default).
  */
-export function ANG_SCALE(z: any[][], model?: any[][], unit?: string): Promise<any[][]> {
-  return callFromSheet(d.ANG_SCALE, [z, model, unit]);
+export function PROPER_SCALE(z: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+  return callFromSheet(d.PROPER_SCALE, [z, model, unit]);
 }
 
 /**
@@ -378,7 +378,7 @@ export function FLUX_AB(m_ab: any[][], unit?: string): Promise<any[][]> {
  * @param value Value of the quantity, in its default unit unless one is given (value or range).
  * @param quantity Name of the function inverted, e.g. "DIST_LUM".
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
- * @param [unit] Unit of value; default that of the quantity (Mpc, Gyr, or Mpc3 for VOLUME).
+ * @param [unit] Unit of value; default that of the function inverted (Mpc, Gyr, Gpc3 for VOLUME; MODULUS in mag takes none).
  * @returns Redshift.
  */
 export function REDSHIFT(value: any[][], quantity: string, model?: any[][], unit?: string): Promise<any[][]> {
@@ -399,22 +399,29 @@ export function CONVERT(value: any[][], from: string, to: string): Promise<any[]
 }
 
 /**
- * Canonical model spec text from parameters (for the model argument of the other functions).
+ * Model spec text: a base model changed by key/value pairs, e.g. ZC.MODEL("P18-BAO", "H0", B1); keys H0, Om, OL, Ok, Ob, w0, wa, Tcmb, Neff, mnu.
  * @customfunction MODEL MODEL
  * @helpurl https://localhost:3000/help.html#model-spec
- * @param H0 Hubble constant, km/s/Mpc.
- * @param Om Matter density today, massive neutrinos included.
- * @param [OL] Dark-energy density today; omitted = flat.
- * @param [w0] Dark-energy equation of state today, default -1.
- * @param [wa] Its slope, w(a) = w0 + wa(1 − a), default 0.
- * @param [Tcmb] CMB temperature in K, default 0 (no radiation).
- * @param [Neff] Effective number of neutrino species, default 3.046.
- * @param [mnu] Neutrino mass in eV (one massive species), or a list as text "0.05,0.01"; default 0.
- * @param [Ob] Baryon density today (informational).
- * @returns Model spec text.
+ * @param base Model to start from: preset, spec, key/value block or workbook model; blank = workbook's active model.
+ * @param key1 Parameter to change, e.g. "H0" (value or range).
+ * @param value1 Its new value (value or range); mnu may be a list as text "0.05,0.01".
+ * @param [key2] Second parameter to change.
+ * @param [value2] Its new value.
+ * @param [key3] Third parameter to change.
+ * @param [value3] Its new value.
+ * @param [key4] Fourth parameter to change.
+ * @param [value4] Its new value.
+ * @param [key5] Fifth parameter to change.
+ * @param [value5] Its new value.
+ * @param [key6] Sixth parameter to change.
+ * @param [value6] Its new value.
+ * @returns Canonical model spec text (for the model argument of the other functions).
  */
-export function MODEL(H0: any, Om: any, OL?: any, w0?: any, wa?: any, Tcmb?: any, Neff?: any, mnu?: any, Ob?: any): Promise<any[][]> {
-  return callFromSheet(d.MODEL, [H0, Om, OL, w0, wa, Tcmb, Neff, mnu, Ob]);
+export function MODEL(
+  base: any[][], key1: any[][], value1: any[][], key2?: any[][], value2?: any[][], key3?: any[][], value3?: any[][],
+  key4?: any[][], value4?: any[][], key5?: any[][], value5?: any[][], key6?: any[][], value6?: any[][],
+): Promise<any[][]> {
+  return callFromSheet(d.MODEL, [base, key1, value1, key2, value2, key3, value3, key4, value4, key5, value5, key6, value6]);
 }
 
 /**
@@ -430,10 +437,10 @@ export function PARAM(name: any[][], model?: any[][]): Promise<any[][]> {
 }
 
 /**
- * Table of the built-in parameter sets: name and a one-line description with its source.
+ * Table of the parameter sets: the built-in presets with their sources, then the models defined in this workbook.
  * @customfunction PRESETS PRESETS
  * @helpurl https://localhost:3000/help.html#presets
- * @returns Two columns: preset name, description.
+ * @returns Two columns: name, description.
  */
 export function PRESETS(): Promise<any[][]> {
   return callFromSheet(d.PRESETS, []);

@@ -3,6 +3,17 @@
  * their own words; these add what only the adapter knows: which argument, which cell, which shape.
  */
 export const messages = {
+  /** The message as the sheet shows it: the ZC function first. */
+  inFunction: (fn: string, message: string) => (message.startsWith("ZC.") ? message : `ZC.${fn}: ${message}`),
+  missingMagnitude: (arg: string, value: number) =>
+    `${arg} = ${formatValue(value)} is a catalogue's missing-value flag (|magnitude| ≥ 50), not a magnitude`,
+  belowMin: (arg: string, value: number, unit: string, min: number, exclusive: boolean) =>
+    `${arg} = ${withUnit(value, unit)} must be ${exclusive ? ">" : "≥"} ${withUnit(min, unit)}`,
+  aboveMax: (arg: string, value: number, unit: string, max: number, what: string) =>
+    `${arg} = ${withUnit(value, unit)} is above ${withUnit(max, unit)} (${what})`,
+  blockKey: (key: string, valid: readonly string[]) =>
+    `model: unknown key "${key}" in the key/value block: use ${valid.join(", ")}`,
+  pairWithoutKey: (index: number) => `value${index} is given but key${index} is blank`,
   notANumber: (arg: string, value: unknown) => `${arg}: ${describeValue(value)} where a number belongs`,
   notFinite: (arg: string) => `${arg}: not a finite number`,
   notText: (arg: string, value: unknown) => `${arg}: ${describeValue(value)} where text belongs`,
@@ -19,8 +30,17 @@ export const messages = {
   noEquality: "zeq: this model has no radiation (Tcmb = 0), so no matter–radiation equality",
   internal: (fn: string, detail: string) => `${fn}: unexpected problem (${detail}); please report it`,
   activeModelFallback: (detail: string) =>
-    `the workbook's stored cosmology could not be read (${detail}); using PLANCK2018 until one is applied`,
+    `the workbook's stored cosmology could not be read (${detail}); using P18-BAO until one is applied`,
 } as const;
+
+/** A number as the sheet shows it in a message: at most 6 significant digits. */
+export function formatValue(x: number): string {
+  return Number.isFinite(x) ? String(Number(x.toPrecision(6))) : String(x);
+}
+
+function withUnit(x: number, unit: string): string {
+  return unit ? `${formatValue(x)} ${unit}` : formatValue(x);
+}
 
 function describeValue(value: unknown): string {
   if (typeof value === "string") return `text "${value.length > 40 ? `${value.slice(0, 40)}…` : value}"`;

@@ -1,11 +1,16 @@
 /**
  * The `model` argument of the worksheet functions: omitted or blank means the workbook's active
  * cosmology; text is a preset name or a model spec; a two-column block of key/value cells
- * (H0 | 70, Om | 0.3, ...) is one model; any other range of text cells broadcasts, one model a cell.
+ * (H0 | 70, Om | 0.3, ...) is one model, with or without a header row; any other range of text cells
+ * broadcasts, one model a cell.
  */
 import { parameterKeys } from "../core/index.js";
+import { CellError } from "./cellError.js";
+import { messages } from "./messages.js";
 
-const blockKeys = new Set([...parameterKeys.map((k) => k.toLowerCase()), "preset"]);
+const blockKeyNames = [...parameterKeys, "preset"];
+const blockKeys = new Set(blockKeyNames.map((k) => k.toLowerCase()));
+const isKey = (key: unknown) => typeof key === "string" && blockKeys.has(key.trim().toLowerCase());
 
 /** True for a cell that Excel passes for an empty cell. */
 export function isBlank(value: unknown): boolean {
@@ -14,18 +19,29 @@ export function isBlank(value: unknown): boolean {
 
 /**
  * If `matrix` is a key/value block, the spec text it spells (preset first), else undefined.
- * Rows with a blank key are skipped; every other key must be a parameter key or "preset".
+ *
+ * A block has two columns; its keys (first column) are text, and most of them are parameter keys or
+ * "preset", or its values hold a number. A first row whose key is no key and whose value is text is
+ * a header (`param | value`) and is skipped; rows with a blank key are skipped.
+ * @throws CellError (#VALUE!) for a block with a key that is not a parameter key, naming it
  */
 export function keyValueBlockSpec(matrix: unknown[][]): string | undefined {
   if (matrix.length === 0 || matrix[0].length !== 2) return undefined;
+  let rows = matrix.filter(([key]) => !isBlank(key));
+  const [first] = rows;
+  if (rows.length > 1 && first && !isKey(first[0]) && typeof first[1] === "string" && Number.isNaN(Number(first[1]))) rows = rows.slice(1);
+  if (rows.length === 0 || rows.some(([key]) => typeof key !== "string")) return undefined;
+  const known = rows.filter(([key]) => isKey(key)).length;
+  const hasNumber = rows.some(([, value]) => typeof value === "number");
+  if (known === 0 || (2 * known < rows.length && !hasNumber)) return undefined;
   let preset: string | undefined;
   const pairs: string[] = [];
-  for (const [key, value] of matrix) {
-    if (isBlank(key)) continue;
-    if (typeof key !== "string" || !blockKeys.has(key.trim().toLowerCase())) return undefined;
+  for (const [key, value] of rows) {
+    const name = String(key).trim();
+    if (!isKey(name)) throw new CellError("value", messages.blockKey(name, blockKeyNames));
     if (isBlank(value)) continue;
-    if (key.trim().toLowerCase() === "preset") preset = String(value).trim();
-    else pairs.push(`${key.trim()}=${String(value).trim()}`);
+    if (name.toLowerCase() === "preset") preset = String(value).trim();
+    else pairs.push(`${name}=${String(value).trim()}`);
   }
   if (preset === undefined && pairs.length === 0) return undefined;
   return [...(preset ? [preset] : []), ...pairs].join("; ");

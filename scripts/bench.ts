@@ -78,7 +78,7 @@ if (only >= 0) {
   process.exit(0);
 }
 
-const specs = (process.env.ZC_BENCH_SPECS ?? "PLANCK2018,CONCORDANCE").split(",");
+const specs = (process.env.ZC_BENCH_SPECS ?? "P18-BAO,CONCORDANCE").split(",");
 const rows: Record<string, Record<string, number>> = {};
 for (const spec of specs) {
   const out = execFileSync(process.execPath, [...process.execArgv, fileURLToPath(import.meta.url), "--only", spec]);

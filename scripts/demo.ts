@@ -6,7 +6,7 @@
  * Every formula is written the way Excel itself saves a JavaScript custom function,
  * `_xldudf_ZC_DIST_LUM(B3)` (see functions/storedFormula.ts): a file holding the bare `ZC.` spelling
  * would show #NAME? even after the add-in loads. Every formula cell carries a cached value computed
- * by the same code the worksheet functions run (under PLANCK2018, the model of a new workbook), so a
+ * by the same code the worksheet functions run (under P18-BAO, the model of a new workbook), so a
  * reader without the add-in sees the numbers.
  *
  * The what-if table holds one formula per cell, `=ZC.DIST_LUM($A2,B$1)`, rather than one spilling
@@ -75,7 +75,7 @@ sheet.addRow(["Model used above: the workbook's active cosmology.", zc("ZC.DESCR
 sheet.columns.forEach((c) => (c.width = 16));
 
 const whatIf = workbook.addWorksheet("What-if");
-const models = [defaultModelSpec, "WMAP9", `${defaultModelSpec}; H0=73`];
+const models = [defaultModelSpec, "W9-ALL", `${defaultModelSpec}; H0=73`];
 whatIf.addRow(["z", ...models]);
 const columns = ["B", "C", "D"];
 [0.1, 0.25, 0.5, 1, 2, 3, 5, 8].forEach((z, i) => {

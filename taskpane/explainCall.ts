@@ -43,14 +43,14 @@ const about: Record<string, { summary: string; equation: string; method: string;
   DIST_TRANS: { summary: "transverse comoving distance", equation: "D_M = D_H/√Ωk · sinh(√Ωk D_C/D_H) (open), D_C (flat), sin form (closed)", method: tabled },
   DIST_BETWEEN: { summary: "angular-diameter distance from z1 to z2", equation: "D_A12 = S_k(D_C2 − D_C1)/(1+z2)", method: tabled },
   DIST_LIGHT: { summary: "light-travel distance", equation: "c·t_L, t_L = t_H ∫₀^z dz′/((1+z′)E(z′))", method: tabled },
-  MODULUS: { summary: "distance modulus", equation: "μ = 5·log10(D_L / 10 pc)", method: tabled },
+  MODULUS: { summary: "distance modulus", equation: "μ = 5·log10(|D_L| / 10 pc)", method: tabled },
   LOOKBACK: { summary: "look-back time", equation: "t_L = t_H ∫₀^z dz′/((1+z′)E(z′)), t_H = 1/H0", method: tabled },
   AGE: { summary: "age of the universe at z", equation: "t(z) = t_H ∫₀^{1/(1+z)} da/(a·E(a))", method: tabled },
   HUBBLE: { summary: "Hubble parameter", equation: "H(z) = H0·E(z), E² = Ωm-terms + Ωr(1+z)⁴ + Ωk(1+z)² + Ω_DE f_DE(z)", method: closedForm },
   OMEGA: { summary: "density parameter of one component", equation: "Ω_x(z) = ρ_x(z)/ρ_crit(z)", method: closedForm },
   CMB_TEMP: { summary: "CMB temperature", equation: "T(z) = Tcmb·(1+z)", method: closedForm },
-  RHO_CRIT: { summary: "critical density", equation: "ρ_crit = 3H(z)²/(8πG)", method: closedForm },
-  ANG_SCALE: { summary: "proper size per unit angle", equation: "ℓ/θ = D_A", method: tabled },
+  CRIT_DENSITY: { summary: "critical density", equation: "ρ_crit = 3H(z)²/(8πG)", method: closedForm },
+  PROPER_SCALE: { summary: "proper size per unit angle", equation: "ℓ/θ = D_A", method: tabled },
   SIZE: { summary: "proper size of an angle", equation: "ℓ = D_A·θ (small angle)", method: tabled },
   ANGLE: { summary: "angle of a proper size", equation: "θ = ℓ/D_A (small angle)", method: tabled },
   VOLUME: { summary: "all-sky comoving volume within z", equation: "V_C = 4π ∫₀^{D_C} D_M² dD_C", method: tabled },
@@ -66,9 +66,9 @@ const about: Record<string, { summary: string; equation: string; method: string;
   FLUX_AB: { summary: "flux density of an AB magnitude", equation: "f_ν = 3630.78 Jy · 10^(−m_AB/2.5)", method: closedForm },
   REDSHIFT: { summary: "redshift at which a quantity takes a value", equation: "solves Q(z) = value (lower branch for D_A)", method: inverse },
   CONVERT: { summary: "unit conversion", equation: "value × (from / to), FITS unit syntax", method: closedForm },
-  MODEL: { summary: "canonical model spec text", equation: "—", method: closedForm },
+  MODEL: { summary: "model spec text: a base model with parameters changed", equation: "—", method: closedForm },
   PARAM: { summary: "a parameter or derived value of the model", equation: "—", method: closedForm },
-  PRESETS: { summary: "the built-in parameter sets", equation: "—", method: closedForm },
+  PRESETS: { summary: "the parameter sets: built in, and defined in this workbook", equation: "—", method: closedForm },
   DESCRIBE: { summary: "the model in words", equation: "—", method: closedForm },
   VERSION: { summary: "version and engine conventions", equation: "—", method: closedForm },
 };
@@ -188,7 +188,7 @@ async function explainCall(
     const explicit = typeof text === "string" && text.trim() !== "";
     const spec = explicit ? (text as string) : active.spec;
     try {
-      const m = new Cosmology(parseModelSpec(spec));
+      const m = new Cosmology(parseModelSpec(spec, active.models?.named));
       model = { spec: m.spec, source: explicit ? "given in the formula" : "the workbook's model", description: describeModel(m) };
       conventions = modelConventions(m);
     } catch (e) {

@@ -121,7 +121,7 @@ export function tokenize(formula: string): Token[] {
 /**
  * Every function call in a formula, outermost first, with its arguments split at top-level
  * separators.
- * @param formula the formula text, e.g. '=ZC.DIST_LUM(A2, "PLANCK2018; H0=73")'
+ * @param formula the formula text, e.g. '=ZC.DIST_LUM(A2, "P18-BAO; H0=73")'
  * @returns the calls found (nested ones too)
  */
 export function findCalls(formula: string): FormulaCall[] {

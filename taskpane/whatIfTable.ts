@@ -15,11 +15,11 @@ export const tableQuantities: Record<string, string> = {
   LOOKBACK: "look-back time (Gyr)",
   AGE: "age at z (Gyr)",
   HUBBLE: "Hubble parameter (km/s/Mpc)",
-  ANG_SCALE: "angular scale (kpc/arcsec)",
+  PROPER_SCALE: "proper scale (kpc/arcsec)",
   VOLUME: "comoving volume (Gpc3)",
   VOLUME_ELEMENT: "volume element (Mpc3/sr)",
   CMB_TEMP: "CMB temperature (K)",
-  RHO_CRIT: "critical density (kg/m3)",
+  CRIT_DENSITY: "critical density (kg/m3)",
 };
 
 /** Redshifts start, start+step, … ≤ stop (at most 10,000). */

@@ -93,8 +93,8 @@ describe("demo workbook, read as Excel reads it", () => {
   test("the README's what-if and model-in-cells descriptions match the file", () => {
     const readme = readFileSync(`${root}README.md`, "utf8");
     const whatIf = sheets.get("What-if")!;
-    expect(["B1", "C1", "D1"].map((a) => whatIf.get(a)!.value)).toEqual(["PLANCK2018", "WMAP9", "PLANCK2018; H0=73"]);
-    expect(readme).toContain("the models `PLANCK2018`, `WMAP9` and `PLANCK2018; H0=73` in B1:D1");
+    expect(["B1", "C1", "D1"].map((a) => whatIf.get(a)!.value)).toEqual(["P18-BAO", "W9-ALL", "P18-BAO; H0=73"]);
+    expect(readme).toContain("the models `P18-BAO`, `W9-ALL` and `P18-BAO; H0=73` in B1:D1");
     const [, typed] = /in B2:D9 one formula per cell, `=([^`]+)`/.exec(readme)!;
     expect(whatIf.get("B2")!.formula).toBe(storedFormula(typed));
     for (const column of ["B", "C", "D"]) for (let r = 2; r <= 9; r++) {
@@ -106,9 +106,9 @@ describe("demo workbook, read as Excel reads it", () => {
     expect(sheets.get("Model in cells")!.get("B6")!.formula).toBe(storedFormula(inCells));
   });
 
-  test("cached D_L values are the engine's under PLANCK2018, the model of a new workbook", () => {
+  test("cached D_L values are the engine's under P18-BAO, the model of a new workbook", () => {
     // reference: core Cosmology (checked against mpmath and astropy in its own tests), same model
-    const p18 = Cosmology.fromSpec("PLANCK2018");
+    const p18 = Cosmology.fromSpec("P18-BAO");
     const cells = sheets.get("Catalogue (invented)")!;
     for (let r = 3; r <= 14; r++) {
       expectRelative(Number(cells.get(`F${r}`)!.value), p18.luminosityDistanceMpc(Number(cells.get(`B${r}`)!.value)), 1e-15, `F${r}`);

@@ -56,28 +56,28 @@ const sheets = () => ({
 
 describe("workbook settings", () => {
   test("read what the workbook stores, write with saveAsync, and recover from corrupt values", async () => {
-    let fake = install({ settings: { "zcell.activeModel": "WMAP9" }, sheets: sheets() });
-    expect(readModelSetting()).toBe("WMAP9");
-    expect(readActiveModel()).toEqual({ spec: "WMAP9", stored: true });
-    await writeModelSetting("PLANCK2018; H0=73");
-    expect(fake.saved).toEqual({ "zcell.activeModel": "PLANCK2018; H0=73" });
+    let fake = install({ settings: { "zcell.activeModel": "W9-ALL" }, sheets: sheets() });
+    expect(readModelSetting()).toBe("W9-ALL");
+    expect(readActiveModel()).toMatchObject({ spec: "W9-ALL", stored: true });
+    await writeModelSetting("P18-BAO; H0=73");
+    expect(fake.saved).toEqual({ "zcell.activeModel": "P18-BAO; H0=73" });
 
     fake = install({ settings: { "zcell.activeModel": 42 }, sheets: sheets() });
     const corrupt = readActiveModel();
-    expect(corrupt.spec).toBe("PLANCK2018");
+    expect(corrupt.spec).toBe("P18-BAO");
     expect(corrupt.warning).toMatch(/could not be read \(not text\)/);
-    install({ settings: { "zcell.activeModel": "PLANCK2018; Om=x" }, sheets: sheets() });
+    install({ settings: { "zcell.activeModel": "P18-BAO; Om=x" }, sheets: sheets() });
     expect(readActiveModel().warning).toMatch(/Om: "x" is not a number/);
     install({ settings: {}, sheets: sheets() });
     expect(readModelSetting()).toBeUndefined();
-    expect(readActiveModel()).toEqual({ spec: "PLANCK2018", stored: false });
+    expect(readActiveModel()).toMatchObject({ spec: "P18-BAO", stored: false });
   });
 
   test("a failed save is reported, not swallowed", async () => {
     install({ settings: {}, sheets: sheets() });
     (globalThis as unknown as { Office: { context: { document: { settings: { saveAsync(cb: (r: unknown) => void): void } } } } }).Office.context.document.settings.saveAsync = (cb) =>
       cb({ status: "failed", error: { message: "read-only workbook" } });
-    await expect(writeModelSetting("WMAP9")).rejects.toThrow("read-only workbook");
+    await expect(writeModelSetting("W9-ALL")).rejects.toThrow("read-only workbook");
   });
 });
 
@@ -101,7 +101,7 @@ describe("Excel interactions", () => {
   });
 
   test("writes a planned table as formulas and values", async () => {
-    const plan = planTableWithRedshifts("LOOKBACK", [1, 2], ["PLANCK2018", "WMAP9"], 5, 4);
+    const plan = planTableWithRedshifts("LOOKBACK", [1, 2], ["P18-BAO", "W9-ALL"], 5, 4);
     await writeBlock("Sheet1!D5:F7", plan.cells);
     const cells = fake.sheets.Sheet1;
     expect(cells.D5.value).toBe("z");
@@ -141,7 +141,7 @@ describe("Excel interactions", () => {
     [1.17,       "comment"],
   ])("thawing (ExcelApi %s) reads the %s, writes the formula back and removes the annotation", async (excelApi, carrier) => {
     fake = install({ settings: {}, sheets: sheets(), excelApi });
-    await freezeCells("Other sheet", [{ address: "C4", value: 13.8, note: "Frozen by zcell 0.1.0 on 2026-12-01.\nFormula: =zc.age()\nModel: WMAP9" }]);
+    await freezeCells("Other sheet", [{ address: "C4", value: 13.8, note: "Frozen by zcell 0.1.0 on 2026-12-01.\nFormula: =zc.age()\nModel: W9-ALL" }]);
     expect(fake.sheets["Other sheet"].C4).toEqual({ value: 13.8 });
     const found = await readAnnotations("Other sheet", ["C4", "C5"]);
     expect([...found.keys()]).toEqual(["C4"]);

@@ -13,11 +13,11 @@ import { definitions } from "../functions/definitions.js";
 import { evaluate, type Cell } from "../functions/evaluate.js";
 import { expectRelative } from "./helpers.js";
 
-const active = { spec: "PLANCK2018", stored: false };
+const active = { spec: "P18-BAO", stored: false };
 const run = (name: string, ...args: unknown[]): Cell[][] => evaluate(definitions[name], args, active);
 const one = (name: string, ...args: unknown[]): Cell => run(name, ...args)[0][0];
-const p18 = Cosmology.fromSpec("PLANCK2018");
-const wmap9 = Cosmology.fromSpec("WMAP9");
+const p18 = Cosmology.fromSpec("P18-BAO");
+const wmap9 = Cosmology.fromSpec("W9-ALL");
 
 function expectError(cell: Cell, kind: "value" | "num" | "na", message: RegExp): void {
   expect(cell).toBeInstanceOf(CellError);
@@ -28,7 +28,7 @@ function expectError(cell: Cell, kind: "value" | "num" | "na", message: RegExp):
 describe("broadcasting", () => {
   test("a column of redshifts against a row of models gives a what-if table", () => {
     const zs = [[0.1], [1], [3]];
-    const models = [["PLANCK2018", "WMAP9", "H0=70; Om=0.3"]];
+    const models = [["P18-BAO", "W9-ALL", "H0=70; Om=0.3"]];
     const table = run("DIST_LUM", zs, models);
     expect(table.length).toBe(3);
     expect(table[0].length).toBe(3);
@@ -63,7 +63,7 @@ describe("broadcasting", () => {
 
   test("a huge broadcast is refused rather than allocated", () => {
     const col = Array.from({ length: 3000 }, (_, i) => [i / 1000]);
-    const row = [Array.from({ length: 3000 }, () => "PLANCK2018")];
+    const row = [Array.from({ length: 3000 }, () => "P18-BAO")];
     expectError(one("DIST_LUM", col, row), "value", /at most/);
   });
 });
@@ -71,15 +71,15 @@ describe("broadcasting", () => {
 describe("the model argument", () => {
   test("omitted or blank is the active model", () => {
     expect(one("AGE")).toBe(p18.ageTodayGyr);
-    expect(evaluate(definitions.AGE, [undefined, ""], { spec: "WMAP9", stored: true })[0][0]).toBe(wmap9.ageTodayGyr);
+    expect(evaluate(definitions.AGE, [undefined, ""], { spec: "W9-ALL", stored: true })[0][0]).toBe(wmap9.ageTodayGyr);
   });
 
   test("a two-column key/value block is one model", () => {
     const block = [["H0", 70], ["Om", 0.3], ["OL", 0.7], ["", ""]];
     const m = Cosmology.fromSpec("H0=70; Om=0.3; OL=0.7");
     expect(run("DIST_LUM", [[1], [2]], block)).toEqual([[m.luminosityDistanceMpc(1)], [m.luminosityDistanceMpc(2)]]);
-    const withPreset = [["preset", "PLANCK2018"], ["H0", 73]];
-    expect(one("AGE", 0, withPreset)).toBe(Cosmology.fromSpec("PLANCK2018; H0=73").ageTodayGyr);
+    const withPreset = [["preset", "P18-BAO"], ["H0", 73]];
+    expect(one("AGE", 0, withPreset)).toBe(Cosmology.fromSpec("P18-BAO; H0=73").ageTodayGyr);
   });
 
   test("bad specs give #VALUE! and unphysical models #NUM!, with the core's words", () => {
@@ -95,10 +95,10 @@ describe("units and defaults", () => {
     ["DIST_LUM",       [1],                        p18.luminosityDistanceMpc(1),                           "default Mpc"],
     ["DIST_LUM",       [1, "", "Gly"],             convertUnit(p18.luminosityDistanceMpc(1), "Mpc", "Gly"), "unit given"],
     ["LOOKBACK",       [1, "", "Myr"],             p18.lookbackTimeGyr(1) * 1000,                           "Myr"],
-    ["ANG_SCALE",      [1],                        convertUnit(p18.angularDiameterDistanceMpc(1), "Mpc/rad", "kpc/arcsec"), "default kpc/arcsec"],
+    ["PROPER_SCALE",      [1],                        convertUnit(p18.angularDiameterDistanceMpc(1), "Mpc/rad", "kpc/arcsec"), "default kpc/arcsec"],
     ["VOLUME",         [1],                        p18.comovingVolumeMpc3(1) / 1e9,                          "default Gpc3"],
     ["HUBBLE",         [],                         67.66,                                                  "H0 of the preset"],
-    ["RHO_CRIT",       [0, "", "g/cm3"],           p18.criticalDensityKgM3(0) / 1000,                       "kg/m3 → g/cm3"],
+    ["CRIT_DENSITY",       [0, "", "g/cm3"],           p18.criticalDensityKgM3(0) / 1000,                       "kg/m3 → g/cm3"],
     ["SIZE",           [1, 1],                     convertUnit(p18.angularDiameterDistanceMpc(1) * convertUnit(1, "arcsec", "rad"), "Mpc", "kpc"), "arcsec in, kpc out"],
     ["ANGLE",          [10, 1],                    convertUnit(convertUnit(10, "kpc", "Mpc") / p18.angularDiameterDistanceMpc(1), "rad", "arcsec"), "kpc in, arcsec out"],
     ["VOLUME_SHELL",   [0.5, 1],                   (p18.comovingVolumeMpc3(1) - p18.comovingVolumeMpc3(0.5)) / 1e9, "all sky"],
@@ -115,7 +115,7 @@ describe("units and defaults", () => {
     ["FLUX_AB",        [23.9, "uJy"],              1e6 * 10 ** (-(23.9 + 48.6) / 2.5) * 1e23,                "uJy out"],
     ["MODULUS",        [1],                        p18.distanceModulusMag(1),                                "mag"],
     ["CMB_TEMP",       [1],                        2.7255 * 2,                                               "Tcmb (1+z)"],
-    ["OMEGA",          ["m"],                      0.3111,                                                   "Om today"],
+    ["OMEGA",          ["matter"],                 0.3111,                                                   "Om today"],
     ["PARAM",          ["age0"],                   p18.ageTodayGyr,                                          "age today"],
     ["PARAM",          ["zeq"],                    p18.equalityRedshift,                                     "z_eq"],
     ["CONVERT",        [1, "Mpc", "Gly"],          convertUnit(1, "Mpc", "Gly"),                             "conversion"],
@@ -145,17 +145,25 @@ describe("inverse and text functions", () => {
     expectError(one("REDSHIFT", 1, "SPEED"), "value", /quantity: "SPEED" is not one of/);
   });
 
-  test("MODEL prints the canonical spec and validates it", () => {
-    expect(one("MODEL", 70, 0.3)).toBe("H0=70; Om=0.3");
-    expect(one("MODEL", 70, 0.3, 0.7, -1, 0, 2.7255, 3.046, "0.05,0.01")).toBe("H0=70; Om=0.3; OL=0.7; Tcmb=2.7255; mnu=0.05,0.01");
-    expectError(one("MODEL", -70, 0.3), "num", /H0 must be a positive number/);
+  test("MODEL changes a base model by key/value pairs and prints the canonical spec", () => {
+    expect(one("MODEL", "P18-BAO", "H0", 73)).toBe("P18-BAO; H0=73");
+    expect(one("MODEL", "P18-BAO; H0=70", "h0", 73)).toBe("P18-BAO; H0=73"); // a later value wins
+    expect(one("MODEL", "CONCORDANCE", "Ok", 0.1)).toBe("CONCORDANCE; Ok=0.1"); // Ok replaces the flat default
+    expect(one("MODEL", "H0=70; Om=0.3", "OL", 0.7, "Tcmb", 2.7255, "mnu", "0.05,0.01")).toBe("H0=70; Om=0.3; OL=0.7; Tcmb=2.7255; mnu=0.05,0.01");
+    expect(one("MODEL", null, "H0", 73)).toBe("P18-BAO; H0=73"); // blank base = the workbook's model
+    expect(one("MODEL", [["H0", 70], ["Om", 0.3]], "OL", 0.7)).toBe("H0=70; Om=0.3; OL=0.7"); // a key/value block as base
+    expect(run("MODEL", "P18-BAO", "H0", [[70], [73]])).toEqual([["P18-BAO; H0=70"], ["P18-BAO; H0=73"]]);
+    expectError(one("MODEL", "P18-BAO", "H0", -70), "num", /H0 must be a positive number/);
+    expectError(one("MODEL", "P18-BAO", "Omm", 0.3), "value", /unknown key "Omm": use H0, Om/);
+    expectError(one("MODEL", "P18-BAO", "H0", 70, "H0", 71), "value", /H0 is given twice/);
+    expectError(one("MODEL", "P18-BAO", "H0", 70, null, 0.3), "value", /value2 is given but key2 is blank/);
   });
 
   test("PRESETS lists every preset with its source; DESCRIBE and VERSION state the assumptions", () => {
     const table = run("PRESETS");
     expect(table.slice(1).map((r) => r[0])).toEqual(presets.map((p) => p.name));
-    expect(String(table[1][1])).toMatch(/Planck 2018 VI \(A&A 641, A6\) Table 2/);
-    expect(one("DESCRIBE")).toMatch(/^PLANCK2018: flat ΛCDM; H0 = 67.66 km\/s\/Mpc; Om = 0.3111 \(matter incl. massive ν\)/);
+    expect(String(table[1][1])).toBe("H0 67.66, Ωm 0.3111 (incl. one 0.06 eV ν), flat — Planck 2018 VI, A&A 641, A6, Table 2, CMB+lensing+BAO");
+    expect(one("DESCRIBE")).toMatch(/^P18-BAO: flat: matter \+ Λ \+ radiation; H0 = 67.66 km\/s\/Mpc; Om = 0.3111 \(matter incl. massive ν\)/);
     expect(one("VERSION")).toMatch(/^zcell \d+\.\d+\.\d+; distances per Hogg \(1999\); Om includes massive neutrinos/);
   });
 
@@ -177,10 +185,10 @@ describe("model cache", () => {
     const { cachedModelCount, modelFor } = await import("../functions/modelCache.js");
     for (let i = 0; i < 100; i++) modelFor(`H0=${60 + i / 10}; Om=0.3`);
     expect(cachedModelCount()).toBe(64);
-    const a = modelFor("WMAP7");
+    const a = modelFor("W7-BAO");
     for (let i = 0; i < 63; i++) modelFor(`H0=${50 + i / 10}; Om=0.3`);
-    expect(modelFor("WMAP7")).toBe(a); // still cached: it was used most recently before the 63 others
+    expect(modelFor("W7-BAO")).toBe(a); // still cached: it was used most recently before the 63 others
     for (let i = 0; i < 64; i++) modelFor(`H0=${40 + i / 10}; Om=0.3`);
-    expect(modelFor("WMAP7")).not.toBe(a); // evicted, rebuilt
+    expect(modelFor("W7-BAO")).not.toBe(a); // evicted, rebuilt
   });
 });

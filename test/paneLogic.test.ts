@@ -8,16 +8,16 @@ import { planTableForColumn, redshiftSteps } from "../taskpane/whatIfTable.js";
 
 describe("model form", () => {
   test("shows a preset and gives back its canonical spec; an edit is a change to the preset", () => {
-    const form = formFromSpec("PLANCK2018");
+    const form = formFromSpec("P18-BAO");
     expect(form.OL).toBe("flat");
-    expect(modelFromForm(form).spec).toBe("PLANCK2018");
-    expect(modelFromForm({ ...form, H0: "73" }).spec).toBe("PLANCK2018; H0=73");
+    expect(modelFromForm(form).spec).toBe("P18-BAO");
+    expect(modelFromForm({ ...form, H0: "73" }).spec).toBe("P18-BAO; H0=73");
     // without a preset the defaults (w0 = −1, wa = 0, Tcmb = 0, Neff = 3.046, mnu = 0) are left out
     expect(modelFromForm({ ...form, preset: "", OL: "0.7", Tcmb: "0", mnu: "0", Ob: "" }).spec).toBe("H0=67.66; Om=0.3111; OL=0.7");
   });
 
   test("puts the core's own message on the field that is wrong", () => {
-    const form = formFromSpec("PLANCK2018");
+    const form = formFromSpec("P18-BAO");
     expect(modelFromForm({ ...form, H0: "abc" }).errors.H0).toBe('H0: "abc" is not a number (use \'.\' as the decimal point)');
     expect(modelFromForm({ ...form, H0: "-1" }).errors.H0).toMatch(/^H0 must be a positive number/);
     expect(modelFromForm({ ...form, preset: "", Tcmb: "0", mnu: "0", OL: "2", Om: "0", Ob: "" }).errors.model).toMatch(/^no big bang/);
@@ -25,7 +25,7 @@ describe("model form", () => {
   });
 
   test("derived values include the age and z_eq, and say when there is no radiation", () => {
-    const d = derivedValues(modelFromForm(formFromSpec("PLANCK2018")).model!);
+    const d = derivedValues(modelFromForm(formFromSpec("P18-BAO")).model!);
     expect(d.find((x) => x.label === "Age today")!.value).toBe("13.787 Gyr"); // Planck 2018 VI Table 2: 13.787
     expect(derivedValues(modelFromForm(formFromSpec("CONCORDANCE")).model!).find((x) => x.label.startsWith("Matter"))!.value).toBe("none (Tcmb = 0)");
   });
@@ -48,9 +48,9 @@ describe("what-if tables", () => {
   });
 
   test("a selected column gets the models in the row above and one formula beside it", () => {
-    const plan = planTableForColumn("AGE", { row: 2, col: 1, rows: 39 }, ["PLANCK2018", "WMAP9", "EDS"]);
+    const plan = planTableForColumn("AGE", { row: 2, col: 1, rows: 39 }, ["P18-BAO", "W9-ALL", "EDS"]);
     expect(plan.anchor).toBe("B1");
-    expect(plan.cells).toEqual([["PLANCK2018", "WMAP9", "EDS"], ["=ZC.AGE($A$2:$A$40,$B$1:$D$1)", "", ""]]);
+    expect(plan.cells).toEqual([["P18-BAO", "W9-ALL", "EDS"], ["=ZC.AGE($A$2:$A$40,$B$1:$D$1)", "", ""]]);
     expect(plan.area).toBe("B1:D40");
     expect(() => planTableForColumn("AGE", { row: 1, col: 1, rows: 3 }, ["EDS"])).toThrow(/below a header row/);
     expect(() => planTableForColumn("AGE", { row: 2, col: 1, rows: 3 }, Array(9).fill("EDS"))).toThrow(/at most eight/);
@@ -59,9 +59,9 @@ describe("what-if tables", () => {
 
 describe("provenance and contrast", () => {
   test("the note carries formula, every model and the version", () => {
-    const note = provenanceNote("=ZC.DIST_LUM(A2)", ["WMAP9", "WMAP9"], "0.1.0", "2026-12-01");
+    const note = provenanceNote("=ZC.DIST_LUM(A2)", ["W9-ALL", "W9-ALL"], "0.1.0", "2026-12-01");
     expect(note).toBe(
-      "Frozen by zcell 0.1.0 on 2026-12-01.\nFormula: =ZC.DIST_LUM(A2)\nModel: WMAP9\nValue computed under that cosmology; recompute with the add-in if the model changes.",
+      "Frozen by zcell 0.1.0 on 2026-12-01.\nFormula: =ZC.DIST_LUM(A2)\nModel: W9-ALL\nValue computed under that cosmology; recompute with the add-in if the model changes.",
     );
   });
 

@@ -102,25 +102,25 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
 
   for (const [themeName, theme] of [["light", light], ["dark", dark]] as const) {
     test(`workbook cosmology (${themeName}): shows the stored model, validates, applies and recalculates`, async () => {
-      const page = await openPane(theme, { "zcell.activeModel": "WMAP9" });
+      const page = await openPane(theme, { "zcell.activeModel": "W9-ALL" });
       await page.getByRole("tab", { name: "Cosmology" }).waitFor();
-      expect(await page.locator("#model-badge").textContent()).toBe("Workbook model: WMAP9");
+      expect(await page.locator("#model-badge").textContent()).toBe("Workbook model: W9-ALL");
       expect(await page.locator("#f-H0").inputValue()).toBe("69.32");
-      await page.selectOption("#preset", "PLANCK2018");
+      await page.selectOption("#preset", "P18-BAO");
       // shown as a person types it (≤ 6 significant digits); the exact value stays behind it
       expect(await page.locator("#f-Ob").inputValue()).toBe("0.0489747");
-      expect(await page.locator("#spec").inputValue()).toBe("PLANCK2018");
-      await page.selectOption("#preset", "PLANCK2018");
+      expect(await page.locator("#spec").inputValue()).toBe("P18-BAO");
+      await page.selectOption("#preset", "P18-BAO");
       await page.fill("#f-H0", "-5");
       await expect.poll(() => page.locator("#e-H0").textContent()).toMatch(/H0 must be a positive number/);
       expect(await page.locator("#apply").evaluate((b) => (b as HTMLButtonElement).disabled)).toBe(true);
       await page.fill("#f-H0", "73");
-      expect(await page.locator("#spec").inputValue()).toBe("PLANCK2018; H0=73");
+      expect(await page.locator("#spec").inputValue()).toBe("P18-BAO; H0=73");
       expect(await page.locator("#derived").textContent()).toMatch(/Age today/);
       await page.screenshot({ path: `${shots}cosmology-${themeName}.png`, fullPage: true });
       await page.locator("#apply").click();
-      await expect.poll(() => page.locator("#apply-status").textContent()).toBe("Applied PLANCK2018; H0=73; 3 formulas recalculated.");
-      expect(await fake(page, "saved")).toEqual({ "zcell.activeModel": "PLANCK2018; H0=73" });
+      await expect.poll(() => page.locator("#apply-status").textContent()).toBe("Applied P18-BAO; H0=73; 3 formulas recalculated.");
+      expect(await fake(page, "saved")).toEqual({ "zcell.activeModel": "P18-BAO; H0=73" });
       expect(await fake(page, "calculations")).toEqual(["Full"]);
       expect((page as unknown as { errors: string[] }).errors).toEqual([]);
       await page.close();
@@ -131,7 +131,7 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await page.getByRole("tab", { name: "This cell" }).click();
       await expect.poll(() => page.locator("#cell-explanation").textContent()).toMatch(/D_L = \(1\+z\)·D_M/);
       const text = await page.locator("#cell-explanation").textContent();
-      expect(text).toMatch(/PLANCK2018 \(the workbook's model\)/);
+      expect(text).toMatch(/P18-BAO \(the workbook's model\)/);
       expect(text).toMatch(/Om is all matter today, massive neutrinos included/);
       expect(text).toMatch(/relative error ≤ 1e-10/);
       expect(text).toMatch(/A2 → 0.5/);
@@ -156,7 +156,7 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await expect.poll(() => page.locator("#table-status").textContent()).toMatch(/Inserted a 5-row table/);
       const cells = (await fake(page, "sheets.Sheet1")) as Record<string, { formula?: string; value?: unknown }>;
       expect(cells.D10.value).toBe("z");
-      expect([cells.E10.value, cells.F10.value, cells.G10.value]).toEqual(["PLANCK2018", "WMAP9", "PLANCK2018; H0=73"]);
+      expect([cells.E10.value, cells.F10.value, cells.G10.value]).toEqual(["P18-BAO", "W9-ALL", "P18-BAO; H0=73"]);
       expect([cells.D11.value, cells.D12.value, cells.D13.value, cells.D14.value, cells.D15]).toEqual([0.1, 0.35, 0.6, 0.85, undefined]);
       expect(cells.E11.formula).toBe("=ZC.DIST_LUM($D$11:$D$14,$E$10:$G$10)");
       // the selected-column mode with E5 occupied asks first
@@ -173,7 +173,7 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
     });
 
     test(`freeze and thaw (${themeName}): values with provenance notes, then the formulas back`, async () => {
-      const page = await openPane(theme, { "zcell.activeModel": "WMAP9" });
+      const page = await openPane(theme, { "zcell.activeModel": "W9-ALL" });
       await page.getByRole("tab", { name: "Freeze" }).click();
       // ExcelApi 1.18 here: no undo group, so the pane must not promise Ctrl+Z
       expect(await page.locator("#undo-hint").textContent()).toMatch(/cannot record an add-in's changes as one undo step.*do not count on Ctrl\+Z/);
@@ -189,9 +189,9 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       expect(cells.C2).toEqual({ value: -20.3 });
       const notes = (await fake(page, "notes")) as { address: string; text: string }[];
       expect(notes.map((n) => n.address)).toEqual(["'Sheet1'!B2", "'Sheet1'!C2"]);
-      expect(notes[0].text).toMatch(/^Frozen by zcell \d+\.\d+\.\d+ on \d{4}-\d\d-\d\d\.\nFormula: =ZC.DIST_LUM\(A2\)\nModel: WMAP9/);
+      expect(notes[0].text).toMatch(/^Frozen by zcell \d+\.\d+\.\d+ on \d{4}-\d\d-\d\d\.\nFormula: =ZC.DIST_LUM\(A2\)\nModel: W9-ALL/);
       await page.locator("#thaw").click();
-      await expect.poll(() => page.locator("#thaw-status").textContent()).toMatch(/Thawed 2 cells: the ZC formulas are back and their notes removed. They compute under the workbook's model \(WMAP9\)/);
+      await expect.poll(() => page.locator("#thaw-status").textContent()).toMatch(/Thawed 2 cells: the ZC formulas are back and their notes removed. They compute under the workbook's model \(W9-ALL\)/);
       await page.screenshot({ path: `${shots}thaw-${themeName}.png`, fullPage: true });
       const after = (await fake(page, "sheets.Sheet1")) as Record<string, { formula?: string }>;
       expect([after.B2.formula, after.C2.formula]).toEqual(["=ZC.DIST_LUM(A2)", "=ZC.MAG_ABS(22, A2, ZC.KCORRECTION(A2, -0.5))"]);
@@ -272,10 +272,10 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
     await page.close();
   });
 
-  test("corrupt settings fall back to PLANCK2018 with a visible warning and nothing overwritten", async () => {
+  test("corrupt settings fall back to P18-BAO with a visible warning and nothing overwritten", async () => {
     const page = await openPane(light, { "zcell.activeModel": "H0=abc" });
     await expect.poll(() => page.locator("#settings-warning").textContent()).toMatch(/could not be read.*Nothing has been overwritten/);
-    expect(await page.locator("#model-badge").textContent()).toBe("Workbook model: PLANCK2018");
+    expect(await page.locator("#model-badge").textContent()).toBe("Workbook model: P18-BAO");
     expect(await fake(page, "saved")).toBe(null);
     await page.close();
   });

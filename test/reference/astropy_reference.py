@@ -35,7 +35,7 @@ def main():
             "lookbackTimeGyr": cosmo.lookback_time(z).to_value(u.Gyr).tolist(),
             "ageGyr": cosmo.age(z).to_value(u.Gyr).tolist(),
             "comovingVolumeMpc3": cosmo.comoving_volume(z).to_value(u.Mpc**3).tolist(),
-            "efunc": cosmo.efunc(z).tolist(),
+            "expansionRate": cosmo.efunc(z).tolist(),
         }
     json.dump({"results": results}, sys.stdout)
 

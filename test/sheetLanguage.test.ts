@@ -1,0 +1,156 @@
+/**
+ * The interface speaks the sheet's language: messages name the ZC function and quote values in the
+ * unit the user gave (at most 6 significant digits); catalogue input (text numbers, key/value blocks
+ * with a header, commas, magnitude flags, h for H0) is handled as a catalogue user expects; fixes
+ * found in review (closed-model MODULUS, DESCRIBE wording, one default unit for volumes); models
+ * defined in a workbook work by name in any model argument.
+ */
+import { describe, expect, test } from "vitest";
+import { Cosmology } from "../core/index.js";
+import type { ActiveModelSetting } from "../functions/activeModel.js";
+import { CellError } from "../functions/cellError.js";
+import { definitions } from "../functions/definitions.js";
+import { evaluate, type Cell } from "../functions/evaluate.js";
+import { modelNameProblem, readWorkbookModels } from "../functions/workbookModels.js";
+import { expectRelative } from "./helpers.js";
+import { SlowCosmology } from "./reference/slowCosmology.js";
+
+const active: ActiveModelSetting = { spec: "P18-BAO", stored: false };
+const run = (name: string, ...args: unknown[]): Cell[][] => evaluate(definitions[name], args, active);
+const one = (name: string, ...args: unknown[]): Cell => run(name, ...args)[0][0];
+const p18 = Cosmology.fromSpec("P18-BAO");
+
+function errorOf(cell: Cell): { kind: string; message: string } {
+  expect(cell, String(cell)).toBeInstanceOf(CellError);
+  return { kind: (cell as CellError).kind, message: (cell as CellError).message };
+}
+
+describe("messages name the function and speak in the user's units", () => {
+  // the age today under P18-BAO is 13.7866 Gyr (Planck 2018 VI Table 2 gives 13.787)
+  test.each([
+    // call                                                     kind    message
+    [["REDSHIFT", 20, "LOOKBACK"],                              "na",   "ZC.REDSHIFT: LOOKBACK = 20 Gyr is not below the age of the universe in this model (13.7866 Gyr)"],
+    [["REDSHIFT", 2e7, "LOOKBACK", null, "Myr"],                "na",   "ZC.REDSHIFT: LOOKBACK = 20000000 Myr is not below the age of the universe in this model (13786.6 Myr)"],
+    [["REDSHIFT", -5, "DIST_LUM", null, "Gpc"],                 "na",   "ZC.REDSHIFT: DIST_LUM = -5 Gpc is negative: no redshift z ≥ 0 has it"],
+    [["LUMINOSITY", -99, 1, null, "erg/s/cm2"],                 "num",  "ZC.LUMINOSITY: flux = -99 erg/s/cm2 must be ≥ 0 erg/s/cm2"],
+    [["VOLUME_SHELL", 0, 1, 50000, null, null, "deg2"],         "num",  "ZC.VOLUME_SHELL: area = 50000 deg2 is above 41253 deg2 (the whole sky)"],
+    [["SIZE", 1e6, 1],                                          "num",  "ZC.SIZE: angle = 1000000 arcsec is above 648000 arcsec (180°)"],
+    [["DIST_LUM", -1],                                          "num",  "ZC.DIST_LUM: z = -1 is negative: a blueshifted source needs a redshift-independent distance"],
+    [["OMEGA", "m"],                                            "value", 'ZC.OMEGA: component: "m" is not one of matter, darkenergy, curvature, radiation, photons, neutrinos'],
+  ])("%j gives #%s with the message %j", (call, kind, message) => {
+    const [name, ...args] = call as [string, ...unknown[]];
+    expect(errorOf(one(name, ...args))).toEqual({ kind, message });
+  });
+});
+
+describe("input a catalogue user pastes", () => {
+  test("numbers stored as text are read as numbers; other text stays #VALUE!", () => {
+    expect(one("DIST_LUM", "0.5")).toBe(one("DIST_LUM", 0.5));
+    expect(one("DIST_LUM", " 1.2e-3 ")).toBe(one("DIST_LUM", 1.2e-3));
+    expect(run("DIST_LUM", [["0.5"], [" 2 "]])).toEqual(run("DIST_LUM", [[0.5], [2]]));
+    expect(errorOf(one("DIST_LUM", "0,5")).message).toBe('ZC.DIST_LUM: z: text "0,5" where a number belongs');
+  });
+
+  test("a key/value block with a header row is one model; a misspelt key is one error naming it", () => {
+    const withHeader = [["param", "value"], ["H0", 70], ["Om", 0.3], ["OL", 0.7]];
+    expect(run("DIST_LUM", 1, withHeader)).toEqual(run("DIST_LUM", 1, "H0=70; Om=0.3; OL=0.7"));
+    const misspelt = [["H0", 70], ["Omm", 0.3], ["OL", 0.7]];
+    const out = run("DIST_LUM", 1, misspelt);
+    expect(out).toHaveLength(1);
+    expect(errorOf(out[0][0])).toEqual({
+      kind: "value",
+      message: 'ZC.DIST_LUM: model: unknown key "Omm" in the key/value block: use H0, Om, OL, Ok, Ob, w0, wa, Tcmb, Neff, mnu, preset',
+    });
+    // two model names side by side are two models, not a block
+    expect(run("DIST_LUM", 1, [["P18-BAO", "W9-ALL"]])[0]).toHaveLength(2);
+  });
+
+  test("keys separated by commas are told to use ';'", () => {
+    expect(errorOf(one("DIST_LUM", 1, "H0=70, Om=0.3, OL=0.7")).message).toMatch(/holds several keys: separate keys with ';'/);
+  });
+
+  test.each([
+    // call                          the flag
+    [["MAG_ABS", 99, 1],             99],
+    [["MAG_ABS", -99, 1],            -99],
+    [["MAG_APP", 99.9, 1],           99.9],
+    [["FLUX_AB", 99],                99],
+  ])("%j: a magnitude of %d is a missing-value flag (#N/A), not a number", (call, flag) => {
+    const [name, ...args] = call as [string, ...unknown[]];
+    expect(errorOf(one(name, ...args))).toEqual({ kind: "na", message: `ZC.${name}: ${name === "FLUX_AB" ? "m_ab" : name === "MAG_APP" ? "M" : "m"} = ${flag} is a catalogue's missing-value flag (|magnitude| ≥ 50), not a magnitude` });
+  });
+
+  test("H0 typed as h (0.7) is #NUM! with a hint; so is an H0 above 1000", () => {
+    expect(errorOf(one("DIST_LUM", 1, "H0=0.7; Om=0.3"))).toEqual({
+      kind: "num",
+      message: "ZC.DIST_LUM: model: H0 = 0.7 km/s/Mpc is outside 10 … 1000 km/s/Mpc (H0 is in km/s/Mpc: h = 0.7 is H0=70)",
+    });
+    expect(errorOf(one("DIST_LUM", 1, "H0=7000; Om=0.3")).message).toMatch(/H0 = 7000 km\/s\/Mpc is outside 10 … 1000 km\/s\/Mpc$/);
+  });
+});
+
+describe("fixes found in review", () => {
+  const closed = "H0=70; Om=0.2; OL=1.3";
+  test("past the antipode of a closed model D_L < 0, and MODULUS, MAG_ABS and MAG_APP use |D_L|", () => {
+    // reference: the independent slow path (tanh-sinh quadrature of the same Friedmann equation)
+    const slow = new SlowCosmology({ H0: 70, Om: 0.2, OL: 1.3, w0: -1, wa: 0, Tcmb: 0, Neff: 3.046, mnu: [] });
+    const dl = slow.luminosityDistanceMpc(100);
+    expect(dl).toBeLessThan(0);
+    expectRelative(one("DIST_LUM", 100, closed) as number, dl, 1e-10, "D_L");
+    const mu = 5 * Math.log10(Math.abs(dl)) + 25; // Hogg 1999 eq. 25 with |D_L|
+    expectRelative(one("MODULUS", 100, closed) as number, mu, 1e-12, "μ");
+    expectRelative(one("MAG_ABS", 20, 100, 0, closed) as number, 20 - mu, 1e-12, "M");
+    expectRelative(one("MAG_APP", -20, 100, 0, closed) as number, -20 + mu, 1e-12, "m");
+  });
+
+  test("DESCRIBE says what the model holds", () => {
+    expect(one("DESCRIBE", "EDS")).toMatch(/^EDS: flat: matter only; H0 = 70 km\/s\/Mpc; Om = 1 .*; OL = 0; Ok = 0; Or = 0 \(no radiation\);/);
+    expect(one("DESCRIBE", "CONCORDANCE")).toMatch(/^CONCORDANCE: flat: matter \+ Λ;/);
+    expect(one("DESCRIBE", "H0=70; Om=0.3; OL=0.8; w0=-0.9")).toMatch(/^H0=70; Om=0.3; OL=0.8; w0=-0.9: closed: matter \+ w0–wa dark energy;/);
+  });
+
+  test("REDSHIFT of VOLUME reads Gpc3 by default, the unit ZC.VOLUME returns", () => {
+    expectRelative(one("REDSHIFT", one("VOLUME", 2), "VOLUME") as number, 2, 1e-12, "round trip");
+    expectRelative(one("VOLUME", 2) as number, p18.comovingVolumeMpc3(2) / 1e9, 1e-15, "Gpc3");
+  });
+
+  test("OMEGA takes words, in any case", () => {
+    expect(one("OMEGA", "Matter")).toBe(one("OMEGA", "matter"));
+    expectRelative(one("OMEGA", "MATTER") as number, 0.3111, 1e-15, "Om today (Planck 2018 VI Table 2)");
+  });
+});
+
+describe("models defined in the workbook", () => {
+  const models = readWorkbookModels({ "TEAM-FIDUCIAL": "P18-BAO; H0=70", "Survey_2": "H0=72; Om=0.28; Tcmb=2.7255" });
+  const withModels: ActiveModelSetting = { spec: "TEAM-FIDUCIAL", stored: true, models };
+  const runIn = (name: string, ...args: unknown[]) => evaluate(definitions[name], args, withModels);
+
+  test("work by name (any case, also as a base with changes) in any model argument, and as the active model", () => {
+    expect(models.problems).toEqual([]);
+    expect(runIn("DIST_LUM", 1, "TEAM-FIDUCIAL")).toEqual(run("DIST_LUM", 1, "P18-BAO; H0=70"));
+    expect(runIn("DIST_LUM", 1, "team-fiducial; Om=0.3")).toEqual(run("DIST_LUM", 1, "P18-BAO; H0=70; Om=0.3"));
+    expect(runIn("DIST_LUM", 1)).toEqual(run("DIST_LUM", 1, "P18-BAO; H0=70"));
+    expect(runIn("MODEL", "SURVEY_2", "H0", 73)).toEqual([["H0=73; Om=0.28; Tcmb=2.7255"]]);
+    expect(errorOf(run("DIST_LUM", 1, "TEAM-FIDUCIAL")[0][0]).message).toMatch(/unknown preset "TEAM-FIDUCIAL"/);
+  });
+
+  test("PRESETS lists them after the built-in presets, marked as defined in this workbook", () => {
+    const table = runIn("PRESETS");
+    expect(table.slice(-2)).toEqual([
+      ["TEAM-FIDUCIAL", "defined in this workbook: P18-BAO; H0=70"],
+      ["SURVEY_2", "defined in this workbook: H0=72; Om=0.28; Tcmb=2.7255"],
+    ]);
+  });
+
+  test("a name may not shadow a built-in preset, and a bad stored entry is reported, not used", () => {
+    expect(modelNameProblem("p18-bao")).toBe('"P18-BAO" is a built-in preset: choose another name');
+    expect(modelNameProblem("my model")).toMatch(/is not a model name/);
+    expect(modelNameProblem("TEAM-FIDUCIAL")).toBeUndefined();
+    const bad = readWorkbookModels({ "P18-BAO": "H0=70; Om=0.3", GOOD: "W9-ALL", BROKEN: "H0=abc; Om=0.3" });
+    expect([...bad.specs.keys()]).toEqual(["GOOD"]);
+    expect(bad.problems).toEqual([
+      'workbook model "P18-BAO" is a built-in preset: choose another name',
+      'workbook model BROKEN: H0: "abc" is not a number (use \'.\' as the decimal point)',
+    ]);
+  });
+});
