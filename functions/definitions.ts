@@ -109,10 +109,10 @@ const parameters: Record<string, (model: Cosmology) => number> = {
   Tcmb: (x) => x.Tcmb,
   Neff: (x) => x.Neff,
   mnu: (x) => x.mnuTotalEv,
-  age0: (x) => x.ageTodayGyr,
-  tH: (x) => x.hubbleTimeGyr,
-  DH: (x) => x.hubbleDistanceMpc,
-  zeq: (x) => {
+  age_today: (x) => x.ageTodayGyr,
+  hubble_time: (x) => x.hubbleTimeGyr,
+  hubble_distance: (x) => x.hubbleDistanceMpc,
+  z_eq: (x) => {
     if (!Number.isFinite(x.equalityRedshift)) throw new RangeError(messages.noEquality);
     return x.equalityRedshift;
   },

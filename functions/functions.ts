@@ -425,10 +425,10 @@ export function MODEL(
 }
 
 /**
- * A parameter or derived value of a model: H0, h, Om, OL, Ok, Or, Ob, w0, wa, Tcmb, Neff, mnu, age0 (Gyr), tH (Gyr), DH (Mpc), zeq.
+ * A parameter or derived value of a model: H0, h, Om, OL, Ok, Or, Ob, w0, wa, Tcmb, Neff, mnu, age_today (Gyr), hubble_time (Gyr), hubble_distance (Mpc), z_eq.
  * @customfunction PARAM PARAM
  * @helpurl https://localhost:3000/help.html#function-reference
- * @param name Parameter name, e.g. "age0" (value or range).
+ * @param name Parameter name, e.g. "age_today" (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @returns The parameter's value.
  */

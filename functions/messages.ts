@@ -27,7 +27,7 @@ export const messages = {
   notFiniteResult: (fn: string) => `${fn}: the result is not a finite number for these arguments`,
   model: (detail: string) => `model: ${detail}`,
   notGiven: (what: string) => `${what} is not given in this model`,
-  noEquality: "zeq: this model has no radiation (Tcmb = 0), so no matter–radiation equality",
+  noEquality: "z_eq: this model has no radiation (Tcmb = 0), so no matter–radiation equality",
   internal: (fn: string, detail: string) => `${fn}: unexpected problem (${detail}); please report it`,
   activeModelFallback: (detail: string) =>
     `the workbook's stored cosmology could not be read (${detail}); using P18-BAO until one is applied`,

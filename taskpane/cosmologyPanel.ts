@@ -1,13 +1,15 @@
 /**
- * The "Workbook cosmology" panel: the stored model in a form (a preset and its parameters), the
- * core's messages inline, live derived values, the spec text to copy, and Apply, which stores the
- * model in the workbook and recalculates.
+ * The "Workbook cosmology" panel: the stored model in a form (a preset and its parameters, in our
+ * groups), the core's messages inline, live derived values, the spec text to copy, and Apply, which
+ * stores the model in the workbook and recalculates. Below it the workbook's own models: save the
+ * form under a name, list them, delete one (with a warning when cells still name it).
  */
 import { presets } from "../core/index.js";
 import { defaultModelSpec, readActiveModel } from "../functions/activeModel.js";
+import { modelNameProblem, noWorkbookModels, type WorkbookModels } from "../functions/workbookModels.js";
 import { $, el, plural } from "./dom.js";
-import { readModelSetting, recalculateWorkbook, writeModelSetting } from "./excelHost.js";
-import { derivedValues, formFields, formFromSpec, modelFromForm, shownText, type FormValues } from "./modelForm.js";
+import { countCellsNaming, readModelSetting, recalculateWorkbook, writeModelSetting, writeWorkbookModels } from "./excelHost.js";
+import { derivedValues, formFields, formFromSpec, formGroups, modelFromForm, shownText, type FormValues } from "./modelForm.js";
 
 const fieldLabels: Record<(typeof formFields)[number], string> = {
   H0: "H0 (km/s/Mpc)", Om: "Om (matter incl. ν)", OL: "OL (or “flat”)", w0: "w0", wa: "wa",
@@ -37,8 +39,11 @@ function fillForm(v: FormValues): void {
   refreshForm();
 }
 
+/** The workbook's own models, as last read from the settings. */
+let workbookModels: WorkbookModels = noWorkbookModels;
+
 function refreshForm(): void {
-  const result = modelFromForm(readForm());
+  const result = modelFromForm(readForm(), workbookModels.named);
   for (const f of formFields) {
     const input = $<HTMLInputElement>(`f-${f}`);
     const message = result.errors[f];
@@ -63,31 +68,36 @@ function refreshForm(): void {
 /** Builds the form, shows the stored model (or the fallback with its warning) and wires Apply. */
 export function setupCosmology(): void {
   const preset = $<HTMLSelectElement>("preset");
-  preset.append(new Option("(no preset: parameters only)", ""));
-  for (const p of presets) preset.append(new Option(`${p.name} — ${p.description}`, p.name));
   const fields = $("fields");
-  for (const f of formFields) {
-    const box = el("div", undefined, "field");
-    const label = el("label", fieldLabels[f]) as HTMLLabelElement;
-    label.htmlFor = `f-${f}`;
-    const input = document.createElement("input");
-    input.id = `f-${f}`;
-    input.setAttribute("aria-describedby", `e-${f}`);
-    input.addEventListener("input", refreshForm);
-    const err = el("p", "", "field-error");
-    err.id = `e-${f}`;
-    err.hidden = true;
-    box.append(label, input, err);
+  for (const group of formGroups) {
+    const box = el("fieldset", undefined, "group grid");
+    box.append(el("legend", group.legend));
+    for (const f of group.fields) {
+      const field = el("div", undefined, "field");
+      const label = el("label", fieldLabels[f]) as HTMLLabelElement;
+      label.htmlFor = `f-${f}`;
+      const input = document.createElement("input");
+      input.id = `f-${f}`;
+      input.setAttribute("aria-describedby", `e-${f}`);
+      input.addEventListener("input", refreshForm);
+      const err = el("p", "", "field-error");
+      err.id = `e-${f}`;
+      err.hidden = true;
+      field.append(label, input, err);
+      box.append(field);
+    }
     fields.append(box);
   }
   preset.addEventListener("change", () => {
-    if (preset.value) fillForm(formFromSpec(preset.value));
+    if (preset.value) fillForm(formFromSpec(preset.value, workbookModels.named));
     else refreshForm();
   });
 
   const setting = readActiveModel();
   const stored = readModelSetting();
-  fillForm(formFromSpec(setting.spec));
+  workbookModels = setting.models ?? noWorkbookModels;
+  showModelChoices();
+  fillForm(formFromSpec(setting.spec, workbookModels.named));
   showBadge(setting.spec);
   if (setting.warning) {
     const w = $("settings-warning");
@@ -96,6 +106,8 @@ export function setupCosmology(): void {
   } else if (stored === undefined) {
     $("apply-status").textContent = `This workbook stores no cosmology yet: formulas use ${defaultModelSpec}.`;
   }
+
+  setupWorkbookModels();
 
   $("copy-spec").addEventListener("click", async () => {
     const spec = $<HTMLInputElement>("spec");
@@ -124,6 +136,102 @@ export function setupCosmology(): void {
     }
   });
 }
+
+/** The preset list (built in, then this workbook's models) and the list of this workbook's models. */
+function showModelChoices(): void {
+  const preset = $<HTMLSelectElement>("preset");
+  const chosen = preset.value;
+  preset.replaceChildren(new Option("(no preset: parameters only)", ""));
+  const builtIn = document.createElement("optgroup");
+  builtIn.label = "Built in";
+  for (const p of presets) builtIn.append(new Option(`${p.name} — ${p.description}`, p.name));
+  preset.append(builtIn);
+  const list = $("workbook-models");
+  list.replaceChildren();
+  if (workbookModels.specs.size) {
+    const own = document.createElement("optgroup");
+    own.label = "Defined in this workbook";
+    for (const [name, spec] of workbookModels.specs) {
+      own.append(new Option(`${name} — ${spec}`, name));
+      const item = el("li");
+      const remove = el("fluent-button", "Delete");
+      remove.append(el("span", ` ${name}`, "visually-hidden")); // its accessible name says which model
+      remove.addEventListener("click", () => void askToDelete(name));
+      item.append(el("span", `${name}: ${spec}`), remove);
+      list.append(item);
+    }
+    preset.append(own);
+  } else {
+    list.append(el("li", "None yet."));
+  }
+  preset.value = chosen;
+}
+
+/** Stores a new set of workbook models, re-reads them as the functions will, and recalculates. */
+async function storeWorkbookModels(specs: Map<string, string>): Promise<number> {
+  await writeWorkbookModels(specs);
+  workbookModels = readActiveModel().models ?? noWorkbookModels;
+  showModelChoices();
+  return recalculateWorkbook();
+}
+
+function setupWorkbookModels(): void {
+  const status = $("model-name-status");
+  $("save-model").addEventListener("click", async () => {
+    const name = $<HTMLInputElement>("model-name").value.trim();
+    const problem = modelNameProblem(name);
+    const spec = currentSpec;
+    if (problem || !spec) {
+      status.textContent = problem ?? "The form does not hold a valid model yet.";
+      return;
+    }
+    const upper = name.toUpperCase();
+    // stored as the canonical spec on the built-in presets alone, never on another workbook model
+    const resolved = modelFromForm(readForm(), workbookModels.named).model!.spec;
+    const specs = new Map(workbookModels.specs);
+    const replaced = specs.has(upper);
+    specs.set(upper, resolved);
+    try {
+      const count = await storeWorkbookModels(specs);
+      status.textContent = `${replaced ? "Updated" : "Saved"} ${upper} = ${resolved} in this workbook; ${plural(count, "formula")} recalculated. Use it as "${upper}" in any model argument.`;
+    } catch (e) {
+      status.textContent = `Not saved: ${(e as Error).message}`;
+    }
+  });
+
+  let deleting: string | undefined;
+  askToDelete = async (name: string) => {
+    status.textContent = "";
+    const used = await countCellsNaming(name);
+    if (used === 0) return deleteModel(name);
+    deleting = name;
+    $("delete-confirm-text").textContent = `${plural(used, "cell")} in this workbook ${used === 1 ? "names" : "name"} ${name}: after deleting it ${used === 1 ? "that formula" : "those formulas"} will show #VALUE!. Delete ${name} anyway?`;
+    $("delete-confirm").hidden = false;
+    $("delete-go").focus();
+  };
+  const deleteModel = async (name: string) => {
+    const specs = new Map(workbookModels.specs);
+    specs.delete(name);
+    try {
+      const count = await storeWorkbookModels(specs);
+      status.textContent = `Deleted ${name}; ${plural(count, "formula")} recalculated.`;
+    } catch (e) {
+      status.textContent = `Not deleted: ${(e as Error).message}`;
+    }
+  };
+  $("delete-go").addEventListener("click", async () => {
+    $("delete-confirm").hidden = true;
+    if (deleting) await deleteModel(deleting);
+    deleting = undefined;
+  });
+  $("delete-cancel").addEventListener("click", () => {
+    deleting = undefined;
+    $("delete-confirm").hidden = true;
+    status.textContent = "Nothing deleted.";
+  });
+}
+
+let askToDelete: (name: string) => Promise<void> = async () => undefined;
 
 /** The header badge naming the workbook's model. */
 export function showBadge(spec: string): void {

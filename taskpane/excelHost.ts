@@ -6,6 +6,7 @@
  * in a mock host.
  */
 import { activeModelSettingKey } from "../functions/activeModel.js";
+import { storedWorkbookModels, workbookModelsSettingKey } from "../functions/workbookModels.js";
 import { callsZcFunction, typedFormula } from "../functions/storedFormula.js";
 import { columnName, qualifiedAddress, splitAddress, topLeft } from "./cellAddress.js";
 
@@ -31,7 +32,16 @@ export function readModelSetting(): unknown {
 
 /** Stores the active model's spec in the workbook (so it travels with the file). */
 export function writeModelSetting(spec: string): Promise<void> {
-  settings().set(activeModelSettingKey, spec);
+  return writeSetting(activeModelSettingKey, spec);
+}
+
+/** Stores the workbook's own models (name → spec text) in the workbook. */
+export function writeWorkbookModels(specs: ReadonlyMap<string, string>): Promise<void> {
+  return writeSetting(workbookModelsSettingKey, storedWorkbookModels(specs));
+}
+
+function writeSetting(key: string, value: unknown): Promise<void> {
+  settings().set(key, value);
   return new Promise((resolve, reject) =>
     settings().saveAsync((result) =>
       result.status === Office.AsyncResultStatus.Succeeded ? resolve() : reject(new Error(result.error?.message ?? "saveAsync failed")),
@@ -251,11 +261,11 @@ export interface UnboundFormula {
 export const scanChunkCells = 50_000;
 
 /**
- * Finds, in the used range of every sheet, the cells whose formula calls a ZC function (typed or
- * stored spelling) and whose value is #NAME?.
- * @returns the cells, and the sheets among theirs that are protected (nothing can be re-entered there)
+ * Visits every cell of the used range of every sheet, reading at most `scanChunkCells` cells a
+ * request (a large sheet is read in row chunks).
+ * @returns the sheets that are protected
  */
-export async function findUnboundFormulas(): Promise<{ formulas: UnboundFormula[]; protectedSheets: string[] }> {
+async function scanUsedCells(visit: (sheet: string, address: string, formula: unknown, value: unknown) => void): Promise<Set<string>> {
   return Excel.run(async (context) => {
     const sheets = context.workbook.worksheets;
     sheets.load("items/name");
@@ -265,30 +275,56 @@ export async function findUnboundFormulas(): Promise<{ formulas: UnboundFormula[
       return { sheet, range: sheet.getUsedRangeOrNullObject().load("address,rowCount,columnCount") };
     });
     await context.sync();
-    const formulas: UnboundFormula[] = [];
-    const protectedSheets: string[] = [];
+    const locked = new Set<string>();
     for (const { sheet, range } of used) {
+      if (sheet.protection.protected) locked.add(sheet.name);
       if (range.isNullObject) continue;
       const origin = topLeft(splitAddress(range.address).address);
       const rowsPerChunk = Math.max(1, Math.floor(scanChunkCells / range.columnCount));
-      const before = formulas.length;
       for (let r0 = 0; r0 < range.rowCount; r0 += rowsPerChunk) {
         const rows = Math.min(rowsPerChunk, range.rowCount - r0);
         const chunk = range.getCell(r0, 0).getResizedRange(rows - 1, range.columnCount - 1).load("formulas,values");
         await context.sync();
         const values = chunk.values;
         chunk.formulas.forEach((row, i) =>
-          row.forEach((formula, j) => {
-            if (values[i][j] === "#NAME?" && callsZcFunction(formula)) {
-              formulas.push({ sheet: sheet.name, address: `${columnName(origin.col + j)}${origin.row + r0 + i}`, formula: String(formula) });
-            }
-          }),
+          row.forEach((formula, j) => visit(sheet.name, `${columnName(origin.col + j)}${origin.row + r0 + i}`, formula, values[i][j])),
         );
       }
-      if (sheet.protection.protected && formulas.length > before) protectedSheets.push(sheet.name);
     }
-    return { formulas, protectedSheets };
+    return locked;
   });
+}
+
+/**
+ * Finds, in the used range of every sheet, the cells whose formula calls a ZC function (typed or
+ * stored spelling) and whose value is #NAME?.
+ * @returns the cells, and the sheets among theirs that are protected (nothing can be re-entered there)
+ */
+export async function findUnboundFormulas(): Promise<{ formulas: UnboundFormula[]; protectedSheets: string[] }> {
+  const formulas: UnboundFormula[] = [];
+  const locked = await scanUsedCells((sheet, address, formula, value) => {
+    if (value === "#NAME?" && callsZcFunction(formula)) formulas.push({ sheet, address, formula: String(formula) });
+  });
+  const protectedSheets = [...new Set(formulas.map((f) => f.sheet))].filter((sheet) => locked.has(sheet));
+  return { formulas, protectedSheets };
+}
+
+/**
+ * How many cells name a model: a formula with the name in a string literal ("NAME" or "NAME; …"), or
+ * a cell whose text is the name (alone or with changes), as a model argument may refer to it.
+ * @param name the model's name (case-insensitive)
+ */
+export async function countCellsNaming(name: string): Promise<number> {
+  const upper = name.toUpperCase();
+  const inFormula = new RegExp(`"\\s*${upper}\\s*[";]`, "i"); // model names hold only letters, digits, - and _
+  const isName = (text: string) => text.split(";", 1)[0].trim().toUpperCase() === upper;
+  let count = 0;
+  await scanUsedCells((_sheet, _address, formula, value) => {
+    if (typeof formula === "string" && formula.startsWith("=")) {
+      if (inFormula.test(formula)) count++;
+    } else if (typeof value === "string" && isName(value)) count++;
+  });
+  return count;
 }
 
 /** Formulas written between two requests while re-entering. */

@@ -8,6 +8,7 @@ import {
   formatModelSpec,
   parseModelSpec,
   type ModelParameters,
+  type NamedModels,
 } from "../core/index.js";
 
 /** Form fields, as the text in each input. OL is a number or "flat". */
@@ -28,14 +29,32 @@ export interface FormValues {
 export const formFields = ["H0", "Om", "OL", "w0", "wa", "Tcmb", "Neff", "mnu", "Ob"] as const;
 export type FormField = (typeof formFields)[number];
 
+/** The form's groups, in our order: expansion, dark energy, radiation and neutrinos, then baryons. */
+export const formGroups: readonly { legend: string; fields: readonly FormField[] }[] = [
+  { legend: "Expansion", fields: ["H0", "Om", "OL"] },
+  { legend: "Dark energy", fields: ["w0", "wa"] },
+  { legend: "Radiation and neutrinos", fields: ["Tcmb", "Neff", "mnu"] },
+  { legend: "Baryons", fields: ["Ob"] },
+];
+
+const noNamed: NamedModels = { find: () => undefined, names: [] };
+/** The workbook model a spec starts from, if any (its first part names one). */
+function namedHead(spec: string, named: NamedModels): string | undefined {
+  const head = spec.split(";", 1)[0].trim().toUpperCase();
+  return named.find(head) ? head : undefined;
+}
+
 const show = (x: number | undefined) => (x === undefined || Number.isNaN(x) ? "" : String(x));
 
-/** The form showing a spec (as parsed; OL "flat" when the model is flat by construction). */
-export function formFromSpec(spec: string): FormValues {
-  const p = parseModelSpec(spec);
+/**
+ * The form showing a spec (as parsed; OL "flat" when the model is flat by construction).
+ * @param named the workbook's own models: a spec starting from one shows that name as its base
+ */
+export function formFromSpec(spec: string, named: NamedModels = noNamed): FormValues {
+  const p = parseModelSpec(spec, named);
   const m = new Cosmology(p);
   return {
-    preset: p.preset ?? "",
+    preset: namedHead(spec, named) ?? p.preset ?? "",
     H0: show(p.H0),
     Om: show(p.Om),
     OL: p.OL !== undefined ? show(p.OL) : p.Ok !== undefined ? show(m.OL) : "flat",
@@ -70,10 +89,14 @@ export interface FormResult {
   errors: Partial<Record<FormField | "model", string>>;
 }
 
-/** Reads the form: builds the spec text (relative to the chosen preset) and the model. */
-export function modelFromForm(v: FormValues): FormResult {
+/**
+ * Reads the form: builds the spec text (relative to the chosen preset) and the model. A workbook
+ * model left unchanged is written by its name, so that the workbook follows the name.
+ * @param named the workbook's own models
+ */
+export function modelFromForm(v: FormValues, named: NamedModels = noNamed): FormResult {
   const errors: FormResult["errors"] = {};
-  const preset = v.preset ? findPreset(v.preset) : undefined;
+  const base = v.preset ? (findPreset(v.preset)?.name ?? (named.find(v.preset) ? v.preset.toUpperCase() : undefined)) : undefined;
   const pairs: string[] = [];
   for (const field of formFields) {
     const text = v[field].trim();
@@ -82,7 +105,7 @@ export function modelFromForm(v: FormValues): FormResult {
   }
   let p: ModelParameters;
   try {
-    p = parseModelSpec([...(preset ? [preset.name] : []), ...pairs].join("; "));
+    p = parseModelSpec([...(base ? [base] : []), ...pairs].join("; "), named);
     if (v.OL.trim().toLowerCase() === "flat") delete p.OL;
     if (v.Ob.trim() === "") delete p.Ob;
   } catch (e) {
@@ -93,7 +116,9 @@ export function modelFromForm(v: FormValues): FormResult {
   }
   try {
     const model = new Cosmology(p);
-    return { spec: formatModelSpec(p), model, errors };
+    const spec = formatModelSpec(p);
+    const namedBase = base && named.find(base);
+    return { spec: namedBase && formatModelSpec(namedBase) === spec ? base : spec, model, errors };
   } catch (e) {
     const message = (e as Error).message;
     const field = formFields.find((f) => message.startsWith(`${f} `) || message.startsWith(`${f} =`));

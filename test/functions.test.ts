@@ -116,8 +116,8 @@ describe("units and defaults", () => {
     ["MODULUS",        [1],                        p18.distanceModulusMag(1),                                "mag"],
     ["CMB_TEMP",       [1],                        2.7255 * 2,                                               "Tcmb (1+z)"],
     ["OMEGA",          ["matter"],                 0.3111,                                                   "Om today"],
-    ["PARAM",          ["age0"],                   p18.ageTodayGyr,                                          "age today"],
-    ["PARAM",          ["zeq"],                    p18.equalityRedshift,                                     "z_eq"],
+    ["PARAM",          ["age_today"],              p18.ageTodayGyr,                                       "age today"],
+    ["PARAM",          ["z_eq"],                   p18.equalityRedshift,                                     "z_eq"],
     ["CONVERT",        [1, "Mpc", "Gly"],          convertUnit(1, "Mpc", "Gly"),                             "conversion"],
     ["DIST_ANG",       [1],                        p18.angularDiameterDistanceMpc(1),                        "Mpc"],
     ["DIST_LOS",       [1],                        p18.comovingDistanceMpc(1),                               "Mpc"],
@@ -169,7 +169,7 @@ describe("inverse and text functions", () => {
 
   test("PARAM reports what a model does not have as an error, not a number", () => {
     expectError(one("PARAM", "Ob", "H0=70; Om=0.3"), "num", /Ob is not given/);
-    expectError(one("PARAM", "zeq", "CONCORDANCE"), "num", /no radiation/);
+    expectError(one("PARAM", "z_eq", "CONCORDANCE"), "num", /no radiation/);
   });
 });
 

@@ -5,8 +5,10 @@
  * found in review (closed-model MODULUS, DESCRIBE wording, one default unit for volumes); models
  * defined in a workbook work by name in any model argument.
  */
+import { readFileSync } from "node:fs";
+import { fileURLToPath } from "node:url";
 import { describe, expect, test } from "vitest";
-import { Cosmology } from "../core/index.js";
+import { Cosmology, parseUnit } from "../core/index.js";
 import type { ActiveModelSetting } from "../functions/activeModel.js";
 import { CellError } from "../functions/cellError.js";
 import { definitions } from "../functions/definitions.js";
@@ -14,6 +16,7 @@ import { evaluate, type Cell } from "../functions/evaluate.js";
 import { modelNameProblem, readWorkbookModels } from "../functions/workbookModels.js";
 import { expectRelative } from "./helpers.js";
 import { SlowCosmology } from "./reference/slowCosmology.js";
+import { testBuildDir } from "./testBuild.js";
 
 const active: ActiveModelSetting = { spec: "P18-BAO", stored: false };
 const run = (name: string, ...args: unknown[]): Cell[][] => evaluate(definitions[name], args, active);
@@ -152,5 +155,54 @@ describe("models defined in the workbook", () => {
       'workbook model "P18-BAO" is a built-in preset: choose another name',
       'workbook model BROKEN: H0: "abc" is not a number (use \'.\' as the decimal point)',
     ]);
+  });
+});
+
+describe("no name of another tool's interface reaches a reader", () => {
+  const root = fileURLToPath(new URL("..", import.meta.url));
+  const oldNames = /PLANCK20\d\d|WMAP[79]|ANG_SCALE|RHO_CRIT|efunc/;
+
+  test.each([
+    ["README.md", `${root}README.md`],
+    ["functions.js", `${testBuildDir}functions.js`],
+    ["taskpane.js", `${testBuildDir}taskpane.js`],
+    ["functions.json", `${testBuildDir}functions.json`],
+    ["manifest.xml", `${testBuildDir}manifest.xml`],
+  ])("%s holds none of the old preset or function names", (_label, file) => {
+    expect(readFileSync(file, "utf8")).not.toMatch(oldNames);
+  });
+
+  test("functions.json names the new functions and the OMEGA components in words", () => {
+    const metadata = JSON.parse(readFileSync(`${testBuildDir}functions.json`, "utf8")) as { functions: { id: string; description: string }[] };
+    const ids = metadata.functions.map((f) => f.id);
+    expect(ids).toEqual(expect.arrayContaining(["PROPER_SCALE", "CRIT_DENSITY", "MODEL"]));
+    const omega = metadata.functions.find((f) => f.id === "OMEGA")!.description;
+    expect(omega).toMatch(/"matter".*"darkenergy".*"curvature".*"radiation".*"photons".*"neutrinos"/);
+    expect(omega).not.toMatch(/"(m|de|k|r|g|nu)"/);
+  });
+
+  test("error messages from hostile input hold no camelCase identifier (unit strings aside)", () => {
+    const inputs: unknown[] = [-1, 0, 1e9, "abc", "", true, "H0=70, Om=0.3", "P18-BAO", "H0=0.7; Om=0.3", 99, [[1, 2]], [[1], [2], [3]]];
+    const camel = /\b[a-z]+[A-Z][A-Za-z0-9]*\b/g;
+    const seen = new Set<string>();
+    for (const def of Object.values(definitions)) {
+      for (const a of inputs) for (const b of inputs) {
+        const cells = evaluate(def, [a, b, a, b], active).flat();
+        for (const cell of cells) if (cell instanceof CellError) seen.add(cell.message);
+      }
+    }
+    expect(seen.size).toBeGreaterThan(50);
+    for (const message of seen) {
+      expect(message, message).toMatch(/^ZC\.[A-Z_]+: /);
+      const identifiers = (message.match(camel) ?? []).filter((token) => {
+        try {
+          parseUnit(token); // a FITS unit string such as mJy or solMass is the trade's own spelling
+          return false;
+        } catch {
+          return true;
+        }
+      });
+      expect(identifiers, message).toEqual([]);
+    }
   });
 });

@@ -126,6 +126,42 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await page.close();
     });
 
+    test(`models of this workbook (${themeName}): save under a name, reload, use, delete with a warning`, async () => {
+      const page = await openPane(theme, {});
+      await page.selectOption("#preset", "P18-BAO");
+      await page.fill("#f-H0", "70");
+      await page.fill("#model-name", "p18-bao");
+      await page.locator("#save-model").click();
+      await expect.poll(() => page.locator("#model-name-status").textContent()).toBe('"P18-BAO" is a built-in preset: choose another name');
+      await page.fill("#model-name", "team-fiducial");
+      await page.locator("#save-model").click();
+      await expect.poll(() => page.locator("#model-name-status").textContent()).toMatch(/^Saved TEAM-FIDUCIAL = P18-BAO; H0=70 in this workbook; 3 formulas recalculated/);
+      expect(await fake(page, "saved")).toEqual({ "zcell.workbookModels": { "TEAM-FIDUCIAL": "P18-BAO; H0=70" } });
+      expect(await page.locator("#workbook-models").textContent()).toMatch(/TEAM-FIDUCIAL: P18-BAO; H0=70/);
+      await page.screenshot({ path: `${shots}workbook-models-${themeName}.png`, fullPage: true });
+      await page.close();
+
+      // the settings travel with the workbook: open it again, choose the model, apply it by name
+      const again = await openPane(theme, { "zcell.workbookModels": { "TEAM-FIDUCIAL": "P18-BAO; H0=70" } }, true, {
+        sheets: { Sheet1: { A1: { formula: '=ZC.DIST_LUM(1, "TEAM-FIDUCIAL")', value: 6600 }, B1: { value: "team-fiducial; Om=0.3" } } },
+      });
+      await again.selectOption("#preset", "TEAM-FIDUCIAL");
+      expect(await again.locator("#f-H0").inputValue()).toBe("70");
+      expect(await again.locator("#spec").inputValue()).toBe("TEAM-FIDUCIAL");
+      await again.locator("#apply").click();
+      await expect.poll(() => again.locator("#apply-status").textContent()).toMatch(/^Applied TEAM-FIDUCIAL; 1 formula recalculated/);
+      await again.locator("#workbook-models fluent-button", { hasText: "Delete TEAM-FIDUCIAL" }).click();
+      await expect.poll(() => again.locator("#delete-confirm-text").textContent()).toBe("2 cells in this workbook name TEAM-FIDUCIAL: after deleting it those formulas will show #VALUE!. Delete TEAM-FIDUCIAL anyway?");
+      await again.locator("#delete-cancel").click();
+      expect(((await fake(again, "settings")) as Record<string, unknown>)["zcell.workbookModels"]).toEqual({ "TEAM-FIDUCIAL": "P18-BAO; H0=70" });
+      await again.locator("#workbook-models fluent-button", { hasText: "Delete TEAM-FIDUCIAL" }).click();
+      await again.locator("#delete-go").click();
+      await expect.poll(() => again.locator("#model-name-status").textContent()).toMatch(/^Deleted TEAM-FIDUCIAL/);
+      expect(((await fake(again, "saved")) as Record<string, unknown>)["zcell.workbookModels"]).toEqual({});
+      expect((again as unknown as { errors: string[] }).errors).toEqual([]);
+      await again.close();
+    });
+
     test(`this cell (${themeName}): explains a ZC cell and the reason for an error`, async () => {
       const page = await openPane(theme, {});
       await page.getByRole("tab", { name: "This cell" }).click();
@@ -137,7 +173,7 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       expect(text).toMatch(/A2 → 0.5/);
       await page.screenshot({ path: `${shots}cell-${themeName}.png`, fullPage: true });
       await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!B3"));
-      await expect.poll(() => page.locator("#cell-explanation").textContent()).toMatch(/Why the error#NUM! — model: no big bang/);
+      await expect.poll(() => page.locator("#cell-explanation").textContent()).toMatch(/Why the error#NUM! — ZC.DIST_LUM: model: no big bang/);
       await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!C2"));
       await expect.poll(() => page.locator("#cell-explanation").textContent()).toMatch(/K-correction sign: M = m − μ − K/);
       await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!A2"));
