@@ -18,7 +18,7 @@ import {
   speedOfLightMPerS,
   stefanBoltzmannSI,
 } from "./constants.js";
-import { fermiDiracDensityFactor, fermiDiracDensityFactorLogSlope } from "./fermiDirac.js";
+import { fermiDiracDensityFactor, fermiDiracDensityFactorLn, fermiDiracDensityFactorLogSlope } from "./fermiDirac.js";
 import type { ModelParameters } from "./ModelParameters.js";
 import { formatModelSpec, parseModelSpec } from "./modelSpec.js";
 import { gaussRule, integrate, kronrod15 } from "./quadrature.js";
@@ -215,6 +215,8 @@ export class Cosmology {
   private readonly masslessNeutrinos: number;
   private readonly neutrinoSpeciesDensity: number;
   private readonly massiveY0: Float64Array;
+  /** ln of massiveY0, so that E² needs no logarithm per species. */
+  private readonly lnY0: Float64Array;
   private readonly sqrtAbsOk: number;
   /** Sign of the curvature: 1 open, 0 flat, −1 closed (an integer field: cheap to branch on). */
   private readonly geometry: 1 | 0 | -1;
@@ -253,6 +255,7 @@ export class Cosmology {
     const massive = p.Tcmb > 0 ? p.mnu.filter((m) => m > 0) : [];
     const neutrinoTemperatureEv = boltzmannEvPerK * neutrinoTemperatureRatio * p.Tcmb;
     this.massiveY0 = Float64Array.from(massive, (m) => m / neutrinoTemperatureEv);
+    this.lnY0 = this.massiveY0.map(Math.log);
     this.masslessNeutrinos = (3 - massive.length) * this.neutrinoSpeciesDensity;
     this.Or = this.Ogamma + this.masslessNeutrinos;
     let onuMassive = 0;
@@ -289,8 +292,6 @@ export class Cosmology {
       { coefficient: this.OL, power: this.darkEnergyPower },
     ];
 
-    this.checkBigBang();
-
     // Tables in u = ln(1+z) on [0, uMax]: χ = D_C/D_H, τ = t_lookback/t_H, ln(t_age/t_H).
     const uMax = Math.log1p(tableMaxRedshift);
     const n = Math.ceil(uMax * panelsPerUnit);
@@ -305,22 +306,31 @@ export class Cosmology {
     const panelTau = new Float64Array(n);
     const invE = new Float64Array(n + 1);
     const logSlope = new Float64Array(n + 1); // (1+z) E'(z) / E = d ln E / du
+    const zpAt = new Float64Array(n + 1);
+    // E² > 0 is checked at every node and quadrature point as the tables are built (a model
+    // without a big bang is rejected, naming the redshift), then beyond the tables.
     for (let i = 0; i <= n; i++) {
       const u = i * h;
-      const zp = Math.exp(u);
+      const zp = (zpAt[i] = Math.exp(u));
       const e2 = this.e2(zp, u);
+      if (!(e2 > 0)) this.noBigBang(i > 0 ? Math.expm1((i - 1) * h) : 0, Math.expm1(u));
       invE[i] = 1 / Math.sqrt(e2);
       logSlope[i] = (0.5 * zp * this.de2dz(zp, u)) / e2;
     }
     const { nodes, weights } = gaussRule;
+    const offsets = nodes.map((x) => 0.5 * h * x);
+    const expOffsets = offsets.map(Math.exp); // 1+z at a quadrature point = e^centre · e^offset: one exp a panel
     for (let i = 0; i < n; i++) {
       const centre = (i + 0.5) * h;
+      const expCentre = Math.exp(centre);
       let sumChi = 0;
       let sumTau = 0;
       for (let j = 0; j < 7; j++) {
-        const u = centre + 0.5 * h * nodes[j];
-        const zp = Math.exp(u);
-        const inv = 1 / Math.sqrt(this.e2(zp, u));
+        const u = centre + offsets[j];
+        const zp = expCentre * expOffsets[j];
+        const e2 = this.e2(zp, u);
+        if (!(e2 > 0)) this.noBigBang(Math.expm1(i * h), Math.expm1(u));
+        const inv = 1 / Math.sqrt(e2);
         sumChi += weights[j] * zp * inv;
         sumTau += weights[j] * inv;
       }
@@ -329,12 +339,13 @@ export class Cosmology {
       tau[i + 1] = tau[i] + panelTau[i];
     }
     for (let i = 0; i <= n; i++) {
-      const zp = Math.exp(i * h);
+      const zp = zpAt[i];
       chi1[i] = zp * invE[i];
       chi2[i] = chi1[i] * (1 - logSlope[i]);
       tau1[i] = invE[i];
       tau2[i] = -invE[i] * logSlope[i];
     }
+    this.checkBigBangBeyondTables();
     this.chi = new QuinticTable(0, h, chi, chi1, chi2);
     this.tau = new QuinticTable(0, h, tau, tau1, tau2);
 
@@ -383,7 +394,7 @@ export class Cosmology {
     const y0 = this.massiveY0;
     if (y0.length > 0) {
       let nu = 0;
-      for (let i = 0; i < y0.length; i++) nu += fermiDiracDensityFactor(y0[i] / zp);
+      for (let i = 0; i < y0.length; i++) nu += fermiDiracDensityFactorLn(y0[i] / zp, this.lnY0[i] - lnZp);
       e2 += this.neutrinoSpeciesDensity * zp2 * zp2 * nu;
     }
     return e2;
@@ -429,40 +440,34 @@ export class Cosmology {
   }
 
   /** Throws RangeError naming the redshift where E² ≤ 0, if anywhere on z ≥ 0. */
-  private checkBigBang(): void {
-    const bad = (z: number) => {
-      const e2 = this.e2(1 + z, Math.log1p(z));
-      return !(e2 > 0);
-    };
-    let previous = 0;
-    const candidates: number[] = [];
-    for (let u = 1 / 64; u <= Math.log1p(tableMaxRedshift) + 1e-12; u += 1 / 64) candidates.push(Math.expm1(u));
-    for (let k = 9; k <= 75; k++) candidates.push(10 ** k); // (1+z)⁴ stays below 1e300
-    let failure: number | undefined;
-    for (const z of candidates) {
-      if (bad(z)) {
-        failure = z;
-        break;
-      }
-      previous = z;
-    }
-    const leading = this.leadingTerm();
-    if (failure === undefined && leading && leading.coefficient < 0) failure = Number.POSITIVE_INFINITY;
-    if (failure === undefined) return;
-    let where: string;
-    if (Number.isFinite(failure)) {
-      let lo = previous;
-      let hi = failure;
+  /** Throws the no-big-bang error for a model with E² > 0 at z = lo and E² ≤ 0 at z = hi (bisected). */
+  private noBigBang(lo: number, hi: number): never {
+    const bad = (z: number) => !(this.e2(1 + z, Math.log1p(z)) > 0);
+    let where = "at very high z";
+    if (Number.isFinite(hi)) {
       for (let i = 0; i < 200 && hi - lo > 1e-12 * hi; i++) {
         const mid = 0.5 * (lo + hi);
         if (bad(mid)) hi = mid;
         else lo = mid;
       }
       where = `at z = ${formatRedshift(hi)}`;
-    } else {
-      where = "at very high z";
     }
     throw new RangeError(`no big bang: H²(z) ≤ 0 ${where} (the model bounces); check Om, OL/Ok, w0, wa`);
+  }
+
+  /**
+   * Rejects a model whose E² ≤ 0 beyond the tables (z = 1e9 … 1e75, and a negative leading term as
+   * z → ∞). Inside the tables every node and quadrature point is checked while they are built.
+   */
+  private checkBigBangBeyondTables(): void {
+    let previous = tableMaxRedshift;
+    for (let k = 9; k <= 75; k++) {
+      const z = 10 ** k; // (1+z)⁴ stays below 1e300
+      if (!(this.e2(1 + z, Math.log1p(z)) > 0)) this.noBigBang(previous, z);
+      previous = z;
+    }
+    const leading = this.leadingTerm();
+    if (leading && leading.coefficient < 0) this.noBigBang(previous, Number.POSITIVE_INFINITY);
   }
 
   /** Dimensionless expansion rate E(z) = H(z)/H0. @param z redshift ≥ 0 @example new Cosmology(EdS).expansionRate(3) // 8 */

@@ -5,10 +5,12 @@
  *
  * the energy density of one species (with its antiparticle) relative to the same species if massless
  * (F(0) = 1; F(y) → 180 ζ(3) y / (7π⁴) for y ≫ 1). This is the exact integral, not a fitting formula:
- * a quintic Hermite table in ln y (shared by all models, built once on first use from adaptive
- * Gauss–Kronrod quadrature of F, dF/dln y and d²F/dln y²), with the two-term small-y series
+ * a quintic Hermite table in ln y (shared by all models; its nodes F, dF/dln y and d²F/dln y² come from
+ * adaptive Gauss–Kronrod quadrature, computed ahead by scripts/makeFermiDiracTable.ts and stored in
+ * fermiDiracTable.ts, so a page never spends the ~80 ms that quadrature takes), with the two-term small-y series
  * F = 1 + 5y²/(7π²) below y = e⁻¹⁰ and the large-y asymptotic series above y = e⁷.
  */
+import { fermiDiracNodesBase64 } from "./fermiDiracTable.js";
 import { integrate } from "./quadrature.js";
 import { QuinticTable } from "./QuinticTable.js";
 
@@ -52,17 +54,54 @@ function exactByQuadrature(y: number): [number, number, number] {
   return [normalisation * f, normalisation * d1, normalisation * (d1 + d2)];
 }
 
+/** The grid of the shared table in s = ln y. */
+export const fermiDiracGrid = { sMin, step, nodes: Math.round((sMax - sMin) / step) + 1 } as const;
+
+/**
+ * The table's nodes by quadrature (slow, ~80 ms): for each grid point, F, dF/ds and d²F/ds² in turn.
+ * Used by scripts/makeFermiDiracTable.ts to write fermiDiracTable.ts, and by its test.
+ */
+export function fermiDiracNodesByQuadrature(): Float64Array {
+  const out = new Float64Array(3 * fermiDiracGrid.nodes);
+  for (let i = 0; i < fermiDiracGrid.nodes; i++) out.set(exactByQuadrature(Math.exp(sMin + i * step)), 3 * i);
+  return out;
+}
+
+/** Decodes base64 to doubles (little-endian), without Node's Buffer (this runs in the browser too). */
+function decodeDoubles(base64: string): Float64Array {
+  const alphabet = "ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789+/";
+  const clean = base64.replace(/=+$/, "");
+  const bytes = new Uint8Array(Math.floor((clean.length * 3) / 4));
+  let bits = 0;
+  let value = 0;
+  let k = 0;
+  for (const ch of clean) {
+    value = (value << 6) | alphabet.indexOf(ch);
+    bits += 6;
+    if (bits >= 8) {
+      bits -= 8;
+      bytes[k++] = (value >> bits) & 0xff;
+    }
+  }
+  const view = new DataView(bytes.buffer);
+  return Float64Array.from({ length: bytes.length / 8 }, (_, i) => view.getFloat64(8 * i, true));
+}
+
+/** The stored nodes (fermiDiracTable.ts), decoded: F, dF/ds, d²F/ds² for each grid point in turn. */
+export function fermiDiracStoredNodes(): Float64Array {
+  return decodeDoubles(fermiDiracNodesBase64);
+}
+
 let table: QuinticTable | undefined;
 
 function getTable(): QuinticTable {
   if (table) return table;
-  const n = Math.round((sMax - sMin) / step);
-  const f = new Float64Array(n + 1);
-  const d1 = new Float64Array(n + 1);
-  const d2 = new Float64Array(n + 1);
-  for (let i = 0; i <= n; i++) {
-    [f[i], d1[i], d2[i]] = exactByQuadrature(Math.exp(sMin + i * step));
-  }
+  const nodes = fermiDiracStoredNodes();
+  const n = fermiDiracGrid.nodes;
+  const f = new Float64Array(n);
+  const d1 = new Float64Array(n);
+  const d2 = new Float64Array(n);
+  for (let i = 0; i < n; i++) [f[i], d1[i], d2[i]] = [nodes[3 * i], nodes[3 * i + 1], nodes[3 * i + 2]];
   table = new QuinticTable(sMin, step, f, d1, d2);
   return table;
 }
@@ -95,6 +134,20 @@ export function fermiDiracDensityFactor(y: number): number {
   if (s < sMin) return 1 + smallYCoefficient * y * y;
   if (s > sMax) return largeY(y);
   return getTable().value(s);
+}
+
+/**
+ * F(y) when ln y is already known (the expansion rate has ln(1+z) at hand: ln y = ln y0 − ln(1+z)),
+ * saving the logarithm; the same value as fermiDiracDensityFactor(y) to rounding.
+ *
+ * @param y m c² / (k_B T_ν), dimensionless, > 0
+ * @param lnY ln y
+ * @returns F(y), dimensionless, ≥ 1
+ */
+export function fermiDiracDensityFactorLn(y: number, lnY: number): number {
+  if (lnY < sMin) return 1 + smallYCoefficient * y * y;
+  if (lnY > sMax) return largeY(y);
+  return getTable().value(lnY);
 }
 
 /**

@@ -13,14 +13,23 @@ export const activeModelSettingKey = "zcell.activeModel";
 export const defaultModelSpec = "P18-BAO";
 
 let ready: Promise<void> | undefined;
+let isReady = false;
 
 /** Resolves once the workbook's settings can be read (at once outside Office). */
 export function whenSettingsReady(): Promise<void> {
   if (!ready) {
     const office = (globalThis as { Office?: typeof Office }).Office;
-    ready = office?.onReady ? office.onReady().then(() => undefined) : Promise.resolve();
+    ready = (office?.onReady ? office.onReady().then(() => undefined) : Promise.resolve()).then(() => {
+      isReady = true;
+    });
   }
   return ready;
+}
+
+/** True once the settings can be read (so a function can answer without waiting). */
+export function settingsReady(): boolean {
+  if (!ready) void whenSettingsReady();
+  return isReady;
 }
 
 /** The stored spec and, when it is missing or unusable, the fallback with a warning. */
@@ -35,19 +44,29 @@ export interface ActiveModelSetting {
   models?: WorkbookModels;
 }
 
+/** The last reading, kept while the stored values stay the same (a formula per row reads it each time). */
+let last: { value: unknown; models: unknown; result: ActiveModelSetting } | undefined;
+
 /** Reads the active model's spec and the workbook's own models from the settings (call after whenSettingsReady). */
 export function readActiveModel(): ActiveModelSetting {
   const office = (globalThis as { Office?: typeof Office }).Office;
   const settings = office?.context?.document?.settings;
   if (!settings) return { spec: defaultModelSpec, stored: false, models: noWorkbookModels };
   let value: unknown;
-  let models = noWorkbookModels;
+  let storedModels: unknown;
   try {
-    models = readWorkbookModels(settings.get(workbookModelsSettingKey));
+    storedModels = settings.get(workbookModelsSettingKey);
     value = settings.get(activeModelSettingKey);
   } catch (e) {
-    return { spec: defaultModelSpec, stored: false, models, warning: messages.activeModelFallback(String(e)) };
+    return { spec: defaultModelSpec, stored: false, models: noWorkbookModels, warning: messages.activeModelFallback(String(e)) };
   }
+  if (last && last.value === value && last.models === storedModels) return last.result;
+  const result = interpret(value, readWorkbookModels(storedModels));
+  last = { value, models: storedModels, result };
+  return result;
+}
+
+function interpret(value: unknown, models: WorkbookModels): ActiveModelSetting {
   if (value === null || value === undefined) return { spec: defaultModelSpec, stored: false, models };
   if (typeof value !== "string") {
     return { spec: defaultModelSpec, stored: false, models, warning: messages.activeModelFallback("not text") };

@@ -60,6 +60,7 @@ function ofRedshift(
     name,
     args: reference ? [zArg, model, unit("unit", reference, shown)] : [zArg, model],
     compute: (a) => f(m(a), n(a, "z")),
+    kernel: { arg: "z", of: (a, zz) => f(m(a), zz) },
   };
 }
 

@@ -7,7 +7,7 @@
  * holds an error: the CellError it returns carries the explanation.
  */
 import { Cosmology, conversionFactor, formatModelSpec, NoSolutionError, parseModelSpec } from "../core/index.js";
-import { readActiveModel, whenSettingsReady, type ActiveModelSetting } from "./activeModel.js";
+import { readActiveModel, settingsReady, whenSettingsReady, type ActiveModelSetting } from "./activeModel.js";
 import { CellError, isIncomingError, toHostError } from "./cellError.js";
 import { messages } from "./messages.js";
 import { isBlank, keyValueBlockSpec } from "./modelArgument.js";
@@ -75,6 +75,12 @@ export interface FunctionDef {
   args: ArgSpec[];
   /** The value for one cell, in the reference units of the unit arguments. */
   compute?: (a: Args) => number | string;
+  /**
+   * The same computation as a function of one number argument, the others fixed in `a` (a column of
+   * redshifts against one model): `of(a, x)` equals `compute` with `a[arg] = x`. Lets a range run a
+   * tight loop with no per-cell object writes.
+   */
+  kernel?: { arg: string; of: (a: Args, x: number) => number };
   /** For functions that return a whole table at once (ZC.PRESETS). */
   table?: (active: ActiveModelSetting) => Cell[][];
 }
@@ -82,9 +88,9 @@ export interface FunctionDef {
 const maxCells = 4_194_304;
 const blank = "";
 
-type Prepared = { spec: ArgSpec; matrix: unknown[][] | undefined; rows: number; cols: number };
 /** How a number argument is converted into its reference unit: the factor and the unit the user gave. */
 type Conversion = { factor: number; unit: string };
+type Prepared = { spec: ArgSpec; matrix: unknown[][] | undefined; rows: number; cols: number; conversion: Conversion | undefined };
 
 /** Text that Excel's own functions would read as a number (CSV and archive pastes). */
 const numberText = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
@@ -130,16 +136,26 @@ function resolvedSpec(text: string, active: ActiveModelSetting): string {
   return models.specs.has(first) ? formatModelSpec(parseModelSpec(text, models.named)) : text;
 }
 
+/** Unit conversions already worked out, by argument and unit text (a sheet uses a handful of units). */
+const conversionCache = new Map<Extract<ArgSpec, { kind: "unit" }>, Map<string, Conversion>>();
+
 function unitConversion(spec: Extract<ArgSpec, { kind: "unit" }>, raw: unknown): Conversion {
-  const given = toMatrix(raw)?.[0]?.[0];
+  const given = Array.isArray(raw) ? toMatrix(raw)?.[0]?.[0] : raw;
   const text = isBlank(given) ? spec.default : given;
   if (typeof text !== "string") throw new CellError("value", messages.notText(spec.name, text));
+  let known = conversionCache.get(spec);
+  const cached = known?.get(text);
+  if (cached) return cached;
+  let conversion: Conversion;
   try {
     const factor = spec.applies === "result" ? conversionFactor(spec.unit, text) : conversionFactor(text, spec.unit);
-    return { factor, unit: text.trim() };
+    conversion = { factor, unit: text.trim() };
   } catch (e) {
     throw new CellError("value", messages.unitArgument(spec.name, (e as Error).message));
   }
+  if (!known) conversionCache.set(spec, (known = new Map()));
+  if (known.size < 64) known.set(text, conversion);
+  return conversion;
 }
 
 /**
@@ -153,30 +169,129 @@ function unitConversion(spec: Extract<ArgSpec, { kind: "unit" }>, raw: unknown):
 export function evaluate(def: FunctionDef, raw: readonly unknown[], active: ActiveModelSetting): Cell[][] {
   try {
     if (def.table) return def.table(active);
-    return evaluateCells(def, raw, active);
+    const one = evaluateSingle(def, raw, active);
+    return one === undefined ? evaluateCells(def, raw, active) : [[one]];
   } catch (e) {
     return [[inFunction(classify(e, def.name), def.name, new Map())]];
   }
 }
 
+/** Marks an argument that is a range of more than one cell. */
+const several = Symbol("several cells");
+
+/** The one value of an argument that is a single cell (or omitted: undefined), else `several`. */
+function singleCell(raw: unknown): unknown {
+  if (!Array.isArray(raw)) return raw ?? undefined;
+  if (raw.length !== 1) return raw.length === 0 ? undefined : several;
+  const row = raw[0];
+  if (!Array.isArray(row)) return raw.length === 1 ? row : several;
+  return row.length === 1 ? row[0] : row.length === 0 ? undefined : several;
+}
+
+/** Which arguments of a function are units, scalar texts and cell values: worked out once per function. */
+interface Plan {
+  units: number[];
+  scalarTexts: number[];
+  cells: number[];
+}
+const plans = new WeakMap<FunctionDef, Plan>();
+
+function planOf(def: FunctionDef): Plan {
+  let plan = plans.get(def);
+  if (!plan) {
+    plan = { units: [], scalarTexts: [], cells: [] };
+    def.args.forEach((spec, i) => {
+      if (spec.kind === "unit") plan!.units.push(i);
+      else if (spec.kind === "text" && spec.scalar) plan!.scalarTexts.push(i);
+      else plan!.cells.push(i);
+    });
+    plans.set(def, plan);
+  }
+  return plan;
+}
+
+/** Model resolution for single cells, one function per reading of the settings. */
+const singleResolvers = new WeakMap<ActiveModelSetting, (text: string) => Cosmology | CellError>();
+
+/**
+ * One formula per row: every argument a single cell. The same reading as the general path, without
+ * its matrices and broadcasting; undefined when some argument is a range (the general path then runs).
+ */
+function evaluateSingle(def: FunctionDef, raw: readonly unknown[], active: ActiveModelSetting): Cell | undefined {
+  const plan = planOf(def);
+  const specs = def.args;
+  const cells = plan.cells;
+  const values: unknown[] = new Array(cells.length);
+  for (let k = 0; k < cells.length; k++) {
+    const value = singleCell(raw[cells[k]]);
+    if (value === several) return undefined;
+    values[k] = value;
+  }
+  let conversions: Record<string, Conversion> | undefined;
+  let resultFactor = 1;
+  const args: Args = {};
+  for (const i of plan.units) {
+    const spec = specs[i] as Extract<ArgSpec, { kind: "unit" }>;
+    const conversion = unitConversion(spec, raw[i]);
+    if (spec.applies === "result") resultFactor *= conversion.factor;
+    else (conversions ??= {})[spec.applies] = conversion;
+  }
+  for (const i of plan.scalarTexts) {
+    const spec = specs[i] as Extract<ArgSpec, { kind: "text" }>;
+    const text = toMatrix(raw[i])?.[0]?.[0];
+    args[spec.name] = spec.optional && isBlank(text) ? "" : readText(spec, text);
+  }
+  let resolver = singleResolvers.get(active);
+  if (!resolver) singleResolvers.set(active, (resolver = (text) => singleModel(text, active)));
+  let error: Cell | undefined;
+  for (let k = 0; k < cells.length; k++) {
+    const i = cells[k];
+    const spec = specs[i];
+    const value = values[k];
+    if (value === undefined && spec.kind === "number" && spec.default === undefined) throw new CellError("value", `${spec.name} is required`);
+    const read = readArg(spec, value, raw[i] !== undefined && raw[i] !== null, conversions?.[spec.name], active, resolver);
+    if (read instanceof CellError || read === blank) error ??= read;
+    else args[spec.name] = read;
+  }
+  if (error !== undefined) return error instanceof CellError ? inFunction(error, def.name, new Map()) : error;
+  try {
+    const result = def.compute!(args);
+    const cell = typeof result === "number" ? cleanNumber(result * resultFactor, def.name) : result;
+    return cell instanceof CellError ? inFunction(cell, def.name, new Map()) : cell;
+  } catch (e) {
+    return inFunction(classify(e, def.name), def.name, new Map());
+  }
+}
+
+function singleModel(text: string, active: ActiveModelSetting): Cosmology | CellError {
+  try {
+    return modelFor(resolvedSpec(text, active));
+  } catch (e) {
+    const err = classify(e, "model");
+    return new CellError(err.kind, messages.model(err.message));
+  }
+}
+
 function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: ActiveModelSetting): Cell[][] {
   const compute = def.compute!;
-  const inputFactors = new Map<string, Conversion>();
+  const conversions: Record<string, Conversion> = {};
   let resultFactor = 1;
   const prepared: Prepared[] = [];
   const scalars: Args = {};
-  def.args.forEach((spec, index) => {
+  const specs = def.args;
+  for (let index = 0; index < specs.length; index++) {
+    const spec = specs[index];
     const value = raw[index];
     if (spec.kind === "unit") {
       const conversion = unitConversion(spec, value);
       if (spec.applies === "result") resultFactor *= conversion.factor;
-      else inputFactors.set(spec.applies, conversion);
-      return;
+      else conversions[spec.applies] = conversion;
+      continue;
     }
     if (spec.kind === "text" && spec.scalar) {
       const text = toMatrix(value)?.[0]?.[0];
       scalars[spec.name] = spec.optional && isBlank(text) ? "" : readText(spec, text);
-      return;
+      continue;
     }
     let matrix = toMatrix(value);
     if (spec.kind === "model" && matrix) {
@@ -186,8 +301,9 @@ function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: Active
     if (!matrix && spec.kind === "number" && spec.default === undefined) {
       throw new CellError("value", `${spec.name} is required`);
     }
-    prepared.push({ spec, matrix, rows: matrix?.length ?? 1, cols: matrix?.[0]?.length ?? 1 });
-  });
+    prepared.push({ spec, matrix, rows: matrix?.length ?? 1, cols: matrix?.[0]?.length ?? 1, conversion: undefined });
+  }
+  for (const p of prepared) p.conversion = conversions[p.spec.name];
 
   let rows = 1;
   let cols = 1;
@@ -211,9 +327,13 @@ function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: Active
   }
   if (rows * cols > maxCells) throw new CellError("value", messages.tooLarge(rows * cols));
 
-  const models = new Map<string, Cosmology | CellError>();
+  // models of this call: the last one asked for is kept at hand, others in a map
+  let lastSpec: string | undefined;
+  let lastModel: Cosmology | CellError | undefined;
+  let others: Map<string, Cosmology | CellError> | undefined;
   const modelOf = (spec: string): Cosmology | CellError => {
-    let m = models.get(spec);
+    if (spec === lastSpec) return lastModel!;
+    let m = others?.get(spec);
     if (m === undefined) {
       try {
         m = modelFor(resolvedSpec(spec, active));
@@ -221,8 +341,10 @@ function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: Active
         const err = classify(e, def.name);
         m = new CellError(err.kind, messages.model(err.message));
       }
-      models.set(spec, m);
+      (others ??= new Map()).set(spec, m);
     }
+    lastSpec = spec;
+    lastModel = m;
     return m;
   };
 
@@ -236,12 +358,67 @@ function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: Active
       varying.push(p);
       continue;
     }
-    const read = readArg(p, p.matrix?.[0][0], active, modelOf, inputFactors);
+    const read = readArg(p.spec, p.matrix?.[0][0], p.matrix !== undefined, p.conversion, active, modelOf);
     if (read instanceof CellError || read === blank) constantCell ??= read;
     else args[p.spec.name] = read;
   }
-  const named = new Map<CellError, CellError>();
+  let named: Map<CellError, CellError> | undefined;
+  const shown = (cell: Cell): Cell => (cell instanceof CellError ? inFunction(cell, def.name, (named ??= new Map())) : cell);
+  const cellOf = (): Cell => {
+    try {
+      const result = compute(args);
+      return typeof result === "number" ? cleanNumber(result * resultFactor, def.name) : result;
+    } catch (e) {
+      return classify(e, def.name);
+    }
+  };
+
   const out: Cell[][] = new Array(rows);
+  if (constantCell === undefined && varying.length === 1 && varying[0].spec.kind === "number" && cols === 1) {
+    // the common range: one column of numbers (a column of redshifts) against constant arguments
+    const p = varying[0];
+    const name = p.spec.name;
+    const matrix = p.matrix!;
+    const spec = p.spec as Extract<ArgSpec, { kind: "number" }>;
+    const kernel = def.kernel?.arg === name ? def.kernel.of : undefined;
+    if (kernel && !spec.magnitude && spec.min === undefined && spec.max === undefined) {
+      const factor = p.conversion === undefined ? 1 : p.conversion.factor;
+      for (let r = 0; r < rows; r++) {
+        const value = matrix[r][0];
+        if (typeof value === "number" && value - value === 0) {
+          let v: number;
+          try {
+            v = kernel(args, value * factor) * resultFactor;
+          } catch (e) {
+            out[r] = [shown(classify(e, def.name))];
+            continue;
+          }
+          out[r] = [v - v === 0 ? (v === 0 ? 0 : v) : shown(new CellError("num", messages.notFiniteResult(def.name)))];
+          continue;
+        }
+        const read = readArg(p.spec, value, true, p.conversion, active, modelOf); // text numbers, blanks, errors, ±∞: the general reading
+        let cell: Cell;
+        if (read instanceof CellError || read === blank) cell = read;
+        else {
+          args[name] = read;
+          cell = cellOf();
+        }
+        out[r] = [typeof cell === "number" ? cell : shown(cell)];
+      }
+      return out;
+    }
+    for (let r = 0; r < rows; r++) {
+      const read = readArg(p.spec, matrix[r][0], true, p.conversion, active, modelOf);
+      let cell: Cell;
+      if (read instanceof CellError || read === blank) cell = read;
+      else {
+        args[name] = read;
+        cell = cellOf();
+      }
+      out[r] = [typeof cell === "number" ? cell : shown(cell)];
+    }
+    return out;
+  }
   for (let r = 0; r < rows; r++) {
     const row: Cell[] = new Array(cols);
     for (let c = 0; c < cols; c++) {
@@ -249,19 +426,11 @@ function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: Active
       for (let k = 0; k < varying.length && cell === undefined; k++) {
         const p = varying[k];
         const value = p.matrix![p.rows === 1 ? 0 : r][p.cols === 1 ? 0 : c];
-        const read = readArg(p, value, active, modelOf, inputFactors);
+        const read = readArg(p.spec, value, true, p.conversion, active, modelOf);
         if (read instanceof CellError || read === blank) cell = read;
         else args[p.spec.name] = read;
       }
-      if (cell === undefined) {
-        try {
-          const result = compute(args);
-          cell = typeof result === "number" ? cleanNumber(result * resultFactor, def.name) : result;
-        } catch (e) {
-          cell = classify(e, def.name);
-        }
-      }
-      row[c] = cell instanceof CellError ? inFunction(cell, def.name, named) : cell;
+      row[c] = shown(cell ?? cellOf());
     }
     out[r] = row;
   }
@@ -270,13 +439,14 @@ function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: Active
 
 /** Reads one cell of a broadcast argument: its value, "" for a blank result, or an error. */
 function readArg(
-  p: Prepared,
+  spec: ArgSpec,
   value: unknown,
+  given: boolean,
+  conversion: Conversion | undefined,
   active: ActiveModelSetting,
   modelOf: (spec: string) => Cosmology | CellError,
-  inputFactors: Map<string, Conversion>,
 ): number | string | Cosmology | CellError | undefined {
-  const spec = p.spec;
+  if (spec.kind === "number" && typeof value === "number") return readNumber(spec, value, conversion);
   if (isIncomingError(value)) return new CellError("value", messages.inputError(spec.name));
   switch (spec.kind) {
     case "model": {
@@ -287,25 +457,12 @@ function readArg(
     }
     case "number": {
       if (isBlank(value)) {
-        if (p.matrix && !spec.blankMeansDefault) return blank;
+        if (given && !spec.blankMeansDefault) return blank;
         if (spec.default === undefined) return blank;
         return spec.default;
       }
-      let x = value;
-      if (typeof x === "string" && numberText.test(x.trim())) x = Number(x.trim());
-      if (typeof x !== "number") return new CellError("value", messages.notANumber(spec.name, value));
-      if (!Number.isFinite(x)) return new CellError("num", messages.notFinite(spec.name));
-      if (spec.magnitude && Math.abs(x) >= 50) return new CellError("na", messages.missingMagnitude(spec.name, x));
-      const conversion = inputFactors.get(spec.name);
-      const factor = conversion?.factor ?? 1;
-      const reference = x * factor;
-      if (spec.min !== undefined && (spec.minExclusive ? !(reference > spec.min) : !(reference >= spec.min))) {
-        return new CellError("num", messages.belowMin(spec.name, x, conversion?.unit ?? "", spec.min / factor, spec.minExclusive === true));
-      }
-      if (spec.max !== undefined && reference > spec.max.value) {
-        return new CellError("num", messages.aboveMax(spec.name, x, conversion?.unit ?? "", spec.max.value / factor, spec.max.what));
-      }
-      return reference;
+      if (typeof value === "string" && numberText.test(value.trim())) return readNumber(spec, Number(value.trim()), conversion);
+      return new CellError("value", messages.notANumber(spec.name, value));
     }
     case "numberOrText": {
       if (isBlank(value)) return spec.default;
@@ -326,6 +483,21 @@ function readArg(
   }
 }
 
+/** A number argument's value in its reference unit, after the checks of its domain in the user's unit. */
+function readNumber(spec: Extract<ArgSpec, { kind: "number" }>, x: number, conversion: Conversion | undefined): number | CellError {
+  if (!Number.isFinite(x)) return new CellError("num", messages.notFinite(spec.name));
+  if (spec.magnitude && Math.abs(x) >= 50) return new CellError("na", messages.missingMagnitude(spec.name, x));
+  const factor = conversion === undefined ? 1 : conversion.factor;
+  const reference = x * factor;
+  if (spec.min !== undefined && (spec.minExclusive ? !(reference > spec.min) : !(reference >= spec.min))) {
+    return new CellError("num", messages.belowMin(spec.name, x, conversion?.unit ?? "", spec.min / factor, spec.minExclusive === true));
+  }
+  if (spec.max !== undefined && reference > spec.max.value) {
+    return new CellError("num", messages.aboveMax(spec.name, x, conversion?.unit ?? "", spec.max.value / factor, spec.max.what));
+  }
+  return reference;
+}
+
 function readText(spec: Extract<ArgSpec, { kind: "text" }>, value: unknown): string {
   if (typeof value !== "string") throw new CellError("value", messages.notText(spec.name, value));
   const text = value.trim();
@@ -340,19 +512,36 @@ function cleanNumber(x: number, fn: string): number | CellError {
   return x === 0 ? 0 : x;
 }
 
-/**
- * What a custom function returns to Excel: waits for the workbook's settings, evaluates, and turns
- * CellErrors into host error values. Never throws.
- */
-export async function callFromSheet(def: FunctionDef, raw: readonly unknown[]): Promise<unknown[][]> {
+/** Cells as Excel takes them: CellErrors become the host's error values. */
+function forHost(cells: unknown[][]): unknown[][] {
+  for (const row of cells) {
+    for (let c = 0; c < row.length; c++) if (row[c] instanceof CellError) row[c] = toHostError(row[c] as CellError);
+  }
+  return cells;
+}
+
+function evaluateForHost(def: FunctionDef, raw: readonly unknown[]): unknown[][] {
   try {
-    await whenSettingsReady();
-    const cells: unknown[][] = evaluate(def, raw, readActiveModel());
-    for (const row of cells) {
-      for (let c = 0; c < row.length; c++) if (row[c] instanceof CellError) row[c] = toHostError(row[c] as CellError);
-    }
-    return cells;
+    return forHost(evaluate(def, raw, readActiveModel()));
   } catch (e) {
     return [[toHostError(classify(e, def.name))]];
   }
+}
+
+/**
+ * What a custom function returns to Excel: until the workbook's settings are loaded, a Promise that
+ * waits for them; from then on the result itself, with no wait and no Promise (a custom function may
+ * return a value or a Promise: ../shared/excel-host-notes.md). CellErrors become host error values.
+ * Never throws.
+ *
+ * Typed as the matrix it resolves to because the metadata plugin reads a declaration's return type
+ * for the result's dimensionality and cannot read a union (custom-functions-metadata getResults).
+ */
+export function callFromSheet(def: FunctionDef, raw: readonly unknown[]): unknown[][] {
+  if (settingsReady()) return evaluateForHost(def, raw);
+  const later: Promise<unknown[][]> = whenSettingsReady().then(
+    () => evaluateForHost(def, raw),
+    (e) => [[toHostError(classify(e, def.name))]],
+  );
+  return later as unknown as unknown[][];
 }

@@ -17,7 +17,7 @@ import { definitions as d } from "./definitions.js";
  * @param [unit] Output unit, default "Mpc" (e.g. "Gpc", "Gly", "m").
  * @returns Luminosity distance (Mpc by default).
  */
-export function DIST_LUM(z: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+export function DIST_LUM(z: any[][], model?: any[][], unit?: string): any[][] {
   return callFromSheet(d.DIST_LUM, [z, model, unit]);
 }
 
@@ -30,7 +30,7 @@ export function DIST_LUM(z: any[][], model?: any[][], unit?: string): Promise<an
  * @param [unit] Output unit, default "Mpc".
  * @returns Angular-diameter distance (Mpc by default).
  */
-export function DIST_ANG(z: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+export function DIST_ANG(z: any[][], model?: any[][], unit?: string): any[][] {
   return callFromSheet(d.DIST_ANG, [z, model, unit]);
 }
 
@@ -43,7 +43,7 @@ export function DIST_ANG(z: any[][], model?: any[][], unit?: string): Promise<an
  * @param [unit] Output unit, default "Mpc".
  * @returns Line-of-sight comoving distance (Mpc by default).
  */
-export function DIST_LOS(z: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+export function DIST_LOS(z: any[][], model?: any[][], unit?: string): any[][] {
   return callFromSheet(d.DIST_LOS, [z, model, unit]);
 }
 
@@ -56,7 +56,7 @@ export function DIST_LOS(z: any[][], model?: any[][], unit?: string): Promise<an
  * @param [unit] Output unit, default "Mpc".
  * @returns Transverse comoving distance (Mpc by default).
  */
-export function DIST_TRANS(z: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+export function DIST_TRANS(z: any[][], model?: any[][], unit?: string): any[][] {
   return callFromSheet(d.DIST_TRANS, [z, model, unit]);
 }
 
@@ -70,7 +70,7 @@ export function DIST_TRANS(z: any[][], model?: any[][], unit?: string): Promise<
  * @param [unit] Output unit, default "Mpc".
  * @returns Angular-diameter distance from z1 to z2 (Mpc by default).
  */
-export function DIST_BETWEEN(z1: any[][], z2: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+export function DIST_BETWEEN(z1: any[][], z2: any[][], model?: any[][], unit?: string): any[][] {
   return callFromSheet(d.DIST_BETWEEN, [z1, z2, model, unit]);
 }
 
@@ -83,7 +83,7 @@ export function DIST_BETWEEN(z1: any[][], z2: any[][], model?: any[][], unit?: s
  * @param [unit] Output unit, default "Mpc" (e.g. "Gly").
  * @returns Light-travel distance (Mpc by default).
  */
-export function DIST_LIGHT(z: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+export function DIST_LIGHT(z: any[][], model?: any[][], unit?: string): any[][] {
   return callFromSheet(d.DIST_LIGHT, [z, model, unit]);
 }
 
@@ -95,7 +95,7 @@ export function DIST_LIGHT(z: any[][], model?: any[][], unit?: string): Promise<
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @returns Distance modulus (mag).
  */
-export function MODULUS(z: any[][], model?: any[][]): Promise<any[][]> {
+export function MODULUS(z: any[][], model?: any[][]): any[][] {
   return callFromSheet(d.MODULUS, [z, model]);
 }
 
@@ -108,7 +108,7 @@ export function MODULUS(z: any[][], model?: any[][]): Promise<any[][]> {
  * @param [unit] Output unit, default "Gyr" (e.g. "Myr", "yr").
  * @returns Look-back time (Gyr by default).
  */
-export function LOOKBACK(z: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+export function LOOKBACK(z: any[][], model?: any[][], unit?: string): any[][] {
   return callFromSheet(d.LOOKBACK, [z, model, unit]);
 }
 
@@ -121,7 +121,7 @@ export function LOOKBACK(z: any[][], model?: any[][], unit?: string): Promise<an
  * @param [unit] Output unit, default "Gyr".
  * @returns Age at z (Gyr by default).
  */
-export function AGE(z?: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+export function AGE(z?: any[][], model?: any[][], unit?: string): any[][] {
   return callFromSheet(d.AGE, [z, model, unit]);
 }
 
@@ -134,7 +134,7 @@ export function AGE(z?: any[][], model?: any[][], unit?: string): Promise<any[][
  * @param [unit] Output unit, default "km/s/Mpc" (e.g. "s-1").
  * @returns H(z) (km/s/Mpc by default).
  */
-export function HUBBLE(z?: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+export function HUBBLE(z?: any[][], model?: any[][], unit?: string): any[][] {
   return callFromSheet(d.HUBBLE, [z, model, unit]);
 }
 
@@ -147,7 +147,7 @@ export function HUBBLE(z?: any[][], model?: any[][], unit?: string): Promise<any
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @returns Density parameter (dimensionless).
  */
-export function OMEGA(component: any[][], z?: any[][], model?: any[][]): Promise<any[][]> {
+export function OMEGA(component: any[][], z?: any[][], model?: any[][]): any[][] {
   return callFromSheet(d.OMEGA, [component, z, model]);
 }
 
@@ -159,7 +159,7 @@ export function OMEGA(component: any[][], z?: any[][], model?: any[][]): Promise
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @returns Temperature (K).
  */
-export function CMB_TEMP(z?: any[][], model?: any[][]): Promise<any[][]> {
+export function CMB_TEMP(z?: any[][], model?: any[][]): any[][] {
   return callFromSheet(d.CMB_TEMP, [z, model]);
 }
 
@@ -172,7 +172,7 @@ export function CMB_TEMP(z?: any[][], model?: any[][]): Promise<any[][]> {
  * @param [unit] Output unit, default "kg/m3" (e.g. "solMass/Mpc3", "g/cm3").
  * @returns Critical density (kg/m3 by default).
  */
-export function CRIT_DENSITY(z?: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+export function CRIT_DENSITY(z?: any[][], model?: any[][], unit?: string): any[][] {
   return callFromSheet(d.CRIT_DENSITY, [z, model, unit]);
 }
 
@@ -185,7 +185,7 @@ export function CRIT_DENSITY(z?: any[][], model?: any[][], unit?: string): Promi
  * @param [unit] Output unit, default "kpc/arcsec" (e.g. "Mpc/deg").
  * @returns Proper scale (kpc/arcsec by default).
  */
-export function PROPER_SCALE(z: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+export function PROPER_SCALE(z: any[][], model?: any[][], unit?: string): any[][] {
   return callFromSheet(d.PROPER_SCALE, [z, model, unit]);
 }
 
@@ -200,7 +200,7 @@ export function PROPER_SCALE(z: any[][], model?: any[][], unit?: string): Promis
  * @param [size_unit] Output unit, default "kpc".
  * @returns Proper size (kpc by default).
  */
-export function SIZE(angle: any[][], z: any[][], model?: any[][], angle_unit?: string, size_unit?: string): Promise<any[][]> {
+export function SIZE(angle: any[][], z: any[][], model?: any[][], angle_unit?: string, size_unit?: string): any[][] {
   return callFromSheet(d.SIZE, [angle, z, model, angle_unit, size_unit]);
 }
 
@@ -215,7 +215,7 @@ export function SIZE(angle: any[][], z: any[][], model?: any[][], angle_unit?: s
  * @param [angle_unit] Output unit, default "arcsec".
  * @returns Angle (arcsec by default).
  */
-export function ANGLE(size: any[][], z: any[][], model?: any[][], size_unit?: string, angle_unit?: string): Promise<any[][]> {
+export function ANGLE(size: any[][], z: any[][], model?: any[][], size_unit?: string, angle_unit?: string): any[][] {
   return callFromSheet(d.ANGLE, [size, z, model, size_unit, angle_unit]);
 }
 
@@ -228,7 +228,7 @@ export function ANGLE(size: any[][], z: any[][], model?: any[][], size_unit?: st
  * @param [unit] Output unit, default "Gpc3" (e.g. "Mpc3").
  * @returns Comoving volume (Gpc3 by default).
  */
-export function VOLUME(z: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+export function VOLUME(z: any[][], model?: any[][], unit?: string): any[][] {
   return callFromSheet(d.VOLUME, [z, model, unit]);
 }
 
@@ -244,7 +244,7 @@ export function VOLUME(z: any[][], model?: any[][], unit?: string): Promise<any[
  * @param [area_unit] Unit of area, default "deg2" (e.g. "sr", "arcmin2").
  * @returns Shell volume (Gpc3 by default).
  */
-export function VOLUME_SHELL(z1: any[][], z2: any[][], area?: any[][], model?: any[][], unit?: string, area_unit?: string): Promise<any[][]> {
+export function VOLUME_SHELL(z1: any[][], z2: any[][], area?: any[][], model?: any[][], unit?: string, area_unit?: string): any[][] {
   return callFromSheet(d.VOLUME_SHELL, [z1, z2, area, model, unit, area_unit]);
 }
 
@@ -257,7 +257,7 @@ export function VOLUME_SHELL(z1: any[][], z2: any[][], area?: any[][], model?: a
  * @param [unit] Output unit, default "Mpc3/sr" (e.g. "Mpc3/deg2").
  * @returns Volume element (Mpc3/sr by default).
  */
-export function VOLUME_ELEMENT(z: any[][], model?: any[][], unit?: string): Promise<any[][]> {
+export function VOLUME_ELEMENT(z: any[][], model?: any[][], unit?: string): any[][] {
   return callFromSheet(d.VOLUME_ELEMENT, [z, model, unit]);
 }
 
@@ -272,7 +272,7 @@ export function VOLUME_ELEMENT(z: any[][], model?: any[][], unit?: string): Prom
  * @param [lum_unit] Output unit, default "W" (e.g. "erg/s", "Lsun").
  * @returns Luminosity (W by default).
  */
-export function LUMINOSITY(flux: any[][], z: any[][], model?: any[][], flux_unit?: string, lum_unit?: string): Promise<any[][]> {
+export function LUMINOSITY(flux: any[][], z: any[][], model?: any[][], flux_unit?: string, lum_unit?: string): any[][] {
   return callFromSheet(d.LUMINOSITY, [flux, z, model, flux_unit, lum_unit]);
 }
 
@@ -287,7 +287,7 @@ export function LUMINOSITY(flux: any[][], z: any[][], model?: any[][], flux_unit
  * @param [flux_unit] Output unit, default "W/m2" (e.g. "erg/s/cm2").
  * @returns Flux (W/m2 by default).
  */
-export function FLUX(lum: any[][], z: any[][], model?: any[][], lum_unit?: string, flux_unit?: string): Promise<any[][]> {
+export function FLUX(lum: any[][], z: any[][], model?: any[][], lum_unit?: string, flux_unit?: string): any[][] {
   return callFromSheet(d.FLUX, [lum, z, model, lum_unit, flux_unit]);
 }
 
@@ -303,7 +303,7 @@ export function FLUX(lum: any[][], z: any[][], model?: any[][], lum_unit?: strin
  * @param [out_unit] Output unit, default "W/Hz" (e.g. "erg/s/Hz").
  * @returns Spectral luminosity (W/Hz by default).
  */
-export function LUMINOSITY_NU(flux_density: any[][], z: any[][], alpha: any[][], model?: any[][], in_unit?: string, out_unit?: string): Promise<any[][]> {
+export function LUMINOSITY_NU(flux_density: any[][], z: any[][], alpha: any[][], model?: any[][], in_unit?: string, out_unit?: string): any[][] {
   return callFromSheet(d.LUMINOSITY_NU, [flux_density, z, alpha, model, in_unit, out_unit]);
 }
 
@@ -315,7 +315,7 @@ export function LUMINOSITY_NU(flux_density: any[][], z: any[][], alpha: any[][],
  * @param alpha Spectral index of S_ν ∝ ν^alpha (value or range).
  * @returns K-correction (mag).
  */
-export function KCORRECTION(z: any[][], alpha: any[][]): Promise<any[][]> {
+export function KCORRECTION(z: any[][], alpha: any[][]): any[][] {
   return callFromSheet(d.KCORRECTION, [z, alpha]);
 }
 
@@ -329,7 +329,7 @@ export function KCORRECTION(z: any[][], alpha: any[][]): Promise<any[][]> {
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @returns Absolute magnitude (mag).
  */
-export function MAG_ABS(m: any[][], z: any[][], kcorr?: any[][], model?: any[][]): Promise<any[][]> {
+export function MAG_ABS(m: any[][], z: any[][], kcorr?: any[][], model?: any[][]): any[][] {
   return callFromSheet(d.MAG_ABS, [m, z, kcorr, model]);
 }
 
@@ -343,7 +343,7 @@ export function MAG_ABS(m: any[][], z: any[][], kcorr?: any[][], model?: any[][]
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @returns Apparent magnitude (mag).
  */
-export function MAG_APP(M: any[][], z: any[][], kcorr?: any[][], model?: any[][]): Promise<any[][]> {
+export function MAG_APP(M: any[][], z: any[][], kcorr?: any[][], model?: any[][]): any[][] {
   return callFromSheet(d.MAG_APP, [M, z, kcorr, model]);
 }
 
@@ -355,7 +355,7 @@ export function MAG_APP(M: any[][], z: any[][], kcorr?: any[][], model?: any[][]
  * @param [unit] Unit of flux density, default "Jy" (e.g. "uJy", "erg/s/cm2/Hz").
  * @returns AB magnitude (mag).
  */
-export function MAG_AB(flux_density: any[][], unit?: string): Promise<any[][]> {
+export function MAG_AB(flux_density: any[][], unit?: string): any[][] {
   return callFromSheet(d.MAG_AB, [flux_density, unit]);
 }
 
@@ -367,7 +367,7 @@ export function MAG_AB(flux_density: any[][], unit?: string): Promise<any[][]> {
  * @param [unit] Output unit, default "Jy" (e.g. "uJy").
  * @returns Flux density (Jy by default).
  */
-export function FLUX_AB(m_ab: any[][], unit?: string): Promise<any[][]> {
+export function FLUX_AB(m_ab: any[][], unit?: string): any[][] {
   return callFromSheet(d.FLUX_AB, [m_ab, unit]);
 }
 
@@ -381,7 +381,7 @@ export function FLUX_AB(m_ab: any[][], unit?: string): Promise<any[][]> {
  * @param [unit] Unit of value; default that of the function inverted (Mpc, Gyr, Gpc3 for VOLUME; MODULUS in mag takes none).
  * @returns Redshift.
  */
-export function REDSHIFT(value: any[][], quantity: string, model?: any[][], unit?: string): Promise<any[][]> {
+export function REDSHIFT(value: any[][], quantity: string, model?: any[][], unit?: string): any[][] {
   return callFromSheet(d.REDSHIFT, [value, quantity, model, unit]);
 }
 
@@ -394,7 +394,7 @@ export function REDSHIFT(value: any[][], quantity: string, model?: any[][], unit
  * @param to Wanted unit, e.g. "Gly".
  * @returns The value in the wanted unit.
  */
-export function CONVERT(value: any[][], from: string, to: string): Promise<any[][]> {
+export function CONVERT(value: any[][], from: string, to: string): any[][] {
   return callFromSheet(d.CONVERT, [value, from, to]);
 }
 
@@ -420,7 +420,7 @@ export function CONVERT(value: any[][], from: string, to: string): Promise<any[]
 export function MODEL(
   base: any[][], key1: any[][], value1: any[][], key2?: any[][], value2?: any[][], key3?: any[][], value3?: any[][],
   key4?: any[][], value4?: any[][], key5?: any[][], value5?: any[][], key6?: any[][], value6?: any[][],
-): Promise<any[][]> {
+): any[][] {
   return callFromSheet(d.MODEL, [base, key1, value1, key2, value2, key3, value3, key4, value4, key5, value5, key6, value6]);
 }
 
@@ -432,7 +432,7 @@ export function MODEL(
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @returns The parameter's value.
  */
-export function PARAM(name: any[][], model?: any[][]): Promise<any[][]> {
+export function PARAM(name: any[][], model?: any[][]): any[][] {
   return callFromSheet(d.PARAM, [name, model]);
 }
 
@@ -442,7 +442,7 @@ export function PARAM(name: any[][], model?: any[][]): Promise<any[][]> {
  * @helpurl https://localhost:3000/help.html#presets
  * @returns Two columns: name, description.
  */
-export function PRESETS(): Promise<any[][]> {
+export function PRESETS(): any[][] {
   return callFromSheet(d.PRESETS, []);
 }
 
@@ -453,7 +453,7 @@ export function PRESETS(): Promise<any[][]> {
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @returns Description text.
  */
-export function DESCRIBE(model?: any[][]): Promise<any[][]> {
+export function DESCRIBE(model?: any[][]): any[][] {
   return callFromSheet(d.DESCRIBE, [model]);
 }
 
@@ -463,6 +463,6 @@ export function DESCRIBE(model?: any[][]): Promise<any[][]> {
  * @helpurl https://localhost:3000/help.html#conventions
  * @returns Version text.
  */
-export function VERSION(): Promise<any[][]> {
+export function VERSION(): any[][] {
   return callFromSheet(d.VERSION, []);
 }

@@ -6,6 +6,8 @@ import { Cosmology } from "../core/index.js";
 
 const capacity = 64;
 const cache = new Map<string, Cosmology | Error>();
+let lastSpec: string | undefined;
+let lastModel: Cosmology | undefined;
 
 /**
  * The compiled model for a spec (built on first use; a failure is remembered too).
@@ -14,6 +16,7 @@ const cache = new Map<string, Cosmology | Error>();
  * @throws the core's TypeError/RangeError for a bad spec
  */
 export function modelFor(spec: string): Cosmology {
+  if (spec === lastSpec) return lastModel!; // the same model as the call before: no LRU reshuffle
   let entry = cache.get(spec);
   if (entry === undefined) {
     try {
@@ -27,6 +30,8 @@ export function modelFor(spec: string): Cosmology {
   }
   cache.set(spec, entry);
   if (entry instanceof Error) throw entry;
+  lastSpec = spec;
+  lastModel = entry;
   return entry;
 }
 

@@ -15,7 +15,7 @@ export class HostError {
 }
 
 /** A function as registered with CustomFunctions.associate. */
-export type Registered = (...args: unknown[]) => Promise<unknown[][]>;
+export type Registered = (...args: unknown[]) => unknown[][] | Promise<unknown[][]>;
 
 /**
  * @param settings the workbook's add-in settings

@@ -1,0 +1,93 @@
+// One figure of the worksheet-path benchmark, measured where users are: the built functions.js run
+// in this fresh process's own global scope (vm.runInThisContext: no separate context, so global
+// look-ups cost what they cost in a page), with stub CustomFunctions and Office globals. Prints one
+// JSON line. Usage: node scripts/benchBundle.mjs <functions.js> <figure>
+//   single          100k single-cell calls of DIST_LUM, ns a call
+//   range:<NAME>    one call over a 100k-row column, ns a cell
+//   cold            the first DIST_LUM after the bundle loads (shared tables + model), ms
+//   models          DIST_LUM(1, "P18-BAO; H0=…") with a new model each call, ms a model (mean of 200)
+import { readFileSync } from "node:fs";
+import vm from "node:vm";
+
+const [bundle, figure] = process.argv.slice(2);
+const n = 100_000;
+const settings = { "zcell.activeModel": "P18-BAO" };
+const registered = new Map();
+
+class HostError {
+  constructor(code, message) {
+    this.code = code;
+    this.message = message;
+  }
+}
+globalThis.CustomFunctions = {
+  associate: (id, fn) => registered.set(id, fn),
+  Error: HostError,
+  ErrorCode: { invalidValue: "#VALUE!", notAvailable: "#N/A", invalidNumber: "#NUM!" },
+};
+globalThis.Office = {
+  onReady: () => Promise.resolve({ host: "Excel" }),
+  context: { document: { settings: { get: (key) => settings[key] ?? null } } },
+};
+
+/** Redshifts uniform in [0.01, 10] from a fixed seed (mulberry32). */
+function redshifts(count) {
+  let a = 42;
+  return Array.from({ length: count }, () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = Math.imul(a ^ (a >>> 15), a | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return 0.01 + (9.99 * ((t ^ (t >>> 14)) >>> 0)) / 4294967296;
+  });
+}
+
+const settle = (value) => (value && typeof value.then === "function" ? value : Promise.resolve(value));
+const now = () => Number(process.hrtime.bigint()) / 1e6; // ms
+
+const source = readFileSync(bundle, "utf8");
+const loadStart = now();
+vm.runInThisContext(source, { filename: "functions.js" });
+const loaded = now();
+await Promise.resolve(); // let the bundle's own start-up microtasks run, as a page would
+
+let result;
+if (figure === "cold") {
+  const t0 = now();
+  const out = await settle(registered.get("DIST_LUM")([[1]]));
+  result = { ms: now() - t0, loadMs: loaded - loadStart, check: out[0][0] };
+} else if (figure === "single") {
+  const fn = registered.get("DIST_LUM");
+  const cells = redshifts(n).map((z) => [[z]]);
+  let sink = 0;
+  for (let i = 0; i < 2000; i++) sink += (await settle(fn(cells[i])))[0][0]; // warm-up: the model and the JIT
+  const t0 = now();
+  for (let i = 0; i < n; i++) {
+    const out = fn(cells[i]);
+    sink += (out && typeof out.then === "function" ? await out : out)[0][0];
+  }
+  result = { ns: ((now() - t0) * 1e6) / n, check: sink };
+} else if (figure.startsWith("range:")) {
+  const fn = registered.get(figure.slice("range:".length));
+  const column = redshifts(n).map((z) => [z]);
+  await settle(fn(column.slice(0, 1000)));
+  let best = Infinity;
+  let sink = 0;
+  for (let pass = 0; pass < 3; pass++) {
+    const t0 = now();
+    const out = await settle(fn(column));
+    best = Math.min(best, now() - t0);
+    sink += out[n - 1][0];
+  }
+  result = { ns: (best * 1e6) / n, check: sink };
+} else if (figure === "models") {
+  const fn = registered.get("DIST_LUM");
+  await settle(fn([[1]])); // shared tables and the first model are the cold figure, not this one
+  const count = 200;
+  let sink = 0;
+  const t0 = now();
+  for (let i = 0; i < count; i++) sink += (await settle(fn([[1]], [[`P18-BAO; H0=${60 + i / 20}`]])))[0][0];
+  result = { ms: (now() - t0) / count, check: sink };
+} else {
+  throw new Error(`unknown figure ${figure}`);
+}
+console.log(JSON.stringify(result));
