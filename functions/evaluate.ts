@@ -167,11 +167,24 @@ function unitConversion(spec: Extract<ArgSpec, { kind: "unit" }>, raw: unknown):
  * @returns the result matrix: numbers, text, "" for blank, CellError for a bad cell
  */
 export function evaluate(def: FunctionDef, raw: readonly unknown[], active: ActiveModelSetting): Cell[][] {
+  return evaluateNoting(def, raw, active, { error: false });
+}
+
+/** `evaluate`, noting in `seen.error` whether a range produced an error cell (a single cell: always noted). */
+function evaluateNoting(def: FunctionDef, raw: readonly unknown[], active: ActiveModelSetting, seen: { error: boolean }): Cell[][] {
   try {
-    if (def.table) return def.table(active);
+    if (def.table) {
+      seen.error = true;
+      return def.table(active);
+    }
     const one = evaluateSingle(def, raw, active);
-    return one === undefined ? evaluateCells(def, raw, active) : [[one]];
+    if (one !== undefined) {
+      if (one instanceof CellError) seen.error = true;
+      return [[one]];
+    }
+    return evaluateCells(def, raw, active, seen);
   } catch (e) {
+    seen.error = true;
     return [[inFunction(classify(e, def.name), def.name, new Map())]];
   }
 }
@@ -210,8 +223,8 @@ function planOf(def: FunctionDef): Plan {
   return plan;
 }
 
-/** Model resolution for single cells, one function per reading of the settings. */
-const singleResolvers = new WeakMap<ActiveModelSetting, (text: string) => Cosmology | CellError>();
+/** Model resolution for single cells, made again only when the settings are read anew. */
+let resolverFor: { active: ActiveModelSetting; resolve: (text: string) => Cosmology | CellError } | undefined;
 
 /**
  * One formula per row: every argument a single cell. The same reading as the general path, without
@@ -220,13 +233,6 @@ const singleResolvers = new WeakMap<ActiveModelSetting, (text: string) => Cosmol
 function evaluateSingle(def: FunctionDef, raw: readonly unknown[], active: ActiveModelSetting): Cell | undefined {
   const plan = planOf(def);
   const specs = def.args;
-  const cells = plan.cells;
-  const values: unknown[] = new Array(cells.length);
-  for (let k = 0; k < cells.length; k++) {
-    const value = singleCell(raw[cells[k]]);
-    if (value === several) return undefined;
-    values[k] = value;
-  }
   let conversions: Record<string, Conversion> | undefined;
   let resultFactor = 1;
   const args: Args = {};
@@ -241,16 +247,20 @@ function evaluateSingle(def: FunctionDef, raw: readonly unknown[], active: Activ
     const text = toMatrix(raw[i])?.[0]?.[0];
     args[spec.name] = spec.optional && isBlank(text) ? "" : readText(spec, text);
   }
-  let resolver = singleResolvers.get(active);
-  if (!resolver) singleResolvers.set(active, (resolver = (text) => singleModel(text, active)));
+  if (resolverFor?.active !== active) resolverFor = { active, resolve: (text) => singleModel(text, active) };
+  const resolve = resolverFor.resolve;
   let error: Cell | undefined;
+  const cells = plan.cells;
   for (let k = 0; k < cells.length; k++) {
     const i = cells[k];
     const spec = specs[i];
-    const value = values[k];
+    const given = raw[i];
+    const value = singleCell(given);
+    if (value === several) return undefined;
+    if (error !== undefined) continue; // the first bad argument decides; the rest must still be single cells
     if (value === undefined && spec.kind === "number" && spec.default === undefined) throw new CellError("value", `${spec.name} is required`);
-    const read = readArg(spec, value, raw[i] !== undefined && raw[i] !== null, conversions?.[spec.name], active, resolver);
-    if (read instanceof CellError || read === blank) error ??= read;
+    const read = readArg(spec, value, given !== undefined && given !== null, conversions?.[spec.name], active, resolve);
+    if (read instanceof CellError || read === blank) error = read;
     else args[spec.name] = read;
   }
   if (error !== undefined) return error instanceof CellError ? inFunction(error, def.name, new Map()) : error;
@@ -272,7 +282,7 @@ function singleModel(text: string, active: ActiveModelSetting): Cosmology | Cell
   }
 }
 
-function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: ActiveModelSetting): Cell[][] {
+function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: ActiveModelSetting, seen: { error: boolean }): Cell[][] {
   const compute = def.compute!;
   const conversions: Record<string, Conversion> = {};
   let resultFactor = 1;
@@ -363,7 +373,11 @@ function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: Active
     else args[p.spec.name] = read;
   }
   let named: Map<CellError, CellError> | undefined;
-  const shown = (cell: Cell): Cell => (cell instanceof CellError ? inFunction(cell, def.name, (named ??= new Map())) : cell);
+  const shown = (cell: Cell): Cell => {
+    if (!(cell instanceof CellError)) return cell;
+    seen.error = true;
+    return inFunction(cell, def.name, (named ??= new Map()));
+  };
   const cellOf = (): Cell => {
     try {
       const result = compute(args);
@@ -522,7 +536,9 @@ function forHost(cells: unknown[][]): unknown[][] {
 
 function evaluateForHost(def: FunctionDef, raw: readonly unknown[]): unknown[][] {
   try {
-    return forHost(evaluate(def, raw, readActiveModel()));
+    const seen = { error: false };
+    const cells = evaluateNoting(def, raw, readActiveModel(), seen);
+    return seen.error ? forHost(cells) : cells;
   } catch (e) {
     return [[toHostError(classify(e, def.name))]];
   }

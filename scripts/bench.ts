@@ -1,12 +1,14 @@
 /**
  * Benchmark (not a test): ns per value over 1e6 random redshifts in [0, 10] for the main quantities,
- * model build time, and the same workload through astropy where /usr/bin/python3 has it.
- * Run with `npm run bench`.
+ * model build time, and the same workload through astropy where /usr/bin/python3 has it; then the
+ * worksheet path through the built bundle (scripts/benchWorksheet.ts). Run with `npm run bench`
+ * (`npm run bench -- --worksheet` for the worksheet path alone).
  */
 import { execFileSync, spawnSync } from "node:child_process";
 import { fileURLToPath } from "node:url";
 import { Cosmology } from "../core/Cosmology.js";
 import { fermiDiracDensityFactor } from "../core/fermiDirac.js";
+import { benchWorksheet } from "./benchWorksheet.js";
 
 const n = 1_000_000;
 
@@ -78,6 +80,11 @@ if (only >= 0) {
   process.exit(0);
 }
 
+if (process.argv.includes("--worksheet")) {
+  benchWorksheet();
+  process.exit(0);
+}
+
 const specs = (process.env.ZC_BENCH_SPECS ?? "P18-BAO,CONCORDANCE").split(",");
 const rows: Record<string, Record<string, number>> = {};
 for (const spec of specs) {
@@ -116,3 +123,4 @@ for (const spec of specs) {
   console.log(pad(spec, 13) + pad("build", 11) + `${rows[spec].buildMs.toFixed(2)} ms`);
 }
 if (!reference) console.log("(astropy not found at /usr/bin/python3: no reference timings)");
+benchWorksheet();

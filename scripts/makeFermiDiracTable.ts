@@ -11,7 +11,8 @@ import { fermiDiracGrid, fermiDiracNodesByQuadrature } from "../core/fermiDirac.
 
 const nodes = fermiDiracNodesByQuadrature();
 const bytes = Buffer.from(nodes.buffer, nodes.byteOffset, nodes.byteLength);
-const base64 = bytes.toString("base64").replace(/.{1,100}/g, (line) => `  "${line}",\n`);
+// one literal split over lines with +, which the minifier folds back into one string
+const base64 = bytes.toString("base64").match(/.{1,100}/g)!.map((line) => `  "${line}"`).join(" +\n");
 const out = fileURLToPath(new URL("../core/fermiDiracTable.ts", import.meta.url));
 writeFileSync(
   out,
@@ -21,8 +22,8 @@ writeFileSync(
  * s = ${fermiDiracGrid.sMin} + i/${1 / fermiDiracGrid.step}, the values F, dF/ds, d²F/ds² as little-endian IEEE doubles, base64.
  * Do not edit: test/fermiDiracTable.test.ts recomputes every node.
  */
-export const fermiDiracNodesBase64 = [
-${base64}].join("");
+export const fermiDiracNodesBase64 =
+${base64};
 `,
 );
 console.log(`wrote ${out} (${nodes.length} doubles)`);

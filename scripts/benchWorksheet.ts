@@ -1,0 +1,73 @@
+/**
+ * The worksheet-path section of `npm run bench`: the four figures a user meets, measured through the
+ * built functions.js (the production build `npm run build` makes, and the build `npm start` serves:
+ * production with source maps beside it), each figure in 5 fresh processes (scripts/benchBundle.mjs),
+ * reported as min and median; with the reference library's scalar and vectorised times from the
+ * same run and the ratios.
+ */
+import { execFileSync, spawnSync } from "node:child_process";
+import { mkdtempSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { fileURLToPath } from "node:url";
+import { Cosmology } from "../core/Cosmology.js";
+
+const root = fileURLToPath(new URL("..", import.meta.url));
+const runs = 5;
+const rangeFunctions = ["DIST_LUM", "DIST_ANG", "DIST_LOS", "DIST_TRANS", "DIST_LIGHT", "LOOKBACK", "AGE"];
+
+/** Targets of the worksheet path (issue: one formula per row, whole ranges, first formula, new models). */
+const targets = { single: 500, range: 100, cold: 20, models: 1 };
+
+function build(extra: string[]): string {
+  const out = mkdtempSync(join(tmpdir(), "zcell-bench-"));
+  execFileSync(process.execPath, [`${root}node_modules/webpack/bin/webpack.js`, "--mode", "production", ...extra, "--output-path", out], { cwd: root, stdio: "ignore" });
+  return join(out, "functions.js");
+}
+
+/** min and median of one figure over `runs` fresh processes. */
+function figure(bundle: string, name: string, key: "ns" | "ms"): { min: number; median: number } {
+  const values: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const out = execFileSync(process.execPath, [`${root}scripts/benchBundle.mjs`, bundle, name]).toString().trim().split("\n").pop()!;
+    values.push(JSON.parse(out)[key] as number);
+  }
+  values.sort((a, b) => a - b);
+  return { min: values[0], median: values[Math.floor(values.length / 2)] };
+}
+
+function reference(): { scalar_ns: number; vector_ns: number } | undefined {
+  if (spawnSync("/usr/bin/python3", ["-c", "import astropy"], { stdio: "ignore" }).status !== 0) return undefined;
+  const m = Cosmology.fromSpec("P18-BAO");
+  const model = { H0: m.H0, Om0: m.Om - m.OnuMassive, Tcmb0: m.Tcmb, Neff: m.Neff, m_nu: [0, 1, 2].map((i) => m.parameters.mnu[i] ?? 0) };
+  const script = fileURLToPath(new URL("bench_astropy_calls.py", import.meta.url));
+  return JSON.parse(execFileSync("/usr/bin/python3", [script], { input: JSON.stringify({ model, n_scalar: 2000, n_vector: 20_000 }) }).toString());
+}
+
+/** Prints the worksheet-path section. */
+export function benchWorksheet(): void {
+  const ref = reference();
+  const bundles: [string, string][] = [
+    ["npm run build (production)", build([])],
+    ["npm start (production + source maps)", build(["--devtool", "source-map"])],
+  ];
+  const pad = (s: string, w: number) => s.padEnd(w);
+  const fmt = (x: { min: number; median: number }, digits: number) => `${x.min.toFixed(digits)} / ${x.median.toFixed(digits)}`;
+  console.log(`\nworksheet path: the built functions.js in a fresh process's global scope, P18-BAO, z uniform in [0.01, 10]; min / median of ${runs} processes (each the best of 8 passes)`);
+  if (ref) console.log(`reference library (astropy, same run): scalar call ${ref.scalar_ns.toFixed(0)} ns, vectorised ${ref.vector_ns.toFixed(0)} ns a value`);
+  else console.log("(astropy not found at /usr/bin/python3: no reference timings)");
+  for (const [label, bundle] of bundles) {
+    console.log(`\n${label}: ${bundle}`);
+    console.log(pad("figure", 42) + pad("min / median", 20) + pad("target", 12) + "ratio to reference (min)");
+    const single = figure(bundle, "single", "ns");
+    console.log(pad("one formula a row: 100k DIST_LUM calls", 42) + pad(`${fmt(single, 0)} ns`, 20) + pad(`≤ ${targets.single} ns`, 12) + (ref ? `${(ref.scalar_ns / single.min).toFixed(0)}× the scalar call` : "—"));
+    for (const name of rangeFunctions) {
+      const r = figure(bundle, `range:${name}`, "ns");
+      console.log(pad(`one call over 100k rows: ${name}`, 42) + pad(`${fmt(r, 0)} ns a cell`, 20) + pad(`≤ ${targets.range} ns`, 12) + (ref && name === "DIST_LUM" ? `${(ref.vector_ns / r.min).toFixed(0)}× vectorised` : ""));
+    }
+    const cold = figure(bundle, "cold", "ms");
+    console.log(pad("first formula after load (cold)", 42) + pad(`${fmt(cold, 1)} ms`, 20) + `≤ ${targets.cold} ms`);
+    const models = figure(bundle, "models", "ms");
+    console.log(pad("a new model (mean of 200)", 42) + pad(`${fmt(models, 2)} ms`, 20) + `≤ ${targets.models} ms`);
+  }
+}
