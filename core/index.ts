@@ -18,7 +18,8 @@ export {
   speedOfLightKmPerS,
   speedOfLightMPerS,
 } from "./constants.js";
-export { Cosmology, type DensityComponent, type InverseWording, type InvertibleQuantity } from "./Cosmology.js";
+export { Cosmology, type InvertibleQuantity } from "./Cosmology.js";
+export { ExpansionRate, type DensityComponent } from "./ExpansionRate.js";
 export { fermiDiracDensityFactor } from "./fermiDirac.js";
 export { type ModelParameters, parameterKeys, type ParameterKey } from "./ModelParameters.js";
 export { formatModelSpec, parseModelSpec, withChanges, type NamedModels } from "./modelSpec.js";
@@ -37,4 +38,5 @@ export {
 } from "./photometry.js";
 export { findPreset, presets, type Preset } from "./presets.js";
 export { checkRedshift, checkSourceRedshift } from "./redshift.js";
+export { type InverseWording } from "./redshiftInverse.js";
 export { conversionFactor, convertUnit, parseUnit, type Unit } from "./units.js";

@@ -26,3 +26,8 @@ export function checkSourceRedshift(z: number): void {
   checkRedshift(z);
   if (z === 0) throw new RangeError("z = 0 puts the source at zero distance: give z > 0");
 }
+
+/** A redshift as a message quotes it: at most 4 significant digits. @example formatRedshift(1234.56) // "1235" */
+export function formatRedshift(z: number): string {
+  return Number(z.toPrecision(4)).toString();
+}

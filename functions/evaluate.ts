@@ -388,48 +388,33 @@ function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: Active
   };
 
   const out: Cell[][] = new Array(rows);
-  if (constantCell === undefined && varying.length === 1 && varying[0].spec.kind === "number" && cols === 1) {
+  const p = varying[0];
+  const kernel = def.kernel !== undefined && p !== undefined && def.kernel.arg === p.spec.name ? def.kernel.of : undefined;
+  const spec = p?.spec as Extract<ArgSpec, { kind: "number" }> | undefined;
+  if (kernel && spec && constantCell === undefined && varying.length === 1 && cols === 1 && !spec.magnitude && spec.min === undefined && spec.max === undefined) {
     // the common range: one column of numbers (a column of redshifts) against constant arguments
-    const p = varying[0];
-    const name = p.spec.name;
+    const name = spec.name;
     const matrix = p.matrix!;
-    const spec = p.spec as Extract<ArgSpec, { kind: "number" }>;
-    const kernel = def.kernel?.arg === name ? def.kernel.of : undefined;
-    if (kernel && !spec.magnitude && spec.min === undefined && spec.max === undefined) {
-      const factor = p.conversion === undefined ? 1 : p.conversion.factor;
-      for (let r = 0; r < rows; r++) {
-        const value = matrix[r][0];
-        if (typeof value === "number" && value - value === 0) {
-          let v: number;
-          try {
-            v = kernel(args, value * factor) * resultFactor;
-          } catch (e) {
-            out[r] = [shown(classify(e, def.name))];
-            continue;
-          }
-          out[r] = [v - v === 0 ? (v === 0 ? 0 : v) : shown(new CellError("num", messages.notFiniteResult(def.name)))];
+    const factor = p.conversion === undefined ? 1 : p.conversion.factor;
+    for (let r = 0; r < rows; r++) {
+      const value = matrix[r][0];
+      if (typeof value === "number" && value - value === 0) {
+        let v: number;
+        try {
+          v = kernel(args, value * factor) * resultFactor;
+        } catch (e) {
+          out[r] = [shown(classify(e, def.name))];
           continue;
         }
-        const read = readArg(p.spec, value, true, p.conversion, active, modelOf); // text numbers, blanks, errors, ±∞: the general reading
-        let cell: Cell;
-        if (read instanceof CellError || read === blank) cell = read;
-        else {
-          args[name] = read;
-          cell = cellOf();
-        }
-        out[r] = [typeof cell === "number" ? cell : shown(cell)];
+        out[r] = [v - v === 0 ? (v === 0 ? 0 : v) : shown(new CellError("num", messages.notFiniteResult(def.name)))];
+        continue;
       }
-      return out;
-    }
-    for (let r = 0; r < rows; r++) {
-      const read = readArg(p.spec, matrix[r][0], true, p.conversion, active, modelOf);
-      let cell: Cell;
-      if (read instanceof CellError || read === blank) cell = read;
+      const read = readArg(spec, value, true, p.conversion, active, modelOf); // text numbers, blanks, errors, ±∞
+      if (read instanceof CellError || read === blank) out[r] = [shown(read)];
       else {
         args[name] = read;
-        cell = cellOf();
+        out[r] = [shown(cellOf())];
       }
-      out[r] = [typeof cell === "number" ? cell : shown(cell)];
     }
     return out;
   }
