@@ -14,7 +14,8 @@ import vm from "node:vm";
 
 const [bundle, figure] = process.argv.slice(2);
 const n = 100_000;
-const settings = { "zcell.activeModel": "P18-BAO" };
+const preset = process.env.ZC_BENCH_PRESET ?? "P18-BAO"; // another name only to time an older build
+const settings = { "zcell.activeModel": preset };
 const registered = new Map();
 
 class HostError {
@@ -96,7 +97,7 @@ if (figure === "cold") {
   const count = 200;
   let sink = 0;
   const t0 = now();
-  for (let i = 0; i < count; i++) sink += (await settle(fn([[1]], [[`P18-BAO; H0=${60 + i / 20}`]])))[0][0];
+  for (let i = 0; i < count; i++) sink += (await settle(fn([[1]], [[`${preset}; H0=${60 + i / 20}`]])))[0][0];
   result = { ms: (now() - t0) / count, check: sink };
 } else {
   throw new Error(`unknown figure ${figure}`);
