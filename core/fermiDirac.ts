@@ -67,9 +67,25 @@ export function fermiDiracNodesByQuadrature(): Float64Array {
   return out;
 }
 
-/** Decodes base64 to doubles (little-endian); atob exists in browsers and in Node ≥ 16. */
+/**
+ * Decodes base64 to doubles (little-endian) by itself: the functions may run where neither Buffer nor
+ * atob exists (a bare JavaScript runtime, as the host simulation tests it).
+ */
 function decodeDoubles(base64: string): Float64Array {
-  const bytes = Uint8Array.from(atob(base64), (ch) => ch.charCodeAt(0));
+  const alphabet = "ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789+/";
+  const clean = base64.replace(/=+$/, "");
+  const bytes = new Uint8Array(Math.floor((clean.length * 3) / 4));
+  let bits = 0;
+  let value = 0;
+  let k = 0;
+  for (const ch of clean) {
+    value = ((value << 6) | alphabet.indexOf(ch)) & 0xffffff;
+    bits += 6;
+    if (bits >= 8) {
+      bits -= 8;
+      bytes[k++] = (value >> bits) & 0xff;
+    }
+  }
   const view = new DataView(bytes.buffer);
   return Float64Array.from({ length: bytes.length / 8 }, (_, i) => view.getFloat64(8 * i, true));
 }
