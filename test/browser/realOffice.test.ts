@@ -1,0 +1,163 @@
+/**
+ * The pages and the functions against Microsoft's real libraries (the pinned @microsoft/office-js
+ * package served for the CDN URL), not our fake host: office.js loaded outside Office under the
+ * pane's Content-Security-Policy, and the custom-functions runtime's own CustomFunctions.Error,
+ * ErrorCode and associate taking our bundle.
+ */
+import { existsSync, readFileSync } from "node:fs";
+import { createServer, type Server } from "node:http";
+import { extname, join } from "node:path";
+import { fileURLToPath } from "node:url";
+import { chromium, type Browser, type Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { testBuildDir } from "../testBuild.js";
+
+const root = fileURLToPath(new URL("../../", import.meta.url));
+const officeDist = `${root}node_modules/@microsoft/office-js/dist/`;
+const chromiumPath = "/usr/bin/chromium";
+const cdnPrefix = "https://appsforoffice.microsoft.com/lib/1/hosted/";
+
+/**
+ * What the pane's policy blocks when the real office.js loads outside Office (measured here): both
+ * come from office.js's telemetry proxy frame (an iframe given style="display:none" and pointed at
+ * Microsoft's telemetry service). They stay blocked: zcell sends nothing anywhere, and the pane works
+ * without them (this test). Inside Excel office.js may need more; that cannot be measured here.
+ */
+const expectedViolations = [
+  { directive: "style-src-attr", blocked: "inline", source: `${cdnPrefix}o15apptofilemappingtable.js` },
+  { directive: "frame-src", blocked: "https://telemetryservice.firstpartyapps.oaspapps.com", source: "" },
+];
+
+function browserAvailable(): boolean {
+  if (existsSync(chromiumPath)) return true;
+  if (process.env.CI === "true") throw new Error("CI needs Debian chromium: apt-get install -y chromium");
+  console.warn("skipping: Debian chromium is not installed");
+  return false;
+}
+
+describe.runIf(browserAvailable())("against the real office.js and custom-functions runtime", () => {
+  let server: Server;
+  let base = "";
+  let browser: Browser;
+
+  beforeAll(async () => {
+    server = createServer((req, res) => {
+      const path = new URL(req.url ?? "/", "http://localhost").pathname;
+      if (path === "/runtime-test.html") {
+        // a bare page: the real runtime, a spy on associate, then our bundle (as Excel's runtime loads it)
+        res.writeHead(200, { "content-type": "text/html" }).end(`<!doctype html><html lang="en"><head><title>runtime</title>
+<script src="${cdnPrefix}custom-functions-runtime.js"></script>
+<script>window.__associated = []; const real = CustomFunctions.associate.bind(CustomFunctions);
+CustomFunctions.associate = (id, fn) => { window.__associated.push(id); window.__fns = window.__fns || {}; window.__fns[id] = fn; return real(id, fn); };</script>
+<script src="/functions.js"></script></head><body></body></html>`);
+        return;
+      }
+      const file = join(testBuildDir, path === "/" ? "taskpane.html" : path);
+      if (!file.startsWith(testBuildDir) || !existsSync(file)) return void res.writeHead(404).end();
+      const type = { ".html": "text/html", ".js": "text/javascript", ".css": "text/css", ".png": "image/png" }[extname(file)];
+      res.writeHead(200, { "content-type": type ?? "application/octet-stream" }).end(readFileSync(file));
+    });
+    await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
+    const address = server.address();
+    base = `http://127.0.0.1:${typeof address === "object" && address ? address.port : 0}/`;
+    browser = await chromium.launch({
+      executablePath: chromiumPath,
+      args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--no-first-run"],
+    });
+  });
+
+  afterAll(async () => {
+    await browser?.close();
+    await new Promise((r) => server?.close(r));
+  });
+
+  /** A page whose CDN requests are served from the pinned package, recording CSP violations and errors. */
+  async function open(path: string): Promise<{ page: Page; violations: () => Promise<unknown[]>; errors: string[]; cdn: string[] }> {
+    const page = await browser.newPage();
+    const errors: string[] = [];
+    const cdn: string[] = [];
+    page.on("pageerror", (e) => errors.push(String(e)));
+    await page.route(`${cdnPrefix}**`, (route) => {
+      const file = officeDist + route.request().url().slice(cdnPrefix.length);
+      cdn.push(route.request().url().slice(cdnPrefix.length));
+      return existsSync(file) ? route.fulfill({ contentType: "text/javascript", body: readFileSync(file) }) : route.abort();
+    });
+    await page.route(/^https:\/\/(?!appsforoffice\.microsoft\.com\/lib\/1\/hosted\/)/, (route) => route.abort()); // no other network
+    await page.addInitScript(() => {
+      const seen: unknown[] = ((window as unknown as { __violations: unknown[] }).__violations = []);
+      document.addEventListener("securitypolicyviolation", (e) => seen.push({ directive: e.violatedDirective, blocked: e.blockedURI, source: e.sourceFile }));
+    });
+    await page.goto(`${base}${path}`);
+    return { page, errors, cdn, violations: () => page.evaluate(() => (window as unknown as { __violations: unknown[] }).__violations) };
+  }
+
+  test("the pane with the real office.js outside Office: its outside view, no page error, only the known violations", async () => {
+    const { page, violations, errors, cdn } = await open("taskpane.html");
+    await expect.poll(() => page.locator("#outside-office").isVisible(), { timeout: 15_000 }).toBe(true);
+    expect(await page.locator("#reference dt").count()).toBe(34);
+    expect(await page.locator("#in-excel").isHidden()).toBe(true);
+    await expect.poll(async () => (await violations()).length, { timeout: 10_000 }).toBeGreaterThanOrEqual(expectedViolations.length);
+    await page.waitForTimeout(500);
+    expect(await violations()).toEqual(expectedViolations);
+    expect(errors).toEqual([]);
+    expect(cdn).toContain("office.js");
+    await page.close();
+  });
+
+  test("what the real Office.onReady reports outside Office is what the pane's start-up expects", async () => {
+    const { page } = await open("taskpane.html");
+    const info = await page.evaluate(async () => {
+      const office = (window as unknown as { Office: { onReady(): Promise<{ host: unknown; platform: unknown }>; HostType: { Excel: string } } }).Office;
+      const ready = await office.onReady();
+      return { host: ready.host, platform: ready.platform, excel: office.HostType.Excel };
+    });
+    // the pane shows its outside view when onReady's host is not HostType.Excel (taskpane.ts start)
+    expect(info).toEqual({ host: null, platform: null, excel: "Excel" });
+    await page.close();
+  });
+
+  test("help.html loads with no policy violation and no error", async () => {
+    const { page, violations, errors } = await open("help.html");
+    await page.waitForLoadState("load");
+    expect(await violations()).toEqual([]);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  test("our bundle loads after the real runtime and registers every function through its associate", async () => {
+    const { page, errors } = await open("runtime-test.html");
+    await page.waitForLoadState("load");
+    const metadata = JSON.parse(readFileSync(`${testBuildDir}functions.json`, "utf8")) as { functions: { id: string }[] };
+    const associated = await page.evaluate(() => (window as unknown as { __associated: string[] }).__associated);
+    expect([...associated].sort()).toEqual(metadata.functions.map((f) => f.id).sort());
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  test("errors are the real runtime's CustomFunctions.Error with its codes, messages carried for #VALUE! and #N/A", async () => {
+    const { page } = await open("runtime-test.html");
+    await page.waitForLoadState("load");
+    const out = await page.evaluate(async () => {
+      const cf = (window as unknown as { CustomFunctions: { Error: new (code: string, message?: string) => { code: string; message: string }; ErrorCode: Record<string, string> } }).CustomFunctions;
+      const fns = (window as unknown as { __fns: Record<string, (...a: unknown[]) => unknown> }).__fns;
+      const cell = async (id: string, ...args: unknown[]) => (await fns[id](...args) as unknown[][])[0][0] as { code: string; message: string };
+      const value = await cell("DIST_LUM", [["abc"]]);
+      const na = await cell("REDSHIFT", [[20]], "LOOKBACK");
+      const num = await cell("DIST_LUM", [[-1]]);
+      return {
+        codes: { invalidValue: cf.ErrorCode.invalidValue, notAvailable: cf.ErrorCode.notAvailable, invalidNumber: cf.ErrorCode.invalidNumber },
+        value: { real: value instanceof cf.Error, code: value.code, message: value.message },
+        na: { real: na instanceof cf.Error, code: na.code, message: na.message },
+        num: { real: num instanceof cf.Error, code: num.code },
+      };
+    });
+    // the codes zcell uses exist in the runtime (custom-functions-runtime.js of @microsoft/office-js 1.1.110)
+    expect(out.codes).toEqual({ invalidValue: "#VALUE!", notAvailable: "#N/A", invalidNumber: "#NUM!" });
+    expect(out.value).toEqual({ real: true, code: "#VALUE!", message: 'ZC.DIST_LUM: z: text "abc" where a number belongs' });
+    expect(out.na.real).toBe(true);
+    expect(out.na.code).toBe("#N/A");
+    expect(out.na.message).toMatch(/^ZC.REDSHIFT: LOOKBACK = 20 Gyr is not below the age of the universe/);
+    expect(out.num).toEqual({ real: true, code: "#NUM!" });
+    await page.close();
+  });
+});
