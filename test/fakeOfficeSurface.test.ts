@@ -1,7 +1,7 @@
 /**
  * Our fake Office host (test/browser/fakeOffice.js) may only stand in for APIs that exist: every
- * member each fake object offers must be declared, with that name, on the matching class or
- * interface of the real type surface (@types/office-js, @types/custom-functions-runtime). The fake's
+ * member each fake object offers must be declared, with that name and kind (method or property), on
+ * the matching class or interface of the real type surface (@types/office-js, @types/custom-functions-runtime). The fake's
  * members are read from the objects themselves, so a member added to the fake without a real
  * counterpart fails here.
  */
@@ -19,7 +19,9 @@ function namespaceText(source: string, name: string): string {
   return parts.filter((p) => p.startsWith(`${name} {`)).join("\n");
 }
 
-/** The member names declared in `class X` / `interface X` / `enum X` / `namespace X` of a namespace. */
+type Kind = "method" | "property";
+
+/** The members declared in `class X` / `interface X` / `enum X` / `namespace X` of a namespace, as "name:kind". */
 function declaredMembers(namespace: string, name: string): Set<string> {
   const members = new Set<string>();
   const head = new RegExp(`^\\s*(?:export )?(?:class|interface|enum|namespace|const enum) ${name}\\b[^{]*\\{`, "gm");
@@ -36,8 +38,12 @@ function declaredMembers(namespace: string, name: string): Set<string> {
     let level = 0;
     for (const line of body.split("\n")) {
       if (level === 0) {
-        const m = /^\s*(?:readonly\s+|static\s+|get\s+|set\s+)*([A-Za-z_$][\w$]*)\s*(?:\?\s*)?(?:[(:<=,]|$)/.exec(line);
-        if (m && !line.trim().startsWith("*") && !line.trim().startsWith("/")) members.add(m[1]);
+        const m = /^\s*((?:readonly\s+|static\s+|get\s+|set\s+)*)([A-Za-z_$][\w$]*)\s*(?:\?\s*)?([(:<=,]|$)/.exec(line);
+        if (m && !line.trim().startsWith("*") && !line.trim().startsWith("/")) {
+          const isMethod = (m[3] === "(" || m[3] === "<") && !/\bget\s/.test(m[1]);
+          members.add(`${m[2]}:${isMethod ? "method" : "property"}`);
+          if (/\bfunction\b/.test(line)) members.add(`${m[2]}:method`);
+        }
       }
       for (const ch of line) level += ch === "{" ? 1 : ch === "}" ? -1 : 0;
     }
@@ -50,7 +56,7 @@ const excel = namespaceText(officeTypes, "Excel");
 const extension = namespaceText(officeTypes, "OfficeExtension");
 const runtime = namespaceText(functionTypes, "CustomFunctions");
 
-/** Members common to every Excel proxy object (OfficeExtension.ClientObject and friends). */
+/** Members common to every Excel proxy object (OfficeExtension.ClientObject and the request context). */
 const clientObject = new Set([...declaredMembers(extension, "ClientObject"), ...declaredMembers(extension, "ClientRequestContext")]);
 
 type Fake = { [key: string]: unknown };
@@ -62,8 +68,13 @@ function install(): void {
   new Function(readFileSync(`${root}test/browser/fakeOffice.js`, "utf8"))();
 }
 
-/** Own members of a fake object, getters included. */
-const membersOf = (o: object) => Object.getOwnPropertyNames(o);
+/** Own members of a fake object, getters included, as "name:kind" (a function is a method). */
+const membersOf = (o: object) =>
+  Object.getOwnPropertyNames(o).map((name) => {
+    const d = Object.getOwnPropertyDescriptor(o, name)!;
+    return `${name}:${!d.get && typeof d.value === "function" ? "method" : "property"}`;
+  });
+const namesOf = (o: object) => Object.getOwnPropertyNames(o);
 
 describe("the fake Office host offers only real APIs", () => {
   install();
@@ -73,8 +84,15 @@ describe("the fake Office host offers only real APIs", () => {
 
   /** Names declared at the top of a namespace (enums, functions, variables, classes). */
   const topLevel = (text: string, names: string[]) =>
-    new Set(names.filter((m) => new RegExp(`^\\s*(?:export )?(?:enum|function|var|const|let|class|namespace) ${m}\\b`, "m").test(text)));
-  add("Office", g.Office, topLevel(office, membersOf(g.Office)));
+    new Set(
+      names.flatMap((m) => {
+        const found = new RegExp(`^\\s*(?:export )?(enum|function|var|const|let|class|namespace) ${m}\\b`, "m").exec(text);
+        if (!found) return [];
+        // a class is called with new (a function here); an enum, namespace or variable is an object
+        return [`${m}:${found[1] === "function" || found[1] === "class" ? "method" : "property"}`];
+      }),
+    );
+  add("Office", g.Office, topLevel(office, namesOf(g.Office)));
   add("Office.HostType", g.Office.HostType, declaredMembers(office, "HostType"));
   add("Office.EventType", g.Office.EventType, declaredMembers(office, "EventType"));
   add("Office.AsyncResultStatus", g.Office.AsyncResultStatus, declaredMembers(office, "AsyncResultStatus"));
@@ -83,9 +101,9 @@ describe("the fake Office host offers only real APIs", () => {
   add("Office.context.requirements", context.requirements, declaredMembers(office, "RequirementSetSupport"));
   add("Office.context.document", context.document, declaredMembers(office, "Document"));
   add("Office.context.document.settings", (context.document as Fake).settings, declaredMembers(office, "Settings"));
-  add("Excel", g.Excel, topLevel(excel, membersOf(g.Excel)));
+  add("Excel", g.Excel, topLevel(excel, namesOf(g.Excel)));
   add("Excel.CalculationType", g.Excel.CalculationType, declaredMembers(excel, "CalculationType"));
-  add("CustomFunctions", g.CustomFunctions, topLevel(runtime, membersOf(g.CustomFunctions)));
+  add("CustomFunctions", g.CustomFunctions, topLevel(runtime, namesOf(g.CustomFunctions)));
   add("CustomFunctions.ErrorCode", g.CustomFunctions.ErrorCode, declaredMembers(runtime, "ErrorCode"));
 
   // the request context and the objects reached from it
@@ -112,6 +130,7 @@ describe("the fake Office host offers only real APIs", () => {
   test.each(objects.map(([label, object, declared]) => [label, object, declared] as const))("%s", (label, object, declared) => {
     expect(declared.size, `${label}: no declaration found`).toBeGreaterThan(0);
     const missing = membersOf(object).filter((m) => !declared.has(m));
+    // e.g. "getCell:method" must be declared as a method of Excel.Range
     expect(missing, `${label} offers members the real API does not declare`).toEqual([]);
   });
 });
