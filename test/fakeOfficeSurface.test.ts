@@ -19,8 +19,6 @@ function namespaceText(source: string, name: string): string {
   return parts.filter((p) => p.startsWith(`${name} {`)).join("\n");
 }
 
-type Kind = "method" | "property";
-
 /** The members declared in `class X` / `interface X` / `enum X` / `namespace X` of a namespace, as "name:kind". */
 function declaredMembers(namespace: string, name: string): Set<string> {
   const members = new Set<string>();
@@ -109,7 +107,7 @@ describe("the fake Office host offers only real APIs", () => {
   // the request context and the objects reached from it
   let requestContext: Fake | undefined;
   void (g.Excel.run as (cb: (c: Fake) => Promise<void>) => Promise<void>)(async (c) => void (requestContext = c));
-  const workbook = requestContext!.workbook as Fake & { [k: string]: (...a: unknown[]) => Fake };
+  const workbook = requestContext!.workbook as Fake;
   add("RequestContext", requestContext, excelClass("RequestContext"));
   add("Workbook", workbook, excelClass("Workbook"));
   const worksheets = workbook.worksheets as Fake & { getItem(n: string): Fake };

@@ -5,16 +5,14 @@
  * ErrorCode and associate taking our bundle.
  */
 import { existsSync, readFileSync } from "node:fs";
-import { createServer, type Server } from "node:http";
-import { extname, join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { chromium, type Browser, type Page } from "playwright-core";
+import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { testBuildDir } from "../testBuild.js";
+import { browserAvailable, startPageHost, type PageHost } from "./pageHost.js";
 
 const root = fileURLToPath(new URL("../../", import.meta.url));
 const officeDist = `${root}node_modules/@microsoft/office-js/dist/`;
-const chromiumPath = "/usr/bin/chromium";
 const cdnPrefix = "https://appsforoffice.microsoft.com/lib/1/hosted/";
 
 /**
@@ -28,47 +26,24 @@ const expectedViolations = [
   { directive: "frame-src", blocked: "https://telemetryservice.firstpartyapps.oaspapps.com", source: "" },
 ];
 
-function browserAvailable(): boolean {
-  if (existsSync(chromiumPath)) return true;
-  if (process.env.CI === "true") throw new Error("CI needs Debian chromium: apt-get install -y chromium");
-  console.warn("skipping: Debian chromium is not installed");
-  return false;
-}
-
 describe.runIf(browserAvailable())("against the real office.js and custom-functions runtime", () => {
-  let server: Server;
+  let host: PageHost;
   let base = "";
   let browser: Browser;
 
   beforeAll(async () => {
-    server = createServer((req, res) => {
-      const path = new URL(req.url ?? "/", "http://localhost").pathname;
-      if (path === "/runtime-test.html") {
-        // a bare page: the real runtime, a spy on associate, then our bundle (as Excel's runtime loads it)
-        res.writeHead(200, { "content-type": "text/html" }).end(`<!doctype html><html lang="en"><head><title>runtime</title>
+    // a bare page: the real runtime, a spy on associate, then our bundle (as Excel's runtime loads it)
+    const runtimePage = `<!doctype html><html lang="en"><head><title>runtime</title>
 <script src="${cdnPrefix}custom-functions-runtime.js"></script>
 <script>window.__associated = []; const real = CustomFunctions.associate.bind(CustomFunctions);
 CustomFunctions.associate = (id, fn) => { window.__associated.push(id); window.__fns = window.__fns || {}; window.__fns[id] = fn; return real(id, fn); };</script>
-<script src="/functions.js"></script></head><body></body></html>`);
-        return;
-      }
-      const file = join(testBuildDir, path === "/" ? "taskpane.html" : path);
-      if (!file.startsWith(testBuildDir) || !existsSync(file)) return void res.writeHead(404).end();
-      const type = { ".html": "text/html", ".js": "text/javascript", ".css": "text/css", ".png": "image/png" }[extname(file)];
-      res.writeHead(200, { "content-type": type ?? "application/octet-stream" }).end(readFileSync(file));
-    });
-    await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
-    const address = server.address();
-    base = `http://127.0.0.1:${typeof address === "object" && address ? address.port : 0}/`;
-    browser = await chromium.launch({
-      executablePath: chromiumPath,
-      args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--no-first-run"],
-    });
+<script src="/functions.js"></script></head><body></body></html>`;
+    host = await startPageHost({ "/runtime-test.html": runtimePage });
+    ({ base, browser } = host);
   });
 
   afterAll(async () => {
-    await browser?.close();
-    await new Promise((r) => server?.close(r));
+    await host?.close();
   });
 
   /** A page whose CDN requests are served from the pinned package, recording CSP violations and errors. */

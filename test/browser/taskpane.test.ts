@@ -4,18 +4,14 @@
  * selection events and settings. Driven as a person would; screenshots of each panel in light and
  * dark theme go to test-artifacts/screenshots (git-ignored).
  */
-import { existsSync, mkdirSync, readFileSync } from "node:fs";
-import { createServer, type Server } from "node:http";
-import { extname, join } from "node:path";
+import { mkdirSync, readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
-import { chromium, type Browser, type Page } from "playwright-core";
-import { testBuildDir } from "../testBuild.js";
+import type { Browser, Page } from "playwright-core";
+import { browserAvailable, startPageHost, type PageHost } from "./pageHost.js";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 
 const root = fileURLToPath(new URL("../../", import.meta.url));
-const dist = testBuildDir;
 const shots = `${root}test-artifacts/screenshots/`;
-const chromiumPath = "/usr/bin/chromium";
 const fakeOffice = readFileSync(`${root}test/browser/fakeOffice.js`, "utf8");
 const axeSource = readFileSync(`${root}node_modules/axe-core/axe.min.js`, "utf8");
 
@@ -28,14 +24,6 @@ async function axeViolations(page: Page): Promise<string[]> {
     if (result.passes.length < 10) throw new Error(`axe checked too little: ${result.passes.length} rules passed`);
     return result.violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
   });
-}
-
-function browserAvailable(): boolean {
-  if (existsSync(chromiumPath)) return true;
-  const hint = "Debian chromium is not installed: apt-get install -y chromium to run the browser tests";
-  if (process.env.CI === "true") throw new Error(`CI needs ${hint}`);
-  console.warn(`skipping: ${hint}`);
-  return false;
 }
 
 const light = { bodyBackgroundColor: "#ffffff", bodyForegroundColor: "#242424", controlBackgroundColor: "#ffffff", controlForegroundColor: "#242424" };
@@ -53,34 +41,18 @@ const workbook = {
 };
 
 describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host", () => {
-  let server: Server;
+  let host: PageHost;
   let base = "";
   let browser: Browser;
 
   beforeAll(async () => {
     mkdirSync(shots, { recursive: true });
-    server = createServer((req, res) => {
-      const path = new URL(req.url ?? "/", "http://localhost").pathname;
-      const file = join(dist, path === "/" ? "taskpane.html" : path);
-      if (!file.startsWith(dist) || !existsSync(file)) {
-        res.writeHead(404).end();
-        return;
-      }
-      const type = { ".html": "text/html", ".js": "text/javascript", ".css": "text/css", ".png": "image/png" }[extname(file)];
-      res.writeHead(200, { "content-type": type ?? "application/octet-stream" }).end(readFileSync(file));
-    });
-    await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
-    const address = server.address();
-    base = `http://127.0.0.1:${typeof address === "object" && address ? address.port : 0}/`;
-    browser = await chromium.launch({
-      executablePath: chromiumPath,
-      args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--no-first-run"],
-    });
+    host = await startPageHost();
+    ({ base, browser } = host);
   });
 
   afterAll(async () => {
-    await browser?.close();
-    await new Promise((r) => server?.close(r));
+    await host?.close();
   });
 
   async function openPane(theme: object, settings: Record<string, unknown>, officeAvailable = true, host: object = {}): Promise<Page> {
