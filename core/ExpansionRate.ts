@@ -13,7 +13,8 @@ import {
   speedOfLightMPerS,
   stefanBoltzmannSI,
 } from "./constants.js";
-import { fermiDiracDensityFactor, fermiDiracDensityFactorLn, fermiDiracDensityFactorLogSlope } from "./fermiDirac.js";
+import { fermiDiracDensityFactor, fermiDiracDensityFactorLn, fermiDiracDensityFactorLogSlope, fermiDiracTable } from "./fermiDirac.js";
+import type { QuinticTable } from "./QuinticTable.js";
 import type { ModelParameters } from "./ModelParameters.js";
 import { checkRedshift, formatRedshift } from "./redshift.js";
 
@@ -81,6 +82,8 @@ export class ExpansionRate {
   private readonly wa: number;
   /** ln of massiveY0, so that E² needs no logarithm per species. */
   private readonly lnY0: Float64Array;
+  /** The shared Fermi–Dirac table, held here (massive neutrinos only) so that E² reads it directly. */
+  private readonly fermiDirac: QuinticTable | undefined;
   private readonly darkEnergyKind: 0 | 1 | 2;
   private readonly darkEnergyPower: number;
   private readonly terms: Term[];
@@ -99,6 +102,7 @@ export class ExpansionRate {
     const neutrinoTemperatureEv = boltzmannEvPerK * neutrinoTemperatureRatio * p.Tcmb;
     this.massiveY0 = Float64Array.from(massive, (m) => m / neutrinoTemperatureEv);
     this.lnY0 = this.massiveY0.map(Math.log);
+    this.fermiDirac = massive.length > 0 ? fermiDiracTable() : undefined;
     this.masslessNeutrinos = (3 - massive.length) * this.neutrinoSpeciesDensity;
     this.Or = this.Ogamma + this.masslessNeutrinos;
     let onuMassive = 0;
@@ -143,7 +147,11 @@ export class ExpansionRate {
     const y0 = this.massiveY0;
     if (y0.length > 0) {
       let nu = 0;
-      for (let i = 0; i < y0.length; i++) nu += fermiDiracDensityFactorLn(y0[i] / zp, this.lnY0[i] - lnZp);
+      const table = this.fermiDirac!;
+      for (let i = 0; i < y0.length; i++) {
+        const s = this.lnY0[i] - lnZp;
+        nu += s >= table.x0 && s <= table.xEnd ? table.value(s) : fermiDiracDensityFactorLn(y0[i] / zp, s);
+      }
       e2 += this.neutrinoSpeciesDensity * zp2 * zp2 * nu;
     }
     return e2;

@@ -97,6 +97,15 @@ export function fermiDiracStoredNodes(): Float64Array {
 
 let table: QuinticTable | undefined;
 
+/**
+ * The shared table of F against s = ln y on [fermiDiracGrid.sMin, sMin + (nodes − 1)·step], for a
+ * caller that evaluates F many times with ln y at hand (the expansion rate); outside that range the
+ * series of fermiDiracDensityFactor apply.
+ */
+export function fermiDiracTable(): QuinticTable {
+  return getTable();
+}
+
 function getTable(): QuinticTable {
   if (table) return table;
   const nodes = fermiDiracStoredNodes();
