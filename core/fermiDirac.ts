@@ -73,13 +73,14 @@ export function fermiDiracNodesByQuadrature(): Float64Array {
  */
 function decodeDoubles(base64: string): Float64Array {
   const alphabet = "ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789+/";
-  const clean = base64.replace(/=+$/, "");
-  const bytes = new Uint8Array(Math.floor((clean.length * 3) / 4));
+  const sextet = new Uint8Array(128);
+  for (let i = 0; i < 64; i++) sextet[alphabet.charCodeAt(i)] = i;
+  const bytes = new Uint8Array((base64.length * 3) / 4); // whole doubles: 6552 bytes, no "=" padding
   let bits = 0;
   let value = 0;
   let k = 0;
-  for (const ch of clean) {
-    value = ((value << 6) | alphabet.indexOf(ch)) & 0xffffff;
+  for (let i = 0; i < base64.length; i++) {
+    value = ((value << 6) | sextet[base64.charCodeAt(i)]) & 0xffffff;
     bits += 6;
     if (bits >= 8) {
       bits -= 8;

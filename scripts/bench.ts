@@ -109,7 +109,7 @@ if (spawnSync("/usr/bin/python3", ["-c", "import astropy"], { stdio: "ignore" })
 
 const pad = (s: string, w: number) => s.padEnd(w);
 console.log(`zcell benchmark: ${n.toExponential(0)} redshifts uniform in [0, 10], Node ${process.version}`);
-console.log(`shared Fermi–Dirac table, built once per process: ${fermiTableMs.toFixed(1)} ms`);
+console.log(`shared Fermi–Dirac table, decoded once per process from the bundled nodes: ${fermiTableMs.toFixed(1)} ms`);
 console.log(pad("model", 13) + pad("quantity", 11) + pad("zcell ns", 10) + pad("astropy ns", 12) + "ratio");
 for (const spec of specs) {
   for (const q of ["DL", "lookback", "age", "volume", "inverseDL"]) {
