@@ -1,7 +1,11 @@
 /**
  * Typed worksheet errors. Inside Excel they are CustomFunctions.Error values; elsewhere (unit tests,
- * the task pane's inspector) plain CellError objects with the same code and message.
+ * the task pane's inspector) plain CellError objects with the same code and message. Also how a
+ * thrown core error becomes one, and how a message names the function.
  */
+
+import { NoSolutionError } from "../core/index.js";
+import { messages } from "./messages.js";
 
 /** The three error values the functions return, by Excel's meaning. */
 export type ErrorKind = "value" | "num" | "na";
@@ -35,4 +39,24 @@ export function isIncomingError(value: unknown): boolean {
   if (typeof value !== "object" || value === null) return false;
   const runtime = (globalThis as { CustomFunctions?: typeof CustomFunctions }).CustomFunctions;
   return (runtime?.Error !== undefined && value instanceof runtime.Error) || "errorCode" in value;
+}
+
+/** The Excel error a thrown value stands for: NoSolutionError → #N/A, RangeError → #NUM!, TypeError → #VALUE!. */
+export function classify(e: unknown, fn: string): CellError {
+  if (e instanceof CellError) return e;
+  if (e instanceof NoSolutionError) return new CellError("na", e.message);
+  if (e instanceof RangeError) return new CellError("num", e.message);
+  if (e instanceof TypeError) return new CellError("value", e.message);
+  return new CellError("value", messages.internal(fn, e instanceof Error ? e.message : String(e)));
+}
+
+/** The error as the sheet shows it, naming the function (one object per distinct error of a call). */
+export function inFunction(e: CellError, fn: string, seen: Map<CellError, CellError>): CellError {
+  let named = seen.get(e);
+  if (!named) {
+    const message = messages.inFunction(fn, e.message);
+    named = message === e.message ? e : new CellError(e.kind, message);
+    seen.set(e, named);
+  }
+  return named;
 }

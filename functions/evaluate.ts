@@ -6,124 +6,20 @@
  * `evaluate` is synchronous and host-free, so the task pane's cell inspector can ask it why a cell
  * holds an error: the CellError it returns carries the explanation.
  */
-import { Cosmology, conversionFactor, formatModelSpec, NoSolutionError, parseModelSpec } from "../core/index.js";
+import { Cosmology, formatModelSpec, parseModelSpec } from "../core/index.js";
 import { readActiveModel, settingsReady, whenSettingsReady, type ActiveModelSetting } from "./activeModel.js";
-import { CellError, isIncomingError, toHostError } from "./cellError.js";
+import { CellError, classify, inFunction, toHostError } from "./cellError.js";
+import type { Args, ArgSpec, Cell, FunctionDef } from "./FunctionDef.js";
 import { messages } from "./messages.js";
 import { isBlank, keyValueBlockSpec } from "./modelArgument.js";
 import { modelFor } from "./modelCache.js";
+import { blank, readArg, readText, several, singleCell, toMatrix, unitConversion, type Conversion } from "./readArgument.js";
 
-/** What a worksheet cell can hold as a result. */
-export type Cell = number | string | CellError;
-
-/** How one argument is read. */
-export type ArgSpec =
-  | {
-      /** A number (or range of numbers). */
-      kind: "number";
-      name: string;
-      /** Value when the argument is omitted; absent means the argument is required. */
-      default?: number;
-      /** A blank cell inside the argument means the default (instead of a blank result). */
-      blankMeansDefault?: boolean;
-      /** Smallest allowed value, in the reference unit (checked in the unit the user gave). */
-      min?: number;
-      /** `min` itself is not allowed. */
-      minExclusive?: boolean;
-      /** Largest allowed value, in the reference unit, and what it is (e.g. "180°"). */
-      max?: { value: number; what: string };
-      /** A magnitude: |value| ≥ 50 is a catalogue's missing-value flag (#N/A). */
-      magnitude?: boolean;
-    }
-  | { kind: "model"; name: string }
-  | {
-      /** Text (or range of text), optionally one of fixed choices (matched case-insensitively). */
-      kind: "text";
-      name: string;
-      choices?: readonly string[];
-      /** Scalar: read once, not broadcast. */
-      scalar?: boolean;
-      /** May be omitted or blank: read as "" when scalar, as absent otherwise (no blank result). */
-      optional?: boolean;
-    }
-  | {
-      /** A number or text, passed through (e.g. mnu as "0.05,0.01"). */
-      kind: "numberOrText";
-      name: string;
-      default?: number | string;
-    }
-  | {
-      /**
-       * A unit (scalar text, `default` when blank): converts the named number argument from it into
-       * the reference unit `unit` the computation uses, or, with applies "result", the result from
-       * `unit` into it.
-       */
-      kind: "unit";
-      name: string;
-      unit: string;
-      default: string;
-      applies: string;
-    };
-
-/** The resolved arguments of one cell, by name (units already applied). */
-export type Args = Record<string, number | string | Cosmology | undefined>;
-
-/** A worksheet function as data: its arguments and what it computes for one cell. */
-export interface FunctionDef {
-  /** Name as typed after "ZC.", e.g. "DIST_LUM". */
-  name: string;
-  args: ArgSpec[];
-  /** The value for one cell, in the reference units of the unit arguments. */
-  compute?: (a: Args) => number | string;
-  /**
-   * The same computation as a function of one number argument, the others fixed in `a` (a column of
-   * redshifts against one model): `of(a, x)` equals `compute` with `a[arg] = x`. Lets a range run a
-   * tight loop with no per-cell object writes.
-   */
-  kernel?: { arg: string; of: (a: Args, x: number) => number };
-  /** For functions that return a whole table at once (ZC.PRESETS). */
-  table?: (active: ActiveModelSetting) => Cell[][];
-}
+export type { Args, ArgSpec, Cell, FunctionDef } from "./FunctionDef.js";
 
 const maxCells = 4_194_304;
-const blank = "";
 
-/** How a number argument is converted into its reference unit: the factor and the unit the user gave. */
-type Conversion = { factor: number; unit: string };
 type Prepared = { spec: ArgSpec; matrix: unknown[][] | undefined; rows: number; cols: number; conversion: Conversion | undefined };
-
-/** Text that Excel's own functions would read as a number (CSV and archive pastes). */
-const numberText = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
-
-/** Normalises a raw argument to a matrix (undefined when omitted). */
-function toMatrix(raw: unknown): unknown[][] | undefined {
-  if (raw === undefined || raw === null) return undefined;
-  if (Array.isArray(raw)) {
-    if (raw.length === 0) return undefined;
-    if (!Array.isArray(raw[0])) return [raw as unknown[]];
-    return raw[0].length === 0 ? undefined : (raw as unknown[][]);
-  }
-  return [[raw]];
-}
-
-function classify(e: unknown, fn: string): CellError {
-  if (e instanceof CellError) return e;
-  if (e instanceof NoSolutionError) return new CellError("na", e.message);
-  if (e instanceof RangeError) return new CellError("num", e.message);
-  if (e instanceof TypeError) return new CellError("value", e.message);
-  return new CellError("value", messages.internal(fn, e instanceof Error ? e.message : String(e)));
-}
-
-/** The error as the sheet shows it, naming the function (one object per distinct error of a call). */
-function inFunction(e: CellError, fn: string, seen: Map<CellError, CellError>): CellError {
-  let named = seen.get(e);
-  if (!named) {
-    const message = messages.inFunction(fn, e.message);
-    named = message === e.message ? e : new CellError(e.kind, message);
-    seen.set(e, named);
-  }
-  return named;
-}
 
 /**
  * The spec text a model argument stands for: a name defined in the workbook (alone or with changes)
@@ -134,28 +30,6 @@ function resolvedSpec(text: string, active: ActiveModelSetting): string {
   if (!models || models.specs.size === 0) return text;
   const first = text.split(";", 1)[0].trim().toUpperCase();
   return models.specs.has(first) ? formatModelSpec(parseModelSpec(text, models.named)) : text;
-}
-
-/** Unit conversions already worked out, by argument and unit text (a sheet uses a handful of units). */
-const conversionCache = new Map<Extract<ArgSpec, { kind: "unit" }>, Map<string, Conversion>>();
-
-function unitConversion(spec: Extract<ArgSpec, { kind: "unit" }>, raw: unknown): Conversion {
-  const given = Array.isArray(raw) ? toMatrix(raw)?.[0]?.[0] : raw;
-  const text = isBlank(given) ? spec.default : given;
-  if (typeof text !== "string") throw new CellError("value", messages.notText(spec.name, text));
-  let known = conversionCache.get(spec);
-  const cached = known?.get(text);
-  if (cached) return cached;
-  let conversion: Conversion;
-  try {
-    const factor = spec.applies === "result" ? conversionFactor(spec.unit, text) : conversionFactor(text, spec.unit);
-    conversion = { factor, unit: text.trim() };
-  } catch (e) {
-    throw new CellError("value", messages.unitArgument(spec.name, (e as Error).message));
-  }
-  if (!known) conversionCache.set(spec, (known = new Map()));
-  if (known.size < 64) known.set(text, conversion);
-  return conversion;
 }
 
 /**
@@ -187,18 +61,6 @@ function evaluateNoting(def: FunctionDef, raw: readonly unknown[], active: Activ
     seen.error = true;
     return [[inFunction(classify(e, def.name), def.name, new Map())]];
   }
-}
-
-/** Marks an argument that is a range of more than one cell. */
-const several = Symbol("several cells");
-
-/** The one value of an argument that is a single cell (or omitted: undefined), else `several`. */
-function singleCell(raw: unknown): unknown {
-  if (!Array.isArray(raw)) return raw ?? undefined;
-  if (raw.length !== 1) return raw.length === 0 ? undefined : several;
-  const row = raw[0];
-  if (!Array.isArray(row)) return raw.length === 1 ? row : several;
-  return row.length === 1 ? row[0] : row.length === 0 ? undefined : several;
 }
 
 /** Which arguments of a function are units, scalar texts and cell values: worked out once per function. */
@@ -434,76 +296,6 @@ function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: Active
     out[r] = row;
   }
   return out;
-}
-
-/** Reads one cell of a broadcast argument: its value, "" for a blank result, or an error. */
-function readArg(
-  spec: ArgSpec,
-  value: unknown,
-  given: boolean,
-  conversion: Conversion | undefined,
-  active: ActiveModelSetting,
-  modelOf: (spec: string) => Cosmology | CellError,
-): number | string | Cosmology | CellError | undefined {
-  if (spec.kind === "number" && typeof value === "number") return readNumber(spec, value, conversion);
-  if (isIncomingError(value)) return new CellError("value", messages.inputError(spec.name));
-  switch (spec.kind) {
-    case "model": {
-      if (isBlank(value)) return modelOf(active.spec);
-      if (typeof value !== "string") return new CellError("value", messages.model(messages.notText("model", value)));
-      const block = value.trim();
-      return modelOf(block === "" ? active.spec : block);
-    }
-    case "number": {
-      if (isBlank(value)) {
-        if (given && !spec.blankMeansDefault) return blank;
-        if (spec.default === undefined) return blank;
-        return spec.default;
-      }
-      if (typeof value === "string" && numberText.test(value.trim())) return readNumber(spec, Number(value.trim()), conversion);
-      return new CellError("value", messages.notANumber(spec.name, value));
-    }
-    case "numberOrText": {
-      if (isBlank(value)) return spec.default;
-      if (typeof value === "string" && numberText.test(value.trim())) return Number(value.trim());
-      if (typeof value === "number" || typeof value === "string") return value;
-      return new CellError("value", messages.notANumber(spec.name, value));
-    }
-    case "text": {
-      if (isBlank(value)) return spec.optional ? undefined : blank;
-      try {
-        return readText(spec, value);
-      } catch (e) {
-        return classify(e, spec.name);
-      }
-    }
-    default:
-      return undefined;
-  }
-}
-
-/** A number argument's value in its reference unit, after the checks of its domain in the user's unit. */
-function readNumber(spec: Extract<ArgSpec, { kind: "number" }>, x: number, conversion: Conversion | undefined): number | CellError {
-  if (!Number.isFinite(x)) return new CellError("num", messages.notFinite(spec.name));
-  if (spec.magnitude && Math.abs(x) >= 50) return new CellError("na", messages.missingMagnitude(spec.name, x));
-  const factor = conversion === undefined ? 1 : conversion.factor;
-  const reference = x * factor;
-  if (spec.min !== undefined && (spec.minExclusive ? !(reference > spec.min) : !(reference >= spec.min))) {
-    return new CellError("num", messages.belowMin(spec.name, x, conversion?.unit ?? "", spec.min / factor, spec.minExclusive === true));
-  }
-  if (spec.max !== undefined && reference > spec.max.value) {
-    return new CellError("num", messages.aboveMax(spec.name, x, conversion?.unit ?? "", spec.max.value / factor, spec.max.what));
-  }
-  return reference;
-}
-
-function readText(spec: Extract<ArgSpec, { kind: "text" }>, value: unknown): string {
-  if (typeof value !== "string") throw new CellError("value", messages.notText(spec.name, value));
-  const text = value.trim();
-  if (!spec.choices) return text;
-  const match = spec.choices.find((c) => c.toLowerCase() === text.toLowerCase());
-  if (!match) throw new CellError("value", messages.choice(spec.name, text, spec.choices));
-  return match;
 }
 
 function cleanNumber(x: number, fn: string): number | CellError {

@@ -1,0 +1,80 @@
+/**
+ * A worksheet function as data: how each argument is read (its kind, default, domain, unit) and what
+ * one cell computes. `definitions.ts` lists them; `evaluate.ts` runs them.
+ */
+import type { Cosmology } from "../core/index.js";
+import type { ActiveModelSetting } from "./activeModel.js";
+import type { CellError } from "./cellError.js";
+
+/** What a worksheet cell can hold as a result. */
+export type Cell = number | string | CellError;
+
+/** How one argument is read. */
+export type ArgSpec =
+  | {
+      /** A number (or range of numbers). */
+      kind: "number";
+      name: string;
+      /** Value when the argument is omitted; absent means the argument is required. */
+      default?: number;
+      /** A blank cell inside the argument means the default (instead of a blank result). */
+      blankMeansDefault?: boolean;
+      /** Smallest allowed value, in the reference unit (checked in the unit the user gave). */
+      min?: number;
+      /** `min` itself is not allowed. */
+      minExclusive?: boolean;
+      /** Largest allowed value, in the reference unit, and what it is (e.g. "180°"). */
+      max?: { value: number; what: string };
+      /** A magnitude: |value| ≥ 50 is a catalogue's missing-value flag (#N/A). */
+      magnitude?: boolean;
+    }
+  | { kind: "model"; name: string }
+  | {
+      /** Text (or range of text), optionally one of fixed choices (matched case-insensitively). */
+      kind: "text";
+      name: string;
+      choices?: readonly string[];
+      /** Scalar: read once, not broadcast. */
+      scalar?: boolean;
+      /** May be omitted or blank: read as "" when scalar, as absent otherwise (no blank result). */
+      optional?: boolean;
+    }
+  | {
+      /** A number or text, passed through (e.g. mnu as "0.05,0.01"). */
+      kind: "numberOrText";
+      name: string;
+      default?: number | string;
+    }
+  | {
+      /**
+       * A unit (scalar text, `default` when blank): converts the named number argument from it into
+       * the reference unit `unit` the computation uses, or, with applies "result", the result from
+       * `unit` into it.
+       */
+      kind: "unit";
+      name: string;
+      unit: string;
+      default: string;
+      applies: string;
+    };
+
+/** The resolved arguments of one cell, by name (units already applied). */
+export type Args = Record<string, number | string | Cosmology | undefined>;
+
+/** A worksheet function as data: its arguments and what it computes for one cell. */
+export interface FunctionDef {
+  /** Name as typed after "ZC.", e.g. "DIST_LUM". */
+  name: string;
+  args: ArgSpec[];
+  /** The value for one cell, in the reference units of the unit arguments. */
+  compute?: (a: Args) => number | string;
+  /**
+   * The same computation as a function of one number argument, the others fixed in `a` (a column of
+   * redshifts against one model): `of(a, x)` equals `compute` with `a[arg] = x`. Lets a range run a
+   * tight loop with no per-cell object writes.
+   */
+  kernel?: { arg: string; of: (a: Args, x: number) => number };
+  /** For functions that return a whole table at once (ZC.PRESETS). */
+  table?: (active: ActiveModelSetting) => Cell[][];
+}
+
