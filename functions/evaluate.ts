@@ -85,6 +85,28 @@ function planOf(def: FunctionDef): Plan {
   return plan;
 }
 
+/**
+ * The arguments read once per call whatever the shape of the others: units (their conversions, and
+ * the factor of the result) and scalar texts (into a fresh args object).
+ */
+function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): { conversions: Record<string, Conversion>; resultFactor: number; args: Args } {
+  const conversions: Record<string, Conversion> = {};
+  let resultFactor = 1;
+  const args: Args = {};
+  for (const i of plan.units) {
+    const spec = def.args[i] as Extract<ArgSpec, { kind: "unit" }>;
+    const conversion = unitConversion(spec, raw[i]);
+    if (spec.applies === "result") resultFactor *= conversion.factor;
+    else conversions[spec.applies] = conversion;
+  }
+  for (const i of plan.scalarTexts) {
+    const spec = def.args[i] as Extract<ArgSpec, { kind: "text" }>;
+    const text = toMatrix(raw[i])?.[0]?.[0];
+    args[spec.name] = spec.optional && isBlank(text) ? "" : readText(spec, text);
+  }
+  return { conversions, resultFactor, args };
+}
+
 /** Model resolution for single cells, made again only when the settings are read anew. */
 let resolverFor: { active: ActiveModelSetting; resolve: (text: string) => Cosmology | CellError } | undefined;
 
@@ -95,20 +117,7 @@ let resolverFor: { active: ActiveModelSetting; resolve: (text: string) => Cosmol
 function evaluateSingle(def: FunctionDef, raw: readonly unknown[], active: ActiveModelSetting): Cell | undefined {
   const plan = planOf(def);
   const specs = def.args;
-  let conversions: Record<string, Conversion> | undefined;
-  let resultFactor = 1;
-  const args: Args = {};
-  for (const i of plan.units) {
-    const spec = specs[i] as Extract<ArgSpec, { kind: "unit" }>;
-    const conversion = unitConversion(spec, raw[i]);
-    if (spec.applies === "result") resultFactor *= conversion.factor;
-    else (conversions ??= {})[spec.applies] = conversion;
-  }
-  for (const i of plan.scalarTexts) {
-    const spec = specs[i] as Extract<ArgSpec, { kind: "text" }>;
-    const text = toMatrix(raw[i])?.[0]?.[0];
-    args[spec.name] = spec.optional && isBlank(text) ? "" : readText(spec, text);
-  }
+  const { conversions, resultFactor, args } = readFixed(def, raw, plan);
   if (resolverFor?.active !== active) resolverFor = { active, resolve: (text) => singleModel(text, active) };
   const resolve = resolverFor.resolve;
   let error: Cell | undefined;
@@ -121,7 +130,7 @@ function evaluateSingle(def: FunctionDef, raw: readonly unknown[], active: Activ
     if (value === several) return undefined;
     if (error !== undefined) continue; // the first bad argument decides; the rest must still be single cells
     if (value === undefined && spec.kind === "number" && spec.default === undefined) throw new CellError("value", `${spec.name} is required`);
-    const read = readArg(spec, value, given !== undefined && given !== null, conversions?.[spec.name], active, resolve);
+    const read = readArg(spec, value, given !== undefined && given !== null, conversions[spec.name], active, resolve);
     if (read instanceof CellError || read === blank) error = read;
     else args[spec.name] = read;
   }
@@ -146,25 +155,13 @@ function singleModel(text: string, active: ActiveModelSetting): Cosmology | Cell
 
 function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: ActiveModelSetting, seen: { error: boolean }): Cell[][] {
   const compute = def.compute!;
-  const conversions: Record<string, Conversion> = {};
-  let resultFactor = 1;
+  const plan = planOf(def);
+  const { conversions, resultFactor, args } = readFixed(def, raw, plan);
   const prepared: Prepared[] = [];
-  const scalars: Args = {};
   const specs = def.args;
-  for (let index = 0; index < specs.length; index++) {
+  for (const index of plan.cells) {
     const spec = specs[index];
     const value = raw[index];
-    if (spec.kind === "unit") {
-      const conversion = unitConversion(spec, value);
-      if (spec.applies === "result") resultFactor *= conversion.factor;
-      else conversions[spec.applies] = conversion;
-      continue;
-    }
-    if (spec.kind === "text" && spec.scalar) {
-      const text = toMatrix(value)?.[0]?.[0];
-      scalars[spec.name] = spec.optional && isBlank(text) ? "" : readText(spec, text);
-      continue;
-    }
     let matrix = toMatrix(value);
     if (spec.kind === "model" && matrix) {
       const block = keyValueBlockSpec(matrix);
@@ -173,9 +170,8 @@ function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: Active
     if (!matrix && spec.kind === "number" && spec.default === undefined) {
       throw new CellError("value", `${spec.name} is required`);
     }
-    prepared.push({ spec, matrix, rows: matrix?.length ?? 1, cols: matrix?.[0]?.length ?? 1, conversion: undefined });
+    prepared.push({ spec, matrix, rows: matrix?.length ?? 1, cols: matrix?.[0]?.length ?? 1, conversion: conversions[spec.name] });
   }
-  for (const p of prepared) p.conversion = conversions[p.spec.name];
 
   let rows = 1;
   let cols = 1;
@@ -221,7 +217,6 @@ function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: Active
   };
 
   // One args object of fixed shape for every cell; single-cell arguments are read once, up front.
-  const args: Args = { ...scalars };
   for (const p of prepared) args[p.spec.name] = undefined;
   let constantCell: Cell | undefined;
   const varying: Prepared[] = [];
