@@ -83,3 +83,32 @@ export const neutrinoTemperatureRatio = Math.cbrt(4 / 11);
  * Neff = 3: (7/8)(4/11)^(4/3) ≈ 0.2271 (Fermi–Dirac vs Bose–Einstein factor 7/8 times T_ν⁴/T_γ⁴).
  */
 export const neutrinoToPhotonDensityPerSpecies = (7 / 8) * (4 / 11) ** (4 / 3);
+
+/** Planck constant [J s]. Exact in SI 2019 (BIPM, The International System of Units, 9th ed., 2019). */
+export const planckConstantJs = 6.62607015e-34;
+
+/** Electronvolt [J]. Exact in SI 2019: the elementary charge 1.602176634e-19 C times 1 V. */
+export const electronVoltJ = 1.602176634e-19;
+
+/** Ångström [m]: 1e-10 m (FITS 4.0, Pence et al. 2010, Table 5, symbol "Angstrom"). */
+export const angstromM = 1e-10;
+
+/**
+ * The Sun's speed with respect to the CMB [km/s], from the CMB dipole: 369.82 km/s (Planck 2018 I,
+ * A&A 641, A1, 2020; from memory).
+ */
+export const cmbDipoleSpeedKmPerS = 369.82;
+
+/**
+ * Direction of the CMB dipole (the apex of the Sun's motion) in galactic coordinates [deg]:
+ * (l, b) = (264.021°, 48.253°) (Planck 2018 I, A&A 641, A1, 2020; confirmed as quoted from it in
+ * https://www.aanda.org/articles/aa/full_html/2021/02/aa38845-20/F10.html).
+ */
+export const cmbDipoleGalacticDeg = { l: 264.021, b: 48.253 } as const;
+
+/**
+ * The galactic frame in ICRS [deg]: the north galactic pole at RA 192.85948°, Dec 27.12825°, and the
+ * galactic longitude of the north celestial pole, 122.93192° (The Hipparcos Catalogue, ESA SP-1200,
+ * 1997, Vol. 1, §1.5.3).
+ */
+export const galacticFrameDeg = { poleRa: 192.85948, poleDec: 27.12825, celestialPoleL: 122.93192 } as const;

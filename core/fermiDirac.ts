@@ -5,12 +5,15 @@
  *
  * the energy density of one species (with its antiparticle) relative to the same species if massless
  * (F(0) = 1; F(y) → 180 ζ(3) y / (7π⁴) for y ≫ 1). This is the exact integral, not a fitting formula:
- * a quintic Hermite table in ln y (shared by all models; its nodes F, dF/dln y and d²F/dln y² come from
- * adaptive Gauss–Kronrod quadrature, computed ahead by scripts/makeFermiDiracTable.ts and stored in
- * fermiDiracTable.ts, so a page never spends the ~80 ms that quadrature takes), with the two-term small-y series
+ * a quintic Hermite table in ln y (shared by all models), with the two-term small-y series
  * F = 1 + 5y²/(7π²) below y = e⁻¹⁰ and the large-y asymptotic series above y = e⁷.
+ *
+ * The table's nodes (F, dF/dln y, d²F/dln y²) are built at first use by one fixed exp-sinh rule
+ * (Takahasi & Mori 1974 double-exponential quadrature: x = exp((π/2) sinh t), 176 points, step 1/24,
+ * t ∈ [−4, 3.3]) shared by all 273 nodes, so the occupation 1/(eˣ+1) is evaluated once per point, not
+ * once per node: about 4 ms once per page, against ~80 ms for adaptive quadrature at every node.
+ * test/fermiDiracTable.test.ts checks every node against adaptive Gauss–Kronrod quadrature to 1e-15.
  */
-import { fermiDiracNodesBase64 } from "./fermiDiracTable.js";
 import { integrate } from "./quadrature.js";
 import { QuinticTable } from "./QuinticTable.js";
 
@@ -58,8 +61,8 @@ function exactByQuadrature(y: number): [number, number, number] {
 export const fermiDiracGrid = { sMin, step, nodes: Math.round((sMax - sMin) / step) + 1 } as const;
 
 /**
- * The table's nodes by quadrature (slow, ~80 ms): for each grid point, F, dF/ds and d²F/ds² in turn.
- * Used by scripts/makeFermiDiracTable.ts to write fermiDiracTable.ts, and by its test.
+ * The table's nodes by adaptive quadrature (slow, ~80 ms): for each grid point, F, dF/ds and d²F/ds²
+ * in turn. The reference the fixed rule is tested against.
  */
 export function fermiDiracNodesByQuadrature(): Float64Array {
   const out = new Float64Array(3 * fermiDiracGrid.nodes);
@@ -67,33 +70,44 @@ export function fermiDiracNodesByQuadrature(): Float64Array {
   return out;
 }
 
+/** The fixed exp-sinh rule of the table: x = exp((π/2) sinh t), t = −4 … 3.3 in steps of 1/24. */
+const rule = { tMin: -4, step: 1 / 24, points: 176 } as const;
+
 /**
- * Decodes base64 to doubles (little-endian) by itself: the functions may run where neither Buffer nor
- * atob exists (a bare JavaScript runtime, as the host simulation tests it).
+ * The table's nodes by the fixed exp-sinh rule: for each grid point, F, dF/ds and d²F/ds² in turn
+ * (the same integrals as fermiDiracNodesByQuadrature, to ~1e-15).
  */
-function decodeDoubles(base64: string): Float64Array {
-  const alphabet = "ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789+/";
-  const sextet = new Uint8Array(128);
-  for (let i = 0; i < 64; i++) sextet[alphabet.charCodeAt(i)] = i;
-  const bytes = new Uint8Array((base64.length * 3) / 4); // whole doubles: 6552 bytes, no "=" padding
-  let bits = 0;
-  let value = 0;
-  let k = 0;
-  for (let i = 0; i < base64.length; i++) {
-    value = ((value << 6) | sextet[base64.charCodeAt(i)]) & 0xffffff;
-    bits += 6;
-    if (bits >= 8) {
-      bits -= 8;
-      bytes[k++] = (value >> bits) & 0xff;
-    }
+export function fermiDiracNodesByRule(): Float64Array {
+  const x2 = new Float64Array(rule.points);
+  const weight = new Float64Array(rule.points); // step × dx/dt × x² / (eˣ + 1) × normalisation
+  for (let i = 0; i < rule.points; i++) {
+    const t = rule.tMin + i * rule.step;
+    const x = Math.exp((Math.PI / 2) * Math.sinh(t));
+    x2[i] = x * x;
+    weight[i] = rule.step * (Math.PI / 2) * Math.cosh(t) * x * x2[i] * occupation(x) * normalisation;
   }
-  const view = new DataView(bytes.buffer);
-  return Float64Array.from({ length: bytes.length / 8 }, (_, i) => view.getFloat64(8 * i, true));
+  const out = new Float64Array(3 * fermiDiracGrid.nodes);
+  for (let k = 0; k < fermiDiracGrid.nodes; k++) nodeByRule(x2, weight, Math.exp(2 * (sMin + k * step)), out, 3 * k);
+  return out;
 }
 
-/** The stored nodes (fermiDiracTable.ts), decoded: F, dF/ds, d²F/ds² for each grid point in turn. */
-export function fermiDiracStoredNodes(): Float64Array {
-  return decodeDoubles(fermiDiracNodesBase64);
+/** One node: F = Σ w √(x²+y²), dF/ds = Σ w y²/√(x²+y²), d²F/ds² = dF/ds + Σ w x² y²/(x²+y²)^{3/2}. */
+function nodeByRule(x2: Float64Array, weight: Float64Array, y2: number, out: Float64Array, at: number): void {
+  let f = 0;
+  let d1 = 0;
+  let d2 = 0;
+  for (let i = 0; i < x2.length; i++) {
+    const r2 = x2[i] + y2;
+    const r = Math.sqrt(r2);
+    const w = weight[i];
+    f += w * r;
+    const q = (w * y2) / r;
+    d1 += q;
+    d2 += (q * x2[i]) / r2;
+  }
+  out[at] = f;
+  out[at + 1] = d1;
+  out[at + 2] = d1 + d2;
 }
 
 let table: QuinticTable | undefined;
@@ -109,7 +123,7 @@ export function fermiDiracTable(): QuinticTable {
 
 function getTable(): QuinticTable {
   if (table) return table;
-  const nodes = fermiDiracStoredNodes();
+  const nodes = fermiDiracNodesByRule();
   const n = fermiDiracGrid.nodes;
   const f = new Float64Array(n);
   const d1 = new Float64Array(n);

@@ -64,6 +64,29 @@ export function spectralLuminosityWHz(model: Cosmology, fluxDensityWm2Hz: number
 }
 
 /**
+ * Rest-frame spectral luminosity at another frequency, for a power law S_ν ∝ ν^α through both:
+ * L_ν(ν_rest) = 4π D_L² S_ν(ν_obs) (1+z)^−(1+α) (ν_rest/ν_obs)^α (Hogg 1999 eq. 23 with
+ * S_ν(ν) = S_ν(ν_obs) (ν/ν_obs)^α).
+ * @param model the cosmology
+ * @param fluxDensityWm2Hz flux density observed at ν_obs [W m⁻² Hz⁻¹], ≥ 0
+ * @param z redshift > 0
+ * @param alpha spectral index α
+ * @param observedHz observed frequency ν_obs [Hz], > 0
+ * @param restHz rest-frame frequency ν_rest [Hz], > 0
+ * @returns L_ν at ν_rest [W Hz⁻¹]; ν_rest = (1+z) ν_obs gives 4π D_L² S_ν / (1+z) for every α
+ */
+export function restFrameSpectralLuminosityWHz(
+  model: Cosmology,
+  fluxDensityWm2Hz: number,
+  z: number,
+  alpha: number,
+  observedHz: number,
+  restHz: number,
+): number {
+  return spectralLuminosityWHz(model, fluxDensityWm2Hz, z, alpha) * (restHz / observedHz) ** alpha;
+}
+
+/**
  * K-correction of a power law S_ν ∝ ν^α: K = −2.5 (1+α) log10(1+z), in the convention M = m − μ − K
  * (Hogg et al. 2002, astro-ph/0210394, eq. 13 for a power law).
  * @param z redshift ≥ 0
@@ -147,4 +170,29 @@ export function bolometricAbsoluteMagnitude(luminosity: number): number {
 export function bolometricLuminosityW(absoluteMag: number): number {
   requireFiniteNumber("M_bol", absoluteMag);
   return bolometricZeroPointW * 10 ** (-0.4 * absoluteMag);
+}
+
+/**
+ * Tolman dimming of the bolometric surface brightness, Σ_obs = Σ_emit (1+z)⁻⁴, in magnitudes:
+ * 10 log10(1+z) (Tolman 1930, PNAS 16, 511; reference from memory).
+ * @param z redshift ≥ 0
+ * @returns mag; e.g. z = 1: 3.0103
+ */
+export function surfaceBrightnessDimmingMag(z: number): number {
+  checkRedshift(z);
+  return 10 * Math.log10(1 + z);
+}
+
+/**
+ * Dimming of the surface brightness per unit frequency at a fixed observed frequency, for a source
+ * spectrum S_ν ∝ ν^α: I_ν,obs(ν) = I_ν,emit(ν) (1+z)^(α−3), so 2.5 (3 − α) log10(1+z) mag (the
+ * bolometric law at α = −1).
+ * @param z redshift ≥ 0
+ * @param alpha spectral index α
+ * @returns mag; e.g. z = 1, α = 0: 7.526
+ */
+export function spectralSurfaceBrightnessDimmingMag(z: number, alpha: number): number {
+  checkRedshift(z);
+  requireFiniteNumber("alpha", alpha);
+  return 2.5 * (3 - alpha) * Math.log10(1 + z);
 }

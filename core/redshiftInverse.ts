@@ -9,6 +9,7 @@ import { NoSolutionError } from "./NoSolutionError.js";
 import { integrate } from "./quadrature.js";
 import type { QuinticTable } from "./QuinticTable.js";
 import { formatRedshift } from "./redshift.js";
+import { solveBracketed } from "./solveBracketed.js";
 
 const relTolExact = 1e-14;
 
@@ -36,36 +37,6 @@ function defaultWording(quantity: InvertibleQuantity, value: number): InverseWor
   const [words, unit] = quantityWords[quantity] ?? [String(quantity), ""];
   const text = (v: number) => `${Number(v.toPrecision(6))} ${unit}`;
   return { asked: () => `${words} ${text(value)}`, limit: text };
-}
-
-/**
- * Newton's method safeguarded by bisection on a bracket [lo, hi] with g(lo) ≤ target ≤ g(hi),
- * starting from `start` (default: the midpoint).
- */
-function solveBracketed(
-  g: (u: number) => number,
-  dg: (u: number) => number,
-  target: number,
-  lo: number,
-  hi: number,
-  start = 0.5 * (lo + hi),
-): number {
-  let u = start;
-  for (let iteration = 0; iteration < 100; iteration++) {
-    const r = g(u) - target;
-    if (r === 0) return u;
-    if (r < 0) lo = u;
-    else hi = u;
-    const step = r / dg(u);
-    // converged when the Newton step is down to a few ulps (it may then toggle between neighbours)
-    const scale = 5e-16 * Math.abs(u) + 1e-300;
-    if (Math.abs(step) <= scale) return u - step;
-    let next = u - step;
-    if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
-    if (hi - lo <= scale) return next;
-    u = next;
-  }
-  return u;
 }
 
 /** The inverse of one model, with what it finds once per model (maxima, the horizon) kept. */

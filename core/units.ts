@@ -6,16 +6,24 @@
  *
  * Angles are kept as a dimension of their own (rad; sr = rad²) so that 'kpc/arcsec' converts to
  * 'Mpc/rad' but not to 'kpc'. Temperatures are absolute (K) only.
+ *
+ * h-scaled units: in a unit that also holds a parsec or a solar unit (Mpc/h, h-1 Mpc, (Mpc/h)3,
+ * h-3 Mpc3, h-1 Msun, h3 Mpc-3), `h` is the dimensionless h = H0/(100 km/s/Mpc) of a model, as survey
+ * work writes it; everywhere else `h` is the hour (FITS). Converting such a unit needs the model's h.
  */
 import {
+  angstromM,
   auM,
+  electronVoltJ,
   ergJ,
   janskySI,
   julianYearS,
   lightYearM,
   parsecM,
+  planckConstantJs,
   solarLuminosityW,
   solarMassKg,
+  speedOfLightMPerS,
 } from "./constants.js";
 
 /** Exponents of the base dimensions, in the order m, kg, s, K, rad. */
@@ -29,6 +37,8 @@ export interface Unit {
   readonly factor: number;
   /** Exponents of m, kg, s, K, rad. */
   readonly dimensions: Dimensions;
+  /** Power of h = H0/100 the unit carries (Mpc/h: −1; h3 Mpc-3: 3); 0 for an ordinary unit. */
+  readonly hPower: number;
 }
 
 type Definition = { factor: number; dimensions: Dimensions; prefixable: boolean };
@@ -42,13 +52,15 @@ const definitions: Record<string, Definition> = {
   g: { factor: 1e-3, dimensions: d(0, 1, 0), prefixable: true },
   s: { factor: 1, dimensions: d(0, 0, 1), prefixable: true },
   min: { factor: 60, dimensions: d(0, 0, 1), prefixable: false },
-  h: { factor: 3600, dimensions: d(0, 0, 1), prefixable: false },
+  // h, the hour (3600 s), is read by the parser: in an h-scaled unit it is h = H0/100 instead
   d: { factor: 86_400, dimensions: d(0, 0, 1), prefixable: false },
   yr: { factor: julianYearS, dimensions: d(0, 0, 1), prefixable: true },
   a: { factor: julianYearS, dimensions: d(0, 0, 1), prefixable: true },
   Hz: { factor: 1, dimensions: d(0, 0, -1), prefixable: true },
   J: { factor: 1, dimensions: d(2, 1, -2), prefixable: true },
   erg: { factor: ergJ, dimensions: d(2, 1, -2), prefixable: false },
+  eV: { factor: electronVoltJ, dimensions: d(2, 1, -2), prefixable: true },
+  Angstrom: { factor: angstromM, dimensions: d(1, 0, 0), prefixable: false },
   W: { factor: 1, dimensions: d(2, 1, -3), prefixable: true },
   Jy: { factor: janskySI, dimensions: d(0, 1, -2), prefixable: true },
   pc: { factor: parsecM, dimensions: d(1, 0, 0), prefixable: true },
@@ -76,6 +88,7 @@ const aliases: Record<string, string> = {
   Msun: "solMass",
   arcsecond: "arcsec",
   arcminute: "arcmin",
+  angstrom: "Angstrom",
 };
 
 const prefixes: Record<string, number> = {
@@ -130,11 +143,17 @@ function resolveSymbol(symbol: string, whole: string): { factor: number; dimensi
   throw new TypeError(`unknown unit "${symbol}" in "${whole}"`);
 }
 
+/** Parsed dimensions: m, kg, s, K, rad, then the power of the symbol `h` (hour or little h, decided at the end). */
+type Parsed = { factor: number; dimensions: number[] };
+const hSymbol = 5;
+
 class UnitParser {
   private i = 0;
+  /** The unit holds a parsec or solar unit: `h` is then h = H0/100, not the hour. */
+  astronomical = false;
   constructor(private readonly s: string) {}
 
-  parse(): { factor: number; dimensions: number[] } {
+  parse(): Parsed {
     const result = this.expression();
     if (this.i < this.s.length) this.fail(`unexpected "${this.s[this.i]}"`);
     return result;
@@ -154,7 +173,7 @@ class UnitParser {
     return this.i > start;
   }
 
-  private expression(): { factor: number; dimensions: number[] } {
+  private expression(): Parsed {
     this.skipSpaces();
     let acc = this.term();
     for (;;) {
@@ -176,9 +195,9 @@ class UnitParser {
     }
   }
 
-  private term(): { factor: number; dimensions: number[] } {
+  private term(): Parsed {
     const c = this.peek();
-    let base: { factor: number; dimensions: number[] };
+    let base: Parsed;
     if (c === "(") {
       this.i++;
       base = this.expression();
@@ -188,14 +207,19 @@ class UnitParser {
     } else if (this.s.startsWith("10**", this.i) || this.s.startsWith("10^", this.i)) {
       this.i += this.s.startsWith("10**", this.i) ? 4 : 3;
       const k = this.integer();
-      return { factor: 10 ** k, dimensions: [...none] };
+      return { factor: 10 ** k, dimensions: [...none, 0] };
     } else {
       const m = /^[A-Za-zµμ]+/.exec(this.s.slice(this.i));
       if (!m) this.fail(c === "" ? "a unit is missing" : `unexpected "${c}"`);
       this.i += m[0].length;
       const symbol = m[0].replace(/^[µμ]/, "u");
-      const def = resolveSymbol(symbol, this.s);
-      base = { factor: def.factor, dimensions: [...def.dimensions] };
+      if (symbol === "h") {
+        base = { factor: 1, dimensions: [...none, 1] };
+      } else {
+        const def = resolveSymbol(symbol, this.s);
+        if (/pc$|^sol/.test(aliases[symbol] ?? symbol)) this.astronomical = true;
+        base = { factor: def.factor, dimensions: [...def.dimensions, 0] };
+      }
     }
     const power = this.power();
     return power === 1 ? base : { factor: base.factor ** power, dimensions: base.dimensions.map((x) => x * power) };
@@ -244,11 +268,20 @@ export function parseUnit(text: string): Unit {
   if (hit) return hit;
   const trimmed = text.trim();
   if (trimmed === "") throw new TypeError("empty unit");
-  const parsed = new UnitParser(trimmed).parse();
+  const parser = new UnitParser(trimmed);
+  const parsed = parser.parse();
+  const dims = parsed.dimensions;
+  const hPower = dims[hSymbol];
+  let factor = parsed.factor;
+  if (hPower !== 0 && !parser.astronomical) {
+    factor *= 3600 ** hPower; // the hour
+    dims[2] += hPower;
+  }
   const unit: Unit = {
     text: trimmed,
-    factor: parsed.factor,
-    dimensions: parsed.dimensions as unknown as Dimensions,
+    factor,
+    dimensions: dims.slice(0, hSymbol) as unknown as Dimensions,
+    hPower: parser.astronomical ? hPower : 0,
   };
   if (cache.size > 1000) cache.clear();
   cache.set(text, unit);
@@ -256,15 +289,16 @@ export function parseUnit(text: string): Unit {
 }
 
 /**
- * Factor that converts a value in one unit into another: value_to = value_from × factor.
+ * How a value in one unit becomes a value in another: value_to = value_from × factor × h^hPower, with
+ * h = H0/100 of the model when a unit is h-scaled (hPower 0 otherwise).
  *
- * @param from unit text of the input, e.g. "Mpc"
- * @param to unit text of the output, e.g. "Gly"
- * @returns the dimensionless factor
- * @throws TypeError when the units have different dimensions (both are named) or do not parse
- * @example conversionFactor("Mpc", "kpc") // 1000
+ * @param from unit text of the input, e.g. "Mpc/h"
+ * @param to unit text of the output, e.g. "Mpc"
+ * @returns the factor (dimensionless) and the power of h still to apply
+ * @throws TypeError when the units have different dimensions or do not parse
+ * @example scaledConversion("Mpc/h", "Mpc") // { factor: 1, hPower: -1 }
  */
-export function conversionFactor(from: string, to: string): number {
+export function scaledConversion(from: string, to: string): { factor: number; hPower: number } {
   const a = parseUnit(from);
   const b = parseUnit(to);
   if (!sameDimensions(a.dimensions, b.dimensions)) {
@@ -272,7 +306,29 @@ export function conversionFactor(from: string, to: string): number {
       `cannot convert "${a.text}" (${describeDimensions(a.dimensions)}) to "${b.text}" (${describeDimensions(b.dimensions)})`,
     );
   }
-  return a.factor / b.factor;
+  return { factor: a.factor / b.factor, hPower: a.hPower - b.hPower };
+}
+
+/**
+ * Factor that converts a value in one unit into another: value_to = value_from × factor.
+ *
+ * @param from unit text of the input, e.g. "Mpc"
+ * @param to unit text of the output, e.g. "Gly"
+ * @param h h = H0/(100 km/s/Mpc) of the model, needed only when one unit is h-scaled (Mpc/h)
+ * @returns the dimensionless factor
+ * @throws TypeError when the units have different dimensions (both are named), do not parse, or
+ *   one is h-scaled and no h is given
+ * @example conversionFactor("Mpc", "kpc") // 1000
+ * @example conversionFactor("Mpc/h", "Mpc", 0.7) // 1.4285714285714286
+ */
+export function conversionFactor(from: string, to: string, h?: number): number {
+  const { factor, hPower } = scaledConversion(from, to);
+  if (hPower === 0) return factor;
+  if (h === undefined) {
+    const scaled = parseUnit(from).hPower !== 0 ? from : to;
+    throw new TypeError(`"${scaled.trim()}" is in units of h = H0/100: give a model`);
+  }
+  return factor * h ** hPower;
 }
 
 /**
@@ -281,9 +337,31 @@ export function conversionFactor(from: string, to: string): number {
  * @param value the number in unit `from`
  * @param from unit text, e.g. "pc"
  * @param to unit text, e.g. "lyr"
+ * @param h h = H0/100 of the model, for h-scaled units only
  * @returns the number in unit `to`
  * @example convertUnit(1, "pc", "lyr") // 3.2615637771674337
  */
-export function convertUnit(value: number, from: string, to: string): number {
-  return value * conversionFactor(from, to);
+export function convertUnit(value: number, from: string, to: string, h?: number): number {
+  return value * conversionFactor(from, to, h);
+}
+
+/**
+ * A band given as a frequency, a wavelength or a photon energy, as a frequency: ν = x for a frequency
+ * unit, ν = c/λ for a length, ν = E/h_P for an energy (h_P the Planck constant).
+ *
+ * @param value the band's value in `unit`, > 0
+ * @param unit a frequency ("GHz"), wavelength ("Angstrom", "nm", "um") or energy ("eV", "keV") unit
+ * @param name the argument's name for messages
+ * @returns frequency [Hz]
+ * @throws TypeError for a unit of another kind; RangeError unless value > 0 and finite
+ * @example frequencyHz(5100, "Angstrom", "rest") // 5.878e14
+ */
+export function frequencyHz(value: number, unit: string, name: string): number {
+  if (!(value > 0 && value < Number.POSITIVE_INFINITY)) throw new RangeError(`${name} = ${value} ${unit.trim()} must be > 0`);
+  const u = parseUnit(unit);
+  const x = value * u.factor;
+  if (sameDimensions(u.dimensions, d(0, 0, -1))) return x;
+  if (sameDimensions(u.dimensions, d(1, 0, 0))) return speedOfLightMPerS / x;
+  if (sameDimensions(u.dimensions, d(2, 1, -2))) return x / planckConstantJs;
+  throw new TypeError(`${name}: "${u.text}" is ${describeDimensions(u.dimensions)}; use a frequency (GHz), a wavelength (Angstrom, um) or an energy (eV)`);
 }

@@ -47,15 +47,15 @@ export type ArgSpec =
     }
   | {
       /**
-       * A unit (scalar text, `default` when blank): converts the named number argument from it into
+       * A unit (scalar text, `default` when blank): converts the named number arguments from it into
        * the reference unit `unit` the computation uses, or, with applies "result", the result from
-       * `unit` into it.
+       * `unit` into it. An h-scaled unit (Mpc/h) is scaled by the h of the cell's model.
        */
       kind: "unit";
       name: string;
       unit: string;
       default: string;
-      applies: string;
+      applies: string | readonly string[];
     };
 
 /** The resolved arguments of one cell, by name (units already applied). */

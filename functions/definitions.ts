@@ -6,19 +6,34 @@
 import {
   abFluxDensityJy,
   abMagnitude,
-  checkSourceRedshift,
-  conversionFactor,
   absoluteMagnitude,
+  absoluteMagnitudeErrorMag,
   apparentMagnitude,
+  bolometricAbsoluteMagnitude,
+  bolometricLuminosityW,
+  checkSourceRedshift,
+  cmbFrameRedshift,
+  conversionFactor,
   convertUnit,
   Cosmology,
   fluxWm2,
   formatModelSpec,
+  frequencyHz,
   janskySI,
   kCorrectionPowerLawMag,
+  limitingRedshift,
+  limitingRedshiftMag,
+  luminosityDistanceErrorMpc,
+  luminosityErrorW,
   luminosityW,
+  maxVolumeMpc3,
   presets,
+  properSizeErrorMpc,
+  restFrameSpectralLuminosityWHz,
+  spectralLuminosityErrorWHz,
   spectralLuminosityWHz,
+  spectralSurfaceBrightnessDimmingMag,
+  surfaceBrightnessDimmingMag,
   type DensityComponent,
   type InvertibleQuantity,
   withChanges,
@@ -35,7 +50,7 @@ const amount = (name: string) => num(name, { min: 0 });
 const mag = (name: string, extra: NumberOptions = {}) => num(name, { magnitude: true, ...extra });
 const model: ArgSpec = { kind: "model", name: "model" };
 /** A unit argument: `reference` is what compute uses, `shown` the default a person sees. */
-const unit = (name: string, reference: string, shown = reference, applies = "result"): ArgSpec => ({
+const unit = (name: string, reference: string, shown = reference, applies: string | string[] = "result"): ArgSpec => ({
   kind: "unit",
   name,
   unit: reference,
@@ -44,6 +59,38 @@ const unit = (name: string, reference: string, shown = reference, applies = "res
 });
 const z = num("z");
 const zToday = num("z", { default: 0 });
+/** A 1σ error: ≥ 0. */
+const err = (name: string, extra: NumberOptions = {}) => num(name, { min: 0, ...extra });
+/** An optional spectral index whose absence means the bolometric case (NaN stands for "not given"). */
+const optionalAlpha = num("alpha", { default: Number.NaN, blankMeansDefault: true });
+const given = (x: number) => !Number.isNaN(x);
+/** A unit given as text whose meaning depends on other arguments (blank: `shown`), as a factor into `reference`. */
+function textUnitFactor(a: Args, name: string, shown: string, reference: string): number {
+  const text = (a[name] as string) || shown;
+  try {
+    return conversionFactor(text, reference, m(a).h);
+  } catch (e) {
+    throw new TypeError(messages.unitArgument(name, (e as Error).message));
+  }
+}
+/** L_ν [W/Hz] at ν [Hz] in the out_unit asked: W/Hz and its kin give L_ν, a power unit (W, erg/s, Lsun) ν L_ν (= λ L_λ). */
+function inSpectralOrPowerUnit(a: Args, lnuWHz: number, nuHz: number): number {
+  const out = (a.out_unit as string) || "W/Hz";
+  const h = m(a).h;
+  try {
+    return lnuWHz * conversionFactor("W/Hz", out, h);
+  } catch (e) {
+    try {
+      return lnuWHz * nuHz * conversionFactor("W", out, h);
+    } catch {
+      throw new TypeError(messages.unitArgument("out_unit", `${(e as Error).message}; use W/Hz for L_ν or a power (W, erg/s, Lsun) for ν L_ν`));
+    }
+  }
+}
+/** A sky area argument: all sky when omitted or blank. */
+const area = num("area", { default: 4 * Math.PI, blankMeansDefault: true, min: 0, max: { value: 4 * Math.PI, what: "the whole sky" } });
+const angle = num("angle", { min: 0, max: { value: Math.PI, what: "180°" } });
+const optionalText = (name: string): ArgSpec => ({ kind: "text", name, scalar: true, optional: true });
 
 const m = (a: Args) => a.model as Cosmology;
 const n = (a: Args, name: string) => a[name] as number;
@@ -85,7 +132,7 @@ function invert(model: Cosmology, name: string, value: number, given: string): n
   const inverse = inverses[name];
   if (given !== "" && !inverse.unit) throw new TypeError(`unit: ${name} is in magnitudes and takes no unit`);
   const unit = given || inverse.shown || "mag";
-  const toCore = inverse.unit ? conversionFactor(unit, inverse.unit) : 1;
+  const toCore = inverse.unit ? conversionFactor(unit, inverse.unit, model.h) : 1;
   const shown = (v: number) => `${formatValue(v)} ${unit}`;
   return model.redshiftAt(inverse.quantity, value * toCore, {
     asked: () => `${name} = ${shown(value)}`,
@@ -120,7 +167,6 @@ const parameters: Record<string, (model: Cosmology) => number> = {
 };
 
 const components: readonly DensityComponent[] = ["matter", "darkenergy", "curvature", "radiation", "photons", "neutrinos"];
-const fullSkySr = 4 * Math.PI;
 /** Key/value pairs ZC.MODEL takes after its base model. */
 const modelPairs = 6;
 
@@ -152,7 +198,7 @@ const list: FunctionDef[] = [
   ofRedshift("PROPER_SCALE", "Mpc/rad", (x, zz) => x.angularDiameterDistanceMpc(zz), z, "kpc/arcsec"),
   {
     name: "SIZE",
-    args: [num("angle", { min: 0, max: { value: Math.PI, what: "180°" } }), z, model, unit("angle_unit", "rad", "arcsec", "angle"), unit("size_unit", "Mpc", "kpc")],
+    args: [angle, z, model, unit("angle_unit", "rad", "arcsec", "angle"), unit("size_unit", "Mpc", "kpc")],
     compute: (a) => m(a).properSizeMpc(n(a, "angle"), n(a, "z")),
   },
   {
@@ -163,11 +209,7 @@ const list: FunctionDef[] = [
   ofRedshift("VOLUME", "Mpc3", (x, zz) => x.comovingVolumeMpc3(zz), z, "Gpc3"),
   {
     name: "VOLUME_SHELL",
-    args: [
-      num("z1"), num("z2"),
-      num("area", { default: fullSkySr, blankMeansDefault: true, min: 0, max: { value: fullSkySr, what: "the whole sky" } }),
-      model, unit("unit", "Mpc3", "Gpc3"), unit("area_unit", "sr", "deg2", "area"),
-    ],
+    args: [num("z1"), num("z2"), area, model, unit("unit", "Mpc3", "Gpc3"), unit("area_unit", "sr", "deg2", "area")],
     compute: (a) => m(a).comovingVolumeShellMpc3(n(a, "z1"), n(a, "z2"), n(a, "area")),
   },
   ofRedshift("VOLUME_ELEMENT", "Mpc3/sr", (x, zz) => x.comovingVolumeElementMpc3Sr(zz)),
@@ -212,14 +254,108 @@ const list: FunctionDef[] = [
     compute: (a) => abFluxDensityJy(n(a, "m_ab")),
   },
   {
+    name: "DIST_LUM_ERR",
+    args: [z, err("z_err"), model, unit("unit", "Mpc")],
+    compute: (a) => luminosityDistanceErrorMpc(m(a), n(a, "z"), n(a, "z_err")),
+  },
+  {
+    name: "LUMINOSITY_ERR",
+    args: [amount("flux"), err("flux_err"), z, err("z_err"), model, unit("flux_unit", "W/m2", "W/m2", ["flux", "flux_err"]), unit("lum_unit", "W")],
+    compute: (a) => luminosityErrorW(m(a), n(a, "flux"), n(a, "flux_err"), n(a, "z"), n(a, "z_err")),
+  },
+  {
+    name: "LUMINOSITY_NU_ERR",
+    args: [
+      amount("flux_density"), err("flux_density_err"), z, err("z_err"), num("alpha"), err("alpha_err", { default: 0, blankMeansDefault: true }),
+      model, unit("in_unit", "Jy", "Jy", ["flux_density", "flux_density_err"]), unit("out_unit", "W/Hz"),
+    ],
+    compute: (a) =>
+      spectralLuminosityErrorWHz(
+        m(a), n(a, "flux_density") * janskySI, n(a, "flux_density_err") * janskySI, n(a, "z"), n(a, "z_err"), n(a, "alpha"), n(a, "alpha_err"),
+      ),
+  },
+  {
+    name: "MAG_ABS_ERR",
+    args: [err("m_err"), z, err("z_err"), err("kcorr_err", { default: 0, blankMeansDefault: true }), model],
+    compute: (a) => absoluteMagnitudeErrorMag(m(a), n(a, "m_err"), n(a, "z"), n(a, "z_err"), n(a, "kcorr_err")),
+  },
+  {
+    name: "SIZE_ERR",
+    args: [angle, err("angle_err"), z, err("z_err"), model, unit("angle_unit", "rad", "arcsec", ["angle", "angle_err"]), unit("size_unit", "Mpc", "kpc")],
+    compute: (a) => properSizeErrorMpc(m(a), n(a, "angle"), n(a, "angle_err"), n(a, "z"), n(a, "z_err")),
+  },
+  {
+    name: "LUMINOSITY_REST",
+    args: [
+      amount("flux_density"), z, num("alpha"), num("observed"), num("rest"), model,
+      optionalText("band_unit"), unit("in_unit", "Jy", "Jy", "flux_density"), optionalText("out_unit"),
+    ],
+    compute: (a) => {
+      const band = (a.band_unit as string) || "GHz";
+      const restHz = frequencyHz(n(a, "rest"), band, "rest");
+      const lnu = restFrameSpectralLuminosityWHz(
+        m(a), n(a, "flux_density") * janskySI, n(a, "z"), n(a, "alpha"), frequencyHz(n(a, "observed"), band, "observed"), restHz,
+      );
+      return inSpectralOrPowerUnit(a, lnu, restHz);
+    },
+  },
+  {
+    name: "MAG_BOL",
+    args: [num("lum", { min: 0, minExclusive: true }), unit("unit", "W", "W", "lum")],
+    compute: (a) => bolometricAbsoluteMagnitude(n(a, "lum")),
+  },
+  {
+    name: "LUM_BOL",
+    args: [mag("mag_bol"), unit("unit", "W")],
+    compute: (a) => bolometricLuminosityW(n(a, "mag_bol")),
+  },
+  {
+    name: "REDSHIFT_LIMIT",
+    args: [
+      num("lum", { min: 0, minExclusive: true }), num("flux_limit", { min: 0, minExclusive: true }), optionalAlpha, model,
+      optionalText("lum_unit"), optionalText("flux_unit"),
+    ],
+    compute: (a) => {
+      // with alpha, a spectral luminosity against a flux-density limit; without, bolometric
+      const alpha = n(a, "alpha");
+      const spectral = given(alpha);
+      const lum = n(a, "lum") * textUnitFactor(a, "lum_unit", spectral ? "W/Hz" : "W", spectral ? "W/Hz" : "W");
+      const limit = n(a, "flux_limit") * textUnitFactor(a, "flux_unit", spectral ? "Jy" : "W/m2", spectral ? "W/m2/Hz" : "W/m2");
+      return limitingRedshift(m(a), lum, limit, spectral ? alpha : -1);
+    },
+  },
+  {
+    name: "REDSHIFT_LIMIT_MAG",
+    args: [mag("abs_mag"), mag("mag_limit"), num("alpha", { default: -1, blankMeansDefault: true }), model],
+    compute: (a) => limitingRedshiftMag(m(a), n(a, "abs_mag"), n(a, "mag_limit"), n(a, "alpha")),
+  },
+  {
+    name: "VOLUME_MAX",
+    args: [num("z_max"), num("z_lo"), num("z_hi"), area, model, unit("unit", "Mpc3"), unit("area_unit", "sr", "deg2", "area")],
+    compute: (a) => maxVolumeMpc3(m(a), n(a, "z_max"), n(a, "z_lo"), n(a, "z_hi"), n(a, "area")),
+  },
+  {
+    name: "REDSHIFT_CMB",
+    args: [
+      num("z_helio", { min: -1, minExclusive: true }), num("ra"), num("dec", { min: -Math.PI / 2, max: { value: Math.PI / 2, what: "90°" } }),
+      unit("angle_unit", "rad", "deg", ["ra", "dec"]),
+    ],
+    compute: (a) => cmbFrameRedshift(n(a, "z_helio"), n(a, "ra"), n(a, "dec")),
+  },
+  {
+    name: "DIMMING",
+    args: [z, optionalAlpha],
+    compute: (a) => (given(n(a, "alpha")) ? spectralSurfaceBrightnessDimmingMag(n(a, "z"), n(a, "alpha")) : surfaceBrightnessDimmingMag(n(a, "z"))),
+  },
+  {
     name: "REDSHIFT",
     args: [num("value"), { kind: "text", name: "quantity", choices: Object.keys(inverses), scalar: true }, model, { kind: "text", name: "unit", scalar: true, optional: true }],
     compute: (a) => invert(m(a), a.quantity as string, n(a, "value"), a.unit as string),
   },
   {
     name: "CONVERT",
-    args: [num("value"), { kind: "text", name: "from", scalar: true }, { kind: "text", name: "to", scalar: true }],
-    compute: (a) => convertUnit(n(a, "value"), a.from as string, a.to as string),
+    args: [num("value"), { kind: "text", name: "from", scalar: true }, { kind: "text", name: "to", scalar: true }, model],
+    compute: (a) => convertUnit(n(a, "value"), a.from as string, a.to as string, m(a).h),
   },
   {
     name: "MODEL",

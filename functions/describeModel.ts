@@ -3,10 +3,10 @@
  * engine conventions (ZC.VERSION), so that every number a reader sees states its assumptions.
  */
 import { type Cosmology } from "../core/index.js";
-import packageJson from "../package.json";
+import { version } from "../package.json";
 
 /** zcell's version, from package.json. */
-export const zcellVersion: string = packageJson.version;
+export const zcellVersion: string = version;
 
 const fmt = (x: number, digits = 6) => Number(x.toPrecision(digits)).toString();
 

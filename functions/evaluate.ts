@@ -85,26 +85,60 @@ function planOf(def: FunctionDef): Plan {
   return plan;
 }
 
+/** Powers of h = H0/100 of the cell's model still to apply for h-scaled units: by argument, and on the result. */
+type HScaling = { args: [name: string, power: number][]; result: number };
+
 /**
- * The arguments read once per call whatever the shape of the others: units (their conversions, and
- * the factor of the result) and scalar texts (into a fresh args object).
+ * The arguments read once per call whatever the shape of the others: units (their conversions, the
+ * factor of the result, and any h-scaling left for the cell's model) and scalar texts (into a fresh
+ * args object).
  */
-function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): { conversions: Record<string, Conversion>; resultFactor: number; args: Args } {
+function readFixed(
+  def: FunctionDef,
+  raw: readonly unknown[],
+  plan: Plan,
+): { conversions: Record<string, Conversion>; resultFactor: number; args: Args; h: HScaling | undefined } {
   const conversions: Record<string, Conversion> = {};
   let resultFactor = 1;
+  let h: HScaling | undefined;
   const args: Args = {};
   for (const i of plan.units) {
     const spec = def.args[i] as Extract<ArgSpec, { kind: "unit" }>;
     const conversion = unitConversion(spec, raw[i]);
-    if (spec.applies === "result") resultFactor *= conversion.factor;
-    else conversions[spec.applies] = conversion;
+    if (conversion.hPower !== 0) h ??= { args: [], result: 0 };
+    if (spec.applies === "result") {
+      resultFactor *= conversion.factor;
+      if (h) h.result += conversion.hPower;
+    } else {
+      for (const name of typeof spec.applies === "string" ? [spec.applies] : spec.applies) {
+        conversions[name] = conversion;
+        if (conversion.hPower !== 0) h!.args.push([name, conversion.hPower]);
+      }
+    }
   }
   for (const i of plan.scalarTexts) {
     const spec = def.args[i] as Extract<ArgSpec, { kind: "text" }>;
     const text = toMatrix(raw[i])?.[0]?.[0];
     args[spec.name] = spec.optional && isBlank(text) ? "" : readText(spec, text);
   }
-  return { conversions, resultFactor, args };
+  return { conversions, resultFactor, args, h };
+}
+
+/** The arguments of one cell with h-scaled units applied (h of the cell's model), and the result's h factor. */
+function scaledByH(args: Args, h: HScaling): { args: Args; factor: number } {
+  const model = args.model;
+  if (!(model instanceof Cosmology)) throw new TypeError(messages.hScaledWithoutModel);
+  const scaled = { ...args };
+  for (const [name, power] of h.args) if (typeof scaled[name] === "number") scaled[name] = (scaled[name] as number) * model.h ** power;
+  return { args: scaled, factor: model.h ** h.result };
+}
+
+/** compute for one cell, with h-scaled units applied when the call has any. */
+function computeCell(def: FunctionDef, args: Args, h: HScaling | undefined): number | string {
+  if (!h) return def.compute!(args);
+  const scaled = scaledByH(args, h);
+  const result = def.compute!(scaled.args);
+  return typeof result === "number" ? result * scaled.factor : result;
 }
 
 /** Model resolution for single cells, made again only when the settings are read anew. */
@@ -117,7 +151,7 @@ let resolverFor: { active: ActiveModelSetting; resolve: (text: string) => Cosmol
 function evaluateSingle(def: FunctionDef, raw: readonly unknown[], active: ActiveModelSetting): Cell | undefined {
   const plan = planOf(def);
   const specs = def.args;
-  const { conversions, resultFactor, args } = readFixed(def, raw, plan);
+  const { conversions, resultFactor, args, h } = readFixed(def, raw, plan);
   if (resolverFor?.active !== active) resolverFor = { active, resolve: (text) => singleModel(text, active) };
   const resolve = resolverFor.resolve;
   let error: Cell | undefined;
@@ -136,7 +170,7 @@ function evaluateSingle(def: FunctionDef, raw: readonly unknown[], active: Activ
   }
   if (error !== undefined) return error instanceof CellError ? inFunction(error, def.name, new Map()) : error;
   try {
-    const result = def.compute!(args);
+    const result = computeCell(def, args, h);
     const cell = typeof result === "number" ? cleanNumber(result * resultFactor, def.name) : result;
     return cell instanceof CellError ? inFunction(cell, def.name, new Map()) : cell;
   } catch (e) {
@@ -154,9 +188,8 @@ function singleModel(text: string, active: ActiveModelSetting): Cosmology | Cell
 }
 
 function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: ActiveModelSetting, seen: { error: boolean }): Cell[][] {
-  const compute = def.compute!;
   const plan = planOf(def);
-  const { conversions, resultFactor, args } = readFixed(def, raw, plan);
+  const { conversions, resultFactor, args, h } = readFixed(def, raw, plan);
   const prepared: Prepared[] = [];
   const specs = def.args;
   for (const index of plan.cells) {
@@ -237,7 +270,7 @@ function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: Active
   };
   const cellOf = (): Cell => {
     try {
-      const result = compute(args);
+      const result = computeCell(def, args, h);
       return typeof result === "number" ? cleanNumber(result * resultFactor, def.name) : result;
     } catch (e) {
       return classify(e, def.name);
@@ -248,7 +281,7 @@ function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: Active
   const p = varying[0];
   const kernel = def.kernel !== undefined && p !== undefined && def.kernel.arg === p.spec.name ? def.kernel.of : undefined;
   const spec = p?.spec as Extract<ArgSpec, { kind: "number" }> | undefined;
-  if (kernel && spec && constantCell === undefined && varying.length === 1 && cols === 1 && !spec.magnitude && spec.min === undefined && spec.max === undefined) {
+  if (kernel && spec && h === undefined && constantCell === undefined && varying.length === 1 && cols === 1 && !spec.magnitude && spec.min === undefined && spec.max === undefined) {
     // the common range: one column of numbers (a column of redshifts) against constant arguments
     const name = spec.name;
     const matrix = p.matrix!;

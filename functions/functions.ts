@@ -372,6 +372,204 @@ export function FLUX_AB(m_ab: any[][], unit?: string): any[][] {
 }
 
 /**
+ * 1σ error of the luminosity distance from a redshift error, |dD_L/dz| σ_z (first order, exact derivative), in Mpc unless a unit is given.
+ * @customfunction DIST_LUM_ERR DIST_LUM_ERR
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param z_err 1σ error of z, ≥ 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [unit] Output unit, default "Mpc" (e.g. "Mpc/h").
+ * @returns Error of D_L (Mpc by default).
+ */
+export function DIST_LUM_ERR(z: any[][], z_err: any[][], model?: any[][], unit?: string): any[][] {
+  return callFromSheet(d.DIST_LUM_ERR, [z, z_err, model, unit]);
+}
+
+/**
+ * 1σ error of a bolometric luminosity from independent flux and redshift errors (first order): σ_L/L = √((σ_F/F)² + (2σ_z dlnD_L/dz)²).
+ * @customfunction LUMINOSITY_ERR LUMINOSITY_ERR
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param flux Bolometric flux, ≥ 0, in W/m2 by default (value or range).
+ * @param flux_err 1σ error of the flux, ≥ 0, in the flux's unit (value or range).
+ * @param z Redshift, > 0 (value or range).
+ * @param z_err 1σ error of z, ≥ 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [flux_unit] Unit of flux and flux_err, default "W/m2" (e.g. "erg/s/cm2").
+ * @param [lum_unit] Output unit, default "W" (e.g. "erg/s", "Lsun").
+ * @returns Error of the luminosity (W by default).
+ */
+export function LUMINOSITY_ERR(flux: any[][], flux_err: any[][], z: any[][], z_err: any[][], model?: any[][], flux_unit?: string, lum_unit?: string): any[][] {
+  return callFromSheet(d.LUMINOSITY_ERR, [flux, flux_err, z, z_err, model, flux_unit, lum_unit]);
+}
+
+/**
+ * 1σ error of a spectral luminosity L_ν (as ZC.LUMINOSITY_NU) from independent errors of flux density, z and spectral index (first order).
+ * @customfunction LUMINOSITY_NU_ERR LUMINOSITY_NU_ERR
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param flux_density Observed flux density, ≥ 0, in Jy by default (value or range).
+ * @param flux_density_err 1σ error of the flux density, ≥ 0, in its unit (value or range).
+ * @param z Redshift, > 0 (value or range).
+ * @param z_err 1σ error of z, ≥ 0 (value or range).
+ * @param alpha Spectral index α of S_ν ∝ ν^α (value or range).
+ * @param [alpha_err] 1σ error of α, ≥ 0; blank = 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [in_unit] Unit of flux_density and its error, default "Jy" (e.g. "mJy").
+ * @param [out_unit] Output unit, default "W/Hz".
+ * @returns Error of L_ν (W/Hz by default).
+ */
+export function LUMINOSITY_NU_ERR(flux_density: any[][], flux_density_err: any[][], z: any[][], z_err: any[][], alpha: any[][], alpha_err?: any[][], model?: any[][], in_unit?: string, out_unit?: string): any[][] {
+  return callFromSheet(d.LUMINOSITY_NU_ERR, [flux_density, flux_density_err, z, z_err, alpha, alpha_err, model, in_unit, out_unit]);
+}
+
+/**
+ * 1σ error of an absolute magnitude M = m − μ − K from independent errors of m, z and K (first order): √(σ_m² + (dμ/dz σ_z)² + σ_K²).
+ * @customfunction MAG_ABS_ERR MAG_ABS_ERR
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param m_err 1σ error of the apparent magnitude, ≥ 0 (value or range).
+ * @param z Redshift, > 0 (value or range).
+ * @param z_err 1σ error of z, ≥ 0 (value or range).
+ * @param [kcorr_err] 1σ error of the K-correction, ≥ 0; blank = 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @returns Error of M (mag).
+ */
+export function MAG_ABS_ERR(m_err: any[][], z: any[][], z_err: any[][], kcorr_err?: any[][], model?: any[][]): any[][] {
+  return callFromSheet(d.MAG_ABS_ERR, [m_err, z, z_err, kcorr_err, model]);
+}
+
+/**
+ * 1σ error of a proper size (as ZC.SIZE) from independent angle and redshift errors (first order), in kpc unless a unit is given.
+ * @customfunction SIZE_ERR SIZE_ERR
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param angle Angle, ≥ 0, in arcsec by default (value or range).
+ * @param angle_err 1σ error of the angle, ≥ 0, in the angle's unit (value or range).
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param z_err 1σ error of z, ≥ 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [angle_unit] Unit of angle and angle_err, default "arcsec".
+ * @param [size_unit] Output unit, default "kpc".
+ * @returns Error of the size (kpc by default).
+ */
+export function SIZE_ERR(angle: any[][], angle_err: any[][], z: any[][], z_err: any[][], model?: any[][], angle_unit?: string, size_unit?: string): any[][] {
+  return callFromSheet(d.SIZE_ERR, [angle, angle_err, z, z_err, model, angle_unit, size_unit]);
+}
+
+/**
+ * Rest-frame spectral luminosity at another frequency or wavelength, from a flux density observed at one, for a power law S_ν ∝ ν^α: L_ν(rest) = 4πD_L² S_ν (1+z)^−(1+α) (rest/observed)^α.
+ * @customfunction LUMINOSITY_REST LUMINOSITY_REST
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param flux_density Flux density observed at `observed`, ≥ 0, in Jy by default (value or range).
+ * @param z Redshift, > 0 (value or range).
+ * @param alpha Spectral index α of S_ν ∝ ν^α (value or range).
+ * @param observed Observed frequency, wavelength or energy, > 0, in band_unit (value or range).
+ * @param rest Rest-frame frequency, wavelength or energy wanted, > 0, in band_unit (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [band_unit] Unit of observed and rest, default "GHz" (e.g. "MHz", "Angstrom", "nm", "um", "eV").
+ * @param [in_unit] Unit of flux_density, default "Jy".
+ * @param [out_unit] Default "W/Hz" (L_ν); a power unit ("W", "erg/s", "Lsun") gives ν L_ν = λ L_λ.
+ * @returns L_ν at the rest frequency (W/Hz), or ν L_ν in a power unit.
+ */
+export function LUMINOSITY_REST(flux_density: any[][], z: any[][], alpha: any[][], observed: any[][], rest: any[][], model?: any[][], band_unit?: string, in_unit?: string, out_unit?: string): any[][] {
+  return callFromSheet(d.LUMINOSITY_REST, [flux_density, z, alpha, observed, rest, model, band_unit, in_unit, out_unit]);
+}
+
+/**
+ * Absolute bolometric magnitude of a luminosity, −2.5 log10(L / 3.0128e28 W) (IAU 2015 Resolution B2).
+ * @customfunction MAG_BOL MAG_BOL
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param lum Bolometric luminosity, > 0, in W by default (value or range).
+ * @param [unit] Unit of lum, default "W" (e.g. "Lsun", "erg/s").
+ * @returns M_bol (mag).
+ */
+export function MAG_BOL(lum: any[][], unit?: string): any[][] {
+  return callFromSheet(d.MAG_BOL, [lum, unit]);
+}
+
+/**
+ * Bolometric luminosity of an absolute bolometric magnitude, 3.0128e28 W × 10^(−0.4 M_bol) (IAU 2015 Resolution B2).
+ * @customfunction LUM_BOL LUM_BOL
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param mag_bol Absolute bolometric magnitude (value or range).
+ * @param [unit] Output unit, default "W" (e.g. "Lsun").
+ * @returns Luminosity (W by default).
+ */
+export function LUM_BOL(mag_bol: any[][], unit?: string): any[][] {
+  return callFromSheet(d.LUM_BOL, [mag_bol, unit]);
+}
+
+/**
+ * Largest redshift at which a source stays at or above a flux limit (the first crossing): bolometric, or with alpha a spectral luminosity against a flux-density limit (S_ν = L_ν (1+z)^(1+α) / 4πD_L²).
+ * @customfunction REDSHIFT_LIMIT REDSHIFT_LIMIT
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param lum Luminosity, > 0: bolometric (W by default), or L_ν (W/Hz by default) when alpha is given (value or range).
+ * @param flux_limit Survey limit, > 0: flux (W/m2 by default), or flux density (Jy by default) when alpha is given (value or range).
+ * @param [alpha] Spectral index α of S_ν ∝ ν^α; blank = bolometric (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [lum_unit] Unit of lum, default "W", or "W/Hz" with alpha.
+ * @param [flux_unit] Unit of flux_limit, default "W/m2", or "Jy" with alpha (e.g. "erg/s/cm2", "mJy").
+ * @returns z_max.
+ */
+export function REDSHIFT_LIMIT(lum: any[][], flux_limit: any[][], alpha?: any[][], model?: any[][], lum_unit?: string, flux_unit?: string): any[][] {
+  return callFromSheet(d.REDSHIFT_LIMIT, [lum, flux_limit, alpha, model, lum_unit, flux_unit]);
+}
+
+/**
+ * Largest redshift at which a source of absolute magnitude M stays at or brighter than a magnitude limit: M + μ(z) + K(z) ≤ limit, K the power-law K-correction.
+ * @customfunction REDSHIFT_LIMIT_MAG REDSHIFT_LIMIT_MAG
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param abs_mag Absolute magnitude M (value or range).
+ * @param mag_limit Limiting apparent magnitude (value or range).
+ * @param [alpha] Spectral index α for K = −2.5(1+α)log10(1+z); blank = −1 (no K-correction) (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @returns z_max.
+ */
+export function REDSHIFT_LIMIT_MAG(abs_mag: any[][], mag_limit: any[][], alpha?: any[][], model?: any[][]): any[][] {
+  return callFromSheet(d.REDSHIFT_LIMIT_MAG, [abs_mag, mag_limit, alpha, model]);
+}
+
+/**
+ * V_max of the 1/V_max estimator (Schmidt 1968): comoving volume between z_lo and min(z_max, z_hi) over the survey area, 0 when z_max ≤ z_lo; in Mpc3 unless a unit is given.
+ * @customfunction VOLUME_MAX VOLUME_MAX
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z_max The source's limiting redshift (e.g. from ZC.REDSHIFT_LIMIT), ≥ 0 (value or range).
+ * @param z_lo Lower redshift bound of the sample, ≥ 0 (value or range).
+ * @param z_hi Upper redshift bound of the sample, ≥ z_lo (value or range).
+ * @param [area] Survey area, in deg2 by default; blank = whole sky (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [unit] Output unit, default "Mpc3" (e.g. "Gpc3", "(Mpc/h)3").
+ * @param [area_unit] Unit of area, default "deg2" (e.g. "sr").
+ * @returns V_max (Mpc3 by default).
+ */
+export function VOLUME_MAX(z_max: any[][], z_lo: any[][], z_hi: any[][], area?: any[][], model?: any[][], unit?: string, area_unit?: string): any[][] {
+  return callFromSheet(d.VOLUME_MAX, [z_max, z_lo, z_hi, area, model, unit, area_unit]);
+}
+
+/**
+ * Redshift in the CMB frame: corrects a heliocentric redshift for the Sun's motion, 369.82 km/s towards galactic (l, b) = (264.021°, 48.253°) (Planck 2018 CMB dipole).
+ * @customfunction REDSHIFT_CMB REDSHIFT_CMB
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z_helio Heliocentric redshift, > −1 (value or range).
+ * @param ra Right ascension (ICRS), in deg by default (value or range).
+ * @param dec Declination (ICRS), −90° … 90°, in deg by default (value or range).
+ * @param [angle_unit] Unit of ra and dec, default "deg" (e.g. "rad").
+ * @returns z_cmb.
+ */
+export function REDSHIFT_CMB(z_helio: any[][], ra: any[][], dec: any[][], angle_unit?: string): any[][] {
+  return callFromSheet(d.REDSHIFT_CMB, [z_helio, ra, dec, angle_unit]);
+}
+
+/**
+ * Surface-brightness dimming in magnitudes: 10 log10(1+z) bolometric (Tolman), or 2.5 (3 − α) log10(1+z) per unit frequency at a fixed observed frequency for S_ν ∝ ν^α.
+ * @customfunction DIMMING DIMMING
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param [alpha] Spectral index α; blank = bolometric (value or range).
+ * @returns Dimming (mag).
+ */
+export function DIMMING(z: any[][], alpha?: any[][]): any[][] {
+  return callFromSheet(d.DIMMING, [z, alpha]);
+}
+
+/**
  * Redshift at which a quantity takes a value (inverse): quantity is "DIST_LUM", "DIST_LOS", "DIST_TRANS", "DIST_ANG" (lower branch), "DIST_LIGHT", "MODULUS", "LOOKBACK", "AGE" or "VOLUME".
  * @customfunction REDSHIFT REDSHIFT
  * @helpurl https://localhost:3000/help.html#function-reference
@@ -392,10 +590,11 @@ export function REDSHIFT(value: any[][], quantity: string, model?: any[][], unit
  * @param value Value (value or range).
  * @param from Unit of value, e.g. "Mpc".
  * @param to Wanted unit, e.g. "Gly".
+ * @param [model] Cosmology for h-scaled units (Mpc/h, (Mpc/h)3, h-1 Msun: h = H0/100); blank = workbook's active model.
  * @returns The value in the wanted unit.
  */
-export function CONVERT(value: any[][], from: string, to: string): any[][] {
-  return callFromSheet(d.CONVERT, [value, from, to]);
+export function CONVERT(value: any[][], from: string, to: string, model?: any[][]): any[][] {
+  return callFromSheet(d.CONVERT, [value, from, to, model]);
 }
 
 /**

@@ -26,6 +26,7 @@ export const messages = {
     `${arg}: "${value}" is not one of ${choices.join(", ")}`,
   notFiniteResult: (fn: string) => `${fn}: the result is not a finite number for these arguments`,
   model: (detail: string) => `model: ${detail}`,
+  hScaledWithoutModel: "units in h = H0/100 (such as Mpc/h) need a model, and this function takes none",
   notGiven: (what: string) => `${what} is not given in this model`,
   noEquality: "z_eq: this model has no radiation (Tcmb = 0), so no matter–radiation equality",
   internal: (fn: string, detail: string) => `${fn}: unexpected problem (${detail}); please report it`,

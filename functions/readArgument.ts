@@ -2,7 +2,7 @@
  * Reading one argument as Excel passes it: a matrix or a single cell, numbers (text numbers too, with
  * the domain checked in the unit the user gave), text, units (conversions cached), models.
  */
-import { conversionFactor, type Cosmology } from "../core/index.js";
+import { scaledConversion, type Cosmology } from "../core/index.js";
 import type { ActiveModelSetting } from "./activeModel.js";
 import { CellError, classify, isIncomingError } from "./cellError.js";
 import type { ArgSpec } from "./FunctionDef.js";
@@ -12,8 +12,11 @@ import { isBlank } from "./modelArgument.js";
 /** What a blank input gives: a blank result. */
 export const blank = "";
 
-/** How a number argument is converted into its reference unit: the factor and the unit the user gave. */
-export type Conversion = { factor: number; unit: string };
+/**
+ * How a number argument is converted into its reference unit: the factor, the power of h = H0/100 of
+ * the cell's model still to apply (h-scaled units such as Mpc/h; 0 otherwise) and the unit the user gave.
+ */
+export type Conversion = { factor: number; hPower: number; unit: string };
 /** Text that Excel's own functions would read as a number (CSV and archive pastes). */
 const numberText = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 
@@ -40,8 +43,8 @@ export function unitConversion(spec: Extract<ArgSpec, { kind: "unit" }>, raw: un
   if (cached) return cached;
   let conversion: Conversion;
   try {
-    const factor = spec.applies === "result" ? conversionFactor(spec.unit, text) : conversionFactor(text, spec.unit);
-    conversion = { factor, unit: text.trim() };
+    const { factor, hPower } = spec.applies === "result" ? scaledConversion(spec.unit, text) : scaledConversion(text, spec.unit);
+    conversion = { factor, hPower, unit: text.trim() };
   } catch (e) {
     throw new CellError("value", messages.unitArgument(spec.name, (e as Error).message));
   }

@@ -1,0 +1,60 @@
+/**
+ * Exact derivatives of the distances with respect to redshift, for propagating redshift errors:
+ * dD_C/dz = D_H / E(z) (Hogg 1999 eq. 15 differentiated), dD_M/dz = dD_C/dz × S_k'(D_C/D_H) with
+ * S_k' = cosh(√Ωk χ) (open), 1 (flat) or cos(√|Ωk| χ) (closed) (eq. 16 differentiated), and the
+ * products that make D_L = (1+z) D_M and D_A = D_M/(1+z). No finite differences.
+ */
+import type { Cosmology } from "./Cosmology.js";
+
+/**
+ * Derivative of the line-of-sight comoving distance, dD_C/dz = D_H / E(z).
+ * @param model the cosmology
+ * @param z redshift ≥ 0
+ * @returns Mpc per unit redshift; e.g. at z = 0 it is D_H (4430.89 Mpc for P18-BAO)
+ */
+export function comovingDistanceSlopeMpc(model: Cosmology, z: number): number {
+  return model.hubbleDistanceMpc / model.expansionRate(z);
+}
+
+/**
+ * Derivative of the transverse comoving distance, dD_M/dz = (D_H / E(z)) S_k'(D_C/D_H).
+ * @param model the cosmology
+ * @param z redshift ≥ 0
+ * @returns Mpc per unit redshift; equal to dD_C/dz in a flat model
+ */
+export function transverseComovingDistanceSlopeMpc(model: Cosmology, z: number): number {
+  const chi = model.comovingDistanceMpc(z) / model.hubbleDistanceMpc;
+  return comovingDistanceSlopeMpc(model, z) * model.transverseSlope(chi);
+}
+
+/**
+ * Derivative of the luminosity distance, dD_L/dz = D_M + (1+z) dD_M/dz.
+ * @param model the cosmology
+ * @param z redshift ≥ 0
+ * @returns Mpc per unit redshift; e.g. Einstein–de Sitter, H0 = 70, z = 1: D_H (2 − 1/√2) = 5537.14 Mpc
+ */
+export function luminosityDistanceSlopeMpc(model: Cosmology, z: number): number {
+  return model.transverseComovingDistanceMpc(z) + (1 + z) * transverseComovingDistanceSlopeMpc(model, z);
+}
+
+/**
+ * Derivative of the angular-diameter distance, dD_A/dz = (dD_M/dz)/(1+z) − D_M/(1+z)²; zero where
+ * D_A has its maximum.
+ * @param model the cosmology
+ * @param z redshift ≥ 0
+ * @returns Mpc per unit redshift; e.g. Einstein–de Sitter at z = 1.25: 0
+ */
+export function angularDiameterDistanceSlopeMpc(model: Cosmology, z: number): number {
+  const zp = 1 + z;
+  return transverseComovingDistanceSlopeMpc(model, z) / zp - model.transverseComovingDistanceMpc(z) / (zp * zp);
+}
+
+/**
+ * Logarithmic derivative of the luminosity distance, d ln|D_L|/dz = 1/(1+z) + (dD_M/dz)/D_M.
+ * @param model the cosmology
+ * @param z redshift > 0
+ * @returns per unit redshift; e.g. ≈ 1/z for z ≪ 1
+ */
+export function luminosityDistanceLogSlope(model: Cosmology, z: number): number {
+  return 1 / (1 + z) + transverseComovingDistanceSlopeMpc(model, z) / model.transverseComovingDistanceMpc(z);
+}
