@@ -20,7 +20,7 @@ describe("galactic coordinates (Hipparcos definition, ESA SP-1200 Vol. 1 §1.5.3
     [192.85948,   27.12825,   NaN,         90,         "the north galactic pole by definition (l undefined)"],
     [12.85948,    -27.12825,  NaN,         -90,        "the south galactic pole: the antipode of the north pole"],
     [0,           90,         122.93192,   27.12825,   "the north celestial pole: l_NCP and b = δ_NGP by definition"],
-  ] as const)("(%d°, %d°) is at l = %d°, b = %d°", (ra, dec, l, b) => {
+  ] as const)("(%d°, %d°) is at l = %d°, b = %d°", (ra, dec, l, b, _source) => {
     const g = galacticCoordinatesRad(ra * degree, dec * degree);
     expect(Math.abs(g.b / degree - b)).toBeLessThanOrEqual(1e-9);
     if (!Number.isNaN(l)) expect(Math.abs(g.l / degree - l)).toBeLessThanOrEqual(1e-9);
