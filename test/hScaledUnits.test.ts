@@ -25,7 +25,7 @@ describe("h-scaled units", () => {
     ["h-1 Msun",    1.988409870698051e30,                  -1,        "halo masses in h⁻¹ M☉ (common practice)"],
     ["h3 Mpc-3",    3.0856775814913673e22 ** -3,           3,         "number density in h³ Mpc⁻³ (common practice)"],
     ["kpc/h",       3.0856775814913673e19,                 -1,        "SI prefix on pc"],
-  ] as const)("%s has the SI factor %d and h^%d", (text, factor, power) => {
+  ] as const)("%s has the SI factor %d and h^%d", (text, factor, power, _source) => {
     const u = parseUnit(text);
     expectRelative(u.factor, factor, 1e-14, text);
     expect(u.hPower).toBe(power);
@@ -36,7 +36,7 @@ describe("h-scaled units", () => {
     ["h",       3600,       [0, 0, 1, 0, 0],               "FITS 4.0 Table 4: h is the hour"],
     ["km/h",    1 / 3.6,    [1, 0, -1, 0, 0],              "the hour with a length that is not a parsec"],
     ["m h-1",   1 / 3600,   [1, 0, -1, 0, 0],              "the hour with a power"],
-  ] as const)("%s stays the hour outside parsec and solar units", (text, factor, dims) => {
+  ] as const)("%s stays the hour outside parsec and solar units", (text, factor, dims, _source) => {
     const u = parseUnit(text);
     expectRelative(u.factor, factor, 1e-15, text);
     expect([...u.dimensions]).toEqual(dims);
@@ -92,7 +92,7 @@ describe("band units: frequencies, wavelengths and photon energies", () => {
     [2.2,     "um",       299792458 / 2.2e-6,            1e-15, "ν = c/λ"],
     [1,       "eV",       2.417989242084918e14,          1e-15, "ν = E/h with exact SI 2019 e and h (1.602176634e-19 / 6.62607015e-34)"],
     [2,       "keV",      2 * 2.417989242084918e17,      1e-15, "SI prefix on eV"],
-  ] as const)("%d %s is %d Hz", (value, unit, hz, tol) => {
+  ] as const)("%d %s is %d Hz", (value, unit, hz, tol, _source) => {
     expectRelative(frequencyHz(value, unit, "band"), hz, tol, `${value} ${unit}`);
   });
 

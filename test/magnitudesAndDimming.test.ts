@@ -16,7 +16,7 @@ describe("bolometric magnitudes (IAU 2015 Resolution B2)", () => {
     [3.0128e28,    "W",      0,       1e-15,  "IAU 2015 B2: the zero point L0 = 3.0128e28 W"],
     [3.0128e35,    "erg/s",  0,       1e-15,  "the zero point in erg/s (CGS erg = 1e-7 J)"],
     [3.0128e30,    "W",      -5,      1e-14,  "100 × L0 is 5 mag brighter (definition of the magnitude)"],
-  ] as const)("MAG_BOL(%d %s) = %d", (lum, unit, mag, tol) => {
+  ] as const)("MAG_BOL(%d %s) = %d", (lum, unit, mag, tol, _source) => {
     expect(Math.abs((one("MAG_BOL", lum, unit) as number) - mag)).toBeLessThanOrEqual(tol);
   });
 
@@ -41,7 +41,7 @@ describe("surface-brightness dimming", () => {
     [1,     0,     2 ** -3,                         "S_ν ∝ ν^α seen at a fixed observed frequency: (1+z)^(α−3) (common practice)"],
     [2,     -0.7,  3 ** -3.7,                       "the same"],
     [0.5,   2,     1.5 ** -1,                       "the same (Rayleigh–Jeans-like α = 2)"],
-  ] as const)("per unit frequency: z = %d, α = %d", (z, alpha, ratio) => {
+  ] as const)("per unit frequency: z = %d, α = %d", (z, alpha, ratio, _source) => {
     expectRelative(10 ** (-0.4 * (one("DIMMING", z, alpha) as number)), ratio, 1e-13, `z=${z}`);
   });
 

@@ -70,7 +70,7 @@ describe("exact redshift derivatives of the distances", () => {
     [0.5,     2 - 1 / Math.sqrt(1.5),            "Einstein–de Sitter D_L = 2 D_H (1+z − √(1+z)) (Hogg 1999 eq. 21 with eq. 15 closed form), differentiated"],
     [1,       2 - 1 / Math.sqrt(2),              "the same"],
     [3,       2 - 1 / 2,                         "the same"],
-  ] as const)("Einstein–de Sitter at z = %d: dD_L/dz = D_H (2 − 1/√(1+z))", (z, expected) => {
+  ] as const)("Einstein–de Sitter at z = %d: dD_L/dz = D_H (2 − 1/√(1+z))", (z, expected, _source) => {
     const eds = Cosmology.fromSpec("EDS");
     expectRelative(luminosityDistanceSlopeMpc(eds, z) / eds.hubbleDistanceMpc, expected, 1e-12, `z=${z}`);
   });
