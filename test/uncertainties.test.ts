@@ -127,12 +127,13 @@ describe("the worksheet error functions", () => {
   const m = Cosmology.fromSpec("P18-BAO");
 
   test.each([
+    // function            arguments with zero errors   result unit
     ["DIST_LUM_ERR", [1, 0], "Mpc"],
     ["LUMINOSITY_ERR", [1e-16, 0, 1, 0], "W"],
     ["LUMINOSITY_NU_ERR", [0.01, 0, 1, 0, -0.7, 0], "W/Hz"],
     ["MAG_ABS_ERR", [0, 1, 0, 0], "mag"],
     ["SIZE_ERR", [2, 0, 1, 0], "kpc"],
-  ] as const)("%s gives exactly 0 when every error is 0", (name, args) => {
+  ] as const)("%s gives exactly 0 (in %s) when every error is 0", (name, args, _unit) => {
     expect(one(name, ...args)).toBe(0);
   });
 
