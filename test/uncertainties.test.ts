@@ -133,7 +133,7 @@ describe("the worksheet error functions", () => {
     ["LUMINOSITY_NU_ERR", [0.01, 0, 1, 0, -0.7, 0], "W/Hz"],
     ["MAG_ABS_ERR", [0, 1, 0, 0], "mag"],
     ["SIZE_ERR", [2, 0, 1, 0], "kpc"],
-  ] as const)("%s gives exactly 0 (in %s) when every error is 0", (name, args, _unit) => {
+  ] as const)("%s gives exactly 0 when every error is 0", (name, args, _unit) => {
     expect(one(name, ...args)).toBe(0);
   });
 
