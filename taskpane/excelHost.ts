@@ -131,6 +131,49 @@ export async function writeBlock(address: string, cells: (string | number)[][]):
   });
 }
 
+/** A chart to insert: lines of values (live ranges of the sheet) against a redshift range, titled. */
+export interface ChartRequest {
+  /** The redshift column, e.g. "D11:D14". */
+  x: string;
+  /** One line per model: its name and its column of values. */
+  series: { name: string; values: string }[];
+  title: string;
+  xTitle: string;
+  yTitle: string;
+  /** The cell the chart's top-left corner goes to. */
+  at: string;
+}
+
+/** Whether a chart's series can be set from ranges here (ChartSeriesCollection.add, setValues, setXAxisValues: ExcelApi 1.7, @types/office-js). */
+export function chartSeriesSupported(): boolean {
+  return Office.context.requirements.isSetSupported("ExcelApi", "1.7");
+}
+
+/**
+ * Inserts an XY chart through Excel's charts API. The series Excel makes from the source range are
+ * replaced by ours, each named and given both of its ranges, so what is drawn does not depend on how
+ * Excel reads a range; the chart reads the cells, which stay the source of truth.
+ */
+export async function insertChart(sheet: string | undefined, chart: ChartRequest): Promise<void> {
+  await Excel.run(async (context) => {
+    const ws = sheet ? context.workbook.worksheets.getItem(sheet) : context.workbook.worksheets.getActiveWorksheet();
+    const added = ws.charts.add("XYScatterLinesNoMarkers", ws.getRange(chart.series[0].values), "Columns");
+    added.series.load("items");
+    await context.sync();
+    for (const guessed of added.series.items) guessed.delete();
+    for (const s of chart.series) {
+      const series = added.series.add(s.name);
+      series.setXAxisValues(ws.getRange(chart.x));
+      series.setValues(ws.getRange(s.values));
+    }
+    added.title.text = chart.title;
+    added.axes.categoryAxis.title.text = chart.xTitle;
+    added.axes.valueAxis.title.text = chart.yTitle;
+    added.setPosition(chart.at);
+    await context.sync();
+  });
+}
+
 /** Whether ExcelApi 1.18 cell notes exist here (else threaded comments, ExcelApi 1.10, carry the provenance). */
 export function notesSupported(): boolean {
   return Office.context.requirements.isSetSupported("ExcelApi", "1.18");

@@ -5,8 +5,8 @@
 import { parseModelSpec } from "../core/index.js";
 import { columnName, qualifiedAddress, splitAddress, topLeft } from "./cellAddress.js";
 import { $ } from "./dom.js";
-import { readReference, readSelection, writeBlock } from "./excelHost.js";
-import { planTableForColumn, planTableWithRedshifts, redshiftSteps, tableQuantities, type TablePlan } from "./whatIfTable.js";
+import { chartSeriesSupported, insertChart, readReference, readSelection, writeBlock } from "./excelHost.js";
+import { chartTitle, planTableForColumn, planTableWithRedshifts, redshiftSteps, tableQuantities, type TablePlan } from "./whatIfTable.js";
 
 let pendingTable: TablePlan | undefined;
 
@@ -32,6 +32,28 @@ async function planTable(): Promise<{ plan: TablePlan; sheet?: string }> {
   return { plan: planTableWithRedshifts(quantity, zs, models, row, col), sheet };
 }
 
+/** Inserts a chart of the table to its right; says what happened. */
+async function chartOf(plan: TablePlan, sheet: string | undefined): Promise<string> {
+  if (!chartSeriesSupported()) return "No chart: this Excel lacks the chart series API (ExcelApi 1.7).";
+  const quantity = $<HTMLSelectElement>("table-quantity").value;
+  const models = plan.chart.series.map((s) => s.name);
+  const { row } = topLeft(plan.area.split(":")[0]);
+  const right = topLeft(plan.area.split(":")[1]).col;
+  try {
+    await insertChart(sheet, {
+      x: plan.chart.z,
+      series: plan.chart.series,
+      title: chartTitle(quantity, models),
+      xTitle: "redshift z",
+      yTitle: tableQuantities[quantity] ?? quantity,
+      at: `${columnName(right + 2)}${row}`,
+    });
+  } catch (e) {
+    return `No chart: ${(e as Error).message}`;
+  }
+  return `Chart of ${models.length} model${models.length === 1 ? "" : "s"} added beside it; it reads the table's cells.`;
+}
+
 /** Fills the quantity list and wires the panel's buttons. */
 export function setupTables(): void {
   const q = $<HTMLSelectElement>("table-quantity");
@@ -42,6 +64,7 @@ export function setupTables(): void {
     await writeBlock(blockAddress(plan, sheet), plan.cells);
     $("table-confirm").hidden = true;
     status.textContent = `Inserted a ${plan.cells.length}-row table with one live formula at ${plan.anchor}.`;
+    if ($<HTMLInputElement>("table-chart").checked) status.textContent += ` ${await chartOf(plan, sheet)}`;
   };
   $("insert-table").addEventListener("click", async () => {
     status.textContent = "";

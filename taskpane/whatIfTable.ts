@@ -40,6 +40,18 @@ export interface TablePlan {
   cells: (string | number)[][];
   /** The whole area the table occupies once the formula spills, e.g. "C3:F12". */
   area: string;
+  /** What a chart of the table plots: the redshift column and each model's column of values (addresses). */
+  chart: { z: string; series: { name: string; values: string }[] };
+}
+
+/** A chart's title: the quantity with its unit, against z, and the models. */
+export function chartTitle(quantity: string, models: string[]): string {
+  return `${tableQuantities[quantity] ?? quantity} against redshift — ${models.join(", ")}`;
+}
+
+/** The column of rows `first`…`last` of each model (columns from `col` on), as series of a chart. */
+function seriesOf(models: string[], col: number, first: number, last: number): { name: string; values: string }[] {
+  return models.map((name, j) => ({ name, values: `${columnName(col + j)}${first}:${columnName(col + j)}${last}` }));
 }
 
 /**
@@ -56,7 +68,13 @@ export function planTableWithRedshifts(quantity: string, redshifts: number[], mo
   const modelRow = `$${first}$${row}:$${last}$${row}`;
   const cells: (string | number)[][] = [["z", ...models]];
   redshifts.forEach((z, i) => cells.push([z, ...models.map((_, j) => (i === 0 && j === 0 ? `=ZC.${quantity}(${zRange},${modelRow})` : ""))]));
-  return { anchor: `${zCol}${row}`, cells, area: `${zCol}${row}:${last}${row + redshifts.length}` };
+  const [top, bottom] = [row + 1, row + redshifts.length];
+  return {
+    anchor: `${zCol}${row}`,
+    cells,
+    area: `${zCol}${row}:${last}${bottom}`,
+    chart: { z: `${zCol}${top}:${zCol}${bottom}`, series: seriesOf(models, col + 1, top, bottom) },
+  };
 }
 
 /**
@@ -74,7 +92,13 @@ export function planTableForColumn(quantity: string, zRange: { row: number; col:
   const zs = `$${zCol}$${zRange.row}:$${zCol}$${zRange.row + zRange.rows - 1}`;
   const modelRow = `$${first}$${header}:$${last}$${header}`;
   const cells: (string | number)[][] = [models, [`=ZC.${quantity}(${zs},${modelRow})`, ...models.slice(1).map(() => "")]];
-  return { anchor: `${first}${header}`, cells, area: `${first}${header}:${last}${zRange.row + zRange.rows - 1}` };
+  const bottom = zRange.row + zRange.rows - 1;
+  return {
+    anchor: `${first}${header}`,
+    cells,
+    area: `${first}${header}:${last}${bottom}`,
+    chart: { z: `${zCol}${zRange.row}:${zCol}${bottom}`, series: seriesOf(models, zRange.col + 1, zRange.row, bottom) },
+  };
 }
 
 function checkModels(models: string[]): void {

@@ -114,7 +114,7 @@ describe("Excel interactions", () => {
     expect(await freezeCells("Sheet1", [{ address: "B2", value: 2919.6, note: "provenance" }])).toEqual({ carrier: "note", oneUndoStep: false });
     expect(fake.sheets.Sheet1.B2).toEqual({ value: 2919.6 });
     expect(fake.notes).toEqual([{ address: "'Sheet1'!B2", text: "provenance" }]);
-    fake = install({ settings: {}, sheets: sheets(), excelApi: 1.17 });
+    fake = install({ settings: {}, sheets: sheets(), excelApi: "1.17" });
     expect(await freezeCells("Other sheet", [{ address: "C4", value: 13.8, note: "p" }])).toEqual({ carrier: "comment", oneUndoStep: false });
     expect(fake.comments).toEqual([{ address: "'Other sheet'!C4", text: "p" }]);
   });
@@ -123,9 +123,9 @@ describe("Excel interactions", () => {
   // UndoNotSupported (learn.microsoft.com/office/dev/add-ins/excel/excel-add-ins-undo-capabilities)
   test.each([
     // ExcelApi  host refuses the group   runs asked for                                  one undo step
-    [1.18,       false,                   [null],                                         false],
-    [1.20,       false,                   [{ mergeUndoGroup: true }],                     true],
-    [1.20,       true,                    [{ mergeUndoGroup: true }, null],               false],
+    ["1.18",     false,                   [null],                                         false],
+    ["1.20",     false,                   [{ mergeUndoGroup: true }],                     true],
+    ["1.20",     true,                    [{ mergeUndoGroup: true }, null],               false],
   ])("freezing with ExcelApi %s (UndoNotSupported: %s) runs as %j", async (excelApi, undoNotSupported, runs, oneUndoStep) => {
     fake = install({ settings: {}, sheets: sheets(), excelApi, undoNotSupported });
     const result = await freezeCells("Sheet1", [{ address: "B2", value: 2919.6, note: "n" }]);
@@ -137,8 +137,8 @@ describe("Excel interactions", () => {
 
   test.each([
     // ExcelApi  carrier
-    [1.18,       "note"],
-    [1.17,       "comment"],
+    ["1.18",     "note"],
+    ["1.17",     "comment"],
   ])("thawing (ExcelApi %s) reads the %s, writes the formula back and removes the annotation", async (excelApi, carrier) => {
     fake = install({ settings: {}, sheets: sheets(), excelApi });
     await freezeCells("Other sheet", [{ address: "C4", value: 13.8, note: "Frozen by zcell 0.1.0 on 2026-12-01.\nFormula: =zc.age()\nModel: W9-ALL" }]);

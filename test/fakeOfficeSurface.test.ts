@@ -124,6 +124,17 @@ describe("the fake Office host offers only real APIs", () => {
   add("CommentCollection (workbook)", workbook.comments, excelClass("CommentCollection"));
   add("Application", workbook.application, excelClass("Application"));
   add("NamedItemCollection", workbook.names, excelClass("NamedItemCollection"));
+  const charts = sheet.charts as Fake & { add(t: string, r: Fake, b: string): Fake };
+  add("ChartCollection", charts, excelClass("ChartCollection"));
+  const chart = charts.add("XYScatterLinesNoMarkers", range, "Columns") as Fake & { series: Fake & { add(n: string): Fake } };
+  add("Chart", chart, excelClass("Chart"));
+  add("ChartTitle", chart.title, excelClass("ChartTitle"));
+  const axes = chart.axes as Fake & { categoryAxis: Fake & { title: Fake } };
+  add("ChartAxes", axes, excelClass("ChartAxes"));
+  add("ChartAxis", axes.categoryAxis, excelClass("ChartAxis"));
+  add("ChartAxisTitle", axes.categoryAxis.title, excelClass("ChartAxisTitle"));
+  add("ChartSeriesCollection", chart.series, excelClass("ChartSeriesCollection"));
+  add("ChartSeries", chart.series.add("P18-BAO"), excelClass("ChartSeries"));
 
   test.each(objects.map(([label, object, declared]) => [label, object, declared] as const))("%s", (label, object, declared) => {
     expect(declared.size, `${label}: no declaration found`).toBeGreaterThan(0);

@@ -10,6 +10,8 @@
     calculations: [],
     notes: [],
     comments: [],
+    // charts the pane inserted: type, source, titles, position and series (name, x and y ranges)
+    charts: [],
     handlers: [],
     // what the pane asked for: the options of each Excel.run, and the cell count of each formulas read
     runs: [],
@@ -88,9 +90,39 @@
       getSpillParentOrNullObject() { return { isNullObject: true, load() { return this; } }; },
     };
   }
+  // a chart proxy over its record; a title or series is written straight through
+  function chartObject(record) {
+    const titled = (key) => ({ get text() { return record[key]; }, set text(v) { record[key] = v; } });
+    const seriesObject = (s) => ({
+      get name() { return s.name; },
+      set name(v) { s.name = v; },
+      setValues(range) { s.values = range.address; },
+      setXAxisValues(range) { s.xValues = range.address; },
+      delete() { record.series.splice(record.series.indexOf(s), 1); },
+    });
+    return {
+      title: titled("title"),
+      axes: { categoryAxis: { title: titled("xTitle") }, valueAxis: { title: titled("yTitle") } },
+      series: {
+        load() { return this; },
+        get items() { return record.series.map(seriesObject); },
+        add(name) { const s = { name, values: null, xValues: null }; record.series.push(s); return seriesObject(s); },
+      },
+      setPosition(startCell) { record.position = startCell; },
+    };
+  }
   function worksheet(name) {
     return {
       name,
+      charts: {
+        // Excel makes series from the source range itself; here one per column stands in for that guess
+        add(type, sourceData, seriesBy) {
+          const record = { sheet: name, type, source: sourceData.address, seriesBy, title: "", xTitle: "", yTitle: "", position: null, series: [] };
+          for (let c = 0; c < sourceData.columnCount; c++) record.series.push({ name: "Series" + (c + 1), values: sourceData.address, xValues: null });
+          fake.charts.push(record);
+          return chartObject(record);
+        },
+      },
       load() { return this; },
       getRange(address) { return makeRange(name, parse(address)); },
       getUsedRangeOrNullObject() {
@@ -134,6 +166,7 @@
     const p = parse(a), q = parse(b);
     return (p.sheet || sheet) === (q.sheet || sheet) && p.r0 === q.r0 && p.c0 === q.c0;
   }
+  const minor = (version) => Number(String(version).split(".")[1] || 0);
   const selectedSheet = () => parse(fake.selection).sheet || "Sheet1";
   function context() {
     const workbook = {
@@ -165,7 +198,8 @@
     onReady: () => Promise.resolve({ host: "Excel", platform: "OfficeOnline" }),
     context: {
       officeTheme: init.theme,
-      requirements: { isSetSupported: (name, version) => name === "ExcelApi" && Number(version) <= (init.excelApi || 1.18) },
+      // versions compare by their minor number ("1.7" < "1.18"); init.excelApi is the host's, as text
+      requirements: { isSetSupported: (name, version) => name === "ExcelApi" && minor(version) <= minor(init.excelApi || "1.18") },
       document: {
         settings: {
           get: (k) => (k in fake.settings ? fake.settings[k] : null),

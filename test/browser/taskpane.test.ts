@@ -180,6 +180,43 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await page.close();
     });
 
+    test(`tables (${themeName}): a chart of the table through Excel's charts API, one line per model`, async () => {
+      const page = await openPane(theme, {});
+      await page.getByRole("tab", { name: "Tables" }).click();
+      await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!D10"));
+      await page.fill("#table-stop", "1");
+      await page.fill("#table-step", "0.25");
+      await page.check("#table-chart");
+      await page.locator("#insert-table").click();
+      await expect.poll(() => page.locator("#table-status").textContent()).toMatch(/Chart of 3 models added beside it; it reads the table's cells/);
+      await page.screenshot({ path: `${shots}tables-chart-${themeName}.png`, fullPage: true });
+      const charts = (await fake(page, "charts")) as { type: string; title: string; xTitle: string; yTitle: string; position: string; series: { name: string; xValues: string; values: string }[] }[];
+      expect(charts.length).toBe(1);
+      const [chart] = charts;
+      expect(chart.type).toBe("XYScatterLinesNoMarkers");
+      expect(chart.title).toBe("luminosity distance (Mpc) against redshift — P18-BAO, W9-ALL, P18-BAO; H0=73");
+      expect([chart.xTitle, chart.yTitle]).toEqual(["redshift z", "luminosity distance (Mpc)"]);
+      expect(chart.position).toBe("I10"); // two columns right of the table D10:G14
+      // the host's own guess at series is replaced: exactly ours, each reading the table's cells
+      expect(chart.series).toEqual([
+        { name: "P18-BAO", xValues: "Sheet1!D11:D14", values: "Sheet1!E11:E14" },
+        { name: "W9-ALL", xValues: "Sheet1!D11:D14", values: "Sheet1!F11:F14" },
+        { name: "P18-BAO; H0=73", xValues: "Sheet1!D11:D14", values: "Sheet1!G11:G14" },
+      ]);
+      await page.close();
+    });
+
+    test(`tables (${themeName}): without the chart series API (ExcelApi 1.7) the table goes in and the pane says why there is no chart`, async () => {
+      const page = await openPane(theme, {}, true, { excelApi: "1.6" });
+      await page.getByRole("tab", { name: "Tables" }).click();
+      await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!D10"));
+      await page.check("#table-chart");
+      await page.locator("#insert-table").click();
+      await expect.poll(() => page.locator("#table-status").textContent()).toMatch(/Inserted a .*No chart: this Excel lacks the chart series API \(ExcelApi 1\.7\)/);
+      expect(await fake(page, "charts")).toEqual([]);
+      await page.close();
+    });
+
     test(`freeze and thaw (${themeName}): values with provenance notes, then the formulas back`, async () => {
       const page = await openPane(theme, { "zcell.activeModel": "W9-ALL" });
       await page.getByRole("tab", { name: "Freeze" }).click();
@@ -211,7 +248,7 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
     });
 
     test(`freeze (${themeName}) where ExcelApi 1.20 merges the undo group: one undo step, said so`, async () => {
-      const page = await openPane(theme, {}, true, { excelApi: 1.2 });
+      const page = await openPane(theme, {}, true, { excelApi: "1.20" });
       await page.getByRole("tab", { name: "Freeze" }).click();
       expect(await page.locator("#undo-hint").textContent()).toMatch(/Excel's Undo \(Ctrl\+Z \/ ⌘Z\) reverts a freeze in one step here/);
       await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!B2"));
