@@ -1,7 +1,8 @@
 /**
  * Writes demo/zcell-demo.xlsx: a catalogue of INVENTED sources (names and values made up for the
  * tour; not measurements of any real object) with live ZC formulas, a what-if table and a model kept
- * in cells.
+ * in cells, and a sheet of catalogue recipes (uncertainties, rest-frame luminosities, bolometric
+ * magnitudes, flux limits and 1/V_max, CMB-frame redshifts, h-scaled units, dimming).
  *
  * Every formula is written the way Excel itself saves a JavaScript custom function,
  * `_xldudf_ZC_DIST_LUM(B3)` (see functions/storedFormula.ts): a file holding the bare `ZC.` spelling
@@ -87,6 +88,71 @@ whatIf.getCell("F1").value = "D_L in Mpc: one formula per cell, a redshift from 
 const inCells = workbook.addWorksheet("Model in cells");
 inCells.addRows([["H0", 70], ["Om", 0.3], ["OL", 0.7], [], ["z", "D_L [Mpc]"], [1, zc("ZC.DIST_LUM(A6,$A$1:$B$3)", "DIST_LUM", 1, [["H0", 70], ["Om", 0.3], ["OL", 0.7]])]]);
 inCells.getCell("D1").value = "A block of keys and values is one model: change H0 and every dependent formula recalculates.";
+
+/**
+ * Catalogue recipes on a second invented sample: name, z, σz, RA, Dec [deg], S_3GHz, σS [mJy], α,
+ * bolometric flux, σflux [erg/s/cm2], m, σm, angle, σangle [arcsec].
+ */
+const recipeSources: [string, ...number[]][] = [
+  ["REC-01", 0.082, 0.0008, 12.5, -5.2, 48, 2.4, -0.8, 4.6e-13, 2.3e-14, 15.9, 0.03, 28, 1.4],
+  ["REC-02", 0.143, 0.0011, 47.9, 22.7, 12.5, 0.7, -0.7, 1.2e-13, 8e-15, 17.2, 0.04, 15.5, 0.9],
+  ["REC-03", 0.31, 0.002, 88.1, -33.4, 6.1, 0.4, -0.6, 3.1e-14, 2.5e-15, 18.8, 0.05, 8.2, 0.6],
+  ["REC-04", 0.57, 0.004, 131.6, 8.9, 3.3, 0.25, -0.9, 1.1e-14, 1e-15, 20.1, 0.06, 4.9, 0.4],
+  ["REC-05", 0.92, 0.006, 176.2, 61, 1.9, 0.18, -0.75, 5.2e-15, 5.5e-16, 21.3, 0.08, 3.1, 0.3],
+  ["REC-06", 1.38, 0.009, 219.4, -12.3, 1.2, 0.12, -0.5, 2.6e-15, 3.1e-16, 22.4, 0.1, 2.2, 0.25],
+  ["REC-07", 1.94, 0.013, 268.7, 40.6, 0.85, 0.09, -0.65, 1.5e-15, 2e-16, 23.2, 0.12, 1.6, 0.2],
+  ["REC-08", 2.47, 0.018, 331, -58.9, 0.6, 0.07, -0.7, 1.05e-15, 1.6e-16, 23.9, 0.15, 1.2, 0.18],
+];
+/** The invented survey the sample is drawn from: flux limit, redshift range, area, magnitude limit. */
+const survey = { fluxLimit: 8e-16, zLo: 0.05, zHi: 3, areaDeg2: 50, magLimit: 24.5 };
+
+const recipes = workbook.addWorksheet("Recipes (invented)");
+recipes.addRow(["INVENTED sample and survey for the catalogue recipes: made up, not measurements."]);
+recipes.addRow([
+  "source", "z", "z_err", "RA [deg]", "Dec [deg]", "S_3GHz [mJy]", "S_err [mJy]", "alpha", "flux [erg/s/cm2]", "flux_err", "m", "m_err",
+  "angle [arcsec]", "angle_err", "z_cmb", "D_L err [Mpc]", "D_C [Mpc/h]", "L [erg/s]", "L err [erg/s]", "M_bol", "L_1.4GHz [W/Hz]",
+  "L_nu err [W/Hz]", "M", "M err", "size err [kpc]", "dimming [mag]", "z_max", "1/V_max [Mpc-3]", "z_max (m)",
+]);
+let weights = 0;
+recipeSources.forEach(([name, z, zErr, ra, dec, s, sErr, alpha, flux, fluxErr, m, mErr, angle, angleErr], i) => {
+  const r = i + 3;
+  const value = (fn: string, ...args: unknown[]) => evaluate(definitions[fn], args, active)[0][0] as number;
+  const lum = value("LUMINOSITY", flux, z, null, "erg/s/cm2", "erg/s");
+  const absMag = value("MAG_ABS", m, z);
+  const zMax = value("REDSHIFT_LIMIT", lum, survey.fluxLimit, null, null, "erg/s", "erg/s/cm2");
+  const vMax = value("VOLUME_MAX", zMax, survey.zLo, survey.zHi, survey.areaDeg2);
+  weights += 1 / vMax;
+  recipes.addRow([
+    name, z, zErr, ra, dec, s, sErr, alpha, flux, fluxErr, m, mErr, angle, angleErr,
+    zc(`ZC.REDSHIFT_CMB(B${r},D${r},E${r})`, "REDSHIFT_CMB", z, ra, dec),
+    zc(`ZC.DIST_LUM_ERR(B${r},C${r})`, "DIST_LUM_ERR", z, zErr),
+    zc(`ZC.DIST_LOS(B${r},,"Mpc/h")`, "DIST_LOS", z, null, "Mpc/h"),
+    zc(`ZC.LUMINOSITY(I${r},B${r},,"erg/s/cm2","erg/s")`, "LUMINOSITY", flux, z, null, "erg/s/cm2", "erg/s"),
+    zc(`ZC.LUMINOSITY_ERR(I${r},J${r},B${r},C${r},,"erg/s/cm2","erg/s")`, "LUMINOSITY_ERR", flux, fluxErr, z, zErr, null, "erg/s/cm2", "erg/s"),
+    zc(`ZC.MAG_BOL(R${r},"erg/s")`, "MAG_BOL", lum, "erg/s"),
+    zc(`ZC.LUMINOSITY_REST(F${r},B${r},H${r},3,1.4,,,"mJy")`, "LUMINOSITY_REST", s, z, alpha, 3, 1.4, null, null, "mJy"),
+    zc(`ZC.LUMINOSITY_NU_ERR(F${r},G${r},B${r},C${r},H${r},0.1,,"mJy")`, "LUMINOSITY_NU_ERR", s, sErr, z, zErr, alpha, 0.1, null, "mJy"),
+    zc(`ZC.MAG_ABS(K${r},B${r})`, "MAG_ABS", m, z),
+    zc(`ZC.MAG_ABS_ERR(L${r},B${r},C${r})`, "MAG_ABS_ERR", mErr, z, zErr),
+    zc(`ZC.SIZE_ERR(M${r},N${r},B${r},C${r})`, "SIZE_ERR", angle, angleErr, z, zErr),
+    zc(`ZC.DIMMING(B${r})`, "DIMMING", z),
+    zc(`ZC.REDSHIFT_LIMIT(R${r},$AF$2,,,"erg/s","erg/s/cm2")`, "REDSHIFT_LIMIT", lum, survey.fluxLimit, null, null, "erg/s", "erg/s/cm2"),
+    { formula: storedFormula(`1/ZC.VOLUME_MAX(AA${r},$AF$3,$AF$4,$AF$5)`), result: 1 / vMax, date1904: false },
+    zc(`ZC.REDSHIFT_LIMIT_MAG(W${r},$AF$6)`, "REDSHIFT_LIMIT_MAG", absMag, survey.magLimit),
+  ]);
+});
+recipes.addRow([]);
+recipes.getCell("AA12").value = "Σ 1/V_max [Mpc-3]";
+recipes.getCell("AB12").value = { formula: "SUM(AB3:AB10)", result: weights, date1904: false };
+const surveyCells: [string, number][] = [
+  ["flux limit [erg/s/cm2]", survey.fluxLimit], ["z_lo", survey.zLo], ["z_hi", survey.zHi], ["area [deg2]", survey.areaDeg2], ["m limit", survey.magLimit],
+];
+recipes.getCell("AE1").value = "survey (invented)";
+surveyCells.forEach(([label, v], i) => {
+  recipes.getCell(`AE${i + 2}`).value = label;
+  recipes.getCell(`AF${i + 2}`).value = v;
+});
+recipes.getCell("A13").value = "Cached values computed under P18-BAO; first-order errors assume independent inputs.";
 
 const out = fileURLToPath(new URL("../demo/", import.meta.url));
 mkdirSync(out, { recursive: true });

@@ -34,6 +34,8 @@ const tabled =
   "(direct quadrature below z ≈ 0.065 and above z = 1e8); relative error ≤ 1e-10 for z ≤ 1e4, ≤ 1e-8 to 1e7";
 const closedForm = "closed form, exact to rounding";
 const inverse = "Newton's method on the same tables, bracketed by bisection; |Δz| ≤ 1e-9 (1+z)";
+const firstOrder = "first-order propagation of independent errors with the exact derivative dD_C/dz = D_H/E(z) (no covariances)";
+const firstCrossing = "scan upward in ln(1+z), then Newton with the exact derivative on the first crossing";
 
 /** What each function computes, in plain notation, and how. */
 const about: Record<string, { summary: string; equation: string; method: string; kcorr?: boolean }> = {
@@ -64,8 +66,21 @@ const about: Record<string, { summary: string; equation: string; method: string;
   MAG_APP: { summary: "apparent magnitude", equation: "m = M + μ(z) + K", method: tabled, kcorr: true },
   MAG_AB: { summary: "AB magnitude", equation: "m_AB = −2.5·log10(f_ν / 3630.78 Jy)", method: closedForm },
   FLUX_AB: { summary: "flux density of an AB magnitude", equation: "f_ν = 3630.78 Jy · 10^(−m_AB/2.5)", method: closedForm },
+  DIST_LUM_ERR: { summary: "1σ error of the luminosity distance", equation: "σ_DL = |dD_L/dz|·σ_z, dD_L/dz = D_M + (1+z)·dD_M/dz", method: firstOrder },
+  LUMINOSITY_ERR: { summary: "1σ error of a bolometric luminosity", equation: "σ_L/L = √((σ_F/F)² + (2σ_z·dlnD_L/dz)²)", method: firstOrder },
+  LUMINOSITY_NU_ERR: { summary: "1σ error of a spectral luminosity", equation: "σ_L/L = √((σ_S/S)² + (σ_z(2·dlnD_L/dz − (1+α)/(1+z)))² + (σ_α·ln(1+z))²)", method: firstOrder },
+  MAG_ABS_ERR: { summary: "1σ error of an absolute magnitude", equation: "σ_M = √(σ_m² + (dμ/dz·σ_z)² + σ_K²)", method: firstOrder },
+  SIZE_ERR: { summary: "1σ error of a proper size", equation: "σ_ℓ = √((D_A·σ_θ)² + (θ·dD_A/dz·σ_z)²)", method: firstOrder },
+  LUMINOSITY_REST: { summary: "rest-frame spectral luminosity at another band", equation: "L_ν(ν_rest) = 4π·D_L²·S_ν(ν_obs)·(1+z)^−(1+α)·(ν_rest/ν_obs)^α; νL_ν in a power unit", method: tabled },
+  MAG_BOL: { summary: "absolute bolometric magnitude", equation: "M_bol = −2.5·log10(L / 3.0128e28 W) (IAU 2015 B2)", method: closedForm },
+  LUM_BOL: { summary: "luminosity of an absolute bolometric magnitude", equation: "L = 3.0128e28 W · 10^(−0.4·M_bol) (IAU 2015 B2)", method: closedForm },
+  REDSHIFT_LIMIT: { summary: "largest z at which a source stays above a flux limit", equation: "first z with L·(1+z)^(1+α)/(4π·D_L²) = limit (α = −1 bolometric)", method: firstCrossing },
+  REDSHIFT_LIMIT_MAG: { summary: "largest z at which a source stays brighter than a magnitude limit", equation: "first z with M + μ(z) + K(z) = m_lim, K = −2.5(1+α)log10(1+z)", method: firstCrossing },
+  VOLUME_MAX: { summary: "V_max of the 1/V_max estimator", equation: "V_C between z_lo and min(z_max, z_hi) over the area, 0 if z_max ≤ z_lo", method: tabled },
+  REDSHIFT_CMB: { summary: "redshift in the CMB frame", equation: "1+z_cmb = (1+z_helio)/(γ(1 − β·cos θ)), v = 369.82 km/s to (l, b) = (264.021°, 48.253°)", method: closedForm },
+  DIMMING: { summary: "surface-brightness dimming", equation: "10·log10(1+z) bolometric; 2.5·(3 − α)·log10(1+z) per unit frequency", method: closedForm },
   REDSHIFT: { summary: "redshift at which a quantity takes a value", equation: "solves Q(z) = value (lower branch for D_A)", method: inverse },
-  CONVERT: { summary: "unit conversion", equation: "value × (from / to), FITS unit syntax", method: closedForm },
+  CONVERT: { summary: "unit conversion", equation: "value × (from / to), FITS unit syntax; h-scaled units with h = H0/100 of the model", method: closedForm },
   MODEL: { summary: "model spec text: a base model with parameters changed", equation: "—", method: closedForm },
   PARAM: { summary: "a parameter or derived value of the model", equation: "—", method: closedForm },
   PRESETS: { summary: "the parameter sets: built in, and defined in this workbook", equation: "—", method: closedForm },
@@ -169,13 +184,13 @@ async function explainCall(
     const { known, value } = await argumentValue(call.argTokens[i] ?? [], text, read, nested);
     allKnown &&= known;
     raw.push(value);
-    const unitSpec = def.args.find((a) => a.kind === "unit" && a.applies === spec.name);
+    const unitSpec = def.args.find((a) => a.kind === "unit" && (typeof a.applies === "string" ? [a.applies] : a.applies).includes(spec.name));
     const unit = unitSpec?.kind === "unit" ? unitSpec.default : undefined;
     let shown = known ? showValue(value) : "computed by Excel";
     if (value === undefined || value === "") {
       if (spec.kind === "unit") shown = `default "${spec.default}"`;
       else if (spec.kind === "model") shown = "the workbook's model";
-      else if (spec.kind === "number" && spec.default !== undefined) shown = `default ${spec.default}`;
+      else if (spec.kind === "number" && spec.default !== undefined) shown = Number.isNaN(spec.default) ? "not given" : `default ${spec.default}`;
     }
     args.push({ name: spec.name, text: text || "(omitted)", value: shown, unit });
   }

@@ -49,18 +49,22 @@ beforeAll(async () => {
 const formulaCells = () => [...sheets.entries()].flatMap(([sheet, cells]) => [...cells].filter(([, c]) => c.formula !== undefined).map(([address, c]) => ({ sheet, address, ...c })));
 
 describe("demo workbook, read as Excel reads it", () => {
-  test("holds the invented catalogue, marked as invented, and three sheets", () => {
-    expect([...sheets.keys()]).toEqual(["Catalogue (invented)", "What-if", "Model in cells"]);
+  test("holds the invented catalogue and recipe sample, marked as invented, and four sheets", () => {
+    expect([...sheets.keys()]).toEqual(["Catalogue (invented)", "What-if", "Model in cells", "Recipes (invented)"]);
+    expect(sheets.get("Recipes (invented)")!.get("A1")!.value).toMatch(/^INVENTED/);
+    expect(sheets.get("Recipes (invented)")!.get("AE1")!.value).toBe("survey (invented)");
     expect(sheets.get("Catalogue (invented)")!.get("A1")!.value).toMatch(/^INVENTED/);
     expect(sheets.get("Catalogue (invented)")!.get("A3")!.value).toBe("INV-01");
   });
 
   test("every formula calls ZC in the stored spelling, never the bare ZC. name", () => {
     const all = formulaCells();
-    expect(all.length).toBe(12 * 6 + 1 + 8 * 3 + 1);
+    expect(all.length).toBe(12 * 6 + 1 + 8 * 3 + 1 + 8 * 15 + 1);
     for (const c of all) {
-      expect(c.formula, `${c.sheet}!${c.address}`).toMatch(/^_xldudf_ZC_[A-Z_]+\(/);
       expect(c.formula, `${c.sheet}!${c.address}`).not.toMatch(/(^|[^_\w])ZC\./);
+      // the one formula without ZC is the sum of the 1/V_max weights
+      if (c.sheet === "Recipes (invented)" && c.address === "AB12") expect(c.formula).toBe("SUM(AB3:AB10)");
+      else expect(c.formula, `${c.sheet}!${c.address}`).toMatch(/^(1\/)?_xldudf_ZC_[A-Z_]+\(/);
     }
   });
 
@@ -104,6 +108,40 @@ describe("demo workbook, read as Excel reads it", () => {
     expect(readme).toContain("spills the same 8×3 table");
     const [, inCells] = /passed as\n`model` is one model: `=([^`]+)` in B6/.exec(readme)!;
     expect(sheets.get("Model in cells")!.get("B6")!.formula).toBe(storedFormula(inCells));
+  });
+
+  test("the README's recipes table names the recipe sheet's headers (row 2) and formulas (row 3)", () => {
+    const readme = readFileSync(`${root}README.md`, "utf8");
+    const table = readme.slice(readme.indexOf("<!-- recipes:start"), readme.indexOf("<!-- recipes:end"));
+    const rows = [...table.matchAll(/^\| ([A-Z]+) \| ([^|]+) \| `=([^`]+)` \|/gm)];
+    expect(rows.length).toBe(15);
+    const cells = sheets.get("Recipes (invented)")!;
+    for (const [, column, header, formula] of rows) {
+      expect(cells.get(`${column}2`)!.value, column).toBe(header.trim());
+      expect(cells.get(`${column}3`)!.formula, column).toBe(storedFormula(formula));
+    }
+    // the same formulas on rows 3–10, with the row's own references
+    for (let r = 3; r <= 10; r++) expect(cells.get(`O${r}`)!.formula).toBe(storedFormula(`ZC.REDSHIFT_CMB(B${r},D${r},E${r})`));
+    expect(cells.get("A10")!.value).toBe("REC-08");
+    expect(cells.get("A11")).toBeUndefined();
+    expect(readme).toContain("AB12 sums the weights, `=SUM(AB3:AB10)`");
+  });
+
+  test("recipe cached values hang together: the flux at z_max is the survey limit, AB12 is the sum of the weights", () => {
+    // reference: the flux of L at z, L / (4π D_L²) (Hogg 1999 eq. 22), with D_L of the core under P18-BAO
+    const p18 = Cosmology.fromSpec("P18-BAO");
+    const cells = sheets.get("Recipes (invented)")!;
+    const num = (a: string) => Number(cells.get(a)!.value);
+    const limit = num("AF2"); // erg/s/cm2
+    let sum = 0;
+    for (let r = 3; r <= 10; r++) {
+      const zMax = num(`AA${r}`);
+      expect(zMax, `AA${r}`).toBeGreaterThan(num(`B${r}`)); // every source is above the limit at its own z
+      const dlCm = p18.luminosityDistanceMpc(zMax) * 3.0856775814913673e24; // Mpc in cm (IAU 2015 B2 pc)
+      expectRelative(num(`R${r}`) / (4 * Math.PI * dlCm * dlCm), limit, 1e-9, `flux at z_max, row ${r}`);
+      sum += num(`AB${r}`);
+    }
+    expectRelative(num("AB12"), sum, 1e-12, "Σ 1/V_max");
   });
 
   test("cached D_L values are the engine's under P18-BAO, the model of a new workbook", () => {

@@ -1,10 +1,12 @@
 /** The pane's logic without a host: the model form, table plans, provenance notes, theme contrast. */
 import { describe, expect, test } from "vitest";
+import { definitions } from "../functions/definitions.js";
+import { explainFormula } from "../taskpane/explainCall.js";
 import { derivedValues, formFromSpec, modelFromForm } from "../taskpane/modelForm.js";
 import { provenanceNote } from "../taskpane/provenanceNote.js";
 import { contrast } from "../taskpane/theme.js";
 import { columnName, columnNumber } from "../taskpane/cellAddress.js";
-import { planTableForColumn, redshiftSteps } from "../taskpane/whatIfTable.js";
+import { chartTitle, planTableForColumn, planTableWithRedshifts, redshiftSteps } from "../taskpane/whatIfTable.js";
 
 describe("model form", () => {
   test("shows a preset and gives back its canonical spec; an edit is a change to the preset", () => {
@@ -76,5 +78,33 @@ describe("provenance and contrast", () => {
 
   test("contrast of black on white is 21:1 (WCAG 2.1 definition)", () => {
     expect(contrast("#000000", "#ffffff")).toBeCloseTo(21, 10);
+  });
+});
+
+describe("cell inspector", () => {
+  test("explains every worksheet function: a summary, an equation and a method for each", async () => {
+    const active = { spec: "P18-BAO", stored: false };
+    for (const name of Object.keys(definitions)) {
+      const [call] = await explainFormula(`=ZC.${name}()`, async () => [[""]], active);
+      expect(call.summary, name).not.toBe("");
+      expect(call.equation, name).not.toBe("");
+      expect(call.method, name).not.toBe("");
+    }
+  });
+
+  test("a unit that applies to a value and its error is shown beside both", async () => {
+    const [call] = await explainFormula('=ZC.SIZE_ERR(2,0.1,1,0.01)', async () => [[""]], { spec: "P18-BAO", stored: false });
+    expect(call.args.filter((a) => a.unit === "arcsec").map((a) => a.name)).toEqual(["angle", "angle_err"]);
+    expect(call.result).toMatch(/ kpc$/);
+  });
+});
+
+describe("charts of what-if tables", () => {
+  test("plot each model's column against the redshift column, titled with quantity, unit and models", () => {
+    const own = planTableWithRedshifts("LOOKBACK", [0.5, 1, 2], ["P18-BAO", "EDS"], 4, 2); // table at B4
+    expect(own.chart).toEqual({ z: "B5:B7", series: [{ name: "P18-BAO", values: "C5:C7" }, { name: "EDS", values: "D5:D7" }] });
+    const selected = planTableForColumn("DIST_LUM", { row: 6, col: 4, rows: 3 }, ["W9-ALL"]); // z in D6:D8
+    expect(selected.chart).toEqual({ z: "D6:D8", series: [{ name: "W9-ALL", values: "E6:E8" }] });
+    expect(chartTitle("LOOKBACK", ["P18-BAO", "EDS"])).toBe("look-back time (Gyr) against redshift — P18-BAO, EDS");
   });
 });
