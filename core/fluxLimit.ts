@@ -28,26 +28,38 @@ function requirePositive(name: string, value: number): void {
   if (!(value > 0 && value < Number.POSITIVE_INFINITY)) throw new RangeError(`${name} = ${value} must be > 0 and finite`);
 }
 
-/** The first z where c + (1+α)u − 2 ln|D_L/Mpc| falls to 0. */
-function firstCrossing(model: Cosmology, c: number, alpha: number): number {
+/** The first z where c + (1+α)u − 2 ln|D_L/Mpc| falls to 0; `limit` names the limit in the message. */
+function firstCrossing(model: Cosmology, c: number, alpha: number, limit: string): number {
   const g = (u: number) => c + (1 + alpha) * u - 2 * Math.log(Math.abs(model.luminosityDistanceMpc(Math.expm1(u))));
   const dg = (u: number) => {
     const z = Math.expm1(u);
     return 1 + alpha - 2 * (1 + z) * luminosityDistanceLogSlope(model, z);
   };
   const uEnd = Math.log1p(scanEndRedshift);
+  // Where z ≪ 1 the flux falls monotonically (dg/du ≈ −2/z dominates 1+α), so the scan may start at
+  // a small z that is still above the limit: half the Euclidean estimate D_H z = √(L/4πF), at most
+  // 0.1/(1 + |1+α|). This skips the tiny redshifts whose distances are direct integrals.
   let lo = 0;
-  let u = firstU;
+  let gLo = Number.POSITIVE_INFINITY;
+  const euclidean = Math.exp(c / 2) / model.hubbleDistanceMpc;
+  const safe = Math.log1p(Math.min(0.5 * euclidean, 0.1 / (1 + Math.abs(1 + alpha))));
+  if (safe > firstU) {
+    const gSafe = g(safe);
+    if (gSafe > 0) [lo, gLo] = [safe, gSafe];
+  }
+  let u = lo === 0 ? firstU : lo < 1 ? 2 * lo : lo + linearStepU;
   for (;;) {
-    if (g(u) <= 0) {
-      const root = solveBracketed((x) => -g(x), (x) => -dg(x), 0, lo, u);
-      return Math.expm1(root);
+    const gu = g(u);
+    if (gu <= 0) {
+      // Newton from the secant between the last two scan points (the midpoint when g(lo) = +∞)
+      const start = Number.isFinite(gLo) ? lo + ((u - lo) * gLo) / (gLo - gu) : 0.5 * (lo + u);
+      return Math.expm1(solveBracketed((x) => -g(x), (x) => -dg(x), 0, lo, u, start));
     }
     if (u >= uEnd) break;
-    lo = u;
+    [lo, gLo] = [u, gu];
     u = u < 1 ? 2 * u : Math.min(u + linearStepU, uEnd);
   }
-  throw new NoSolutionError("the source stays at or above the flux limit out to z = 1e8, where this model's tables end");
+  throw new NoSolutionError(`the source stays ${limit} out to z = 1e8, where this model's tables end`);
 }
 
 /**
@@ -66,7 +78,7 @@ export function limitingRedshift(model: Cosmology, luminosity: number, fluxLimit
   requirePositive("flux limit", fluxLimit);
   if (!Number.isFinite(alpha)) throw new RangeError("alpha must be finite");
   const c = Math.log(luminosity / fluxLimit / (4 * Math.PI * megaparsecM * megaparsecM));
-  return firstCrossing(model, c, alpha);
+  return firstCrossing(model, c, alpha, "at or above the flux limit");
 }
 
 /**
@@ -87,7 +99,7 @@ export function limitingRedshiftMag(model: Cosmology, absoluteMag: number, magLi
   if (!Number.isFinite(alpha)) throw new RangeError("alpha must be finite");
   // m_lim − m ≥ 0 ⇔ 0.4 ln10 (m_lim − M) − 2 ln(D_L / 10 pc) + (1+α) ln(1+z) ≥ 0
   const c = 0.4 * Math.LN10 * (magLimit - absoluteMag) - 2 * Math.log(megaparsecM / (10 * parsecM));
-  return firstCrossing(model, c, alpha);
+  return firstCrossing(model, c, alpha, "at or brighter than the magnitude limit");
 }
 
 /**

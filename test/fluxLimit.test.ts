@@ -28,6 +28,8 @@ describe("limiting redshift", () => {
     ["P18-BAO",  1e25,          1e-29,                   -0.7],
     ["P18-BAO",  1e24,          1e-30,                   0.5],
     ["closed",   1e38,          1e-17,                   -1],
+    ["P18-BAO",  1e30,          1e-16,                   -1],   // z_max ≈ 3e-5: below the tables' direct-integral threshold
+    ["P18-BAO",  1e23,          1e-29,                   5],    // a steep spectrum: the K-correction fights the distance
   ] as const)("%s: the flux at z_max of L = %d against %d (α = %d) equals the limit to 1e-10", (name, lum, limit, alpha) => {
     const m = name === "closed" ? closed : p18;
     const z = limitingRedshift(m, lum, limit, alpha);
@@ -115,4 +117,10 @@ describe("V_max", () => {
     const sr = 100 * (Math.PI / 180) ** 2;
     expectRelative(vMax[0][0] as number, maxVolumeMpc3(p18, zMax[0][0] as number, 0.05, 2, sr), 1e-14, "first source");
   });
+});
+
+test("a source that never fades below a magnitude limit is #N/A with the reason", () => {
+  // α = 3: the K-correction brightens as (1+z)⁴ while D_L² grows only as (1+z)² at high z
+  const cell = one("REDSHIFT_LIMIT_MAG", -30, 30, 3) as CellError;
+  expect([cell.kind, cell.message]).toEqual(["na", "ZC.REDSHIFT_LIMIT_MAG: the source stays at or brighter than the magnitude limit out to z = 1e8, where this model's tables end"]);
 });
