@@ -63,7 +63,7 @@ const zToday = num("z", { default: 0 });
 const err = (name: string, extra: NumberOptions = {}) => num(name, { min: 0, ...extra });
 /** An optional spectral index whose absence means the bolometric case (NaN stands for "not given"). */
 const optionalAlpha = num("alpha", { default: Number.NaN, blankMeansDefault: true });
-const given = (x: number) => !Number.isNaN(x);
+const isGiven = (x: number) => !Number.isNaN(x);
 /** A unit given as text whose meaning depends on other arguments (blank: `shown`), as a factor into `reference`. */
 function textUnitFactor(a: Args, name: string, shown: string, reference: string): number {
   const text = (a[name] as string) || shown;
@@ -318,7 +318,7 @@ const list: FunctionDef[] = [
     compute: (a) => {
       // with alpha, a spectral luminosity against a flux-density limit; without, bolometric
       const alpha = n(a, "alpha");
-      const spectral = given(alpha);
+      const spectral = isGiven(alpha);
       const lum = n(a, "lum") * textUnitFactor(a, "lum_unit", spectral ? "W/Hz" : "W", spectral ? "W/Hz" : "W");
       const limit = n(a, "flux_limit") * textUnitFactor(a, "flux_unit", spectral ? "Jy" : "W/m2", spectral ? "W/m2/Hz" : "W/m2");
       return limitingRedshift(m(a), lum, limit, spectral ? alpha : -1);
@@ -345,7 +345,7 @@ const list: FunctionDef[] = [
   {
     name: "DIMMING",
     args: [z, optionalAlpha],
-    compute: (a) => (given(n(a, "alpha")) ? spectralSurfaceBrightnessDimmingMag(n(a, "z"), n(a, "alpha")) : surfaceBrightnessDimmingMag(n(a, "z"))),
+    compute: (a) => (isGiven(n(a, "alpha")) ? spectralSurfaceBrightnessDimmingMag(n(a, "z"), n(a, "alpha")) : surfaceBrightnessDimmingMag(n(a, "z"))),
   },
   {
     name: "REDSHIFT",
