@@ -14,6 +14,7 @@ import { megaparsecM, parsecM } from "./constants.js";
 import type { Cosmology } from "./Cosmology.js";
 import { luminosityDistanceLogSlope } from "./distanceSlopes.js";
 import { NoSolutionError } from "./NoSolutionError.js";
+import { requireFiniteNumber, requireNonNegative } from "./numberChecks.js";
 import { checkRedshift } from "./redshift.js";
 import { solveBracketed } from "./solveBracketed.js";
 
@@ -22,11 +23,6 @@ const scanEndRedshift = 1e8;
 /** The scan: u = 2^-30 … 1 doubling, then steps of 1/8 in u (features of g are ≳ 1 wide in u). */
 const firstU = 2 ** -30;
 const linearStepU = 1 / 8;
-
-function requirePositive(name: string, value: number): void {
-  if (typeof value !== "number" || Number.isNaN(value)) throw new TypeError(`${name} must be a number`);
-  if (!(value > 0 && value < Number.POSITIVE_INFINITY)) throw new RangeError(`${name} = ${value} must be > 0 and finite`);
-}
 
 /** The first z where c + (1+α)u − 2 ln|D_L/Mpc| falls to 0; `limit` names the limit in the message. */
 function firstCrossing(model: Cosmology, c: number, alpha: number, limit: string): number {
@@ -74,9 +70,9 @@ function firstCrossing(model: Cosmology, c: number, alpha: number, limit: string
  * @example limitingRedshift(model, 1e38, 1e-16) // the z where 1e38 W gives 1e-16 W/m2
  */
 export function limitingRedshift(model: Cosmology, luminosity: number, fluxLimit: number, alpha = -1): number {
-  requirePositive("luminosity", luminosity);
-  requirePositive("flux limit", fluxLimit);
-  if (!Number.isFinite(alpha)) throw new RangeError("alpha must be finite");
+  requireNonNegative("luminosity", luminosity, "", true);
+  requireNonNegative("flux limit", fluxLimit, "", true);
+  requireFiniteNumber("alpha", alpha);
   const c = Math.log(luminosity / fluxLimit / (4 * Math.PI * megaparsecM * megaparsecM));
   return firstCrossing(model, c, alpha, "at or above the flux limit");
 }
@@ -95,8 +91,9 @@ export function limitingRedshift(model: Cosmology, luminosity: number, fluxLimit
  * @example limitingRedshiftMag(model, -21, 17.77) // the z where M = −21 reaches m = 17.77
  */
 export function limitingRedshiftMag(model: Cosmology, absoluteMag: number, magLimit: number, alpha = -1): number {
-  if (!Number.isFinite(absoluteMag) || !Number.isFinite(magLimit)) throw new RangeError("magnitudes must be finite");
-  if (!Number.isFinite(alpha)) throw new RangeError("alpha must be finite");
+  requireFiniteNumber("abs_mag", absoluteMag);
+  requireFiniteNumber("mag_limit", magLimit);
+  requireFiniteNumber("alpha", alpha);
   // m_lim − m ≥ 0 ⇔ 0.4 ln10 (m_lim − M) − 2 ln(D_L / 10 pc) + (1+α) ln(1+z) ≥ 0
   const c = 0.4 * Math.LN10 * (magLimit - absoluteMag) - 2 * Math.log(megaparsecM / (10 * parsecM));
   return firstCrossing(model, c, alpha, "at or brighter than the magnitude limit");

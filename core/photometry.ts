@@ -5,17 +5,8 @@
  */
 import { abMagnitudeOffset, bolometricZeroPointW, megaparsecM } from "./constants.js";
 import type { Cosmology } from "./Cosmology.js";
+import { requireFiniteNumber, requireNonNegative } from "./numberChecks.js";
 import { checkRedshift, checkSourceRedshift } from "./redshift.js";
-
-function requireNonNegative(name: string, value: number, unit: string): void {
-  if (typeof value !== "number" || Number.isNaN(value)) throw new TypeError(`${name} must be a number`);
-  if (!(value >= 0 && value < Number.POSITIVE_INFINITY)) throw new RangeError(`${name} = ${value} ${unit} must be ≥ 0 and finite`);
-}
-
-function requireFiniteNumber(name: string, value: number): void {
-  if (typeof value !== "number" || Number.isNaN(value)) throw new TypeError(`${name} must be a number`);
-  if (!Number.isFinite(value)) throw new RangeError(`${name} must be finite`);
-}
 
 /** 4π D_L² [m²], requiring z > 0 (a source at z = 0 is at zero distance). */
 function sphereAreaM2(model: Cosmology, z: number): number {

@@ -7,11 +7,8 @@
 import type { Cosmology } from "./Cosmology.js";
 import { angularDiameterDistanceSlopeMpc, luminosityDistanceLogSlope, luminosityDistanceSlopeMpc } from "./distanceSlopes.js";
 import { luminosityW, spectralLuminosityWHz } from "./photometry.js";
+import { requireNonNegative } from "./numberChecks.js";
 import { checkSourceRedshift } from "./redshift.js";
-
-function requireError(name: string, value: number): void {
-  if (!(value >= 0 && value < Number.POSITIVE_INFINITY)) throw new RangeError(`${name} = ${value} must be ≥ 0 and finite`);
-}
 
 /**
  * Error of the luminosity distance from a redshift error: σ_DL = |dD_L/dz| σ_z.
@@ -21,7 +18,7 @@ function requireError(name: string, value: number): void {
  * @returns Mpc; e.g. Einstein–de Sitter, H0 = 70, z = 1 ± 0.01: 55.37 Mpc
  */
 export function luminosityDistanceErrorMpc(model: Cosmology, z: number, zErr: number): number {
-  requireError("z_err", zErr);
+  requireNonNegative("z_err", zErr);
   return Math.abs(luminosityDistanceSlopeMpc(model, z)) * zErr;
 }
 
@@ -35,8 +32,8 @@ export function luminosityDistanceErrorMpc(model: Cosmology, z: number, zErr: nu
  * @returns W; e.g. a 10% flux error alone gives 10% of L
  */
 export function luminosityErrorW(model: Cosmology, fluxWm2: number, fluxErrWm2: number, z: number, zErr: number): number {
-  requireError("flux_err", fluxErrWm2);
-  requireError("z_err", zErr);
+  requireNonNegative("flux_err", fluxErrWm2);
+  requireNonNegative("z_err", zErr);
   const distanceTerm = 2 * zErr * luminosityDistanceLogSlope(model, z);
   // σ_L = √((4π D_L² σ_F)² + (L · 2σ_z dlnD_L/dz)²): finite also for F = 0
   const area = luminosityW(model, 1, z);
@@ -64,9 +61,9 @@ export function spectralLuminosityErrorWHz(
   alpha: number,
   alphaErr = 0,
 ): number {
-  requireError("flux_density_err", fluxDensityErrWm2Hz);
-  requireError("z_err", zErr);
-  requireError("alpha_err", alphaErr);
+  requireNonNegative("flux_density_err", fluxDensityErrWm2Hz);
+  requireNonNegative("z_err", zErr);
+  requireNonNegative("alpha_err", alphaErr);
   const perUnitFlux = spectralLuminosityWHz(model, 1, z, alpha);
   const lum = perUnitFlux * fluxDensityWm2Hz;
   const zTerm = zErr * (2 * luminosityDistanceLogSlope(model, z) - (1 + alpha) / (1 + z));
@@ -84,9 +81,9 @@ export function spectralLuminosityErrorWHz(
  * @returns mag; e.g. σ_z = 0 gives √(σ_m² + σ_K²)
  */
 export function absoluteMagnitudeErrorMag(model: Cosmology, mErr: number, z: number, zErr: number, kCorrectionErr = 0): number {
-  requireError("m_err", mErr);
-  requireError("z_err", zErr);
-  requireError("kcorr_err", kCorrectionErr);
+  requireNonNegative("m_err", mErr);
+  requireNonNegative("z_err", zErr);
+  requireNonNegative("kcorr_err", kCorrectionErr);
   checkSourceRedshift(z);
   const modulusSlope = (5 / Math.LN10) * luminosityDistanceLogSlope(model, z);
   return Math.hypot(mErr, modulusSlope * zErr, kCorrectionErr);
@@ -102,8 +99,8 @@ export function absoluteMagnitudeErrorMag(model: Cosmology, mErr: number, z: num
  * @returns Mpc; e.g. at the maximum of D_A the redshift error drops out
  */
 export function properSizeErrorMpc(model: Cosmology, angleRad: number, angleErrRad: number, z: number, zErr: number): number {
-  requireError("angle_err", angleErrRad);
-  requireError("z_err", zErr);
+  requireNonNegative("angle_err", angleErrRad);
+  requireNonNegative("z_err", zErr);
   const da = model.angularDiameterDistanceMpc(z);
   return Math.hypot(da * angleErrRad, angleRad * angularDiameterDistanceSlopeMpc(model, z) * zErr);
 }
