@@ -135,4 +135,20 @@ CustomFunctions.associate = (id, fn) => { window.__associated.push(id); window._
     expect(out.num).toEqual({ real: true, code: "#NUM!" });
     await page.close();
   });
+
+  test("the catalogue functions registered with the real runtime give numbers, and #N/A with the reason", async () => {
+    const { page } = await open("runtime-test.html");
+    await page.waitForLoadState("load");
+    const out = await page.evaluate(async () => {
+      const fns = (window as unknown as { __fns: Record<string, (...a: unknown[]) => unknown> }).__fns;
+      const cell = async (id: string, ...args: unknown[]) => (await fns[id](...args) as unknown[][])[0][0];
+      const never = (await cell("REDSHIFT_LIMIT_MAG", [[-30]], [[30]], [[3]])) as { code: string; message: string };
+      return { dimming: await cell("DIMMING", [[1]]), mBol: await cell("MAG_BOL", [[1]], "Lsun"), never: { code: never.code, message: never.message } };
+    });
+    expect(Math.abs((out.dimming as number) - 10 * Math.log10(2))).toBeLessThanOrEqual(1e-14); // Tolman: 10 log10(1+z)
+    expect(Math.abs((out.mBol as number) - 4.74)).toBeLessThanOrEqual(5e-3); // IAU 2015 B2: L☉ nominal has M_bol = 4.74
+    expect(out.never.code).toBe("#N/A");
+    expect(out.never.message).toMatch(/^ZC\.REDSHIFT_LIMIT_MAG: the source stays at or brighter than the magnitude limit/);
+    await page.close();
+  });
 });
