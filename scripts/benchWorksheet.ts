@@ -74,7 +74,7 @@ export function benchWorksheet(): void {
     if (bundle !== bundles[0][1]) continue;
     for (const name of catalogueFunctions) {
       const r = figure(bundle, `catalogue:${name}`, "ns");
-      console.log(pad(`one call over 100k rows: ${name}`, 42) + pad(`${fmt(r, 0)} ns a cell`, 20) + "(no target)");
+      console.log(pad(`one call over 100k rows: ${name}`, 42) + pad(`${fmt(r, 0)} ns a cell`, 20) + " (no target)");
     }
   }
 }
