@@ -6,6 +6,7 @@
  * apex is blueshifted by our motion, so its CMB-frame redshift is higher).
  */
 import { cmbDipoleGalacticDeg, cmbDipoleSpeedKmPerS, galacticFrameDeg, speedOfLightKmPerS } from "./constants.js";
+import { requireFiniteNumber } from "./numberChecks.js";
 
 const degree = Math.PI / 180;
 const poleRa = galacticFrameDeg.poleRa * degree;
@@ -15,7 +16,8 @@ const sinPoleDec = Math.sin(poleDec);
 const cosPoleDec = Math.cos(poleDec);
 
 function requireDirection(raRad: number, decRad: number): void {
-  if (!Number.isFinite(raRad) || !Number.isFinite(decRad)) throw new RangeError("ra and dec must be finite");
+  requireFiniteNumber("ra", raRad);
+  requireFiniteNumber("dec", decRad);
   if (Math.abs(decRad) > Math.PI / 2 * (1 + 1e-15)) throw new RangeError(`dec = ${decRad / degree}° is outside −90° … 90°`);
 }
 
@@ -77,7 +79,7 @@ export function cosAngleToCmbApex(raRad: number, decRad: number): number {
  * @returns z_cmb; e.g. at the apex z_helio = 0 gives ≈ +0.0012343 (β plus β²/2)
  */
 export function cmbFrameRedshift(zHelio: number, raRad: number, decRad: number): number {
-  if (typeof zHelio !== "number" || Number.isNaN(zHelio)) throw new TypeError("z_helio must be a number");
-  if (!(zHelio > -1 && zHelio < Number.POSITIVE_INFINITY)) throw new RangeError(`z_helio = ${zHelio} must be > −1 and finite`);
+  requireFiniteNumber("z_helio", zHelio);
+  if (!(zHelio > -1)) throw new RangeError(`z_helio = ${zHelio} must be > −1`);
   return (1 + zHelio) / (gamma * (1 - beta * cosAngleToCmbApex(raRad, decRad))) - 1;
 }

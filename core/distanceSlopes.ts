@@ -16,6 +16,12 @@ export function comovingDistanceSlopeMpc(model: Cosmology, z: number): number {
   return model.hubbleDistanceMpc / model.expansionRate(z);
 }
 
+/** D_M and dD_M/dz from one reading of χ = D_C/D_H. */
+function transverseAndSlopeMpc(model: Cosmology, z: number): [dm: number, slope: number] {
+  const chi = model.comovingDistanceMpc(z) / model.hubbleDistanceMpc;
+  return [model.hubbleDistanceMpc * model.transverse(chi), comovingDistanceSlopeMpc(model, z) * model.transverseSlope(chi)];
+}
+
 /**
  * Derivative of the transverse comoving distance, dD_M/dz = (D_H / E(z)) S_k'(D_C/D_H).
  * @param model the cosmology
@@ -23,8 +29,7 @@ export function comovingDistanceSlopeMpc(model: Cosmology, z: number): number {
  * @returns Mpc per unit redshift; equal to dD_C/dz in a flat model
  */
 export function transverseComovingDistanceSlopeMpc(model: Cosmology, z: number): number {
-  const chi = model.comovingDistanceMpc(z) / model.hubbleDistanceMpc;
-  return comovingDistanceSlopeMpc(model, z) * model.transverseSlope(chi);
+  return transverseAndSlopeMpc(model, z)[1];
 }
 
 /**
@@ -34,7 +39,8 @@ export function transverseComovingDistanceSlopeMpc(model: Cosmology, z: number):
  * @returns Mpc per unit redshift; e.g. Einstein–de Sitter, H0 = 70, z = 1: D_H (2 − 1/√2) = 5537.14 Mpc
  */
 export function luminosityDistanceSlopeMpc(model: Cosmology, z: number): number {
-  return model.transverseComovingDistanceMpc(z) + (1 + z) * transverseComovingDistanceSlopeMpc(model, z);
+  const [dm, slope] = transverseAndSlopeMpc(model, z);
+  return dm + (1 + z) * slope;
 }
 
 /**
@@ -45,8 +51,9 @@ export function luminosityDistanceSlopeMpc(model: Cosmology, z: number): number 
  * @returns Mpc per unit redshift; e.g. Einstein–de Sitter at z = 1.25: 0
  */
 export function angularDiameterDistanceSlopeMpc(model: Cosmology, z: number): number {
+  const [dm, slope] = transverseAndSlopeMpc(model, z);
   const zp = 1 + z;
-  return transverseComovingDistanceSlopeMpc(model, z) / zp - model.transverseComovingDistanceMpc(z) / (zp * zp);
+  return slope / zp - dm / (zp * zp);
 }
 
 /**
@@ -56,5 +63,6 @@ export function angularDiameterDistanceSlopeMpc(model: Cosmology, z: number): nu
  * @returns per unit redshift; e.g. ≈ 1/z for z ≪ 1
  */
 export function luminosityDistanceLogSlope(model: Cosmology, z: number): number {
-  return 1 / (1 + z) + transverseComovingDistanceSlopeMpc(model, z) / model.transverseComovingDistanceMpc(z);
+  const [dm, slope] = transverseAndSlopeMpc(model, z);
+  return 1 / (1 + z) + slope / dm;
 }
