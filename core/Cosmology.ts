@@ -193,8 +193,8 @@ export class Cosmology {
     this.chi = new QuinticTable(0, h, chi, chi1, chi2);
     this.tau = new QuinticTable(0, h, tau, tau1, tau2);
 
-    if (this.expansion.leadingPower() > 0) {
-      const ageEnd = this.ageBeyond(uMax);
+    const ageEnd = this.expansion.leadingPower() > 0 ? this.ageBeyond(uMax) : Number.POSITIVE_INFINITY;
+    if (Number.isFinite(ageEnd) && ageEnd > 0) {
       const lnT = new Float64Array(n + 1);
       const lnT1 = new Float64Array(n + 1);
       const lnT2 = new Float64Array(n + 1);
@@ -209,8 +209,9 @@ export class Cosmology {
       this.lnAge = new QuinticTable(0, h, lnT, lnT1, lnT2);
       this.ageTodayGyr = this.hubbleTimeGyr * Math.exp(lnT[0]);
     } else {
+      // an infinite past, or (NaN) an age integral that does not converge numerically (a past too close to de Sitter)
       this.lnAge = undefined;
-      this.ageTodayGyr = Number.POSITIVE_INFINITY;
+      this.ageTodayGyr = ageEnd === Number.POSITIVE_INFINITY ? ageEnd : Number.NaN;
     }
   }
 
@@ -322,7 +323,7 @@ export class Cosmology {
 
   /** @internal */
   ageAtU(u: number): number {
-    if (!this.lnAge) return Number.POSITIVE_INFINITY;
+    if (!this.lnAge) return this.ageTodayGyr; // +∞ (infinite past) or NaN (no numerical age)
     return u <= this.uMax ? Math.exp(this.lnAge.value(u)) : this.ageBeyond(u);
   }
 

@@ -116,16 +116,22 @@ export class RedshiftInverse {
 
   /** u ≥ uMax where an increasing exact function g reaches target (slow path beyond the tables). */
   private invertBeyond(g: (u: number) => number, target: number, w: InverseWording): number {
+    // g is an integral beyond the tables: a value that is not a finite number means it no longer converges there
+    const below = (u: number) => {
+      const v = g(u);
+      if (!Number.isFinite(v)) throw new NoSolutionError(`${w.asked()}: this model's integrals do not converge that far back (z > 1e8)`);
+      return v < target;
+    };
     let lo = this.m.uMax;
     let hi = this.m.uMax + 1;
-    while (g(hi) < target) {
+    while (below(hi)) {
       lo = hi;
       hi = this.m.uMax + 2 * (hi - this.m.uMax);
       if (hi > 690) throw new NoSolutionError(`no redshift has ${w.asked()}`);
     }
     for (let i = 0; i < 200 && hi - lo > 1e-15 * hi; i++) {
       const mid = 0.5 * (lo + hi);
-      if (g(mid) < target) lo = mid;
+      if (below(mid)) lo = mid;
       else hi = mid;
     }
     return 0.5 * (lo + hi);
@@ -152,7 +158,13 @@ export class RedshiftInverse {
 
   private uOfAge(age: number, w: InverseWording): number {
     const table = this.m.lnAge;
-    if (!table) throw new NoSolutionError(`${w.asked()}: this model has an infinite past, so age does not fix z`);
+    if (!table) {
+      throw new NoSolutionError(
+        Number.isNaN(this.m.ageTodayGyr)
+          ? `${w.asked()}: the age of this model is not finite to numerical precision (its past is too close to de Sitter), so age does not fix z`
+          : `${w.asked()}: this model has an infinite past, so age does not fix z`,
+      );
+    }
     const ageToday = Math.exp(table.node(0));
     if (age > ageToday) {
       throw new NoSolutionError(`${w.asked()} exceeds the age of the universe today in this model (${w.limit(ageToday * this.m.hubbleTimeGyr)})`);
@@ -270,9 +282,12 @@ export class RedshiftInverse {
       case "luminosityDistance":
         u = this.uOfCurve("DL", value / dh, w);
         break;
-      case "distanceModulus":
-        u = this.uOfCurve("DL", 10 ** ((value - 25) / 5) / dh, { asked: w.asked, limit: (mpc) => w.limit(5 * Math.log10(mpc) + 25) });
+      case "distanceModulus": {
+        const distance = 10 ** ((value - 25) / 5);
+        if (!Number.isFinite(distance)) throw new NoSolutionError(`${w.asked()}: no finite redshift has it`);
+        u = this.uOfCurve("DL", distance / dh, { asked: w.asked, limit: (mpc) => w.limit(5 * Math.log10(mpc) + 25) });
         break;
+      }
       case "angularDiameterDistance":
         u = this.uOfCurve("DA", value / dh, w);
         break;

@@ -5,7 +5,8 @@
  */
 import { parseModelSpec } from "../core/index.js";
 import { messages } from "./messages.js";
-import { noWorkbookModels, readWorkbookModels, workbookModelsSettingKey, type WorkbookModels } from "./workbookModels.js";
+import { modelFor } from "./modelCache.js";
+import { maxSpecLength, noWorkbookModels, readWorkbookModels, resolvedSpec, workbookModelsSettingKey, type WorkbookModels } from "./workbookModels.js";
 
 /** Settings key under which the active model's spec text is stored. */
 export const activeModelSettingKey = "zcell.activeModel";
@@ -71,8 +72,12 @@ function interpret(value: unknown, models: WorkbookModels): ActiveModelSetting {
   if (typeof value !== "string") {
     return { spec: defaultModelSpec, stored: false, models, warning: messages.activeModelFallback("not text") };
   }
+  if (value.length > maxSpecLength) {
+    return { spec: defaultModelSpec, stored: false, models, warning: messages.activeModelFallback(`longer than ${maxSpecLength} characters`) };
+  }
   try {
     parseModelSpec(value, models.named);
+    modelFor(resolvedSpec(value, models)); // an unphysical model (no big bang) is as unusable as bad text
     return { spec: value, stored: true, models };
   } catch (e) {
     return { spec: defaultModelSpec, stored: false, models, warning: messages.activeModelFallback((e as Error).message) };

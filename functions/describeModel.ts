@@ -34,7 +34,11 @@ export function describeModel(m: Cosmology): string {
         (m.parameters.mnu.length === 0
           ? "massless neutrinos"
           : `neutrino masses ${m.parameters.mnu.map((x) => fmt(x)).join(", ")} eV (exact Fermi–Dirac; others massless)`);
-  const age = Number.isFinite(m.ageTodayGyr) ? `${fmt(m.ageTodayGyr, 5)} Gyr` : "infinite (no big bang)";
+  const age = Number.isFinite(m.ageTodayGyr)
+    ? `${fmt(m.ageTodayGyr, 5)} Gyr`
+    : Number.isNaN(m.ageTodayGyr)
+      ? "not finite to numerical precision (a past too close to de Sitter)"
+      : "infinite (no big bang)";
   return [
     `${m.spec}: ${kindOf(m)}`,
     `H0 = ${fmt(m.H0)} km/s/Mpc`,

@@ -6,31 +6,23 @@
  * `evaluate` is synchronous and host-free, so the task pane's cell inspector can ask it why a cell
  * holds an error: the CellError it returns carries the explanation.
  */
-import { Cosmology, formatModelSpec, parseModelSpec } from "../core/index.js";
+import { Cosmology } from "../core/index.js";
 import { readActiveModel, settingsReady, whenSettingsReady, type ActiveModelSetting } from "./activeModel.js";
 import { CellError, classify, inFunction, toHostError } from "./cellError.js";
 import type { Args, ArgSpec, Cell, FunctionDef } from "./FunctionDef.js";
 import { messages } from "./messages.js";
 import { isBlank, keyValueBlockSpec } from "./modelArgument.js";
 import { modelFor } from "./modelCache.js";
+import { resolvedSpec } from "./workbookModels.js";
 import { blank, readArg, readText, several, singleCell, toMatrix, unitConversion, type Conversion } from "./readArgument.js";
 
 export type { Args, ArgSpec, Cell, FunctionDef } from "./FunctionDef.js";
 
 const maxCells = 4_194_304;
+/** Models one range call keeps at hand besides the shared cache (modelCache.ts): bounds its memory. */
+const modelsHeldPerCall = 16;
 
 type Prepared = { spec: ArgSpec; matrix: unknown[][] | undefined; rows: number; cols: number; conversion: Conversion | undefined };
-
-/**
- * The spec text a model argument stands for: a name defined in the workbook (alone or with changes)
- * becomes the canonical spec of its parameters, so that the model cache never keeps a stale meaning.
- */
-function resolvedSpec(text: string, active: ActiveModelSetting): string {
-  const models = active.models;
-  if (!models || models.specs.size === 0) return text;
-  const first = text.split(";", 1)[0].trim().toUpperCase();
-  return models.specs.has(first) ? formatModelSpec(parseModelSpec(text, models.named)) : text;
-}
 
 /**
  * Evaluates a function over its (possibly range) arguments.
@@ -180,7 +172,7 @@ function evaluateSingle(def: FunctionDef, raw: readonly unknown[], active: Activ
 
 function singleModel(text: string, active: ActiveModelSetting): Cosmology | CellError {
   try {
-    return modelFor(resolvedSpec(text, active));
+    return modelFor(resolvedSpec(text, active.models));
   } catch (e) {
     const err = classify(e, "model");
     return new CellError(err.kind, messages.model(err.message));
@@ -228,7 +220,8 @@ function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: Active
   }
   if (rows * cols > maxCells) throw new CellError("value", messages.tooLarge(rows * cols));
 
-  // models of this call: the last one asked for is kept at hand, others in a map
+  // models of this call: the last one asked for is kept at hand, a few others in a map (bounded, so that
+  // a column of thousands of distinct specs holds no more models than the shared LRU cache does)
   let lastSpec: string | undefined;
   let lastModel: Cosmology | CellError | undefined;
   let others: Map<string, Cosmology | CellError> | undefined;
@@ -237,12 +230,14 @@ function evaluateCells(def: FunctionDef, raw: readonly unknown[], active: Active
     let m = others?.get(spec);
     if (m === undefined) {
       try {
-        m = modelFor(resolvedSpec(spec, active));
+        m = modelFor(resolvedSpec(spec, active.models));
       } catch (e) {
         const err = classify(e, def.name);
         m = new CellError(err.kind, messages.model(err.message));
       }
-      (others ??= new Map()).set(spec, m);
+      others ??= new Map();
+      if (others.size >= modelsHeldPerCall) others.delete(others.keys().next().value as string);
+      others.set(spec, m);
     }
     lastSpec = spec;
     lastModel = m;

@@ -4,7 +4,7 @@
  * settings beside the active model, as name → spec text, so they travel with the file; any model
  * argument may name one (`=ZC.DIST_LUM(A2, "TEAM-FIDUCIAL")`). A name never shadows a built-in preset.
  */
-import { findPreset, parseModelSpec, type ModelParameters, type NamedModels } from "../core/index.js";
+import { findPreset, formatModelSpec, parseModelSpec, type ModelParameters, type NamedModels } from "../core/index.js";
 
 /** Settings key under which the workbook's own models are stored (an object: name → spec text). */
 export const workbookModelsSettingKey = "zcell.workbookModels";
@@ -33,9 +33,21 @@ export interface WorkbookModels {
 /** No workbook models. */
 export const noWorkbookModels: WorkbookModels = { specs: new Map(), named: { find: () => undefined, names: [] }, problems: [] };
 
+/** Models read from one workbook at most: a workbook is written by strangers, and the rest are left out with a warning. */
+export const maxWorkbookModels = 100;
+/** Characters of one stored spec at most (a full spec of every key is under 200). */
+export const maxSpecLength = 500;
+/** Problems reported one by one at most; the rest are counted. */
+const problemsListedAtMost = 5;
+
+/** A name as a message quotes it: at most 40 characters. */
+const quotedName = (name: string) => (name.length > 40 ? `${name.slice(0, 39)}…` : name);
+
 /**
  * Reads the stored value (as the settings return it). Each entry must be a valid name whose spec
- * text parses on the built-in presets alone (a workbook model does not build on another).
+ * text (at most `maxSpecLength` characters) parses on the built-in presets alone (a workbook model
+ * does not build on another); at most `maxWorkbookModels` entries are read, the others are left out
+ * and counted in `problems`.
  * @param stored the settings value: an object of name → spec text, or undefined
  */
 export function readWorkbookModels(stored: unknown): WorkbookModels {
@@ -46,20 +58,33 @@ export function readWorkbookModels(stored: unknown): WorkbookModels {
   const specs = new Map<string, string>();
   const parameters = new Map<string, ModelParameters>();
   const problems: string[] = [];
-  for (const [name, spec] of Object.entries(stored as Record<string, unknown>)) {
-    const problem = modelNameProblem(name);
-    if (problem) {
-      problems.push(`workbook model ${problem}`);
+  let unread = 0;
+  let bad = 0;
+  for (const name in stored) {
+    if (!Object.prototype.hasOwnProperty.call(stored, name)) continue;
+    if (specs.size >= maxWorkbookModels) {
+      unread++;
       continue;
     }
-    try {
-      if (typeof spec !== "string") throw new TypeError("its spec is not text");
-      parameters.set(name.toUpperCase(), parseModelSpec(spec));
-      specs.set(name.toUpperCase(), spec);
-    } catch (e) {
-      problems.push(`workbook model ${name}: ${(e as Error).message}`);
+    const spec = (stored as Record<string, unknown>)[name];
+    const problem = modelNameProblem(quotedName(name)) ?? (name.length > 32 ? "is longer than 32 characters" : undefined);
+    let why: string | undefined;
+    if (problem) why = `workbook model ${problem}`;
+    else if (typeof spec !== "string") why = `workbook model ${name}: its spec is not text`;
+    else if (spec.length > maxSpecLength) why = `workbook model ${name}: its spec is longer than ${maxSpecLength} characters`;
+    else {
+      try {
+        parameters.set(name.toUpperCase(), parseModelSpec(spec));
+        specs.set(name.toUpperCase(), spec);
+      } catch (e) {
+        why = `workbook model ${name}: ${(e as Error).message}`;
+      }
     }
+    if (why === undefined) continue;
+    if (++bad <= problemsListedAtMost) problems.push(why);
   }
+  if (bad > problemsListedAtMost) problems.push(`… and ${bad - problemsListedAtMost} more workbook models that could not be read`);
+  if (unread) problems.push(`only the first ${maxWorkbookModels} workbook models are read; ${unread} more are left out`);
   const names = [...specs.keys()];
   return { specs, problems, named: { find: (name) => parameters.get(name.trim().toUpperCase()), names } };
 }
@@ -70,4 +95,16 @@ export function readWorkbookModels(stored: unknown): WorkbookModels {
  */
 export function storedWorkbookModels(specs: ReadonlyMap<string, string>): Record<string, string> {
   return Object.fromEntries([...specs].sort(([a], [b]) => a.localeCompare(b)));
+}
+
+/**
+ * The spec text a model argument stands for: a name defined in the workbook (alone or with changes)
+ * becomes the canonical spec of its parameters, so that the model cache never keeps a stale meaning.
+ * @param text the model argument's text, e.g. "TEAM-FIDUCIAL; H0=73"
+ * @param models the workbook's own models (none when omitted)
+ */
+export function resolvedSpec(text: string, models: WorkbookModels | undefined): string {
+  if (!models || models.specs.size === 0) return text;
+  const first = text.split(";", 1)[0].trim().toUpperCase();
+  return models.specs.has(first) ? formatModelSpec(parseModelSpec(text, models.named)) : text;
 }

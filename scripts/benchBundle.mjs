@@ -9,6 +9,7 @@
 //   range:<NAME>    one call over a 100k-row column, ns a cell
 //   cold            the first DIST_LUM after the bundle loads (shared tables + model), ms
 //   models          DIST_LUM(1, "P18-BAO; H0=…") with a new model each call, ms a model (mean of 200)
+//   specs:<N>       DIST_LUM(1, <column of N distinct specs>): ms a spec and the extra RSS the call took, MiB
 //   catalogue:<NAME> one call over a 100k-row column of a catalogue function (arguments below), ns a cell
 import { readFileSync } from "node:fs";
 import vm from "node:vm";
@@ -126,6 +127,25 @@ if (figure === "cold") {
   const t0 = now();
   for (let i = 0; i < count; i++) sink += (await settle(fn([[1]], [[`${preset}; H0=${60 + i / 20}`]])))[0][0];
   result = { ms: (now() - t0) / count, check: sink };
+} else if (figure.startsWith("specs:")) {
+  // one DIST_LUM over a column of distinct model specs: time a spec and the memory the call keeps
+  const count = Number(figure.slice("specs:".length));
+  const fn = registered.get("DIST_LUM");
+  await settle(fn([[1]]));
+  const column = Array.from({ length: count }, (_, i) => [`${preset}; H0=${(60 + (20 * i) / count).toFixed(9)}`]);
+  globalThis.gc?.();
+  const before = process.memoryUsage().rss;
+  const heapBase = process.memoryUsage().heapUsed;
+  let peak = before;
+  const watch = setInterval(() => (peak = Math.max(peak, process.memoryUsage().rss)), 5);
+  const t0 = now();
+  const out = await settle(fn([[1]], column));
+  const ms = now() - t0;
+  clearInterval(watch);
+  peak = Math.max(peak, process.memoryUsage().rss);
+  globalThis.gc?.(); // with --expose-gc: what the call still holds once its garbage is collected
+  const retained = globalThis.gc ? (process.memoryUsage().heapUsed - heapBase) / 2 ** 20 : undefined;
+  result = { msPerSpec: ms / count, ms, extraRssMiB: (peak - before) / 2 ** 20, heapAfterGcMiB: retained, check: out[count - 1][0] };
 } else {
   throw new Error(`unknown figure ${figure}`);
 }

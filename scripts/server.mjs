@@ -1,34 +1,84 @@
 // Static HTTPS server for the built add-in (started in the background by `npm start`, ended by
 // `npm stop`). It answers /.zcell-server with its pid, so that start and stop know it is ours.
+// Any web page the developer visits can send requests to localhost, so the server answers a
+// malformed request with 400 and keeps serving, serves only regular files inside the folder (no
+// symbolic link out of it), sends nosniff and each page's own Content-Security-Policy as headers,
+// closes idle and half-open connections, and allows cross-origin reads only of the custom functions'
+// metadata, the one file Excel on the web fetches from another origin (learn.microsoft.com,
+// "Custom functions metadata": the server hosting the JSON file must have CORS enabled).
 // Usage: node scripts/server.mjs <key.pem> <cert.pem> <port> <folder>
-import { createReadStream, existsSync, readFileSync, statSync } from "node:fs";
+import { createReadStream, readFileSync, realpathSync, statSync } from "node:fs";
 import { createServer } from "node:https";
-import { extname, join, normalize } from "node:path";
+import { extname, join, normalize, sep } from "node:path";
 
 const [keyFile, certFile, portText, folder] = process.argv.slice(2);
-const dist = folder.endsWith("/") ? folder : `${folder}/`;
+const root = realpathSync(folder);
+const dist = root.endsWith(sep) ? root : `${root}${sep}`;
 const types = {
   ".html": "text/html; charset=utf-8", ".js": "text/javascript; charset=utf-8", ".json": "application/json",
   ".xml": "application/xml", ".png": "image/png", ".map": "application/json", ".css": "text/css",
 };
+/** Files Excel fetches cross-origin: the custom functions' metadata. */
+const crossOrigin = new Set(["/functions.json"]);
+/** Seconds a connection may stay idle, or take to finish its TLS handshake or its request headers (ZCELL_IDLE_SECONDS). */
+const idleSeconds = Number(process.env.ZCELL_IDLE_SECONDS) > 0 ? Number(process.env.ZCELL_IDLE_SECONDS) : 10;
 
-createServer({ key: readFileSync(keyFile), cert: readFileSync(certFile) }, (req, res) => {
-  const path = normalize(decodeURIComponent(new URL(req.url ?? "/", "https://localhost").pathname)).replace(/^(\.\.[/\\])+/, "");
+/** The Content-Security-Policy a page declares in its meta tag, to send as a header too. */
+function pagePolicy(file) {
+  const match = /<meta\s+http-equiv="?Content-Security-Policy"?\s+content="([^"]*)"/i.exec(readFileSync(file, "utf8"));
+  return match ? match[1] : "default-src 'self'";
+}
+
+/** The regular file inside the folder that a request path names, or undefined. */
+function servedFile(path) {
+  const file = join(dist, path === "/" ? "taskpane.html" : path);
+  if (!file.startsWith(dist)) return undefined;
+  try {
+    const real = realpathSync(file); // a symbolic link pointing out of the folder is not served
+    return real.startsWith(dist) && statSync(real).isFile() ? real : undefined;
+  } catch {
+    return undefined;
+  }
+}
+
+function answer(res, status, text) {
+  res.writeHead(status, { "content-type": "text/plain; charset=utf-8", "x-content-type-options": "nosniff" });
+  res.end(text);
+}
+
+const server = createServer({ key: readFileSync(keyFile), cert: readFileSync(certFile), handshakeTimeout: idleSeconds * 1000 }, (req, res) => {
+  let path;
+  try {
+    path = normalize(decodeURIComponent(new URL(req.url ?? "/", "https://localhost").pathname)).replace(/^(\.\.[/\\])+/, "");
+  } catch {
+    return answer(res, 400, "bad request");
+  }
+  if (req.method !== "GET" && req.method !== "HEAD") return answer(res, 405, "method not allowed");
   if (path === "/.zcell-server") {
-    res.writeHead(200, { "content-type": "application/json" });
+    res.writeHead(200, { "content-type": "application/json", "x-content-type-options": "nosniff" });
     res.end(JSON.stringify({ pid: process.pid, folder: dist }));
     return;
   }
-  const file = join(dist, path === "/" ? "taskpane.html" : path);
-  if (!file.startsWith(dist) || !existsSync(file) || statSync(file).isDirectory()) {
-    res.writeHead(404, { "content-type": "text/plain" });
-    res.end("not found");
-    return;
-  }
-  res.writeHead(200, {
+  const file = servedFile(path);
+  if (!file) return answer(res, 404, "not found");
+  const headers = {
     "content-type": types[extname(file)] ?? "application/octet-stream",
-    "access-control-allow-origin": "*",
+    "x-content-type-options": "nosniff",
     "cache-control": "no-cache",
-  });
-  createReadStream(file).pipe(res);
-}).listen(Number(portText), "127.0.0.1", () => console.log(`serving ${dist} at https://localhost:${portText}/`));
+  };
+  if (extname(file) === ".html") headers["content-security-policy"] = pagePolicy(file);
+  if (crossOrigin.has(path)) headers["access-control-allow-origin"] = "*";
+  res.writeHead(200, headers);
+  if (req.method === "HEAD") return res.end();
+  createReadStream(file).on("error", () => res.destroy()).pipe(res);
+});
+server.headersTimeout = idleSeconds * 1000;
+server.requestTimeout = 2 * idleSeconds * 1000;
+server.keepAliveTimeout = idleSeconds * 1000;
+server.setTimeout(idleSeconds * 1000, (socket) => socket.destroy());
+server.on("clientError", (_error, socket) => {
+  if (socket.writable) socket.end("HTTP/1.1 400 Bad Request\r\nConnection: close\r\n\r\n");
+  else socket.destroy();
+});
+server.on("tlsClientError", (_error, socket) => socket.destroy());
+server.listen(Number(portText), "127.0.0.1", () => console.log(`serving ${dist} at https://localhost:${portText}/`));

@@ -2,7 +2,7 @@
 // with a development certificate, and print how to load it into Excel. A second npm start while
 // our server runs says so; a port held by another program is an error, never a false success.
 import { execFileSync, spawn, spawnSync } from "node:child_process";
-import { existsSync, mkdirSync, openSync, readFileSync, writeFileSync } from "node:fs";
+import { chmodSync, existsSync, mkdirSync, openSync, readFileSync, writeFileSync } from "node:fs";
 import { platform } from "node:os";
 import { join } from "node:path";
 import { nssTrustSteps, selfSignedLeaf } from "./devCertificate.mjs";
@@ -46,6 +46,7 @@ async function certificate() {
       await devCerts.ensureCertificatesAreInstalled();
       const options = await devCerts.getHttpsServerOptions();
       writeFileSync(join(stateDir, "dev.key"), options.key, { mode: 0o600 });
+      chmodSync(join(stateDir, "dev.key"), 0o600); // the mode above applies only to a new file
       writeFileSync(join(stateDir, "dev.crt"), options.cert);
       const { caCertificatePath } = await import("office-addin-dev-certs/lib/defaults.js");
       return { key: join(stateDir, "dev.key"), cert: join(stateDir, "dev.crt"), ca: caCertificatePath };

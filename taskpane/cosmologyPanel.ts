@@ -93,15 +93,24 @@ export function setupCosmology(): void {
     else refreshForm();
   });
 
+  // The settings were written by whoever last saved the workbook: whatever they hold, the form
+  // starts, says what is wrong, and keeps every control working so a valid model can be applied.
   const setting = readActiveModel();
   const stored = readModelSetting();
   workbookModels = setting.models ?? noWorkbookModels;
+  const warnings = [...(setting.warning ? [`${setting.warning}. Nothing has been overwritten; apply a model to store one.`] : []), ...workbookModels.problems];
   showModelChoices();
-  fillForm(formFromSpec(setting.spec, workbookModels.named));
-  showBadge(setting.spec);
-  if (setting.warning) {
+  try {
+    fillForm(formFromSpec(setting.spec, workbookModels.named));
+    showBadge(setting.spec);
+  } catch (e) {
+    fillForm(formFromSpec(defaultModelSpec));
+    showBadge(defaultModelSpec);
+    warnings.push(`The stored model cannot be shown (${(e as Error).message}); the form shows ${defaultModelSpec}.`);
+  }
+  if (warnings.length) {
     const w = $("settings-warning");
-    w.textContent = `${setting.warning}. Nothing has been overwritten; apply a model to store one.`;
+    w.textContent = warnings.join(" ");
     w.hidden = false;
   } else if (stored === undefined) {
     $("apply-status").textContent = `This workbook stores no cosmology yet: formulas use ${defaultModelSpec}.`;
@@ -127,12 +136,18 @@ export function setupCosmology(): void {
     status.textContent = "Applying…";
     try {
       await writeModelSetting(spec);
-      $("settings-warning").hidden = true;
-      showBadge(spec);
+    } catch (e) {
+      status.textContent = `Not applied: ${(e as Error).message}`;
+      return;
+    }
+    $("settings-warning").hidden = true;
+    showBadge(spec);
+    try {
       const count = await recalculateWorkbook();
       status.textContent = `Applied ${spec}; ${plural(count, "formula")} recalculated.`;
     } catch (e) {
-      status.textContent = `Not applied: ${(e as Error).message}`;
+      // the model is stored; only the request to recalculate failed: say exactly that
+      status.textContent = `Applied ${spec}: it is stored in the workbook, but Excel did not recalculate (${(e as Error).message}). Cells show values of the previous model until the workbook recalculates.`;
     }
   });
 }

@@ -7,7 +7,7 @@
  */
 import { activeModelSettingKey } from "../functions/activeModel.js";
 import { storedWorkbookModels, workbookModelsSettingKey } from "../functions/workbookModels.js";
-import { callsZcFunction, typedFormula } from "../functions/storedFormula.js";
+import { callsZcFunction } from "../functions/storedFormula.js";
 import { columnName, qualifiedAddress, splitAddress, topLeft } from "./cellAddress.js";
 
 /** A rectangle of cells as the pane sees it. */
@@ -304,52 +304,99 @@ export interface UnboundFormula {
 export const scanChunkCells = 50_000;
 
 /**
- * Visits every cell of the used range of every sheet, reading at most `scanChunkCells` cells a
- * request (a large sheet is read in row chunks).
- * @returns the sheets that are protected
+ * Cells scanned at most on one sheet (21 requests of `scanChunkCells`): a crafted sheet with values in
+ * A1 and XFD1048576 has a used range of 17 billion cells, and a scan must end in seconds.
  */
-async function scanUsedCells(visit: (sheet: string, address: string, formula: unknown, value: unknown) => void): Promise<Set<string>> {
+export const scanCellLimit = 1_048_576;
+
+/** Lets the person stop a scan between two requests. */
+export interface ScanControl {
+  cancelled: boolean;
+}
+
+/** Where a scan did not look: a sheet cut at the cell limit, or the sheets left when it was stopped. */
+export interface ScanGap {
+  sheet: string;
+  /** e.g. "rows 1–63 of A1:XFD1048576 scanned (the first 1,048,576 cells)" or "not scanned (stopped)" */
+  what: string;
+}
+
+/** Gives the pane's other work (clicks, other tabs) a turn between two requests of a long scan. */
+const yieldToPage = () => new Promise<void>((resolve) => setTimeout(resolve, 0));
+
+/**
+ * Visits the cells of the used range (values only: formatting does not widen it) of every sheet,
+ * reading at most `scanChunkCells` cells a request and `scanCellLimit` cells a sheet, yielding to
+ * the page between requests and stopping when `control.cancelled` is set.
+ * @returns the sheets that are protected, and where the scan did not look
+ */
+async function scanUsedCells(
+  visit: (sheet: string, address: string, formula: unknown, value: unknown) => void,
+  control: ScanControl = { cancelled: false },
+): Promise<{ locked: Set<string>; gaps: ScanGap[] }> {
   return Excel.run(async (context) => {
     const sheets = context.workbook.worksheets;
     sheets.load("items/name");
     await context.sync();
     const used = sheets.items.map((sheet) => {
       sheet.protection.load("protected");
-      return { sheet, range: sheet.getUsedRangeOrNullObject().load("address,rowCount,columnCount") };
+      return { sheet, range: sheet.getUsedRangeOrNullObject(true).load("address,rowCount,columnCount") };
     });
     await context.sync();
     const locked = new Set<string>();
+    const gaps: ScanGap[] = [];
     for (const { sheet, range } of used) {
       if (sheet.protection.protected) locked.add(sheet.name);
       if (range.isNullObject) continue;
-      const origin = topLeft(splitAddress(range.address).address);
+      if (control.cancelled) {
+        gaps.push({ sheet: sheet.name, what: "not scanned (stopped)" });
+        continue;
+      }
+      const local = splitAddress(range.address).address;
+      const origin = topLeft(local);
       const rowsPerChunk = Math.max(1, Math.floor(scanChunkCells / range.columnCount));
-      for (let r0 = 0; r0 < range.rowCount; r0 += rowsPerChunk) {
-        const rows = Math.min(rowsPerChunk, range.rowCount - r0);
+      const rowLimit = Math.max(1, Math.floor(scanCellLimit / range.columnCount));
+      const rowsToScan = Math.min(range.rowCount, rowLimit);
+      let r0 = 0;
+      for (; r0 < rowsToScan && !control.cancelled; r0 += rowsPerChunk) {
+        const rows = Math.min(rowsPerChunk, rowsToScan - r0);
         const chunk = range.getCell(r0, 0).getResizedRange(rows - 1, range.columnCount - 1).load("formulas,values");
         await context.sync();
         const values = chunk.values;
         chunk.formulas.forEach((row, i) =>
           row.forEach((formula, j) => visit(sheet.name, `${columnName(origin.col + j)}${origin.row + r0 + i}`, formula, values[i][j])),
         );
+        await yieldToPage();
+      }
+      const scanned = Math.min(r0, rowsToScan);
+      if (scanned < range.rowCount) {
+        const last = origin.row + scanned - 1;
+        gaps.push({
+          sheet: sheet.name,
+          what: scanned === 0
+            ? `not scanned (${control.cancelled ? "stopped" : "too large"})`
+            : `scanned rows ${origin.row}–${last} of ${local} only (${control.cancelled ? "stopped" : `the first ${(scanned * range.columnCount).toLocaleString("en-US")} cells`})`,
+        });
       }
     }
-    return locked;
+    return { locked, gaps };
   });
 }
 
 /**
  * Finds, in the used range of every sheet, the cells whose formula calls a ZC function (typed or
  * stored spelling) and whose value is #NAME?.
- * @returns the cells, and the sheets among theirs that are protected (nothing can be re-entered there)
+ * @param control set `cancelled` to stop between two requests
+ * @returns the cells, the sheets among theirs that are protected (nothing can be re-entered there),
+ *   and where the scan did not look
  */
-export async function findUnboundFormulas(): Promise<{ formulas: UnboundFormula[]; protectedSheets: string[] }> {
+export async function findUnboundFormulas(control?: ScanControl): Promise<{ formulas: UnboundFormula[]; protectedSheets: string[]; gaps: ScanGap[] }> {
   const formulas: UnboundFormula[] = [];
-  const locked = await scanUsedCells((sheet, address, formula, value) => {
+  const { locked, gaps } = await scanUsedCells((sheet, address, formula, value) => {
     if (value === "#NAME?" && callsZcFunction(formula)) formulas.push({ sheet, address, formula: String(formula) });
-  });
+  }, control);
   const protectedSheets = [...new Set(formulas.map((f) => f.sheet))].filter((sheet) => locked.has(sheet));
-  return { formulas, protectedSheets };
+  return { formulas, protectedSheets, gaps };
 }
 
 /**
@@ -374,8 +421,9 @@ export async function countCellsNaming(name: string): Promise<number> {
 const reenterBatch = 1_000;
 
 /**
- * Enters each formula again (in the typed spelling, `ZC.NAME(`), which makes Excel bind it to the
- * loaded add-in. Cells on protected sheets are left as they are.
+ * Enters each formula again, which makes Excel bind it to the loaded add-in. The caller passes only
+ * formulas `restorableFormula` allowed, in the typed spelling (`ZC.NAME(`). Cells on protected
+ * sheets are left as they are.
  * @returns the number re-entered and the number left alone, by sheet
  */
 export async function reenterFormulas(formulas: UnboundFormula[]): Promise<{ reentered: Map<string, number>; leftAlone: Map<string, number> }> {
@@ -393,7 +441,7 @@ export async function reenterFormulas(formulas: UnboundFormula[]): Promise<{ ree
         tally(leftAlone, f.sheet);
         continue;
       }
-      context.workbook.worksheets.getItem(f.sheet).getRange(f.address).formulas = [[typedFormula(f.formula)]];
+      context.workbook.worksheets.getItem(f.sheet).getRange(f.address).formulas = [[f.formula]];
       tally(reentered, f.sheet);
       if (++pending === reenterBatch) {
         await context.sync();

@@ -5,12 +5,15 @@
  * is recomputed with the same shared wrapper the worksheet functions use, so the reason given is
  * the one behind the cell's error.
  */
-import { Cosmology, parseModelSpec } from "../core/index.js";
+import type { Cosmology } from "../core/index.js";
 import type { ActiveModelSetting } from "../functions/activeModel.js";
 import { CellError } from "../functions/cellError.js";
 import { definitions } from "../functions/definitions.js";
 import { describeModel } from "../functions/describeModel.js";
 import { evaluate, type Cell } from "../functions/evaluate.js";
+import { modelFor } from "../functions/modelCache.js";
+import { resolvedSpec } from "../functions/workbookModels.js";
+import { columnNumber, splitAddress } from "./cellAddress.js";
 import { findCalls, parseArrayConstant, type FormulaCall, type Token } from "./formulaCalls.js";
 
 /** One explained call. */
@@ -88,13 +91,29 @@ const about: Record<string, { summary: string; equation: string; method: string;
   VERSION: { summary: "version and engine conventions", equation: "—", method: closedForm },
 };
 
+/** Cells the inspector reads from one reference at most (a whole column is 1,048,576). */
+export const inspectorReadLimit = 100_000;
+
+/** How many cells a reference names (A1, A1:C9, A:A, 1:3; a name counts as one cell here). */
+function referenceCells(reference: string): number {
+  const local = splitAddress(reference.replaceAll("$", "")).address;
+  const [a, b = a] = local.split(":");
+  const cell = /^([A-Za-z]{1,3})?(\d+)?$/;
+  const p = cell.exec(a);
+  const q = cell.exec(b);
+  if (!p || !q) return 1;
+  const rows = p[2] && q[2] ? Math.abs(Number(q[2]) - Number(p[2])) + 1 : 1_048_576;
+  const cols = p[1] && q[1] ? Math.abs(columnNumber(q[1]) - columnNumber(p[1])) + 1 : 16_384;
+  return rows * cols;
+}
+
 /** A value from an argument's tokens, or undefined when only Excel can compute it. */
 async function argumentValue(
   tokens: Token[],
   text: string,
   read: ReferenceReader,
   nested: Map<string, Cell>,
-): Promise<{ known: boolean; value: unknown }> {
+): Promise<{ known: boolean; value: unknown; note?: string }> {
   if (tokens.length === 0) return { known: true, value: undefined };
   const only = tokens.length === 1 ? tokens[0] : undefined;
   const negative = tokens.length === 2 && tokens[0].text === "-" && tokens[1].kind === "number";
@@ -110,8 +129,11 @@ async function argumentValue(
     case "array":
       return { known: true, value: parseArrayConstant(only.text) };
     case "ref":
-    case "name":
+    case "name": {
+      const cells = referenceCells(only.text);
+      if (cells > inspectorReadLimit) return { known: false, value: undefined, note: `a range of ${cells.toLocaleString("en-US")} cells, not read (the inspector reads at most ${inspectorReadLimit.toLocaleString("en-US")})` };
       return { known: true, value: await read(only.text) };
+    }
     default:
       return { known: false, value: undefined };
   }
@@ -145,18 +167,24 @@ function modelConventions(m: Cosmology): string[] {
 /**
  * Explains every ZC call in a formula.
  * @param formula the cell's formula
- * @param read reads the values of a reference
+ * @param readReference reads the values of a reference
  * @param active the workbook's active model
  * @param cellValue the value Excel shows in the cell (used when an argument only Excel can compute)
  */
 export async function explainFormula(
   formula: string,
-  read: ReferenceReader,
+  readReference: ReferenceReader,
   active: ActiveModelSetting,
   cellValue?: unknown,
 ): Promise<CallExplanation[]> {
   const calls = findCalls(formula).filter((c) => c.name.startsWith("ZC.") && definitions[c.name.slice(3)]);
   const nested = new Map<string, Cell>();
+  const readOnce = new Map<string, Promise<unknown[][]>>(); // a reference named by several calls is read once
+  const read: ReferenceReader = (reference) => {
+    let values = readOnce.get(reference);
+    if (!values) readOnce.set(reference, (values = readReference(reference)));
+    return values;
+  };
   const explanations: CallExplanation[] = [];
   // innermost first, so that a nested call's value is known to its caller
   for (const call of [...calls].sort((a, b) => b.depth - a.depth)) {
@@ -181,12 +209,12 @@ async function explainCall(
   for (let i = 0; i < def.args.length; i++) {
     const spec = def.args[i];
     const text = call.args[i] ?? "";
-    const { known, value } = await argumentValue(call.argTokens[i] ?? [], text, read, nested);
+    const { known, value, note } = await argumentValue(call.argTokens[i] ?? [], text, read, nested);
     allKnown &&= known;
     raw.push(value);
     const unitSpec = def.args.find((a) => a.kind === "unit" && (typeof a.applies === "string" ? [a.applies] : a.applies).includes(spec.name));
     const unit = unitSpec?.kind === "unit" ? unitSpec.default : undefined;
-    let shown = known ? showValue(value) : "computed by Excel";
+    let shown = known ? showValue(value) : (note ?? "computed by Excel");
     if (value === undefined || value === "") {
       if (spec.kind === "unit") shown = `default "${spec.default}"`;
       else if (spec.kind === "model") shown = "the workbook's model";
@@ -203,7 +231,7 @@ async function explainCall(
     const explicit = typeof text === "string" && text.trim() !== "";
     const spec = explicit ? (text as string) : active.spec;
     try {
-      const m = new Cosmology(parseModelSpec(spec, active.models?.named));
+      const m = modelFor(resolvedSpec(spec, active.models)); // the functions' own cache: no model is built twice
       model = { spec: m.spec, source: explicit ? "given in the formula" : "the workbook's model", description: describeModel(m) };
       conventions = modelConventions(m);
     } catch (e) {

@@ -8,10 +8,11 @@ import { readActiveModel } from "../functions/activeModel.js";
 import { zcellVersion } from "../functions/describeModel.js";
 import { callsZcFunction } from "../functions/storedFormula.js";
 import { columnName, splitAddress, topLeft } from "./cellAddress.js";
-import { $, plural } from "./dom.js";
+import { $, el, plural } from "./dom.js";
 import { freezeCells, readAnnotations, readReference, readSelection, thawCells, undoGroupSupported, type FreezeCell } from "./excelHost.js";
 import { explainFormula } from "./explainCall.js";
 import { parseProvenanceNote, provenanceNote } from "./provenanceNote.js";
+import { restorableFormula } from "./restorableFormula.js";
 
 /** Every cell of a selection with its address, formula and value. */
 function cellsOf(selection: { address: string; formulas: unknown[][]; values: unknown[][] }) {
@@ -89,30 +90,94 @@ export function setupFreeze(): void {
     status.textContent = "Nothing frozen.";
   });
 
+  setupThaw();
+}
+
+/** A cell Thaw may restore: its address, the formula to write and the models its note names. */
+type Restoring = { address: string; formula: string; models: string[] };
+
+/** How many of the formulas to restore the confirmation shows. */
+const previewCount = 5;
+
+/** A list item: the cell's address and a text (a formula in code, or a reason). */
+function listItem(address: string, text: string, asCode: boolean): HTMLElement {
+  const item = el("li", `${address}: `);
+  item.append(asCode ? el("code", text) : document.createTextNode(text));
+  return item;
+}
+
+/**
+ * Wires Thaw. A note is only a claim: each formula it names goes through `restorableFormula` (ZC
+ * calls and their arguments only, nothing that could spill), the pane shows how many it will restore
+ * and the first few, and writes them on one confirmation, only into the selected cells. Every refused
+ * cell is listed with its address and the reason.
+ */
+function setupThaw(): void {
+  const thawStatus = $("thaw-status");
+  const refusedList = $("thaw-refused");
+  let pending: { sheet: string; cells: Restoring[] } | undefined;
+  const hideConfirm = () => {
+    pending = undefined;
+    $("thaw-confirm").hidden = true;
+  };
+
   $("thaw").addEventListener("click", async () => {
-    const thawStatus = $("thaw-status");
+    hideConfirm();
     thawStatus.textContent = "";
+    refusedList.replaceChildren();
     try {
       const { sheet, cells } = cellsOf(await readSelection());
       const plain = cells.filter((c) => !(typeof c.formula === "string" && c.formula.startsWith("=")));
       const notes = await readAnnotations(sheet, plain.map((c) => c.address));
-      const thawing = [...notes].flatMap(([address, text]) => {
+      const restoring: Restoring[] = [];
+      const refused: { address: string; reason: string }[] = [];
+      for (const [address, text] of notes) {
         const provenance = parseProvenanceNote(text);
-        return provenance ? [{ address, ...provenance }] : [];
-      });
-      if (thawing.length === 0) {
-        thawStatus.textContent = "The selection has no frozen cells (cells whose note zcell wrote when freezing).";
+        if (!provenance) continue;
+        const verdict = restorableFormula(provenance.formula, { singleCell: true });
+        if (verdict.ok) restoring.push({ address, formula: verdict.formula, models: provenance.models });
+        else refused.push({ address, reason: verdict.reason });
+      }
+      for (const r of refused) refusedList.append(listItem(r.address, `not restored: ${r.reason}`, false));
+      const refusedText = refused.length ? ` ${plural(refused.length, "cell")} not restored, listed below.` : "";
+      if (restoring.length === 0) {
+        thawStatus.textContent = refused.length
+          ? `Nothing to thaw:${refusedText}`
+          : "The selection has no frozen cells (cells whose note zcell wrote when freezing).";
         return;
       }
-      await thawCells(sheet, thawing);
+      pending = { sheet, cells: restoring };
+      $("thaw-confirm-text").textContent =
+        `Restore ${plural(restoring.length, "ZC formula")} in the selection` +
+        (restoring.length > previewCount ? ` (the first ${previewCount} below)?` : "?") +
+        refusedText;
+      $("thaw-preview").replaceChildren(...restoring.slice(0, previewCount).map((c) => listItem(c.address, c.formula, true)));
+      $("thaw-confirm").hidden = false;
+      $("thaw-go").focus();
+    } catch (e) {
+      thawStatus.textContent = `Not thawed: ${(e as Error).message}`;
+    }
+  });
+
+  $("thaw-go").addEventListener("click", async () => {
+    const thawing = pending;
+    hideConfirm();
+    if (!thawing) return;
+    try {
+      await thawCells(thawing.sheet, thawing.cells);
       const now = readActiveModel().spec;
-      const moved = thawing.filter((c) => c.models.length > 0 && !c.models.includes(now)).length;
+      const moved = thawing.cells.filter((c) => c.models.length > 0 && !c.models.includes(now)).length;
       thawStatus.textContent =
-        `Thawed ${plural(thawing.length, "cell")}: the ZC formulas are back and their notes removed. ` +
+        `Thawed ${plural(thawing.cells.length, "cell")}: the ZC formulas are back and their notes removed. ` +
         `They compute under the workbook's model (${now}) unless they name their own` +
         (moved ? `; ${moved} of them had been frozen under another model, so their values may change.` : ".");
     } catch (e) {
       thawStatus.textContent = `Not thawed: ${(e as Error).message}`;
     }
+  });
+
+  $("thaw-cancel").addEventListener("click", () => {
+    hideConfirm();
+    thawStatus.textContent = "Nothing thawed.";
   });
 }

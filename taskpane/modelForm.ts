@@ -127,7 +127,7 @@ export function modelFromForm(v: FormValues, named: NamedModels = noNamed): Form
   }
 }
 
-const fmt = (x: number, digits = 5) => (Number.isFinite(x) ? Number(x.toPrecision(digits)).toString() : "∞");
+const fmt = (x: number, digits = 5) => (Number.isFinite(x) ? Number(x.toPrecision(digits)).toString() : Number.isNaN(x) ? "not finite numerically" : "∞");
 
 /** The derived values shown under the form. */
 export function derivedValues(m: Cosmology): { label: string; value: string }[] {

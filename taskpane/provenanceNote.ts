@@ -1,6 +1,10 @@
 /**
  * The note attached to a frozen cell, so that a reader without the add-in keeps the number and its
- * provenance: the original formula, the full model spec(s) and the zcell version.
+ * provenance: the original formula, the full model spec(s) and the zcell version. The formula is
+ * written as a JSON string, so a formula of several lines comes back whole; notes written before
+ * (the formula as it was, which may run over several lines up to the Model line) are still read.
+ * What a note says is only a claim: Thaw writes its formula back only when `restorableFormula`
+ * allows it.
  */
 
 /**
@@ -13,7 +17,7 @@ export function provenanceNote(formula: string, models: string[], version: strin
   const unique = [...new Set(models)];
   return [
     `Frozen by zcell ${version} on ${date}.`,
-    `Formula: ${formula}`,
+    `Formula: ${JSON.stringify(formula)}`,
     `Model: ${unique.length ? unique.join(" | ") : "none (no cosmology needed)"}`,
     "Value computed under that cosmology; recompute with the add-in if the model changes.",
   ].join("\n");
@@ -33,10 +37,28 @@ export interface Provenance {
  * @param text the note's (or comment's) content
  */
 export function parseProvenanceNote(text: string): Provenance | undefined {
+  if (text.length > maxNoteLength) return undefined;
   const lines = text.split(/\r?\n/);
   if (!/^Frozen by zcell \S+ on /.test(lines[0] ?? "")) return undefined;
-  const formula = lines.find((l) => l.startsWith("Formula: ="))?.slice("Formula: ".length);
-  const model = lines.find((l) => l.startsWith("Model: "))?.slice("Model: ".length);
-  if (!formula || model === undefined) return undefined;
+  const start = lines.findIndex((l) => l.startsWith("Formula: "));
+  let end = lines.length - 1;
+  while (end > start && !lines[end].startsWith("Model: ")) end--;
+  if (start < 0 || end <= start) return undefined;
+  const written = lines[start].slice("Formula: ".length);
+  let formula: unknown;
+  if (written.startsWith('"')) {
+    try {
+      formula = JSON.parse(written);
+    } catch {
+      return undefined;
+    }
+  } else {
+    formula = lines.slice(start, end).join("\n").slice("Formula: ".length); // an earlier note: the formula as it was
+  }
+  if (typeof formula !== "string" || !formula.startsWith("=")) return undefined;
+  const model = lines[end].slice("Model: ".length);
   return { formula, models: model.startsWith("none (") ? [] : model.split(" | ") };
 }
+
+/** Longer than any note zcell writes (a formula of at most 8,192 characters and its models). */
+const maxNoteLength = 65_536;

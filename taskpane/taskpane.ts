@@ -55,11 +55,16 @@ async function start(): Promise<void> {
   const dark = applyOfficeTheme(office.context.officeTheme);
   setTheme(dark ? webDarkTheme : webLightTheme);
   $("in-excel").hidden = false;
-  setupTabs();
-  setupCosmology();
-  setupTables();
-  setupFreeze();
-  setupRepairBanner();
+  // one panel that fails to start (whatever the workbook holds) leaves the others working
+  for (const setup of [setupTabs, setupCosmology, setupTables, setupFreeze, setupRepairBanner]) {
+    try {
+      setup();
+    } catch (e) {
+      const w = $("settings-warning");
+      w.textContent = `${w.textContent ?? ""} Part of the pane could not start: ${(e as Error).message}`.trim();
+      w.hidden = false;
+    }
+  }
   onSelectionChanged(() => void explainActiveCell());
   await scanForUnboundFormulas().catch(() => undefined); // a failed scan leaves the banner hidden
 }

@@ -6,8 +6,9 @@
  */
 import { spawnSync } from "node:child_process";
 import { X509Certificate } from "node:crypto";
-import { existsSync, mkdtempSync, readFileSync, statSync, writeFileSync } from "node:fs";
-import { createServer, type Server } from "node:net";
+import { copyFileSync, existsSync, mkdtempSync, readFileSync, statSync, symlinkSync, writeFileSync } from "node:fs";
+import { connect as netConnect, createServer, type Server } from "node:net";
+import { connect as tlsConnect } from "node:tls";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
@@ -97,5 +98,77 @@ describe("npm start and npm stop", () => {
     expect(cert.subjectAltName).toMatch(/IP Address:127.0.0.1/);
     expect(cert.keyUsage).toContain("1.3.6.1.5.5.7.3.1");
     expect(statSync(join(state, "localhost.key")).mode & 0o777).toBe(0o600);
+  });
+});
+
+/** One raw request over TLS: the status line's code, the headers, and whether the socket ended. */
+function rawRequest(port: number, target: string): Promise<{ status: number; headers: Record<string, string> }> {
+  return new Promise((resolve, reject) => {
+    const socket = tlsConnect({ host: "127.0.0.1", port, rejectUnauthorized: false }, () => {
+      socket.write(`GET ${target} HTTP/1.1\r\nHost: localhost\r\nConnection: close\r\n\r\n`);
+    });
+    let text = "";
+    socket.setEncoding("utf8");
+    socket.on("data", (d) => (text += d));
+    socket.on("error", reject);
+    socket.on("end", () => {
+      const [head] = text.split("\r\n\r\n");
+      const [statusLine, ...lines] = head.split("\r\n");
+      const headers = Object.fromEntries(lines.map((l) => [l.slice(0, l.indexOf(":")).toLowerCase(), l.slice(l.indexOf(":") + 1).trim()]));
+      resolve({ status: Number(statusLine.split(" ")[1]), headers });
+    });
+  });
+}
+
+describe("the dev server treats every request as a stranger's", () => {
+  const served = mkdtempSync(join(tmpdir(), "zcell-served-"));
+  const outside = mkdtempSync(join(tmpdir(), "zcell-outside-"));
+  const hostileState = mkdtempSync(join(tmpdir(), "zcell-state-"));
+  let hostilePort = 0;
+  const env = () => ({ ...process.env, ZCELL_PORT: String(hostilePort), ZCELL_STATE_DIR: hostileState, ZCELL_DIST: served, ZCELL_NO_BUILD: "1", ZCELL_CERT: "self", ZCELL_IDLE_SECONDS: "1" });
+
+  afterAll(() => {
+    spawnSync(process.execPath, [`${root}scripts/stop.mjs`], { env: env(), encoding: "utf8", timeout: 60_000 });
+  });
+
+  test("malformed targets get 400 and the server keeps serving; links out of the folder, headers, CORS, idle connections", async () => {
+    for (const f of ["taskpane.html", "functions.json", "functions.js"]) copyFileSync(`${testBuildDir}${f}`, join(served, f));
+    writeFileSync(join(outside, "secret.txt"), "not for the web");
+    symlinkSync(join(outside, "secret.txt"), join(served, "secret.txt"));
+    // a key left readable by others is made private again (mode 0600) at the next start
+    writeFileSync(join(hostileState, "localhost.key"), "old", { mode: 0o644 });
+    hostilePort = await freePort();
+    const start = spawnSync(process.execPath, [`${root}scripts/start.mjs`], { env: env(), encoding: "utf8", timeout: 60_000 });
+    expect(`${start.stdout}${start.stderr}`).toContain(`zcell is served at https://localhost:${hostilePort}/`);
+    expect(statSync(join(hostileState, "localhost.key")).mode & 0o777).toBe(0o600);
+
+    // targets that once killed the server (URIError / TypeError uncaught)
+    for (const target of ["/%E0%A4%A", "/%", "//[", "http://[x"]) {
+      expect((await rawRequest(hostilePort, target)).status, target).toBe(400);
+    }
+    expect((await rawRequest(hostilePort, "/.zcell-server")).status).toBe(200);
+
+    // a symbolic link out of the served folder is not followed
+    expect((await rawRequest(hostilePort, "/secret.txt")).status).toBe(404);
+
+    // the pane: nosniff, its own CSP as a header, no CORS; the functions' metadata: CORS (Excel on the web fetches it)
+    const page = await rawRequest(hostilePort, "/taskpane.html");
+    expect(page.status).toBe(200);
+    expect(page.headers["x-content-type-options"]).toBe("nosniff");
+    const meta = /http-equiv="?Content-Security-Policy"?\s+content="([^"]*)"/.exec(readFileSync(join(served, "taskpane.html"), "utf8"))![1];
+    expect(page.headers["content-security-policy"]).toBe(meta);
+    expect(page.headers["access-control-allow-origin"]).toBeUndefined();
+    expect((await rawRequest(hostilePort, "/functions.js")).headers["access-control-allow-origin"]).toBeUndefined();
+    expect((await rawRequest(hostilePort, "/functions.json")).headers["access-control-allow-origin"]).toBe("*");
+
+    // idle and half-open connections are closed (here after 1 s): a TCP connection that never starts TLS
+    const closedAfter = await new Promise<number>((resolve) => {
+      const t0 = Date.now();
+      const socket = netConnect({ host: "127.0.0.1", port: hostilePort });
+      socket.on("error", () => undefined);
+      socket.on("close", () => resolve(Date.now() - t0));
+      setTimeout(() => resolve(Number.POSITIVE_INFINITY), 8000);
+    });
+    expect(closedAfter).toBeLessThan(5000);
   });
 });
