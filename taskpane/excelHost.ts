@@ -7,7 +7,7 @@
  */
 import { activeModelSettingKey } from "../functions/activeModel.js";
 import { storedWorkbookModels, workbookModelsSettingKey } from "../functions/workbookModels.js";
-import { callsZcFunction } from "../functions/storedFormula.js";
+import { callsZcFunction, typedFormula } from "../functions/storedFormula.js";
 import { columnName, qualifiedAddress, splitAddress, topLeft } from "./cellAddress.js";
 
 /** A rectangle of cells as the pane sees it. */
@@ -421,8 +421,8 @@ export async function countCellsNaming(name: string): Promise<number> {
 const reenterBatch = 1_000;
 
 /**
- * Enters each formula again, which makes Excel bind it to the loaded add-in. The caller passes only
- * formulas `restorableFormula` allowed, in the typed spelling (`ZC.NAME(`). Cells on protected
+ * Enters each formula again in the typed spelling (`ZC.NAME(`), which makes Excel bind it to the
+ * loaded add-in. The caller passes only formulas `restorableFormula` allowed. Cells on protected
  * sheets are left as they are.
  * @returns the number re-entered and the number left alone, by sheet
  */
@@ -441,7 +441,7 @@ export async function reenterFormulas(formulas: UnboundFormula[]): Promise<{ ree
         tally(leftAlone, f.sheet);
         continue;
       }
-      context.workbook.worksheets.getItem(f.sheet).getRange(f.address).formulas = [[f.formula]];
+      context.workbook.worksheets.getItem(f.sheet).getRange(f.address).formulas = [[typedFormula(f.formula)]];
       tally(reentered, f.sheet);
       if (++pending === reenterBatch) {
         await context.sync();

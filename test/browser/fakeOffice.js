@@ -8,8 +8,9 @@
     settings: Object.assign({}, init.settings || {}),
     saved: null,
     calculations: [],
-    notes: [],
-    comments: [],
+    // notes and threaded comments on cells: { address, text }, some possibly crafted by a test
+    notes: init.notes ? init.notes.slice() : [],
+    comments: init.comments ? init.comments.slice() : [],
     // charts the pane inserted: type, source, titles, position and series (name, x and y ranges)
     charts: [],
     handlers: [],
@@ -37,12 +38,13 @@
       sheet = address.slice(0, bang).replace(/^'(.*)'$/, "$1").replace(/''/g, "'");
       local = address.slice(bang + 1);
     }
-    const [a, b = a] = local.replace(/\$/g, "").split(":");
-    const p = (x) => {
-      const m = /^([A-Z]+)(\d+)$/.exec(x);
-      return { c: colNum(m[1]), r: Number(m[2]) };
+    const [a, b = a] = local.replace(/\$/g, "").toUpperCase().split(":");
+    // a cell, or a whole column (A:A) or row (1:3) as Excel's sheet is 1,048,576 rows by 16,384 columns
+    const p = (x, end) => {
+      const m = /^([A-Z]*)(\d*)$/.exec(x);
+      return { c: m[1] ? colNum(m[1]) : end ? 16384 : 1, r: m[2] ? Number(m[2]) : end ? 1048576 : 1 };
     };
-    const s = p(a), e = p(b);
+    const s = p(a, false), e = p(b, true);
     return { sheet, r0: s.r, c0: s.c, r1: e.r, c1: e.c };
   }
   function makeRange(sheetName, area) {
@@ -185,10 +187,17 @@
         getActiveWorksheet() { return worksheet(selectedSheet()); },
       },
       names: { getItem(name) { throw new Error("no name " + name); } },
-      application: { calculate(type) { fake.calculations.push(type); } },
+      application: {
+        calculate(type) {
+          if (init.calculateFails) throw Object.assign(new Error("The request could not be completed (simulated)."), { code: "GeneralException" });
+          fake.calculations.push(type);
+        },
+      },
       comments: { add(address, text) { fake.comments.push({ address, text }); } },
     };
-    return { workbook, sync: () => Promise.resolve() };
+    // init.syncDelayMs stands for a real host's round trip (a long scan then takes a while)
+    const sync = () => (init.syncDelayMs ? new Promise((r) => setTimeout(r, init.syncDelayMs)) : Promise.resolve());
+    return { workbook, sync };
   }
 
   window.Office = {

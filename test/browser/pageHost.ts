@@ -4,9 +4,10 @@
  * check that chromium is there at all.
  */
 import { existsSync, readFileSync } from "node:fs";
+import { fileURLToPath } from "node:url";
 import { createServer } from "node:http";
 import { extname, join } from "node:path";
-import { chromium, type Browser } from "playwright-core";
+import { chromium, type Browser, type Page } from "playwright-core";
 import { testBuildDir } from "../testBuild.js";
 
 const chromiumPath = "/usr/bin/chromium";
@@ -55,4 +56,50 @@ export async function startPageHost(pages: Record<string, string> = {}): Promise
       await new Promise((r) => server.close(r));
     },
   };
+}
+
+const fakeOffice = readFileSync(fileURLToPath(new URL("./fakeOffice.js", import.meta.url)), "utf8");
+
+/** What the fake host starts with (test/browser/fakeOffice.js reads it as window.__fakeInit). */
+export interface FakeInit {
+  theme?: object;
+  settings?: Record<string, unknown>;
+  sheets?: Record<string, Record<string, { formula?: string; value?: unknown }>>;
+  selection?: string;
+  excelApi?: string;
+  protectedSheets?: string[];
+  [option: string]: unknown;
+}
+
+/** A page of the pane with the errors it threw collected. */
+export type PanePage = Page & { errors: string[] };
+
+/**
+ * Opens the built pane at the pane's narrowest width (320 px) with the fake host serving office.js.
+ * @param officeAvailable false: the office.js request fails, as outside Office
+ * @param beforeLoad a script run in the page before any of its own (e.g. to observe long tasks)
+ */
+export async function openPane(host: PageHost, init: FakeInit, officeAvailable = true, beforeLoad?: () => void): Promise<PanePage> {
+  const page = (await host.browser.newPage({ viewport: { width: 320, height: 900 } })) as PanePage;
+  page.errors = [];
+  page.on("pageerror", (e) => page.errors.push(String(e)));
+  await page.route("https://appsforoffice.microsoft.com/**", (route) =>
+    officeAvailable ? route.fulfill({ contentType: "text/javascript", body: fakeOffice }) : route.abort(),
+  );
+  await page.addInitScript((value) => {
+    (window as unknown as { __fakeInit: unknown }).__fakeInit = value;
+  }, init);
+  if (beforeLoad) await page.addInitScript(beforeLoad);
+  await page.goto(`${host.base}taskpane.html`);
+  return page;
+}
+
+/** A copy of part of the fake host's state, e.g. fakeState(page, "sheets.Sheet1"). */
+export function fakeState(page: Page, path: string): Promise<unknown> {
+  return page.evaluate(`JSON.parse(JSON.stringify(window.__fake.${path}))`);
+}
+
+/** Selects cells as a person would (the pane hears the selection event). */
+export function selectCells(page: Page, address: string): Promise<void> {
+  return page.evaluate((a) => (window as unknown as { __fake: { select(a: string): void } }).__fake.select(a), address);
 }

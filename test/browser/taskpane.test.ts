@@ -6,13 +6,12 @@
  */
 import { mkdirSync, readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
-import type { Browser, Page } from "playwright-core";
-import { browserAvailable, startPageHost, type PageHost } from "./pageHost.js";
+import type { Page } from "playwright-core";
+import { browserAvailable, fakeState, openPane as openPaneIn, startPageHost, type PageHost, type PanePage } from "./pageHost.js";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 
 const root = fileURLToPath(new URL("../../", import.meta.url));
 const shots = `${root}test-artifacts/screenshots/`;
-const fakeOffice = readFileSync(`${root}test/browser/fakeOffice.js`, "utf8");
 const axeSource = readFileSync(`${root}node_modules/axe-core/axe.min.js`, "utf8");
 
 /** axe-core's violations of the WCAG 2.0–2.2 A/AA rules and of its best practices, as "rule: targets". */
@@ -42,35 +41,21 @@ const workbook = {
 
 describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host", () => {
   let host: PageHost;
-  let base = "";
-  let browser: Browser;
 
   beforeAll(async () => {
     mkdirSync(shots, { recursive: true });
     host = await startPageHost();
-    ({ base, browser } = host);
   });
 
   afterAll(async () => {
     await host?.close();
   });
 
-  async function openPane(theme: object, settings: Record<string, unknown>, officeAvailable = true, host: object = {}): Promise<Page> {
-    const page = await browser.newPage({ viewport: { width: 320, height: 900 } });
-    const errors: string[] = [];
-    page.on("pageerror", (e) => errors.push(String(e)));
-    (page as unknown as { errors: string[] }).errors = errors;
-    await page.route("https://appsforoffice.microsoft.com/**", (route) =>
-      officeAvailable ? route.fulfill({ contentType: "text/javascript", body: fakeOffice }) : route.abort(),
-    );
-    await page.addInitScript((init) => {
-      (window as unknown as { __fakeInit: unknown }).__fakeInit = init;
-    }, { theme, settings, sheets: structuredClone(workbook), selection: "Sheet1!B2", ...host });
-    await page.goto(`${base}taskpane.html`);
-    return page;
+  function openPane(theme: object, settings: Record<string, unknown>, officeAvailable = true, extra: object = {}): Promise<PanePage> {
+    return openPaneIn(host, { theme, settings, sheets: structuredClone(workbook), selection: "Sheet1!B2", ...extra }, officeAvailable);
   }
 
-  const fake = (page: Page, expr: string) => page.evaluate(`JSON.parse(JSON.stringify(window.__fake.${expr}))`);
+  const fake = fakeState;
 
   for (const [themeName, theme] of [["light", light], ["dark", dark]] as const) {
     test(`workbook cosmology (${themeName}): shows the stored model, validates, applies and recalculates`, async () => {
@@ -234,8 +219,11 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       expect(cells.C2).toEqual({ value: -20.3 });
       const notes = (await fake(page, "notes")) as { address: string; text: string }[];
       expect(notes.map((n) => n.address)).toEqual(["'Sheet1'!B2", "'Sheet1'!C2"]);
-      expect(notes[0].text).toMatch(/^Frozen by zcell \d+\.\d+\.\d+ on \d{4}-\d\d-\d\d\.\nFormula: =ZC.DIST_LUM\(A2\)\nModel: W9-ALL/);
+      expect(notes[0].text).toMatch(/^Frozen by zcell \d+\.\d+\.\d+ on \d{4}-\d\d-\d\d\.\nFormula: "=ZC.DIST_LUM\(A2\)"\nModel: W9-ALL/);
       await page.locator("#thaw").click();
+      await expect.poll(() => page.locator("#thaw-confirm-text").textContent()).toBe("Restore 2 ZC formulas in the selection?");
+      expect(await page.locator("#thaw-preview").textContent()).toBe("B2: =ZC.DIST_LUM(A2)C2: =ZC.MAG_ABS(22, A2, ZC.KCORRECTION(A2, -0.5))");
+      await page.locator("#thaw-go").click();
       await expect.poll(() => page.locator("#thaw-status").textContent()).toMatch(/Thawed 2 cells: the ZC formulas are back and their notes removed. They compute under the workbook's model \(W9-ALL\)/);
       await page.screenshot({ path: `${shots}thaw-${themeName}.png`, fullPage: true });
       const after = (await fake(page, "sheets.Sheet1")) as Record<string, { formula?: string }>;

