@@ -9,6 +9,7 @@
 //   range:<NAME>    one call over a 100k-row column, ns a cell
 //   cold            the first DIST_LUM after the bundle loads (shared tables + model), ms
 //   models          DIST_LUM(1, "P18-BAO; H0=…") with a new model each call, ms a model (mean of 200)
+//   degenerate      the slowest single cell among inverses and distances in models at the edge, ms
 //   specs:<N>       DIST_LUM(1, <column of N distinct specs>): ms a spec and the extra RSS the call took, MiB
 //   catalogue:<NAME> one call over a 100k-row column of a catalogue function (arguments below), ns a cell
 import { readFileSync } from "node:fs";
@@ -146,6 +147,33 @@ if (figure === "cold") {
   globalThis.gc?.(); // with --expose-gc: what the call still holds once its garbage is collected
   const retained = globalThis.gc ? (process.memoryUsage().heapUsed - heapBase) / 2 ** 20 : undefined;
   result = { msPerSpec: ms / count, ms, extraRssMiB: (peak - before) / 2 ** 20, heapAfterGcMiB: retained, check: out[count - 1][0] };
+} else if (figure === "degenerate") {
+  // every inverse and some forward functions in models at the edge of what zcell builds, at values
+  // from tiny to absurd: the slowest single cell once its model is built, ms
+  const models = [
+    "H0=70; Om=0; OL=1; w0=-0.9999999", "H0=70; Om=0; OL=1", "H0=70; Om=1e-12; OL=1", "H0=70; Om=0; OL=0",
+    "H0=70; Om=0.3; w0=-2; wa=3", "H0=70; Om=0.3; w0=-0.34; wa=0", "H0=70; Om=5; OL=0", "P18-BAO; Ok=-0.05",
+  ];
+  const quantities = ["DIST_LUM", "DIST_LOS", "DIST_TRANS", "DIST_ANG", "DIST_LIGHT", "MODULUS", "LOOKBACK", "AGE", "VOLUME"];
+  const values = [1e-12, 1, 1e3, 1e6, 1e30];
+  const redshift = registered.get("REDSHIFT");
+  let slowest = { ms: 0, cell: "" };
+  for (const model of models) {
+    await settle(registered.get("DIST_LUM")([[1]], [[model]])); // build the model first: not timed
+    const cells = [
+      ...quantities.flatMap((q) => values.map((v) => [`REDSHIFT(${v}, "${q}")`, () => redshift([[v]], [[q]], [[model]], null)])),
+      ...[1e-8, 1, 1e4, 1e8, 1e12].flatMap((z) =>
+        ["DIST_LUM", "LOOKBACK", "AGE", "VOLUME", "DIST_LIGHT"].map((f) => [`${f}(${z})`, () => registered.get(f)([[z]], [[model]])]),
+      ),
+    ];
+    for (const [cell, run] of cells) {
+      const t0 = now();
+      await settle(run());
+      const ms = now() - t0;
+      if (ms > slowest.ms) slowest = { ms, cell: `${cell} in "${model}"` };
+    }
+  }
+  result = slowest;
 } else {
   throw new Error(`unknown figure ${figure}`);
 }

@@ -6,7 +6,7 @@
  * same run and the ratios.
  */
 import { execFileSync, spawnSync } from "node:child_process";
-import { mkdtempSync } from "node:fs";
+import { mkdtempSync, statSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
@@ -19,7 +19,7 @@ const rangeFunctions = ["DIST_LUM", "DIST_ANG", "DIST_LOS", "DIST_TRANS", "DIST_
 const catalogueFunctions = ["DIST_LUM_ERR", "LUMINOSITY_ERR", "LUMINOSITY_REST", "REDSHIFT_LIMIT", "VOLUME_MAX", "REDSHIFT_CMB"];
 
 /** Targets of the worksheet path (issue: one formula per row, whole ranges, first formula, new models). */
-const targets = { single: 500, range: 100, cold: 20, models: 1 };
+const targets = { single: 500, range: 100, cold: 20, models: 1, degenerate: 50, specsMiB: 100 };
 
 function build(extra: string[]): string {
   const out = mkdtempSync(join(tmpdir(), "zcell-bench-"));
@@ -28,10 +28,10 @@ function build(extra: string[]): string {
 }
 
 /** min and median of one figure over `runs` fresh processes. */
-function figure(bundle: string, name: string, key: "ns" | "ms"): { min: number; median: number } {
+function figure(bundle: string, name: string, key: "ns" | "ms" | "msPerSpec" | "extraRssMiB"): { min: number; median: number } {
   const values: number[] = [];
   for (let i = 0; i < runs; i++) {
-    const out = execFileSync(process.execPath, [`${root}scripts/benchBundle.mjs`, bundle, name]).toString().trim().split("\n").pop()!;
+    const out = execFileSync(process.execPath, ["--expose-gc", `${root}scripts/benchBundle.mjs`, bundle, name]).toString().trim().split("\n").pop()!;
     values.push(JSON.parse(out)[key] as number);
   }
   values.sort((a, b) => a - b);
@@ -59,7 +59,7 @@ export function benchWorksheet(): void {
   if (ref) console.log(`reference library (astropy, same run): scalar call ${ref.scalar_ns.toFixed(0)} ns, vectorised ${ref.vector_ns.toFixed(0)} ns a value`);
   else console.log("(astropy not found at /usr/bin/python3: no reference timings)");
   for (const [label, bundle] of bundles) {
-    console.log(`\n${label}: ${bundle}`);
+    console.log(`\n${label}: ${bundle} (${(statSync(bundle).size / 1024).toFixed(1)} KiB, no cap: the budgets are the times below)`);
     console.log(pad("figure", 42) + pad("min / median", 20) + pad("target", 12) + "ratio to reference (min)");
     const single = figure(bundle, "single", "ns");
     console.log(pad("one formula a row: 100k DIST_LUM calls", 42) + pad(`${fmt(single, 0)} ns`, 20) + pad(`≤ ${targets.single} ns`, 12) + (ref ? `${(ref.scalar_ns / single.min).toFixed(0)}× the scalar call` : "—"));
@@ -72,6 +72,13 @@ export function benchWorksheet(): void {
     const models = figure(bundle, "models", "ms");
     console.log(pad("a new model (mean of 200)", 42) + pad(`${fmt(models, 2)} ms`, 20) + `≤ ${targets.models} ms`);
     if (bundle !== bundles[0][1]) continue;
+    // a crafted workbook: the slowest cell in a model at the edge, and one formula over 10,000 distinct specs
+    const degenerate = figure(bundle, "degenerate", "ms");
+    console.log(pad("slowest cell, degenerate models (built)", 42) + pad(`${fmt(degenerate, 1)} ms`, 20) + `≤ ${targets.degenerate} ms`);
+    const specTime = figure(bundle, "specs:10000", "msPerSpec");
+    const specMemory = figure(bundle, "specs:10000", "extraRssMiB");
+    console.log(pad("10,000 distinct specs in one call: time", 42) + pad(`${fmt(specTime, 2)} ms a spec`, 20) + "linear");
+    console.log(pad("10,000 distinct specs in one call: memory", 42) + pad(`${fmt(specMemory, 0)} MiB`, 20) + `~${targets.specsMiB} MiB (peak RSS over the call)`);
     for (const name of catalogueFunctions) {
       const r = figure(bundle, `catalogue:${name}`, "ns");
       console.log(pad(`one call over 100k rows: ${name}`, 42) + pad(`${fmt(r, 0)} ns a cell`, 20) + " (no target)");

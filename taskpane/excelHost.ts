@@ -340,6 +340,7 @@ async function scanUsedCells(
     await context.sync();
     const used = sheets.items.map((sheet) => {
       sheet.protection.load("protected");
+      // valuesOnly = true: cells with only formatting do not widen the range (Worksheet.getUsedRangeOrNullObject, @types/office-js)
       return { sheet, range: sheet.getUsedRangeOrNullObject(true).load("address,rowCount,columnCount") };
     });
     await context.sync();

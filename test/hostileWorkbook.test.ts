@@ -218,3 +218,22 @@ describe("the repair scan is bounded", () => {
     ]);
   });
 });
+
+describe("the inspector on a long formula", () => {
+  test("154 calls with one model build it at most once and read each reference once", async () => {
+    const { explainFormula } = await import("../taskpane/explainCall.js");
+    const { cachedModelCount } = await import("../functions/modelCache.js");
+    const formula = "=" + Array.from({ length: 154 }, (_, i) => `ZC.DIST_LUM(A${1 + (i % 2)},"P18-BAO; H0=70.25")`).join("+");
+    expect(formula.length).toBeGreaterThan(5000);
+    const before = cachedModelCount();
+    const reads: string[] = [];
+    const t0 = performance.now();
+    const calls = await explainFormula(formula, async (reference) => (reads.push(reference), [[0.5]]), { spec: "P18-BAO", stored: false });
+    const ms = performance.now() - t0;
+    console.log(`inspector: ${calls.length} calls explained in ${ms.toFixed(0)} ms`);
+    expect(calls.length).toBe(154);
+    expect(calls[0].result).toMatch(/^2\d{3}\.\d+ Mpc$/);
+    expect(cachedModelCount() - before).toBeLessThanOrEqual(1);
+    expect(reads.sort()).toEqual(["A1", "A2"]);
+  });
+});

@@ -63,7 +63,7 @@ describe("provenance and contrast", () => {
   test("the note carries formula, every model and the version", () => {
     const note = provenanceNote("=ZC.DIST_LUM(A2)", ["W9-ALL", "W9-ALL"], "0.1.0", "2026-12-01");
     expect(note).toBe(
-      "Frozen by zcell 0.1.0 on 2026-12-01.\nFormula: =ZC.DIST_LUM(A2)\nModel: W9-ALL\nValue computed under that cosmology; recompute with the add-in if the model changes.",
+      "Frozen by zcell 0.1.0 on 2026-12-01.\nFormula: \"=ZC.DIST_LUM(A2)\"\nModel: W9-ALL\nValue computed under that cosmology; recompute with the add-in if the model changes.",
     );
   });
 

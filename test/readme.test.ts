@@ -52,3 +52,18 @@ describe("README", () => {
     expect(file("scripts/start.mjs")).toContain('"--mode", "production", "--devtool", "source-map"');
   });
 });
+
+describe("README: Security", () => {
+  test("its limits are the ones the code enforces", async () => {
+    const { maxWorkbookModels, maxSpecLength } = await import("../functions/workbookModels.js");
+    const { scanCellLimit } = await import("../taskpane/excelHost.js");
+    const { inspectorReadLimit } = await import("../taskpane/explainCall.js");
+    const text = readme().replace(/\s+/g, " ");
+    expect(text).toContain(`${maxWorkbookModels} workbook models (specs of up to ${maxSpecLength} characters)`);
+    expect(text).toContain(`${scanCellLimit.toLocaleString("en-US")} cells a sheet when it looks`);
+    expect(text).toContain(`${inspectorReadLimit.toLocaleString("en-US")} cells of a reference`);
+    expect(file("functions/modelCache.ts")).toContain("const capacity = 64;");
+    expect(file("scripts/server.mjs")).toContain('const crossOrigin = new Set(["/functions.json"]);');
+    expect(file("scripts/server.mjs")).toMatch(/: 10;/);
+  });
+});
