@@ -226,12 +226,12 @@ export class Cosmology {
     return new Cosmology(parseModelSpec(spec));
   }
 
-  /** Canonical spec text of this model (see `formatModelSpec`). @example "P18-BAO; H0=73" */
+  /** Canonical spec text of this model (see `formatModelSpec`). @example Cosmology.fromSpec("p18-bao ; h0 = 73").spec // "P18-BAO; H0=73" */
   get spec(): string {
     return formatModelSpec(this.parameters);
   }
 
-  /** Dimensionless expansion rate E(z) = H(z)/H0. @param z redshift ≥ 0 @example new Cosmology(EdS).expansionRate(3) // 8 */
+  /** Dimensionless expansion rate E(z) = H(z)/H0. @param z redshift ≥ 0 @example Cosmology.fromSpec("EDS").expansionRate(3) // 8 */
   expansionRate(z: number): number {
     checkRedshift(z);
     return Math.sqrt(this.expansion.e2(1 + z, Math.log1p(z)));
@@ -240,7 +240,8 @@ export class Cosmology {
   /**
    * Hubble parameter H(z) = H0 E(z) [km s⁻¹ Mpc⁻¹] (Hogg 1999 eq. 14).
    * @param z redshift ≥ 0
-   * @returns H(z) in km/s/Mpc; e.g. P18-BAO at z = 0: 67.66
+   * @returns H(z) in km/s/Mpc
+   * @example Cosmology.fromSpec("P18-BAO").hubbleParameterKmSMpc(0) // 67.66
    */
   hubbleParameterKmSMpc(z: number): number {
     return this.H0 * this.expansionRate(z);
@@ -259,7 +260,12 @@ export class Cosmology {
     return this.expansion.densityParameter(component, z);
   }
 
-  /** CMB temperature at z, T(z) = Tcmb (1+z) [K]. @param z redshift ≥ 0 @returns K; P18-BAO at z = 1: 5.451 */
+  /**
+   * CMB temperature at z, T(z) = Tcmb (1+z) [K].
+   * @param z redshift ≥ 0
+   * @returns K
+   * @example Cosmology.fromSpec("P18-BAO").cmbTemperatureK(1) // 5.451
+   */
   cmbTemperatureK(z: number): number {
     checkRedshift(z);
     return this.Tcmb * (1 + z);
@@ -268,7 +274,8 @@ export class Cosmology {
   /**
    * Critical density ρ_crit(z) = 3 H(z)² / (8πG) [kg m⁻³].
    * @param z redshift ≥ 0
-   * @returns kg/m³; e.g. H0 = 70 at z = 0: 9.204e-27
+   * @returns kg/m³
+   * @example Cosmology.fromSpec("H0=70; Om=0.3").criticalDensityKgM3(0) // 9.204e-27 (3 H0²/(8πG))
    */
   criticalDensityKgM3(z: number): number {
     const hPerS = (this.hubbleParameterKmSMpc(z) * 1000) / megaparsecM;
@@ -351,7 +358,8 @@ export class Cosmology {
   /**
    * Line-of-sight comoving distance D_C = D_H ∫₀^z dz'/E(z') (Hogg 1999 eq. 15).
    * @param z redshift ≥ 0
-   * @returns Mpc; e.g. Einstein–de Sitter, H0 = 70, z = 3: 2 D_H (1 − 1/√(1+z)) = 4282.75 Mpc
+   * @returns Mpc
+   * @example Cosmology.fromSpec("EDS").comovingDistanceMpc(3) // 4282.75 (Einstein–de Sitter, H0 = 70: 2 D_H (1 − 1/√(1+z)))
    */
   comovingDistanceMpc(z: number): number {
     return this.hubbleDistanceMpc * this.chiAtU(this.u(z));
@@ -361,7 +369,8 @@ export class Cosmology {
    * Transverse comoving distance D_M (Hogg 1999 eq. 16): D_C if flat, D_H/√Ωk sinh(√Ωk D_C/D_H) if open,
    * D_H/√|Ωk| sin(√|Ωk| D_C/D_H) if closed.
    * @param z redshift ≥ 0
-   * @returns Mpc; e.g. Milne (Om = OL = 0), H0 = 70, z = 1: D_H z(1 + z/2)/(1+z) = 3211.66 Mpc
+   * @returns Mpc
+   * @example Cosmology.fromSpec("H0=70; Om=0; OL=0").transverseComovingDistanceMpc(1) // 3212.06 (Milne: D_H z(1 + z/2)/(1+z))
    */
   transverseComovingDistanceMpc(z: number): number {
     return this.hubbleDistanceMpc * this.transverse(this.chiAtU(this.u(z)));
@@ -370,7 +379,8 @@ export class Cosmology {
   /**
    * Angular-diameter distance D_A = D_M / (1+z) (Hogg 1999 eq. 18).
    * @param z redshift ≥ 0
-   * @returns Mpc; e.g. Einstein–de Sitter, H0 = 70, z = 1.25 (its maximum): 1903.44 Mpc
+   * @returns Mpc
+   * @example Cosmology.fromSpec("EDS").angularDiameterDistanceMpc(1.25) // 1268.96 (its maximum: 2 D_H (1 − 1/√(1+z))/(1+z))
    */
   angularDiameterDistanceMpc(z: number): number {
     const u = this.u(z);
@@ -380,7 +390,8 @@ export class Cosmology {
   /**
    * Luminosity distance D_L = (1+z) D_M (Hogg 1999 eq. 21).
    * @param z redshift ≥ 0
-   * @returns Mpc; e.g. Einstein–de Sitter, H0 = 70, z = 1: 2 D_H (1+z − √(1+z)) = 5027.48 Mpc
+   * @returns Mpc
+   * @example Cosmology.fromSpec("EDS").luminosityDistanceMpc(1) // 5017.55 (2 D_H (1+z − √(1+z)))
    */
   luminosityDistanceMpc(z: number): number {
     const u = this.u(z);
@@ -405,7 +416,8 @@ export class Cosmology {
   /**
    * Light-travel distance c × t_lookback(z).
    * @param z redshift ≥ 0
-   * @returns Mpc; e.g. de Sitter, H0 = 70, z = 1: D_H ln 2 = 2968.57 Mpc
+   * @returns Mpc
+   * @example Cosmology.fromSpec("H0=70; Om=0; OL=1").lightTravelDistanceMpc(1) // 2968.58 (de Sitter: D_H ln(1+z))
    */
   lightTravelDistanceMpc(z: number): number {
     return this.hubbleDistanceMpc * this.tauAtU(this.u(z));
@@ -415,7 +427,8 @@ export class Cosmology {
    * Distance modulus μ = 5 log10(|D_L| / 10 pc) (Hogg 1999 eq. 25). Past the antipode of a closed
    * model D_L < 0 (the image is inverted) while the flux still falls as 1/(4π D_L²), so |D_L| is used.
    * @param z redshift > 0 (z = 0 gives −Infinity)
-   * @returns mag; e.g. D_L = 10 Mpc gives 30
+   * @returns mag (D_L = 10 Mpc gives 30)
+   * @example Cosmology.fromSpec("EDS").distanceModulusMag(1) // 43.502 (5 log10(5017.55e6 pc / 10 pc))
    */
   distanceModulusMag(z: number): number {
     return 5 * Math.log10(Math.abs(this.luminosityDistanceMpc(z))) + 25;
@@ -424,7 +437,8 @@ export class Cosmology {
   /**
    * Look-back time t_L = t_H ∫₀^z dz'/((1+z')E(z')) (Hogg 1999 eq. 30).
    * @param z redshift ≥ 0
-   * @returns Gyr; e.g. Einstein–de Sitter, H0 = 70, z = 3: (2/3) t_H (1 − (1+z)^{−3/2}) = 8.148 Gyr
+   * @returns Gyr
+   * @example Cosmology.fromSpec("EDS").lookbackTimeGyr(3) // 8.148 ((2/3) t_H (1 − (1+z)^{−3/2}))
    */
   lookbackTimeGyr(z: number): number {
     return this.hubbleTimeGyr * this.tauAtU(this.u(z));
@@ -433,7 +447,8 @@ export class Cosmology {
   /**
    * Age of the universe at z: t = t_H ∫₀^{1/(1+z)} da/(a E(a)), integrated in a (not to z = ∞).
    * @param z redshift ≥ 0
-   * @returns Gyr (Infinity if the past is infinitely long, e.g. de Sitter); e.g. P18-BAO at z = 0: 13.787
+   * @returns Gyr (Infinity if the past is infinitely long, as in de Sitter)
+   * @example Cosmology.fromSpec("P18-BAO").ageGyr(0) // 13.787
    */
   ageGyr(z: number): number {
     return this.hubbleTimeGyr * this.ageAtU(this.u(z));
@@ -530,7 +545,7 @@ export class Cosmology {
    *   (default: in words and the function's unit, e.g. "look-back time 20 Gyr")
    * @returns redshift z ≥ 0
    * @throws NoSolutionError (a RangeError) when no redshift gives the value
-   * @example model.redshiftAt("luminosityDistance", model.luminosityDistanceMpc(1)) // 1
+   * @example Cosmology.fromSpec("EDS").redshiftAt("luminosityDistance", 5017.553) // 1.0000 (the inverse of D_L(1) above)
    */
   redshiftAt(quantity: InvertibleQuantity, value: number, wording?: InverseWording): number {
     this.inverse ??= new RedshiftInverse(this);

@@ -28,7 +28,7 @@ function requireDirection(raRad: number, decRad: number): void {
  * @param raRad right ascension α [rad]
  * @param decRad declination δ [rad], −π/2 … π/2
  * @returns { l, b } [rad], l in [0, 2π), b in [−π/2, π/2]
- * @example galacticCoordinatesRad(3.3660329, 0.4734773).b // ≈ π/2 (the north galactic pole, 192.85948°, 27.12825°)
+ * @example galacticCoordinatesRad(3.3660329, 0.4734773).b // ≈ 1.570796 (π/2: the north galactic pole, 192.85948°, 27.12825°)
  */
 export function galacticCoordinatesRad(raRad: number, decRad: number): { l: number; b: number } {
   requireDirection(raRad, decRad);
@@ -76,7 +76,7 @@ export function cosAngleToCmbApex(raRad: number, decRad: number): number {
  * @param zHelio heliocentric redshift, > −1 (nearby sources may be blueshifted)
  * @param raRad right ascension (ICRS) [rad]
  * @param decRad declination (ICRS) [rad], −π/2 … π/2
- * @returns z_cmb; e.g. at the apex z_helio = 0 gives ≈ +0.0012343 (β plus β²/2)
+ * @returns z_cmb; at the apex a source with z_helio = 0 has β + β²/2 + O(β³)
  */
 export function cmbFrameRedshift(zHelio: number, raRad: number, decRad: number): number {
   requireFiniteNumber("z_helio", zHelio);

@@ -10,7 +10,8 @@ import type { Cosmology } from "./Cosmology.js";
  * Derivative of the line-of-sight comoving distance, dD_C/dz = D_H / E(z).
  * @param model the cosmology
  * @param z redshift ≥ 0
- * @returns Mpc per unit redshift; e.g. at z = 0 it is D_H (4430.89 Mpc for P18-BAO)
+ * @returns Mpc per unit redshift
+ * @example comovingDistanceSlopeMpc(Cosmology.fromSpec("P18-BAO"), 0) // 4430.87 (D_H = c/H0 at z = 0)
  */
 export function comovingDistanceSlopeMpc(model: Cosmology, z: number): number {
   return model.hubbleDistanceMpc / model.expansionRate(z);
@@ -36,7 +37,8 @@ export function transverseComovingDistanceSlopeMpc(model: Cosmology, z: number):
  * Derivative of the luminosity distance, dD_L/dz = D_M + (1+z) dD_M/dz.
  * @param model the cosmology
  * @param z redshift ≥ 0
- * @returns Mpc per unit redshift; e.g. Einstein–de Sitter, H0 = 70, z = 1: D_H (2 − 1/√2) = 5537.14 Mpc
+ * @returns Mpc per unit redshift
+ * @example luminosityDistanceSlopeMpc(Cosmology.fromSpec("EDS"), 1) // 5537.14 (Einstein–de Sitter: D_H (2 − 1/√(1+z)))
  */
 export function luminosityDistanceSlopeMpc(model: Cosmology, z: number): number {
   const [dm, slope] = transverseAndSlopeMpc(model, z);
@@ -48,7 +50,8 @@ export function luminosityDistanceSlopeMpc(model: Cosmology, z: number): number 
  * D_A has its maximum.
  * @param model the cosmology
  * @param z redshift ≥ 0
- * @returns Mpc per unit redshift; e.g. Einstein–de Sitter at z = 1.25: 0
+ * @returns Mpc per unit redshift
+ * @example angularDiameterDistanceSlopeMpc(Cosmology.fromSpec("EDS"), 1.25) // ≈ 0 (the maximum of D_A in Einstein–de Sitter)
  */
 export function angularDiameterDistanceSlopeMpc(model: Cosmology, z: number): number {
   const [dm, slope] = transverseAndSlopeMpc(model, z);

@@ -183,7 +183,7 @@ export function fermiDiracDensityFactorLn(y: number, lnY: number): number {
  *
  * @param y m c² / (k_B T_ν), dimensionless, ≥ 0
  * @returns y F'(y), dimensionless, ≥ 0; 0 at y = 0, → F(y) for y ≫ 1
- * @example fermiDiracDensityFactorLogSlope(1e4) // ≈ 1760 (≈ F: non-relativistic, F ∝ y)
+ * @example fermiDiracDensityFactorLogSlope(1e4) // ≈ 3173.2 (≈ F = 180ζ(3) y/(7π⁴): non-relativistic, F ∝ y)
  */
 export function fermiDiracDensityFactorLogSlope(y: number): number {
   if (y <= 0) return 0;

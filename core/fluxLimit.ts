@@ -108,8 +108,8 @@ export function limitingRedshiftMag(model: Cosmology, absoluteMag: number, magLi
  * @param zLo the sample's lower redshift bound, ≥ 0
  * @param zHi the sample's upper redshift bound, ≥ zLo
  * @param areaSr the survey's area [sr], 0 … 4π
- * @returns Mpc³; e.g. zMax ≥ zHi gives the whole survey volume between zLo and zHi (P18-BAO, 0.1 < z < 1,
- *   0.1 sr: 1.3023e9 Mpc³)
+ * @returns Mpc³; zMax ≥ zHi gives the whole survey volume between zLo and zHi
+ * @example maxVolumeMpc3(Cosmology.fromSpec("P18-BAO"), 2, 0.1, 1, 0.1) // 1.3023e9
  */
 export function maxVolumeMpc3(model: Cosmology, zMax: number, zLo: number, zHi: number, areaSr: number): number {
   checkRedshift(zMax, "z_max");

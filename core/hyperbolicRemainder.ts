@@ -5,7 +5,8 @@
  * a Taylor series y³/6 Σ (±y²)ⁿ 6/(2n+3)! for |y| < 0.5.
  * @param y argument, dimensionless (2√|Ωk| D_C/D_H in the comoving volume)
  * @param sign +1 for open, −1 for closed geometry
- * @returns sinh y − y or y − sin y, dimensionless; e.g. (0.1, +1) gives 1.6675e-4
+ * @returns sinh y − y or y − sin y, dimensionless
+ * @example hyperbolicRemainder(0.1, 1) // 1.6675e-4 (sinh 0.1 − 0.1)
  */
 export function hyperbolicRemainder(y: number, sign: 1 | -1): number {
   if (Math.abs(y) >= 0.5) return sign > 0 ? Math.sinh(y) - y : y - Math.sin(y);

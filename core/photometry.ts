@@ -20,7 +20,8 @@ function sphereAreaM2(model: Cosmology, z: number): number {
  * @param model the cosmology
  * @param fluxWm2 bolometric flux [W m⁻²], ≥ 0
  * @param z redshift > 0
- * @returns luminosity [W]; e.g. F = 1e-15 W/m² at z = 1 in P18-BAO: 5.519e38 W
+ * @returns luminosity [W]
+ * @example luminosityW(Cosmology.fromSpec("P18-BAO"), 1e-15, 1) // 5.518e38
  */
 export function luminosityW(model: Cosmology, fluxWm2: number, z: number): number {
   requireNonNegative("flux", fluxWm2, "W/m2");
@@ -82,7 +83,8 @@ export function restFrameSpectralLuminosityWHz(
  * (Hogg et al. 2002, astro-ph/0210394, eq. 13 for a power law).
  * @param z redshift ≥ 0
  * @param alpha spectral index α
- * @returns K [mag]; e.g. α = −1 gives 0 at every z
+ * @returns K [mag] (α = −1 gives 0 at every z)
+ * @example kCorrectionPowerLawMag(1, 0) // -0.75257 (−2.5 log10 2)
  */
 export function kCorrectionPowerLawMag(z: number, alpha: number): number {
   checkRedshift(z);
@@ -124,7 +126,9 @@ export function apparentMagnitude(model: Cosmology, absoluteMag: number, z: numb
  * AB magnitude of a flux density: m_AB = −2.5 log10(f_ν / (erg s⁻¹ cm⁻² Hz⁻¹)) − 48.60
  * (Oke & Gunn 1983); zero point 3630.78 Jy.
  * @param fluxDensityJy flux density [Jy], > 0
- * @returns m_AB [mag]; e.g. 3631 Jy gives ≈ 0, 1 µJy gives 23.9
+ * @returns m_AB [mag]
+ * @example abMagnitude(1e-6) // 23.900 (1 µJy)
+ * @example abMagnitude(3631) // ≈ -0.0001 (the zero point is 3630.78 Jy)
  */
 export function abMagnitude(fluxDensityJy: number): number {
   requireNonNegative("flux density", fluxDensityJy, "Jy");
@@ -135,7 +139,8 @@ export function abMagnitude(fluxDensityJy: number): number {
 /**
  * Flux density of an AB magnitude, the inverse of `abMagnitude`.
  * @param abMag m_AB [mag]
- * @returns flux density [Jy]; e.g. 23.9 gives ≈ 1e-6 Jy
+ * @returns flux density [Jy]
+ * @example abFluxDensityJy(23.9) // 1.0000e-6
  */
 export function abFluxDensityJy(abMag: number): number {
   requireFiniteNumber("m_ab", abMag);
@@ -145,7 +150,8 @@ export function abFluxDensityJy(abMag: number): number {
 /**
  * Absolute bolometric magnitude, M_bol = −2.5 log10(L / L0) with L0 = 3.0128e28 W (IAU 2015 B2).
  * @param luminosity bolometric luminosity [W], > 0
- * @returns M_bol [mag]; e.g. the nominal solar luminosity 3.828e26 W gives 4.74
+ * @returns M_bol [mag]
+ * @example bolometricAbsoluteMagnitude(3.828e26) // 4.74 (the nominal solar luminosity)
  */
 export function bolometricAbsoluteMagnitude(luminosity: number): number {
   requireNonNegative("luminosity", luminosity, "W");
@@ -156,7 +162,8 @@ export function bolometricAbsoluteMagnitude(luminosity: number): number {
 /**
  * Bolometric luminosity of an absolute bolometric magnitude, L = L0 10^(−0.4 M_bol) (IAU 2015 B2).
  * @param absoluteMag M_bol [mag]
- * @returns luminosity [W]; e.g. M_bol = 0 gives 3.0128e28 W
+ * @returns luminosity [W]
+ * @example bolometricLuminosityW(0) // 3.0128e28
  */
 export function bolometricLuminosityW(absoluteMag: number): number {
   requireFiniteNumber("M_bol", absoluteMag);
@@ -167,7 +174,8 @@ export function bolometricLuminosityW(absoluteMag: number): number {
  * Tolman dimming of the bolometric surface brightness, Σ_obs = Σ_emit (1+z)⁻⁴, in magnitudes:
  * 10 log10(1+z) (Tolman 1930, PNAS 16, 511; reference from memory).
  * @param z redshift ≥ 0
- * @returns mag; e.g. z = 1: 3.0103
+ * @returns mag
+ * @example surfaceBrightnessDimmingMag(1) // 3.0103 (10 log10 2)
  */
 export function surfaceBrightnessDimmingMag(z: number): number {
   checkRedshift(z);
@@ -180,7 +188,8 @@ export function surfaceBrightnessDimmingMag(z: number): number {
  * bolometric law at α = −1).
  * @param z redshift ≥ 0
  * @param alpha spectral index α
- * @returns mag; e.g. z = 1, α = 0: 7.526
+ * @returns mag
+ * @example spectralSurfaceBrightnessDimmingMag(1, 0) // 2.2577 (7.5 log10 2)
  */
 export function spectralSurfaceBrightnessDimmingMag(z: number, alpha: number): number {
   checkRedshift(z);

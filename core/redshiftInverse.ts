@@ -259,7 +259,7 @@ export class RedshiftInverse {
    *   (default: in words and the function's unit, e.g. "look-back time 20 Gyr")
    * @returns redshift z ≥ 0
    * @throws NoSolutionError (a RangeError) when no redshift gives the value
-   * @example model.redshiftAt("luminosityDistance", model.luminosityDistanceMpc(1)) // 1
+   * @example new RedshiftInverse(Cosmology.fromSpec("EDS")).redshiftAt("lookbackTime", 8.148268514) // 3.0000 (EdS: (2/3) t_H (1 − (1+z)^{−3/2}) = 8.148 Gyr at z = 3)
    */
   redshiftAt(quantity: InvertibleQuantity, value: number, wording?: InverseWording): number {
     if (typeof value !== "number" || Number.isNaN(value)) throw new TypeError("value must be a number");

@@ -15,7 +15,8 @@ import { checkSourceRedshift } from "./redshift.js";
  * @param model the cosmology
  * @param z redshift ≥ 0
  * @param zErr 1σ error of z, ≥ 0
- * @returns Mpc; e.g. Einstein–de Sitter, H0 = 70, z = 1 ± 0.01: 55.37 Mpc
+ * @returns Mpc
+ * @example luminosityDistanceErrorMpc(Cosmology.fromSpec("EDS"), 1, 0.01) // 55.371 (D_H (2 − 1/√2) × 0.01)
  */
 export function luminosityDistanceErrorMpc(model: Cosmology, z: number, zErr: number): number {
   requireNonNegative("z_err", zErr);

@@ -24,7 +24,7 @@ function kindOf(m: Cosmology): string {
 
 /**
  * One line describing a model with every parameter shown.
- * @example "P18-BAO: flat: matter + Λ + radiation; H0 = 67.66 km/s/Mpc; Om = 0.3111 (matter incl. massive ν) ..."
+ * @example describeModel(Cosmology.fromSpec("P18-BAO")).slice(0, 79) // "P18-BAO: flat: matter + Λ + radiation; H0 = 67.66 km/s/Mpc; Om = 0.3111 (matter"
  */
 export function describeModel(m: Cosmology): string {
   const neutrinos =

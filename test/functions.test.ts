@@ -1,11 +1,7 @@
 /** The worksheet functions through the shared wrapper, on plain arrays as Excel passes them. */
 import { describe, expect, test } from "vitest";
 import {
-  abMagnitude,
   Cosmology,
-  convertUnit,
-  kCorrectionPowerLawMag,
-  luminosityW,
   presets,
 } from "../core/index.js";
 import { CellError } from "../functions/cellError.js";
@@ -89,45 +85,66 @@ describe("the model argument", () => {
   });
 });
 
+// Independent expected values: closed forms of Einstein–de Sitter (EDS: H0 = 70, Om = 1, no radiation),
+// the empty Milne model and de Sitter (Hogg 1999, astro-ph/9905116, eqs. 14–28 with E(z) = (1+z)^1.5,
+// 1+z and 1), evaluated here from the constants written out, never through the core.
+const cKmS = 299792.458; // exact (SI)
+const mpcM = (648000 / Math.PI) * 149597870700 * 1e6; // pc = 648000/π au (IAU 2015 B2), au exact (IAU 2012 B2)
+const gyrS = 365.25 * 86400 * 1e9; // Julian year (IAU)
+const lyM = 299792458 * 365.25 * 86400; // light year: c × Julian year (IAU)
+const arcsecRad = Math.PI / (180 * 3600);
+const G = 6.6743e-11; // CODATA 2018
+const dH = cKmS / 70; // Mpc, Hubble distance for H0 = 70
+const tH = mpcM / 70e3 / gyrS; // Gyr, Hubble time 1/H0
+const edsDC = (z: number) => 2 * dH * (1 - 1 / Math.sqrt(1 + z));
+const edsDL = (z: number) => (1 + z) * edsDC(z);
+const edsDA = (z: number) => edsDC(z) / (1 + z);
+const edsV = (z: number) => (4 * Math.PI * edsDC(z) ** 3) / 3;
+const modulus = (dlMpc: number) => 5 * Math.log10((dlMpc * 1e6) / 10);
+const lumW = (fluxWm2: number, dlMpc: number) => 4 * Math.PI * (dlMpc * mpcM) ** 2 * fluxWm2;
+
 describe("units and defaults", () => {
   test.each([
-    // function        args                        expected                                                source
-    ["DIST_LUM",       [1],                        p18.luminosityDistanceMpc(1),                           "default Mpc"],
-    ["DIST_LUM",       [1, "", "Gly"],             convertUnit(p18.luminosityDistanceMpc(1), "Mpc", "Gly"), "unit given"],
-    ["LOOKBACK",       [1, "", "Myr"],             p18.lookbackTimeGyr(1) * 1000,                           "Myr"],
-    ["PROPER_SCALE",      [1],                        convertUnit(p18.angularDiameterDistanceMpc(1), "Mpc/rad", "kpc/arcsec"), "default kpc/arcsec"],
-    ["VOLUME",         [1],                        p18.comovingVolumeMpc3(1) / 1e9,                          "default Gpc3"],
-    ["HUBBLE",         [],                         67.66,                                                  "H0 of the preset"],
-    ["CRIT_DENSITY",       [0, "", "g/cm3"],           p18.criticalDensityKgM3(0) / 1000,                       "kg/m3 → g/cm3"],
-    ["SIZE",           [1, 1],                     convertUnit(p18.angularDiameterDistanceMpc(1) * convertUnit(1, "arcsec", "rad"), "Mpc", "kpc"), "arcsec in, kpc out"],
-    ["ANGLE",          [10, 1],                    convertUnit(convertUnit(10, "kpc", "Mpc") / p18.angularDiameterDistanceMpc(1), "rad", "arcsec"), "kpc in, arcsec out"],
-    ["VOLUME_SHELL",   [0.5, 1],                   (p18.comovingVolumeMpc3(1) - p18.comovingVolumeMpc3(0.5)) / 1e9, "all sky"],
-    ["VOLUME_SHELL",   [0.5, 1, 100],              ((p18.comovingVolumeMpc3(1) - p18.comovingVolumeMpc3(0.5)) / 1e9) * (100 * (Math.PI / 180) ** 2) / (4 * Math.PI), "100 deg2"],
-    ["VOLUME_ELEMENT", [1],                        p18.comovingVolumeElementMpc3Sr(1),                      "default Mpc3/sr"],
-    ["LUMINOSITY",     [1e-15, 1],                 luminosityW(p18, 1e-15, 1),                              "W/m2 in, W out"],
-    ["LUMINOSITY",     [1e-12, 1, "", "erg/s/cm2", "Lsun"], luminosityW(p18, 1e-15, 1) / 3.828e26,         "erg/s/cm2 in, Lsun out"],
-    ["FLUX",           [luminosityW(p18, 1e-15, 1), 1], 1e-15,                                             "round trip of LUMINOSITY"],
-    ["LUMINOSITY_NU",  [1, 1, -1],                 1e-26 * 4 * Math.PI * (p18.luminosityDistanceMpc(1) * 3.0856775814913673e22) ** 2, "α = −1: no (1+z) factor"],
-    ["KCORRECTION",    [1, 0],                     kCorrectionPowerLawMag(1, 0),                             "flat spectrum"],
-    ["MAG_ABS",        [20, 1],                    20 - p18.distanceModulusMag(1),                           "K = 0 default"],
-    ["MAG_APP",        [-20, 1, 0.3],              -20 + p18.distanceModulusMag(1) + 0.3,                   "K given"],
-    ["MAG_AB",         [1, "uJy"],                 abMagnitude(1e-6),                                        "uJy in"],
-    ["FLUX_AB",        [23.9, "uJy"],              1e6 * 10 ** (-(23.9 + 48.6) / 2.5) * 1e23,                "uJy out"],
-    ["MODULUS",        [1],                        p18.distanceModulusMag(1),                                "mag"],
-    ["CMB_TEMP",       [1],                        2.7255 * 2,                                               "Tcmb (1+z)"],
-    ["OMEGA",          ["matter"],                 0.3111,                                                   "Om today"],
-    ["PARAM",          ["age_today"],              p18.ageTodayGyr,                                       "age today"],
-    ["PARAM",          ["z_eq"],                   p18.equalityRedshift,                                     "z_eq"],
-    ["CONVERT",        [1, "Mpc", "Gly"],          convertUnit(1, "Mpc", "Gly"),                             "conversion"],
-    ["DIST_ANG",       [1],                        p18.angularDiameterDistanceMpc(1),                        "Mpc"],
-    ["DIST_LOS",       [1],                        p18.comovingDistanceMpc(1),                               "Mpc"],
-    ["DIST_TRANS",     [1],                        p18.transverseComovingDistanceMpc(1),                     "Mpc"],
-    ["DIST_LIGHT",     [1],                        p18.lightTravelDistanceMpc(1),                            "Mpc"],
-    ["AGE",            [1],                        p18.ageGyr(1),                                            "Gyr"],
+    // function        args                               expected                                           source of the expected value
+    ["DIST_LUM",       [1, "EDS"],                        edsDL(1),                                          "EdS D_L = 2 D_H (1+z − √(1+z)), Hogg eq. 21; default Mpc"],
+    ["DIST_LUM",       [1, "EDS", "Gly"],                 (edsDL(1) * mpcM) / (1e9 * lyM),                   "the same in Gly (IAU light year)"],
+    ["LOOKBACK",       [3, "EDS", "Myr"],                 (2 / 3) * tH * (1 - 4 ** -1.5) * 1000,              "EdS t_L = (2/3) t_H (1 − (1+z)^−1.5), Hogg eq. 30; Myr"],
+    ["PROPER_SCALE",   [1.25, "EDS"],                     edsDA(1.25) * 1000 * arcsecRad,                    "D_A per arcsec, default kpc/arcsec"],
+    ["VOLUME",         [1, "EDS"],                        edsV(1) / 1e9,                                     "flat V_C = (4π/3) D_M³, Hogg eq. 29; default Gpc3"],
+    ["HUBBLE",         [],                                67.66,                                             "H0 of P18-BAO, Planck 2018 VI Table 2 (last column)"],
+    ["HUBBLE",         [3, "EDS"],                        70 * 4 ** 1.5,                                     "EdS H = H0 (1+z)^1.5"],
+    ["CRIT_DENSITY",   [0, "EDS", "g/cm3"],               (3 * (70e3 / mpcM) ** 2) / (8 * Math.PI * G) / 1000, "3H0²/(8πG), CODATA 2018 G; kg/m3 → g/cm3"],
+    ["SIZE",           [1, 1.25, "EDS"],                  edsDA(1.25) * arcsecRad * 1000,                    "ℓ = D_A θ: arcsec in, kpc out"],
+    ["ANGLE",          [10, 1.25, "EDS"],                 10 / 1000 / edsDA(1.25) / arcsecRad,               "θ = ℓ/D_A: kpc in, arcsec out"],
+    ["VOLUME_SHELL",   [0.5, 1, "", "EDS"],               (edsV(1) - edsV(0.5)) / 1e9,                       "all sky when the area is blank"],
+    ["VOLUME_SHELL",   [0.5, 1, 100, "EDS"],              ((edsV(1) - edsV(0.5)) / 1e9) * (100 * (Math.PI / 180) ** 2) / (4 * Math.PI), "100 deg2 of 4π sr"],
+    ["VOLUME_ELEMENT", [1, "EDS"],                        (dH * edsDC(1) ** 2) / 2 ** 1.5,                   "dV/dz/dΩ = D_H D_M²/E, Hogg eq. 28; Mpc3/sr"],
+    ["LUMINOSITY",     [1e-15, 1, "EDS"],                 lumW(1e-15, edsDL(1)),                             "L = 4π D_L² F with the EdS D_L (not D_A); W/m2 in, W out"],
+    ["LUMINOSITY",     [1e-12, 1, "EDS", "erg/s/cm2", "Lsun"], lumW(1e-15, edsDL(1)) / 3.828e26,             "erg/s/cm2 in, Lsun out (IAU 2015 B3 nominal L☉)"],
+    ["FLUX",           [1e38, 2, "EDS"],                  1e38 / (4 * Math.PI * (edsDL(2) * mpcM) ** 2),     "F = L/(4π D_L²)"],
+    ["LUMINOSITY_NU",  [1, 1, -1, "EDS"],                 1e-26 * 4 * Math.PI * (edsDL(1) * mpcM) ** 2,      "1 Jy = 1e-26 W/m2/Hz; α = −1: no (1+z) factor"],
+    ["LUMINOSITY_NU",  [1, 1, 0.5, "EDS"],                1e-26 * 4 * Math.PI * (edsDL(1) * mpcM) ** 2 * 2 ** -1.5, "(1+z)^−(1+α), Hogg eq. 23 for S_ν ∝ ν^α"],
+    ["KCORRECTION",    [1, 0],                            -2.5 * Math.log10(2),                              "K = −2.5(1+α) log10(1+z), Hogg et al. 2002 eq. 13"],
+    ["KCORRECTION",    [3, 0.5],                          -3.75 * Math.log10(4),                             "the same, α = 0.5, z = 3"],
+    ["MAG_ABS",        [20, 1, "", "EDS"],                20 - modulus(edsDL(1)),                            "M = m − μ, K = 0 by default"],
+    ["MAG_APP",        [-20, 1, 0.3, "EDS"],              -20 + modulus(edsDL(1)) + 0.3,                     "m = M + μ + K, K given"],
+    ["MAG_AB",         [1, "uJy"],                        -2.5 * Math.log10(1e-6 * 1e-23) - 48.6,            "m_AB = −2.5 log10(f_ν / erg s−1 cm−2 Hz−1) − 48.60, Oke & Gunn 1983"],
+    ["FLUX_AB",        [23.9, "uJy"],                     1e6 * 10 ** (-(23.9 + 48.6) / 2.5) * 1e23,         "the inverse of that definition, in µJy"],
+    ["MODULUS",        [1, "EDS"],                        modulus(edsDL(1)),                                 "μ = 5 log10(D_L / 10 pc), Hogg eq. 25"],
+    ["CMB_TEMP",       [1],                               2.7255 * 2,                                        "Tcmb (1+z), Tcmb = 2.7255 K (Fixsen 2009)"],
+    ["OMEGA",          ["matter"],                        0.3111,                                            "Om of P18-BAO, Planck 2018 VI Table 2 (last column)"],
+    ["OMEGA",          ["matter", 1, "H0=70; Om=0.3"],    (0.3 * 8) / (0.3 * 8 + 0.7),                       "Ωm(z) = Om(1+z)³/E², flat, no radiation"],
+    ["PARAM",          ["age_today", "EDS"],              (2 / 3) * tH,                                      "EdS age (2/3) t_H"],
+    ["CONVERT",        [1, "Mpc", "Gly"],                 mpcM / (1e9 * lyM),                                "IAU pc and light year"],
+    ["DIST_ANG",       [1.25, "EDS"],                     edsDA(1.25),                                       "EdS D_A at its maximum, Hogg eq. 18"],
+    ["DIST_LOS",       [3, "EDS"],                        dH,                                                "EdS D_C(3) = 2 D_H (1 − 1/2) = D_H"],
+    ["DIST_TRANS",     [1, "H0=70; Om=0; OL=0"],          (dH * 1 * 1.5) / 2,                                "Milne D_M = D_H z(1 + z/2)/(1+z)"],
+    ["DIST_LIGHT",     [1, "H0=70; Om=0; OL=1"],          dH * Math.LN2,                                     "de Sitter: c t_L = D_H ln(1+z)"],
+    ["AGE",            [1, "EDS"],                        (2 / 3) * tH * 2 ** -1.5,                          "EdS t(z) = (2/3) t_H (1+z)^−1.5"],
   ])("%s %j", (name, args, expected) => {
     const got = one(name, ...(args as unknown[]));
     expect(typeof got, String(got instanceof CellError ? got.message : got)).toBe("number");
-    expectRelative(got as number, expected as number, 1e-13, name);
+    expectRelative(got as number, expected as number, 1e-10, name); // 1e-10: the engine's documented accuracy
   });
 
   test("an incompatible unit is #VALUE! naming the argument and both dimensions", () => {

@@ -50,3 +50,34 @@ describe("surface-brightness dimming", () => {
     expect(one("DIMMING", 0, 1.5)).toBe(0);
   });
 });
+
+describe("the K-correction from its definition", () => {
+  // A source with a rest-frame spectrum L_ν(ν) = A ν^α. Its flux density observed at ν_o is
+  // S(ν_o) = (1+z) L_ν((1+z) ν_o) / (4π D_L²) (Hogg et al. 2002, astro-ph/0210394, eq. 5 for f_ν);
+  // its absolute magnitude in the same band is that of L_ν(ν_o) seen from 10 pc. K is defined by
+  // m = M + μ + K (their eq. 1), here computed from those fluxes alone, never from our formula.
+  const mpcM = (648000 / Math.PI) * 149597870700 * 1e6; // IAU 2015 B2 pc, IAU 2012 B2 au
+  const dlMpc = (z: number) => 2 * (299792.458 / 70) * (1 + z - Math.sqrt(1 + z)); // EdS, H0 = 70 (Hogg 1999 eq. 21)
+  const flux = (lumWHz: number, distanceM: number) => lumWHz / (4 * Math.PI * distanceM ** 2);
+  const mag = (fluxDensity: number) => -2.5 * Math.log10(fluxDensity / 3.631e-23); // any zero point: it cancels
+
+  test.each([
+    // z     alpha   (the sign matters: α > −1 makes K < 0, α < −1 makes K > 0)
+    [1.5,    0.7],
+    [1.5,    -2.0],
+    [0.3,    -0.5],
+    [4,      1],
+  ])("z = %d, α = %d: MAG_ABS(m, z, KCORRECTION(z, α)) recovers the M of the definition", (z, alpha) => {
+    const nuObs = 5e14;
+    const lumNu = (nu: number) => 1e22 * (nu / nuObs) ** alpha; // W/Hz, A chosen so L_ν(ν_o) = 1e22
+    const observed = mag((1 + z) * flux(lumNu((1 + z) * nuObs), dlMpc(z) * mpcM));
+    const absolute = mag(flux(lumNu(nuObs), 10 * (mpcM / 1e6)));
+    const mu = 5 * Math.log10((dlMpc(z) * 1e6) / 10);
+    const kDefinition = observed - absolute - mu;
+    const k = one("KCORRECTION", z, alpha) as number;
+    expect(Math.abs(k - kDefinition)).toBeLessThanOrEqual(1e-12);
+    expect(Math.sign(k)).toBe(-Math.sign(1 + alpha));
+    expect(Math.abs((one("MAG_ABS", observed, z, k, "EDS") as number) - absolute)).toBeLessThanOrEqual(1e-9);
+    expect(Math.abs((one("MAG_APP", absolute, z, k, "EDS") as number) - observed)).toBeLessThanOrEqual(1e-9);
+  });
+});
