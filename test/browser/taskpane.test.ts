@@ -7,6 +7,9 @@
 import { mkdirSync, readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import type { Page } from "playwright-core";
+import { publishedModels } from "../fixtures.js";
+import { expectRelative } from "../helpers.js";
+import { SlowCosmology, type SlowParameters } from "../reference/slowCosmology.js";
 import { browserAvailable, fakeState, openPane as openPaneIn, startPageHost, type PageHost, type PanePage } from "./pageHost.js";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 
@@ -27,6 +30,9 @@ async function axeViolations(page: Page): Promise<string[]> {
 
 const light = { bodyBackgroundColor: "#ffffff", bodyForegroundColor: "#242424", controlBackgroundColor: "#ffffff", controlForegroundColor: "#242424" };
 const dark = { bodyBackgroundColor: "#1f1f1f", bodyForegroundColor: "#f0f0f0", controlBackgroundColor: "#2b2b2b", controlForegroundColor: "#f0f0f0" };
+
+/** Expected values from the independent slow path (test/reference/slowCosmology.ts), never from core/. */
+const slow = (p: SlowParameters) => new SlowCosmology(p);
 
 /** The invented workbook the pane is shown: redshifts, ZC formulas and the values Excel would show. */
 const workbook = {
@@ -63,6 +69,9 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await page.getByRole("tab", { name: "Cosmology" }).waitFor();
       expect(await page.locator("#model-badge").textContent()).toBe("Workbook model: W9-ALL");
       expect(await page.locator("#f-H0").inputValue()).toBe("69.32");
+      // the derived age shown for W9-ALL, to the 5 digits the form shows
+      const age = Number(/Age today([\d.]+) Gyr/.exec((await page.locator("#derived").textContent())!)![1]);
+      expect(age).toBe(Number(slow(publishedModels["W9-ALL"]).ageGyr(0).toPrecision(5)));
       await page.selectOption("#preset", "P18-BAO");
       // shown as a person types it (≤ 6 significant digits); the exact value stays behind it
       expect(await page.locator("#f-Ob").inputValue()).toBe("0.0489747");
@@ -79,6 +88,11 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await expect.poll(() => page.locator("#apply-status").textContent()).toBe("Applied P18-BAO; H0=73; 3 formulas recalculated.");
       expect(await fake(page, "saved")).toEqual({ "zcell.activeModel": "P18-BAO; H0=73" });
       expect(await fake(page, "calculations")).toEqual(["Full"]);
+      // the recalculated cells hold the numbers of the new model (computed by the built functions)
+      await page.evaluate("window.__fake.settled()");
+      const after = (await fake(page, "sheets.Sheet1")) as Record<string, { value?: unknown }>;
+      expectRelative(after.B2.value as number, slow({ ...publishedModels["P18-BAO"], H0: 73 }).luminosityDistanceMpc(0.5), 1e-9, "B2 = D_L(0.5)");
+      expect(after.B3.value).toBe("#NUM!"); // its own unphysical model
       expect((page as unknown as { errors: string[] }).errors).toEqual([]);
       await page.close();
     });
@@ -128,6 +142,9 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       expect(text).toMatch(/Om is all matter today, massive neutrinos included/);
       expect(text).toMatch(/relative error ≤ 1e-10/);
       expect(text).toMatch(/A2 → 0.5/);
+      // the result shown is D_L(0.5) under P18-BAO (Planck 2018 VI Table 2), from the independent slow path
+      const shown = Number(/Result([\d.]+) Mpc/.exec(text!)![1]);
+      expectRelative(shown, slow(publishedModels["P18-BAO"]).luminosityDistanceMpc(0.5), 1e-9, "inspector result");
       await page.screenshot({ path: `${shots}cell-${themeName}.png`, fullPage: true });
       await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!B3"));
       await expect.poll(() => page.locator("#cell-explanation").textContent()).toMatch(/Why the error#NUM! — ZC.DIST_LUM: model: no big bang/);
@@ -152,6 +169,13 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       expect([cells.E10.value, cells.F10.value, cells.G10.value]).toEqual(["P18-BAO", "W9-ALL", "P18-BAO; H0=73"]);
       expect([cells.D11.value, cells.D12.value, cells.D13.value, cells.D14.value, cells.D15]).toEqual([0.1, 0.35, 0.6, 0.85, undefined]);
       expect(cells.E11.formula).toBe("=ZC.DIST_LUM($D$11:$D$14,$E$10:$G$10)");
+      // the table's numbers, computed by the built functions: D_L for each redshift and model
+      await page.evaluate("window.__fake.settled()");
+      const table = (await fake(page, "sheets.Sheet1")) as Record<string, { value?: unknown }>;
+      const models = [publishedModels["P18-BAO"], publishedModels["W9-ALL"], { ...publishedModels["P18-BAO"], H0: 73 }].map(slow);
+      ["E", "F", "G"].forEach((col, k) =>
+        [0.1, 0.35, 0.6, 0.85].forEach((z, i) => expectRelative(table[`${col}${11 + i}`].value as number, models[k].luminosityDistanceMpc(z), 1e-9, `${col}${11 + i}`)),
+      );
       // the selected-column mode with E5 occupied asks first
       await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!D6:D8"));
       await page.check("#source-selection");
