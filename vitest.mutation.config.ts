@@ -20,6 +20,7 @@ export default defineConfig({
       "test/manifest.test.ts",
       "test/readme.test.ts",
       "test/sheetLanguage.test.ts",
+      "test/skips.test.ts",
     ],
     testTimeout: 60_000,
   },

@@ -8,17 +8,14 @@ import { fileURLToPath } from "node:url";
 import { createServer } from "node:http";
 import { extname, join } from "node:path";
 import { chromium, type Browser, type Page } from "playwright-core";
+import { toolAvailable } from "../requirements.js";
 import { testBuildDir } from "../testBuild.js";
 
 const chromiumPath = "/usr/bin/chromium";
 
 /** True when Debian chromium is installed; in CI its absence is an error, elsewhere a skip with a hint. */
 export function browserAvailable(): boolean {
-  if (existsSync(chromiumPath)) return true;
-  const hint = "Debian chromium is not installed: apt-get install -y chromium to run the browser tests";
-  if (process.env.CI === "true") throw new Error(`CI needs ${hint}`);
-  console.warn(`skipping: ${hint}`);
-  return false;
+  return toolAvailable(existsSync(chromiumPath), "Debian chromium is not installed: apt-get install -y chromium to run the browser tests");
 }
 
 /** A running page host: the base URL of the served build, the browser, and how to stop both. */

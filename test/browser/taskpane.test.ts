@@ -38,6 +38,7 @@ const slow = (p: SlowParameters) => new SlowCosmology(p);
 const workbook = {
   Sheet1: {
     A1: { value: "z" }, B1: { value: "D_L [Mpc]" },
+    // values as Excel would show them before any recalculation (invented; the fake recomputes on Apply)
     A2: { value: 0.5 }, B2: { formula: "=ZC.DIST_LUM(A2)", value: 2919.6 },
     A3: { value: 1 }, B3: { formula: '=ZC.DIST_LUM(A3,"H0=70; Om=0; OL=2")', value: "#NUM!" },
     C2: { formula: "=ZC.MAG_ABS(22, A2, ZC.KCORRECTION(A2, -0.5))", value: -20.3 },
@@ -68,13 +69,13 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       const page = await openPane(theme, { "zcell.activeModel": "W9-ALL" });
       await page.getByRole("tab", { name: "Cosmology" }).waitFor();
       expect(await page.locator("#model-badge").textContent()).toBe("Workbook model: W9-ALL");
-      expect(await page.locator("#f-H0").inputValue()).toBe("69.32");
+      expect(await page.locator("#f-H0").inputValue()).toBe("69.32"); // W9-ALL H0, Hinshaw et al. 2013 Table 4
       // the derived age shown for W9-ALL, to the 5 digits the form shows
       const age = Number(/Age today([\d.]+) Gyr/.exec((await page.locator("#derived").textContent())!)![1]);
       expect(age).toBe(Number(slow(publishedModels["W9-ALL"]).ageGyr(0).toPrecision(5)));
       await page.selectOption("#preset", "P18-BAO");
       // shown as a person types it (≤ 6 significant digits); the exact value stays behind it
-      expect(await page.locator("#f-Ob").inputValue()).toBe("0.0489747");
+      expect(await page.locator("#f-Ob").inputValue()).toBe("0.0489747"); // Ωb h² = 0.02242 (Planck 2018 VI Table 2) / 0.6766², to 6 digits
       expect(await page.locator("#spec").inputValue()).toBe("P18-BAO");
       await page.selectOption("#preset", "P18-BAO");
       await page.fill("#f-H0", "-5");

@@ -1,12 +1,14 @@
 /**
  * Runs the outside reference tools (Debian python3-astropy, python3-mpmath) from the test suite.
- * In CI (CI=true) a missing tool is a failure; on a developer machine those tests are skipped with
- * a one-line hint.
+ * Under CI a missing tool is a failure; on a developer machine the tests that need it are skipped
+ * with a one-line hint (test/requirements.ts). ZCELL_PYTHON names another interpreter (a test uses a
+ * missing one to check the skips).
  */
 import { execFileSync, spawnSync } from "node:child_process";
 import { fileURLToPath } from "node:url";
+import { toolAvailable } from "../requirements.js";
 
-const python = "/usr/bin/python3";
+const python = process.env.ZCELL_PYTHON ?? "/usr/bin/python3";
 
 /** True when python3 can import the module. */
 export function hasPythonModule(module: string): boolean {
@@ -14,16 +16,9 @@ export function hasPythonModule(module: string): boolean {
   return r.status === 0;
 }
 
-/**
- * Whether tests that need `module` should run. Outside CI, prints a hint and returns false when it
- * is missing; in CI a missing module throws, failing the suite.
- */
+/** Whether tests that need `module` should run (a hint and false when it is missing; a failure under CI). */
 export function referenceAvailable(module: string, debianPackage: string): boolean {
-  if (hasPythonModule(module)) return true;
-  const hint = `${debianPackage} is not installed: apt-get install -y ${debianPackage} to run these reference checks`;
-  if (process.env.CI === "true") throw new Error(`CI needs ${hint}`);
-  console.warn(`skipping: ${hint}`);
-  return false;
+  return toolAvailable(hasPythonModule(module), `Debian ${debianPackage} is not installed: apt-get install -y ${debianPackage} to run these reference checks`);
 }
 
 /** Runs a script from test/reference with a JSON request on stdin; returns its JSON reply. */
