@@ -14,22 +14,10 @@ import { formatModelSpec, parseModelSpec } from "./modelSpec.js";
 import { gaussRule, integrate, kronrod15 } from "./quadrature.js";
 import { QuinticTable } from "./QuinticTable.js";
 import { checkRedshift } from "./redshift.js";
-import { RedshiftInverse, type InverseWording } from "./redshiftInverse.js";
+import { RedshiftInverse, type InverseWording, type InvertibleQuantity } from "./redshiftInverse.js";
 
 export type { DensityComponent } from "./ExpansionRate.js";
-export type { InverseWording } from "./redshiftInverse.js";
-
-/** Quantities that `redshiftAt` can invert, in the units of the matching method. */
-export type InvertibleQuantity =
-  | "comovingDistance"
-  | "transverseComovingDistance"
-  | "luminosityDistance"
-  | "angularDiameterDistance"
-  | "lightTravelDistance"
-  | "distanceModulus"
-  | "lookbackTime"
-  | "age"
-  | "comovingVolume";
+export type { InverseWording, InvertibleQuantity } from "./redshiftInverse.js";
 
 /** Tables cover 0 ≤ z ≤ tableMaxRedshift; beyond, the exact integrals are evaluated directly. */
 const tableMaxRedshift = 1e8;

@@ -3,7 +3,6 @@
  * value. Node bisection, then Newton's method on the same interpolants the forward functions use
  * (so forward and inverse agree to rounding); the lower branch where a quantity has a maximum.
  */
-import type { Cosmology, InvertibleQuantity } from "./Cosmology.js";
 import { hyperbolicRemainder } from "./hyperbolicRemainder.js";
 import { NoSolutionError } from "./NoSolutionError.js";
 import { integrate } from "./quadrature.js";
@@ -12,6 +11,45 @@ import { formatRedshift } from "./redshift.js";
 import { solveBracketed } from "./solveBracketed.js";
 
 const relTolExact = 1e-14;
+
+/** Quantities that `redshiftAt` can invert, in the units of the matching method of Cosmology. */
+export type InvertibleQuantity =
+  | "comovingDistance"
+  | "transverseComovingDistance"
+  | "luminosityDistance"
+  | "angularDiameterDistance"
+  | "lightTravelDistance"
+  | "distanceModulus"
+  | "lookbackTime"
+  | "age"
+  | "comovingVolume";
+
+/**
+ * What the inverse reads of a model (Cosmology provides it): its tables in u = ln(1+z) of χ = D_C/D_H,
+ * τ = t_L/t_H and ln(t/t_H), the exact integrals beyond them, and the curvature.
+ */
+export interface TabulatedModel {
+  readonly Ok: number;
+  readonly sqrtAbsOk: number;
+  /** u = ln(1+z) at the top of the tables */
+  readonly uMax: number;
+  readonly chi: QuinticTable;
+  readonly tau: QuinticTable;
+  /** undefined for a model with an infinite past, or an age that is not finite numerically */
+  readonly lnAge: QuinticTable | undefined;
+  readonly hubbleDistanceMpc: number;
+  readonly hubbleTimeGyr: number;
+  readonly ageTodayGyr: number;
+  readonly expansion: { leadingPower(): number; e2(onePlusZ: number, lnOnePlusZ: number): number };
+  ageAtU(u: number): number;
+  ageBeyond(u: number): number;
+  chiAtU(u: number): number;
+  chiBeyond(u: number): number;
+  chiSlopeAtU(u: number): number;
+  tauAtU(u: number): number;
+  transverse(chi: number): number;
+  transverseSlope(chi: number): number;
+}
 
 /** How an inverse's error message names the value asked for and quotes the model's limits. */
 export interface InverseWording {
@@ -45,7 +83,7 @@ export class RedshiftInverse {
   private readonly inverters = new Map<string, { values: Float64Array; peakU: number; peakValue: number }>();
 
   /** @param m the model inverted (its tables and exact integrals) */
-  constructor(private readonly m: Cosmology) {}
+  constructor(private readonly m: TabulatedModel) {}
 
   /** Line-of-sight χ (units of D_H) whose all-sky volume is v (units of D_H³); inverse of volumeOfChi. */
   private chiOfVolume(v: number): number {
