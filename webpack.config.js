@@ -7,10 +7,13 @@ import HtmlWebpackPlugin from "html-webpack-plugin";
 import MinimizerPlugin from "minimizer-webpack-plugin";
 import { generateCustomFunctionsMetadata } from "custom-functions-metadata";
 import { marked } from "marked";
+import { readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 
 const devUrl = "https://localhost:3000/";
 const root = fileURLToPath(new URL(".", import.meta.url));
+/** The declaration files, one per family of functions (the metadata plugin reads their JSDoc). */
+const declarationFiles = JSON.parse(readFileSync(`${root}functions/declarationFiles.json`, "utf8"));
 
 /** README as a page; headings get ids (GitHub-style slugs) so that help links can point at sections. */
 function helpPage(markdown) {
@@ -26,7 +29,7 @@ function helpPage(markdown) {
 
 /** Name and description of each worksheet function, for the pane's reference outside Excel. */
 async function functionList() {
-  const result = await generateCustomFunctionsMetadata([`${root}functions/functions.ts`], false);
+  const result = await generateCustomFunctionsMetadata(declarationFiles.map((f) => `${root}${f}`), false);
   return JSON.parse(result.metadataJson).functions.map((f) => ({ name: f.id, description: f.description }));
 }
 
@@ -73,7 +76,7 @@ export default async (env = {}, argv = {}) => {
     performance: { hints: false },
     plugins: [
       new (await import("webpack")).default.DefinePlugin({ __ZC_FUNCTIONS__: JSON.stringify(await functionList()) }),
-      new CustomFunctionsMetadataPlugin({ output: "functions.json", input: "./functions/functions.ts" }),
+      new CustomFunctionsMetadataPlugin({ output: "functions.json", input: declarationFiles.map((f) => `./${f}`) }),
       new HtmlWebpackPlugin({
         filename: "taskpane.html",
         template: "./taskpane/taskpane.html",

@@ -11,7 +11,8 @@ import { ExpansionRate, type DensityComponent } from "./ExpansionRate.js";
 import { hyperbolicRemainder } from "./hyperbolicRemainder.js";
 import type { ModelParameters } from "./ModelParameters.js";
 import { formatModelSpec, parseModelSpec } from "./modelSpec.js";
-import { gaussRule, integrate, kronrod15 } from "./quadrature.js";
+import { ageSinceBigBang, buildDistanceTables } from "./distanceTables.js";
+import { integrate, kronrod15 } from "./quadrature.js";
 import { QuinticTable } from "./QuinticTable.js";
 import { checkRedshift } from "./redshift.js";
 import { RedshiftInverse, type InverseWording, type InvertibleQuantity } from "./redshiftInverse.js";
@@ -19,10 +20,6 @@ import { RedshiftInverse, type InverseWording, type InvertibleQuantity } from ".
 export type { DensityComponent } from "./ExpansionRate.js";
 export type { InverseWording, InvertibleQuantity } from "./redshiftInverse.js";
 
-/** Tables cover 0 ≤ z ≤ tableMaxRedshift; beyond, the exact integrals are evaluated directly. */
-const tableMaxRedshift = 1e8;
-/** Table panels per unit of ln(1+z); quintic Hermite error ∝ h⁶ (≈ 1e-13 relative, see tests). */
-const panelsPerUnit = 48;
 /**
  * Below this u = ln(1+z) the distance and look-back integrals are evaluated directly (one 15-point
  * Kronrod panel, exact to rounding there): the table's absolute error ∝ u³ near its first node
@@ -124,83 +121,12 @@ export class Cosmology {
     this.sqrtAbsOk = Math.sqrt(Math.abs(this.Ok));
     this.geometry = this.Ok > 0 ? 1 : this.Ok < 0 ? -1 : 0;
 
-    // Tables in u = ln(1+z) on [0, uMax]: χ = D_C/D_H, τ = t_lookback/t_H, ln(t_age/t_H).
-    const uMax = Math.log1p(tableMaxRedshift);
-    const n = Math.ceil(uMax * panelsPerUnit);
-    const h = uMax / n;
-    this.uMax = uMax;
-    const chi = new Float64Array(n + 1);
-    const chi1 = new Float64Array(n + 1);
-    const chi2 = new Float64Array(n + 1);
-    const tau = new Float64Array(n + 1);
-    const tau1 = new Float64Array(n + 1);
-    const tau2 = new Float64Array(n + 1);
-    const panelTau = new Float64Array(n);
-    const invE = new Float64Array(n + 1);
-    const logSlope = new Float64Array(n + 1); // (1+z) E'(z) / E = d ln E / du
-    const zpAt = new Float64Array(n + 1);
-    // E² > 0 is checked at every node and quadrature point as the tables are built (a model
-    // without a big bang is rejected, naming the redshift), then beyond the tables.
-    for (let i = 0; i <= n; i++) {
-      const u = i * h;
-      const zp = (zpAt[i] = Math.exp(u));
-      const e2 = this.expansion.e2(zp, u);
-      if (!(e2 > 0)) this.expansion.noBigBang(i > 0 ? Math.expm1((i - 1) * h) : 0, Math.expm1(u));
-      invE[i] = 1 / Math.sqrt(e2);
-      logSlope[i] = (0.5 * zp * this.expansion.de2dz(zp, u)) / e2;
-    }
-    const { nodes, weights } = gaussRule;
-    const offsets = nodes.map((x) => 0.5 * h * x);
-    const expOffsets = offsets.map(Math.exp); // 1+z at a quadrature point = e^centre · e^offset: one exp a panel
-    for (let i = 0; i < n; i++) {
-      const centre = (i + 0.5) * h;
-      const expCentre = Math.exp(centre);
-      let sumChi = 0;
-      let sumTau = 0;
-      for (let j = 0; j < 7; j++) {
-        const u = centre + offsets[j];
-        const zp = expCentre * expOffsets[j];
-        const e2 = this.expansion.e2(zp, u);
-        if (!(e2 > 0)) this.expansion.noBigBang(Math.expm1(i * h), Math.expm1(u));
-        const inv = 1 / Math.sqrt(e2);
-        sumChi += weights[j] * zp * inv;
-        sumTau += weights[j] * inv;
-      }
-      chi[i + 1] = chi[i] + 0.5 * h * sumChi;
-      panelTau[i] = 0.5 * h * sumTau;
-      tau[i + 1] = tau[i] + panelTau[i];
-    }
-    for (let i = 0; i <= n; i++) {
-      const zp = zpAt[i];
-      chi1[i] = zp * invE[i];
-      chi2[i] = chi1[i] * (1 - logSlope[i]);
-      tau1[i] = invE[i];
-      tau2[i] = -invE[i] * logSlope[i];
-    }
-    this.expansion.checkBigBangBeyond(tableMaxRedshift);
-    this.chi = new QuinticTable(0, h, chi, chi1, chi2);
-    this.tau = new QuinticTable(0, h, tau, tau1, tau2);
-
-    const ageEnd = this.expansion.leadingPower() > 0 ? this.ageBeyond(uMax) : Number.POSITIVE_INFINITY;
-    if (Number.isFinite(ageEnd) && ageEnd > 0) {
-      const lnT = new Float64Array(n + 1);
-      const lnT1 = new Float64Array(n + 1);
-      const lnT2 = new Float64Array(n + 1);
-      let t = ageEnd;
-      for (let i = n; i >= 0; i--) {
-        if (i < n) t += panelTau[i];
-        lnT[i] = Math.log(t);
-        const g1 = -invE[i] / t; // d ln T/du = −1/(E T)
-        lnT1[i] = g1;
-        lnT2[i] = -g1 * logSlope[i] - g1 * g1; // ((1+z)E' T − 1)/(E T)²
-      }
-      this.lnAge = new QuinticTable(0, h, lnT, lnT1, lnT2);
-      this.ageTodayGyr = this.hubbleTimeGyr * Math.exp(lnT[0]);
-    } else {
-      // an infinite past, or (NaN) an age integral that does not converge numerically (a past too close to de Sitter)
-      this.lnAge = undefined;
-      this.ageTodayGyr = ageEnd === Number.POSITIVE_INFINITY ? ageEnd : Number.NaN;
-    }
+    const tables = buildDistanceTables(x);
+    this.uMax = tables.uMax;
+    this.chi = tables.chi;
+    this.tau = tables.tau;
+    this.lnAge = tables.lnAge;
+    this.ageTodayGyr = tables.ageToday * this.hubbleTimeGyr; // +∞ (infinite past) or NaN stay so
   }
 
   /**
@@ -304,16 +230,7 @@ export class Cosmology {
   /** Age in units of t_H at u = ln(1+z), from ∫₀^a da/(aE) with a = s² (regular at s = 0). */
   /** @internal */
   ageBeyond(u: number): number {
-    const sEnd = Math.exp(-0.5 * u);
-    return integrate(
-      (s) => {
-        const lnZp = -2 * Math.log(s);
-        return 2 / (s * Math.sqrt(this.expansion.e2(1 / (s * s), lnZp)));
-      },
-      0,
-      sEnd,
-      relTolExact,
-    );
+    return ageSinceBigBang(this.expansion, u);
   }
 
   /** @internal */

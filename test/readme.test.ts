@@ -13,7 +13,7 @@ const readme = () => readFileSync(readmePath, "utf8");
 const file = (path: string) => readFileSync(`${root}${path}`, "utf8");
 
 describe("README", () => {
-  test("its function reference matches functions/functions.ts (run npm run docs after changing them)", async () => {
+  test("its function reference matches the declarations in functions/declarations/ (run npm run docs after changing them)", async () => {
     const readme = readFileSync(readmePath, "utf8");
     expect(withReference(readme, await functionReference())).toBe(readme);
   });

@@ -1,0 +1,175 @@
+/**
+ * Photometry under a cosmology: bolometric and spectral luminosities and fluxes, K-corrections,
+ * absolute and apparent magnitudes, AB magnitudes, rest-frame band luminosities, bolometric
+ * magnitudes and surface-brightness dimming.
+ * Each function is its JSDoc (read by the metadata plugin into functions.json) plus one line handing
+ * the arguments to the shared wrapper; see functions/functions.ts for the conventions of all families.
+ */
+/* eslint-disable @typescript-eslint/no-explicit-any */
+import { definitions as d } from "../definitions.js";
+import { callFromSheet } from "../evaluate.js";
+
+/**
+ * Bolometric luminosity L = 4π D_L² F, in W (flux in W/m2) unless units are given.
+ * @customfunction LUMINOSITY LUMINOSITY
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param flux Bolometric flux, ≥ 0, in W/m2 by default (value or range).
+ * @param z Redshift, > 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [flux_unit] Unit of flux, default "W/m2" (e.g. "erg/s/cm2").
+ * @param [lum_unit] Output unit, default "W" (e.g. "erg/s", "Lsun").
+ * @returns Luminosity (W by default).
+ */
+export function LUMINOSITY(flux: any[][], z: any[][], model?: any[][], flux_unit?: string, lum_unit?: string): any[][] {
+  return callFromSheet(d.LUMINOSITY, [flux, z, model, flux_unit, lum_unit]);
+}
+
+/**
+ * Bolometric flux F = L / (4π D_L²), in W/m2 (luminosity in W) unless units are given.
+ * @customfunction FLUX FLUX
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param lum Luminosity, ≥ 0, in W by default (value or range).
+ * @param z Redshift, > 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [lum_unit] Unit of luminosity, default "W" (e.g. "Lsun").
+ * @param [flux_unit] Output unit, default "W/m2" (e.g. "erg/s/cm2").
+ * @returns Flux (W/m2 by default).
+ */
+export function FLUX(lum: any[][], z: any[][], model?: any[][], lum_unit?: string, flux_unit?: string): any[][] {
+  return callFromSheet(d.FLUX, [lum, z, model, lum_unit, flux_unit]);
+}
+
+/**
+ * Rest-frame spectral luminosity for a power law S_ν ∝ ν^alpha: 4π D_L² S_ν (1+z)^−(1+alpha), in W/Hz (flux density in Jy).
+ * @customfunction LUMINOSITY_NU LUMINOSITY_NU
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param flux_density Observed flux density, ≥ 0, in Jy by default (value or range).
+ * @param z Redshift, > 0 (value or range).
+ * @param alpha Spectral index of S_ν ∝ ν^alpha, e.g. -0.7 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [in_unit] Unit of flux density, default "Jy" (e.g. "mJy", "uJy").
+ * @param [out_unit] Output unit, default "W/Hz" (e.g. "erg/s/Hz").
+ * @returns Spectral luminosity (W/Hz by default).
+ */
+export function LUMINOSITY_NU(flux_density: any[][], z: any[][], alpha: any[][], model?: any[][], in_unit?: string, out_unit?: string): any[][] {
+  return callFromSheet(d.LUMINOSITY_NU, [flux_density, z, alpha, model, in_unit, out_unit]);
+}
+
+/**
+ * K-correction of a power law S_ν ∝ ν^alpha: K = −2.5 (1+alpha) log10(1+z), for M = m − μ − K (mag).
+ * @customfunction KCORRECTION KCORRECTION
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param alpha Spectral index of S_ν ∝ ν^alpha (value or range).
+ * @returns K-correction (mag).
+ */
+export function KCORRECTION(z: any[][], alpha: any[][]): any[][] {
+  return callFromSheet(d.KCORRECTION, [z, alpha]);
+}
+
+/**
+ * Absolute magnitude M = m − μ − K.
+ * @customfunction MAG_ABS MAG_ABS
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param m Apparent magnitude (value or range).
+ * @param z Redshift, > 0 (value or range).
+ * @param [kcorr] K-correction in mag, default 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @returns Absolute magnitude (mag).
+ */
+export function MAG_ABS(m: any[][], z: any[][], kcorr?: any[][], model?: any[][]): any[][] {
+  return callFromSheet(d.MAG_ABS, [m, z, kcorr, model]);
+}
+
+/**
+ * Apparent magnitude m = M + μ + K.
+ * @customfunction MAG_APP MAG_APP
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param M Absolute magnitude (value or range).
+ * @param z Redshift, > 0 (value or range).
+ * @param [kcorr] K-correction in mag, default 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @returns Apparent magnitude (mag).
+ */
+export function MAG_APP(M: any[][], z: any[][], kcorr?: any[][], model?: any[][]): any[][] {
+  return callFromSheet(d.MAG_APP, [M, z, kcorr, model]);
+}
+
+/**
+ * AB magnitude of a flux density: −2.5 log10(f_ν / 3630.78 Jy).
+ * @customfunction MAG_AB MAG_AB
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param flux_density Flux density, > 0, in Jy by default (value or range).
+ * @param [unit] Unit of flux density, default "Jy" (e.g. "uJy", "erg/s/cm2/Hz").
+ * @returns AB magnitude (mag).
+ */
+export function MAG_AB(flux_density: any[][], unit?: string): any[][] {
+  return callFromSheet(d.MAG_AB, [flux_density, unit]);
+}
+
+/**
+ * Flux density of an AB magnitude, in Jy unless a unit is given.
+ * @customfunction FLUX_AB FLUX_AB
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param m_ab AB magnitude (value or range).
+ * @param [unit] Output unit, default "Jy" (e.g. "uJy").
+ * @returns Flux density (Jy by default).
+ */
+export function FLUX_AB(m_ab: any[][], unit?: string): any[][] {
+  return callFromSheet(d.FLUX_AB, [m_ab, unit]);
+}
+
+/**
+ * Rest-frame spectral luminosity at another frequency or wavelength, from a flux density observed at one, for a power law S_ν ∝ ν^α: L_ν(rest) = 4πD_L² S_ν (1+z)^−(1+α) (rest/observed)^α.
+ * @customfunction LUMINOSITY_REST LUMINOSITY_REST
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param flux_density Flux density observed at `observed`, ≥ 0, in Jy by default (value or range).
+ * @param z Redshift, > 0 (value or range).
+ * @param alpha Spectral index α of S_ν ∝ ν^α (value or range).
+ * @param observed Observed frequency, wavelength or energy, > 0, in band_unit (value or range).
+ * @param rest Rest-frame frequency, wavelength or energy wanted, > 0, in band_unit (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [band_unit] Unit of observed and rest, default "GHz" (e.g. "MHz", "Angstrom", "nm", "um", "eV").
+ * @param [in_unit] Unit of flux_density, default "Jy".
+ * @param [out_unit] Default "W/Hz" (L_ν); a power unit ("W", "erg/s", "Lsun") gives ν L_ν = λ L_λ.
+ * @returns L_ν at the rest frequency (W/Hz), or ν L_ν in a power unit.
+ */
+export function LUMINOSITY_REST(flux_density: any[][], z: any[][], alpha: any[][], observed: any[][], rest: any[][], model?: any[][], band_unit?: string, in_unit?: string, out_unit?: string): any[][] {
+  return callFromSheet(d.LUMINOSITY_REST, [flux_density, z, alpha, observed, rest, model, band_unit, in_unit, out_unit]);
+}
+
+/**
+ * Absolute bolometric magnitude of a luminosity, −2.5 log10(L / 3.0128e28 W) (IAU 2015 Resolution B2).
+ * @customfunction MAG_BOL MAG_BOL
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param lum Bolometric luminosity, > 0, in W by default (value or range).
+ * @param [unit] Unit of lum, default "W" (e.g. "Lsun", "erg/s").
+ * @returns M_bol (mag).
+ */
+export function MAG_BOL(lum: any[][], unit?: string): any[][] {
+  return callFromSheet(d.MAG_BOL, [lum, unit]);
+}
+
+/**
+ * Bolometric luminosity of an absolute bolometric magnitude, 3.0128e28 W × 10^(−0.4 M_bol) (IAU 2015 Resolution B2).
+ * @customfunction LUM_BOL LUM_BOL
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param mag_bol Absolute bolometric magnitude (value or range).
+ * @param [unit] Output unit, default "W" (e.g. "Lsun").
+ * @returns Luminosity (W by default).
+ */
+export function LUM_BOL(mag_bol: any[][], unit?: string): any[][] {
+  return callFromSheet(d.LUM_BOL, [mag_bol, unit]);
+}
+
+/**
+ * Surface-brightness dimming in magnitudes: 10 log10(1+z) bolometric (Tolman), or 2.5 (3 − α) log10(1+z) per unit frequency at a fixed observed frequency for S_ν ∝ ν^α.
+ * @customfunction DIMMING DIMMING
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param [alpha] Spectral index α; blank = bolometric (value or range).
+ * @returns Dimming (mag).
+ */
+export function DIMMING(z: any[][], alpha?: any[][]): any[][] {
+  return callFromSheet(d.DIMMING, [z, alpha]);
+}
