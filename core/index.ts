@@ -23,22 +23,22 @@ export {
   solarMassKg,
   speedOfLightKmPerS,
   speedOfLightMPerS,
-} from "./constants.js";
-export { cmbFrameRedshift, cosAngleToCmbApex, galacticCoordinatesRad } from "./cmbFrame.js";
-export { Cosmology, type InvertibleQuantity } from "./Cosmology.js";
+} from "./units/constants.js";
+export { cmbFrameRedshift, cosAngleToCmbApex, galacticCoordinatesRad } from "./observables/cmbFrame.js";
+export { Cosmology, type InvertibleQuantity } from "./distances/Cosmology.js";
 export {
   angularDiameterDistanceSlopeMpc,
   comovingDistanceSlopeMpc,
   luminosityDistanceLogSlope,
   luminosityDistanceSlopeMpc,
   transverseComovingDistanceSlopeMpc,
-} from "./distanceSlopes.js";
-export { ExpansionRate, type DensityComponent } from "./ExpansionRate.js";
-export { fermiDiracDensityFactor } from "./fermiDirac.js";
-export { limitingRedshift, limitingRedshiftMag, maxVolumeMpc3 } from "./fluxLimit.js";
-export { type ModelParameters, parameterKeys, type ParameterKey } from "./ModelParameters.js";
-export { formatModelSpec, parseModelSpec, withChanges, type NamedModels } from "./modelSpec.js";
-export { NoSolutionError } from "./NoSolutionError.js";
+} from "./distances/distanceSlopes.js";
+export { ExpansionRate, type DensityComponent } from "./model/ExpansionRate.js";
+export { fermiDiracDensityFactor } from "./model/fermiDirac.js";
+export { limitingRedshift, limitingRedshiftMag, maxVolumeMpc3 } from "./observables/fluxLimit.js";
+export { type ModelParameters, parameterKeys, type ParameterKey } from "./model/ModelParameters.js";
+export { formatModelSpec, parseModelSpec, withChanges, type NamedModels } from "./model/modelSpec.js";
+export { NoSolutionError } from "./checks/NoSolutionError.js";
 export {
   abFluxDensityJy,
   abMagnitude,
@@ -53,15 +53,15 @@ export {
   spectralLuminosityWHz,
   spectralSurfaceBrightnessDimmingMag,
   surfaceBrightnessDimmingMag,
-} from "./photometry.js";
-export { findPreset, presets, type Preset } from "./presets.js";
-export { checkRedshift, checkSourceRedshift } from "./redshift.js";
-export { type InverseWording } from "./redshiftInverse.js";
+} from "./observables/photometry.js";
+export { findPreset, presets, type Preset } from "./model/presets.js";
+export { checkRedshift, checkSourceRedshift } from "./checks/redshift.js";
+export { type InverseWording } from "./distances/redshiftInverse.js";
 export {
   absoluteMagnitudeErrorMag,
   luminosityDistanceErrorMpc,
   luminosityErrorW,
   properSizeErrorMpc,
   spectralLuminosityErrorWHz,
-} from "./uncertainties.js";
-export { conversionFactor, convertUnit, frequencyHz, parseUnit, scaledConversion, type Unit } from "./units.js";
+} from "./observables/uncertainties.js";
+export { conversionFactor, convertUnit, frequencyHz, parseUnit, scaledConversion, type Unit } from "./units/units.js";

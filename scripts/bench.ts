@@ -6,8 +6,8 @@
  */
 import { execFileSync, spawnSync } from "node:child_process";
 import { fileURLToPath } from "node:url";
-import { Cosmology } from "../core/Cosmology.js";
-import { fermiDiracDensityFactor } from "../core/fermiDirac.js";
+import { Cosmology } from "../core/distances/Cosmology.js";
+import { fermiDiracDensityFactor } from "../core/model/fermiDirac.js";
 import { benchWorksheet } from "./benchWorksheet.js";
 
 const n = 1_000_000;

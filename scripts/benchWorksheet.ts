@@ -10,7 +10,7 @@ import { mkdtempSync, statSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { Cosmology } from "../core/Cosmology.js";
+import { Cosmology } from "../core/distances/Cosmology.js";
 
 const root = fileURLToPath(new URL("..", import.meta.url));
 const runs = 5;

@@ -4,7 +4,7 @@
  * for every kind of model (accuracy target of the engine).
  */
 import { describe, expect, test } from "vitest";
-import { Cosmology } from "../core/Cosmology.js";
+import { Cosmology } from "../core/distances/Cosmology.js";
 import { distanceQuantities, testModels } from "./fixtures.js";
 import { logRedshifts, relativeError } from "./helpers.js";
 import { SlowCosmology } from "./reference/slowCosmology.js";

@@ -14,8 +14,8 @@
  * - its volume in curved models at z ≤ 1e-3 (Hogg eq. 29 as written cancels: 4e-9 at z = 1e-3).
  */
 import { describe, expect, test } from "vitest";
-import { Cosmology } from "../core/Cosmology.js";
-import type { ModelParameters } from "../core/ModelParameters.js";
+import { Cosmology } from "../core/distances/Cosmology.js";
+import type { ModelParameters } from "../core/model/ModelParameters.js";
 import { distanceQuantities } from "./fixtures.js";
 import { relativeError } from "./helpers.js";
 import { referenceAvailable, runPythonReference } from "./reference/python.js";

@@ -1,6 +1,6 @@
 /** Models with closed-form distances and ages (all exact results of the Friedmann equation). */
 import { describe, expect, test } from "vitest";
-import { Cosmology } from "../core/Cosmology.js";
+import { Cosmology } from "../core/distances/Cosmology.js";
 import { expectRelative } from "./helpers.js";
 
 const base = { w0: -1, wa: 0, Tcmb: 0, Neff: 3.046, mnu: [] as number[] };

@@ -12,7 +12,7 @@ import * as core from "../core/index.js";
 
 const root = fileURLToPath(new URL("..", import.meta.url));
 const folders = ["core", "functions"];
-const files = folders.flatMap((d) => readdirSync(`${root}${d}`).filter((f) => f.endsWith(".ts")).map((f) => `${d}/${f}`));
+const files = folders.flatMap((d) => (readdirSync(`${root}${d}`, { recursive: true }) as string[]).filter((f) => f.endsWith(".ts")).map((f) => `${d}/${f}`));
 
 interface Example {
   file: string;

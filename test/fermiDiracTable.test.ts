@@ -3,7 +3,7 @@
  * to be: every node equals an adaptive Gauss–Kronrod evaluation of the same integrals.
  */
 import { describe, expect, test } from "vitest";
-import { fermiDiracDensityFactor, fermiDiracGrid, fermiDiracNodesByQuadrature, fermiDiracNodesByRule } from "../core/fermiDirac.js";
+import { fermiDiracDensityFactor, fermiDiracGrid, fermiDiracNodesByQuadrature, fermiDiracNodesByRule } from "../core/model/fermiDirac.js";
 import { relativeError } from "./helpers.js";
 import { slowFermiDirac } from "./reference/slowCosmology.js";
 

@@ -1,5 +1,5 @@
 /** Models used across the accuracy tests: one of each kind the engine supports. */
-import type { ModelParameters } from "../core/ModelParameters.js";
+import type { ModelParameters } from "../core/model/ModelParameters.js";
 
 const lcdm = { w0: -1, wa: 0, Tcmb: 0, Neff: 3.046, mnu: [] as number[] };
 
@@ -26,7 +26,7 @@ export const distanceQuantities = [
 
 /**
  * Two presets with their parameters written out from the papers, for the independent slow path
- * (test/reference/slowCosmology.ts) to give expected values that owe nothing to core/presets.ts.
+ * (test/reference/slowCosmology.ts) to give expected values that owe nothing to core/model/presets.ts.
  */
 export const publishedModels = {
   /** Planck 2018 VI (A&A 641, A6) Table 2, last column (TT,TE,EE+lowE+lensing+BAO); one 0.06 eV ν, Neff 3.046, Tcmb 2.7255 K (Fixsen 2009). */

@@ -4,7 +4,7 @@
  */
 import { describe, expect, test } from "vitest";
 import { Cosmology } from "../core/index.js";
-import { conversionFactor, frequencyHz, parseUnit } from "../core/units.js";
+import { conversionFactor, frequencyHz, parseUnit } from "../core/units/units.js";
 import { CellError } from "../functions/cellError.js";
 import { definitions } from "../functions/definitions.js";
 import { evaluate, type Cell } from "../functions/evaluate.js";

@@ -1,8 +1,8 @@
 /** Identities, limits and symmetries that hold for every model, checked on every test model. */
 import { describe, expect, test } from "vitest";
-import { speedOfLightKmPerS, megaparsecKm, secondsPerGyr } from "../core/constants.js";
-import { Cosmology, type InvertibleQuantity } from "../core/Cosmology.js";
-import { NoSolutionError } from "../core/NoSolutionError.js";
+import { speedOfLightKmPerS, megaparsecKm, secondsPerGyr } from "../core/units/constants.js";
+import { Cosmology, type InvertibleQuantity } from "../core/distances/Cosmology.js";
+import { NoSolutionError } from "../core/checks/NoSolutionError.js";
 import { testModels } from "./fixtures.js";
 import { SlowCosmology, slowFermiDirac } from "./reference/slowCosmology.js";
 import { expectRelative, logRedshifts } from "./helpers.js";

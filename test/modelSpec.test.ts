@@ -1,8 +1,8 @@
 import { describe, expect, test } from "vitest";
-import { Cosmology } from "../core/Cosmology.js";
-import type { ModelParameters } from "../core/ModelParameters.js";
-import { formatModelSpec, parseModelSpec } from "../core/modelSpec.js";
-import { presets } from "../core/presets.js";
+import { Cosmology } from "../core/distances/Cosmology.js";
+import type { ModelParameters } from "../core/model/ModelParameters.js";
+import { formatModelSpec, parseModelSpec } from "../core/model/modelSpec.js";
+import { presets } from "../core/model/presets.js";
 import { seededRandom } from "./helpers.js";
 
 describe("model spec text", () => {

@@ -4,9 +4,9 @@
  * with massive neutrinos, evaluated at 20 digits since each E(z) then holds a quadrature).
  */
 import { describe, expect, test } from "vitest";
-import { Cosmology } from "../core/Cosmology.js";
-import { fermiDiracDensityFactor } from "../core/fermiDirac.js";
-import type { ModelParameters } from "../core/ModelParameters.js";
+import { Cosmology } from "../core/distances/Cosmology.js";
+import { fermiDiracDensityFactor } from "../core/model/fermiDirac.js";
+import type { ModelParameters } from "../core/model/ModelParameters.js";
 import { testModels } from "./fixtures.js";
 import { relativeError } from "./helpers.js";
 import { referenceAvailable, runPythonReference } from "./reference/python.js";

@@ -1,7 +1,7 @@
 import { describe, expect, test } from "vitest";
-import { fermiDiracDensityFactor, fermiDiracDensityFactorLogSlope } from "../core/fermiDirac.js";
-import { integrate, kronrod15 } from "../core/quadrature.js";
-import { QuinticTable } from "../core/QuinticTable.js";
+import { fermiDiracDensityFactor, fermiDiracDensityFactorLogSlope } from "../core/model/fermiDirac.js";
+import { integrate, kronrod15 } from "../core/numerics/quadrature.js";
+import { QuinticTable } from "../core/numerics/QuinticTable.js";
 import { expectRelative } from "./helpers.js";
 import { slowFermiDirac, tanhSinh } from "./reference/slowCosmology.js";
 

@@ -1,8 +1,8 @@
 /** Values published in papers and standards, and rules of thumb of the trade. */
 import { describe, expect, test } from "vitest";
-import { abZeroPointJy, solarLuminosityW } from "../core/constants.js";
-import { Cosmology } from "../core/Cosmology.js";
-import { abFluxDensityJy, abMagnitude, bolometricAbsoluteMagnitude, fluxWm2 } from "../core/photometry.js";
+import { abZeroPointJy, solarLuminosityW } from "../core/units/constants.js";
+import { Cosmology } from "../core/distances/Cosmology.js";
+import { abFluxDensityJy, abMagnitude, bolometricAbsoluteMagnitude, fluxWm2 } from "../core/observables/photometry.js";
 import { expectRelative } from "./helpers.js";
 
 describe("Planck 2018 (A&A 641, A6, Table 2)", () => {

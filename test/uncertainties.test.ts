@@ -18,7 +18,7 @@ import {
   spectralLuminosityWHz,
   transverseComovingDistanceSlopeMpc,
 } from "../core/index.js";
-import type { ModelParameters } from "../core/ModelParameters.js";
+import type { ModelParameters } from "../core/model/ModelParameters.js";
 import { definitions } from "../functions/definitions.js";
 import { evaluate, type Cell } from "../functions/evaluate.js";
 import { expectRelative, seededRandom } from "./helpers.js";

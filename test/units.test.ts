@@ -1,5 +1,5 @@
 import { describe, expect, test } from "vitest";
-import { conversionFactor, convertUnit, parseUnit } from "../core/units.js";
+import { conversionFactor, convertUnit, parseUnit } from "../core/units/units.js";
 import { expectRelative } from "./helpers.js";
 
 describe("unit conversion", () => {

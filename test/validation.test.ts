@@ -1,7 +1,7 @@
 /** Every invalid parameter and argument is rejected with a message that names it. */
 import { describe, expect, test } from "vitest";
-import { Cosmology } from "../core/Cosmology.js";
-import { absoluteMagnitude, fluxWm2, luminosityW } from "../core/photometry.js";
+import { Cosmology } from "../core/distances/Cosmology.js";
+import { absoluteMagnitude, fluxWm2, luminosityW } from "../core/observables/photometry.js";
 
 const ok = { H0: 70, Om: 0.3, w0: -1, wa: 0, Tcmb: 2.7255, Neff: 3.046, mnu: [] as number[] };
 

@@ -1,5 +1,5 @@
 /**
- * Independent slow path for the test suite: the same physics as core/Cosmology.ts written again
+ * Independent slow path for the test suite: the same physics as core/distances/Cosmology.ts written again
  * directly from the equations, with a different quadrature (tanh-sinh, Takahasi & Mori 1974) and no
  * tables. Used only to check the fast path; it shares nothing with it but the constants module
  * (definitions, not code).
@@ -13,7 +13,7 @@ import {
   speedOfLightKmPerS,
   speedOfLightMPerS,
   stefanBoltzmannSI,
-} from "../../core/constants.js";
+} from "../../core/units/constants.js";
 
 /** ∫_a^b f by tanh-sinh quadrature, halving the step until two levels agree to relTol (the error then is
  * far smaller: it roughly squares with each halving). */

@@ -6,18 +6,18 @@
  * Build once (validation and tables, about a millisecond), evaluate many times (tens of ns a value).
  * Distances are in Mpc, times in Gyr, volumes in Mpc³, unless a name says otherwise.
  */
-import { gravitationalConstantSI, megaparsecKm, megaparsecM, secondsPerGyr, speedOfLightKmPerS } from "./constants.js";
-import { ExpansionRate, type DensityComponent } from "./ExpansionRate.js";
-import { hyperbolicRemainder } from "./hyperbolicRemainder.js";
-import type { ModelParameters } from "./ModelParameters.js";
-import { formatModelSpec, parseModelSpec } from "./modelSpec.js";
+import { gravitationalConstantSI, megaparsecKm, megaparsecM, secondsPerGyr, speedOfLightKmPerS } from "../units/constants.js";
+import { ExpansionRate, type DensityComponent } from "../model/ExpansionRate.js";
+import { hyperbolicRemainder } from "../numerics/hyperbolicRemainder.js";
+import type { ModelParameters } from "../model/ModelParameters.js";
+import { formatModelSpec, parseModelSpec } from "../model/modelSpec.js";
 import { ageSinceBigBang, buildDistanceTables } from "./distanceTables.js";
-import { integrate, kronrod15 } from "./quadrature.js";
-import { QuinticTable } from "./QuinticTable.js";
-import { checkRedshift } from "./redshift.js";
+import { integrate, kronrod15 } from "../numerics/quadrature.js";
+import { QuinticTable } from "../numerics/QuinticTable.js";
+import { checkRedshift } from "../checks/redshift.js";
 import { RedshiftInverse, type InverseWording, type InvertibleQuantity } from "./redshiftInverse.js";
 
-export type { DensityComponent } from "./ExpansionRate.js";
+export type { DensityComponent } from "../model/ExpansionRate.js";
 export type { InverseWording, InvertibleQuantity } from "./redshiftInverse.js";
 
 /**

@@ -15,8 +15,8 @@
  * adaptive quadrature at every node.
  * test/fermiDiracTable.test.ts checks every node against adaptive Gauss–Kronrod quadrature to 1e-15.
  */
-import { integrate } from "./quadrature.js";
-import { QuinticTable } from "./QuinticTable.js";
+import { integrate } from "../numerics/quadrature.js";
+import { QuinticTable } from "../numerics/QuinticTable.js";
 
 const normalisation = 120 / (7 * Math.PI ** 4);
 /** Small-y coefficient: dF/d(y²) at 0 = (K/2)∫x/(eˣ+1)dx = (K/2)(π²/12) = 5/(7π²). */

@@ -5,8 +5,8 @@
  * Doppler shift of an observer moving at β, Rybicki & Lightman 1979 eq. 4.12, from memory; sign: light from the
  * apex is blueshifted by our motion, so its CMB-frame redshift is higher).
  */
-import { cmbDipoleGalacticDeg, cmbDipoleSpeedKmPerS, galacticFrameDeg, speedOfLightKmPerS } from "./constants.js";
-import { requireFiniteNumber } from "./numberChecks.js";
+import { cmbDipoleGalacticDeg, cmbDipoleSpeedKmPerS, galacticFrameDeg, speedOfLightKmPerS } from "../units/constants.js";
+import { requireFiniteNumber } from "../checks/numberChecks.js";
 
 const degree = Math.PI / 180;
 const poleRa = galacticFrameDeg.poleRa * degree;

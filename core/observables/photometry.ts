@@ -3,10 +3,10 @@
  * and apparent magnitudes, AB magnitudes. Fluxes in W m⁻², flux densities in W m⁻² Hz⁻¹ (or Jy where
  * the name says so), luminosities in W and W Hz⁻¹.
  */
-import { abMagnitudeOffset, bolometricZeroPointW, megaparsecM } from "./constants.js";
-import type { Cosmology } from "./Cosmology.js";
-import { requireFiniteNumber, requireNonNegative } from "./numberChecks.js";
-import { checkRedshift, checkSourceRedshift } from "./redshift.js";
+import { abMagnitudeOffset, bolometricZeroPointW, megaparsecM } from "../units/constants.js";
+import type { Cosmology } from "../distances/Cosmology.js";
+import { requireFiniteNumber, requireNonNegative } from "../checks/numberChecks.js";
+import { checkRedshift, checkSourceRedshift } from "../checks/redshift.js";
 
 /** 4π D_L² [m²], requiring z > 0 (a source at z = 0 is at zero distance). */
 function sphereAreaM2(model: Cosmology, z: number): number {

@@ -4,11 +4,11 @@
  * 100:2008 (GUM) eq. 10), with the exact redshift derivatives of
  * distanceSlopes.ts. Valid while the errors are small enough for f to be linear across them.
  */
-import type { Cosmology } from "./Cosmology.js";
-import { angularDiameterDistanceSlopeMpc, luminosityDistanceLogSlope, luminosityDistanceSlopeMpc } from "./distanceSlopes.js";
+import type { Cosmology } from "../distances/Cosmology.js";
+import { angularDiameterDistanceSlopeMpc, luminosityDistanceLogSlope, luminosityDistanceSlopeMpc } from "../distances/distanceSlopes.js";
 import { luminosityW, spectralLuminosityWHz } from "./photometry.js";
-import { requireNonNegative } from "./numberChecks.js";
-import { checkSourceRedshift } from "./redshift.js";
+import { requireNonNegative } from "../checks/numberChecks.js";
+import { checkSourceRedshift } from "../checks/redshift.js";
 
 /**
  * Error of the luminosity distance from a redshift error: σ_DL = |dD_L/dz| σ_z.

@@ -5,9 +5,9 @@
  * dE/dz analytically, so each panel is exact to ~1e-13; E² > 0 is checked at every node and quadrature
  * point (a model without a big bang is rejected, naming the redshift), then beyond the tables.
  */
-import type { ExpansionRate } from "./ExpansionRate.js";
-import { gaussRule, integrate } from "./quadrature.js";
-import { QuinticTable } from "./QuinticTable.js";
+import type { ExpansionRate } from "../model/ExpansionRate.js";
+import { gaussRule, integrate } from "../numerics/quadrature.js";
+import { QuinticTable } from "../numerics/QuinticTable.js";
 
 /** Tables cover 0 ≤ z ≤ tableMaxRedshift; beyond, the exact integrals are evaluated directly. */
 const tableMaxRedshift = 1e8;

@@ -10,13 +10,13 @@
  * dg/du = (1+α) − 2 (1+z) d ln D_L/dz. Where F rises again at high z (α > 1, or near the antipode
  * of a closed model) the first crossing is the answer.
  */
-import { megaparsecM, parsecM } from "./constants.js";
-import type { Cosmology } from "./Cosmology.js";
-import { luminosityDistanceLogSlope } from "./distanceSlopes.js";
-import { NoSolutionError } from "./NoSolutionError.js";
-import { requireFiniteNumber, requireNonNegative } from "./numberChecks.js";
-import { checkRedshift } from "./redshift.js";
-import { solveBracketed } from "./solveBracketed.js";
+import { megaparsecM, parsecM } from "../units/constants.js";
+import type { Cosmology } from "../distances/Cosmology.js";
+import { luminosityDistanceLogSlope } from "../distances/distanceSlopes.js";
+import { NoSolutionError } from "../checks/NoSolutionError.js";
+import { requireFiniteNumber, requireNonNegative } from "../checks/numberChecks.js";
+import { checkRedshift } from "../checks/redshift.js";
+import { solveBracketed } from "../numerics/solveBracketed.js";
 
 /** Redshift where the scan ends: the model's tables end at z = 1e8. */
 const scanEndRedshift = 1e8;

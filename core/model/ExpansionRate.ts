@@ -12,11 +12,11 @@ import {
   neutrinoToPhotonDensityPerSpecies,
   speedOfLightMPerS,
   stefanBoltzmannSI,
-} from "./constants.js";
+} from "../units/constants.js";
 import { fermiDiracDensityFactor, fermiDiracDensityFactorLn, fermiDiracDensityFactorLogSlope, fermiDiracTable } from "./fermiDirac.js";
-import type { QuinticTable } from "./QuinticTable.js";
+import type { QuinticTable } from "../numerics/QuinticTable.js";
 import type { ModelParameters } from "./ModelParameters.js";
-import { checkRedshift, formatRedshift } from "./redshift.js";
+import { checkRedshift, formatRedshift } from "../checks/redshift.js";
 
 /** Density components of `densityParameter`: matter (massive ν included), dark energy, curvature, radiation (photons + massless ν), photons, all neutrinos. */
 export type DensityComponent = "matter" | "darkenergy" | "curvature" | "radiation" | "photons" | "neutrinos";

@@ -3,12 +3,12 @@
  * value. Node bisection, then Newton's method on the same interpolants the forward functions use
  * (so forward and inverse agree to rounding); the lower branch where a quantity has a maximum.
  */
-import { hyperbolicRemainder } from "./hyperbolicRemainder.js";
-import { NoSolutionError } from "./NoSolutionError.js";
-import { integrate } from "./quadrature.js";
-import type { QuinticTable } from "./QuinticTable.js";
-import { formatRedshift } from "./redshift.js";
-import { solveBracketed } from "./solveBracketed.js";
+import { hyperbolicRemainder } from "../numerics/hyperbolicRemainder.js";
+import { NoSolutionError } from "../checks/NoSolutionError.js";
+import { integrate } from "../numerics/quadrature.js";
+import type { QuinticTable } from "../numerics/QuinticTable.js";
+import { formatRedshift } from "../checks/redshift.js";
+import { solveBracketed } from "../numerics/solveBracketed.js";
 
 const relTolExact = 1e-14;
 
