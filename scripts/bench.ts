@@ -81,7 +81,7 @@ if (only >= 0) {
 }
 
 if (process.argv.includes("--worksheet")) {
-  benchWorksheet();
+  await benchWorksheet();
   process.exit(0);
 }
 
@@ -123,4 +123,4 @@ for (const spec of specs) {
   console.log(pad(spec, 13) + pad("build", 11) + `${rows[spec].buildMs.toFixed(2)} ms`);
 }
 if (!reference) console.log("(astropy not found at /usr/bin/python3: no reference timings)");
-benchWorksheet();
+await benchWorksheet();
