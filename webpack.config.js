@@ -15,6 +15,27 @@ const root = fileURLToPath(new URL(".", import.meta.url));
 /** The declaration files, one per family of functions (the metadata plugin reads their JSDoc). */
 const declarationFiles = JSON.parse(readFileSync(`${root}functions/declarationFiles.json`, "utf8"));
 
+/**
+ * The README sections a user of a hosted add-in reads (what zcell does, how to share workbooks and what
+ * the pane writes, the function reference and conventions); the install, development and testing
+ * sections speak to a developer with a local server and stay out of a hosted build's help page.
+ */
+const hostedSections = ["Sharing workbooks", "Security", "Function reference", "Model spec", "Models of this workbook", "Presets", "Conventions", "Units", "Errors"];
+
+/** The README for the help page of a build served from `base`: for a hosted build, the user's sections and how to report a problem. */
+function helpMarkdown(markdown, hosted) {
+  if (!hosted) return markdown;
+  const parts = markdown.split(/^(?=#{1,3} )/m);
+  const kept = parts.filter((part, i) => {
+    if (i === 0) return true; // the title and the caution that results depend on the assumed cosmology
+    const heading = /^#{1,3} (.*)$/m.exec(part)[1].trim();
+    return hostedSections.includes(heading);
+  });
+  // the dev server's bullet of the Security section is about npm start on a developer's machine
+  const text = kept.join("").replace(/^- \*\*The dev server\*\*[^]*?(?=^\S|^- |(?![^]))/m, "");
+  return `${text}\n## Reporting a problem\n\nTell the people who host zcell for you: the cell, its formula, the value you expected and the one shown, and the model (\`=ZC.DESCRIBE()\` writes it out). \`=ZC.VERSION()\` gives the version.\n`;
+}
+
 /** README as a page; headings get ids (GitHub-style slugs) so that help links can point at sections. */
 function helpPage(markdown) {
   const slug = (html) =>
@@ -89,7 +110,7 @@ export default async (env = {}, argv = {}) => {
           { from: "manifest/manifest.xml", to: "manifest.xml", transform: (content) => rewrite(content.toString()) },
           { from: "manifest/assets", to: "assets" },
           { from: "taskpane/taskpane.css", to: "taskpane.css" },
-          { from: "README.md", to: "help.html", transform: (content) => helpPage(content.toString()) },
+          { from: "README.md", to: "help.html", transform: (content) => helpPage(helpMarkdown(content.toString(), Boolean(env.url))) },
         ],
       }),
       {

@@ -125,3 +125,17 @@ describe("help links", () => {
     for (const anchor of anchors) expect(help, anchor).toMatch(new RegExp(`id="?${anchor}"?[ >]`));
   });
 });
+
+describe("help.html", () => {
+  test("a hosted build's help page speaks to its user: no localhost, no developer steps, how to report a problem", () => {
+    const page = readFileSync(`${hosted()}/help.html`, "utf8");
+    expect(page).not.toMatch(/localhost|127\.0\.0\.1|npm (start|install|test|run)/);
+    for (const section of ["Sharing workbooks", "Security", "Function reference", "Conventions", "Errors", "Reporting a problem"]) expect(page).toContain(`>${section}</h2>`);
+    expect(page).toMatch(/Every number zcell gives depends on the assumed cosmology/);
+    expect(page).toContain("ZC.DIST_LUM(z, [model], [unit])");
+  });
+
+  test("the local build's help page keeps the developer's steps", () => {
+    expect(readFileSync(`${testBuildDir}help.html`, "utf8")).toContain("https://localhost:3000");
+  });
+});

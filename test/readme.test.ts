@@ -67,3 +67,13 @@ describe("README: Security", () => {
     expect(file("scripts/server.mjs")).toMatch(/: 10;/);
   });
 });
+
+describe("README: comparing with astropy", () => {
+  test("the agreement it states is the one test/astropy.test.ts enforces", () => {
+    const text = readme().replace(/\s+/g, " ");
+    expect(text).toContain("agree to 1e-9 without massive neutrinos and to 1e-5 (3e-5 for ages and volumes) with them");
+    const check = file("test/astropy.test.ts");
+    expect(check).toContain("Om0: p.Om - m.OnuMassive");
+    expect(check).toContain("const tol = massive ? (looser ? 3e-5 : 1e-5) : 1e-9;");
+  });
+});
