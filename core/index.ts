@@ -37,7 +37,7 @@ export { ExpansionRate, type DensityComponent } from "./model/ExpansionRate.js";
 export { fermiDiracDensityFactor } from "./model/fermiDirac.js";
 export { limitingRedshift, limitingRedshiftMag, maxVolumeMpc3 } from "./observables/fluxLimit.js";
 export { type ModelParameters, parameterKeys, type ParameterKey } from "./model/ModelParameters.js";
-export { formatModelSpec, parseModelSpec, withChanges, type NamedModels } from "./model/modelSpec.js";
+export { formatModelSpec, parseModelSpec, quotedText, withChanges, type NamedModels } from "./model/modelSpec.js";
 export { NoSolutionError } from "./checks/NoSolutionError.js";
 export {
   abFluxDensityJy,

@@ -4,7 +4,7 @@
  * settings beside the active model, as name → spec text, so they travel with the file; any model
  * argument may name one (`=ZC.DIST_LUM(A2, "TEAM-FIDUCIAL")`). A name never shadows a built-in preset.
  */
-import { findPreset, formatModelSpec, parseModelSpec, type ModelParameters, type NamedModels } from "../core/index.js";
+import { findPreset, formatModelSpec, parseModelSpec, quotedText, type ModelParameters, type NamedModels } from "../core/index.js";
 
 /** Settings key under which the workbook's own models are stored (an object: name → spec text). */
 export const workbookModelsSettingKey = "zcell.workbookModels";
@@ -16,7 +16,7 @@ const namePattern = /^[A-Za-z][A-Za-z0-9_-]{0,31}$/;
  * @param name the name typed, e.g. "TEAM-FIDUCIAL"
  */
 export function modelNameProblem(name: string): string | undefined {
-  if (!namePattern.test(name)) return `"${name}" is not a model name: use a letter, then letters, digits, - or _ (at most 32)`;
+  if (!namePattern.test(name)) return `"${quotedText(name)}" is not a model name: use a letter, then letters, digits, - or _ (at most 32)`;
   if (findPreset(name)) return `"${name.toUpperCase()}" is a built-in preset: choose another name`;
   return undefined;
 }
@@ -39,9 +39,6 @@ export const maxWorkbookModels = 100;
 export const maxSpecLength = 500;
 /** Problems reported one by one at most; the rest are counted. */
 const problemsListedAtMost = 5;
-
-/** A name as a message quotes it: at most 40 characters. */
-const quotedName = (name: string) => (name.length > 40 ? `${name.slice(0, 39)}…` : name);
 
 /**
  * Reads the stored value (as the settings return it). Each entry must be a valid name whose spec
@@ -67,7 +64,7 @@ export function readWorkbookModels(stored: unknown): WorkbookModels {
       continue;
     }
     const spec = (stored as Record<string, unknown>)[name];
-    const problem = modelNameProblem(quotedName(name)) ?? (name.length > 32 ? "is longer than 32 characters" : undefined);
+    const problem = modelNameProblem(name);
     let why: string | undefined;
     if (problem) why = `workbook model ${problem}`;
     else if (typeof spec !== "string") why = `workbook model ${name}: its spec is not text`;

@@ -91,7 +91,7 @@ const about: Record<string, { summary: string; equation: string; method: string;
   VERSION: { summary: "version and engine conventions", equation: "—", method: closedForm },
 };
 
-/** Cells the inspector reads from one reference at most (a whole column is 1,048,576). */
+/** Cells the inspector reads from one reference at most (a whole column is 1,048,576: "Excel specifications and limits", from memory). */
 export const inspectorReadLimit = 100_000;
 
 /** How many cells a reference names (A1, A1:C9, A:A, 1:3; a name counts as one cell here). */

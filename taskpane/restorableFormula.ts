@@ -14,7 +14,7 @@ import { tokenize, type Token } from "./formulaCalls.js";
 /** The verdict on one formula: the text to write (typed spelling), or why it is refused. */
 export type Restorable = { ok: true; formula: string } | { ok: false; reason: string };
 
-/** Excel's own limit on a formula's length (8,192 characters; Excel specifications and limits). */
+/** Excel's own limit on a formula's length: 8,192 characters (Microsoft's "Excel specifications and limits", from memory). */
 const maxFormulaLength = 8192;
 const allowedOperators = new Set(["+", "-", "*", "/", "^", "&", "=", "<", ">", "<=", ">=", "<>", "%"]);
 /** ZC functions that return a table of several cells whatever their arguments. */

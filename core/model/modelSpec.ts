@@ -16,7 +16,7 @@ import { findPreset, presets } from "./presets.js";
 const numberPattern = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 
 function parseNumber(key: string, text: string): number {
-  if (!numberPattern.test(text)) throw new TypeError(`${key}: "${quoted(text)}" is not a number (use '.' as the decimal point)`);
+  if (!numberPattern.test(text)) throw new TypeError(`${key}: "${quotedText(text)}" is not a number (use '.' as the decimal point)`);
   return Number(text);
 }
 
@@ -42,8 +42,13 @@ export interface NamedModels {
 /** Names a message lists at most (a workbook may define many models). */
 const namesListedAtMost = 12;
 
-/** Text from a spec as a message quotes it: at most 40 characters. */
-function quoted(text: string): string {
+/**
+ * Text from a workbook as a message quotes it: at most 40 characters (a stored spec or name may be huge).
+ * @param text any text, e.g. a spec part or a model name
+ * @returns the text, cut to 39 characters and "…" when longer than 40
+ * @example quotedText("x".repeat(50)).length // 40
+ */
+export function quotedText(text: string): string {
   return text.length > 40 ? `${text.slice(0, 39)}…` : text;
 }
 
@@ -68,22 +73,22 @@ export function parseModelSpec(text: string, named?: NamedModels): ModelParamete
   parts.forEach((part, index) => {
     const eq = part.indexOf("=");
     if (eq < 0) {
-      if (index > 0) throw new TypeError(`"${quoted(part)}" is not key=value (a preset name may only come first)`);
+      if (index > 0) throw new TypeError(`"${quotedText(part)}" is not key=value (a preset name may only come first)`);
       const preset = findPreset(part)?.parameters ?? named?.find(part);
       if (!preset) {
         const known = [...presets.map((p) => p.name), ...(named?.names ?? [])];
         const listed = known.slice(0, namesListedAtMost).join(", ") + (known.length > namesListedAtMost ? ` … and ${known.length - namesListedAtMost} more` : "");
-        throw new TypeError(`unknown preset "${quoted(part)}": use one of ${listed}`);
+        throw new TypeError(`unknown preset "${quotedText(part)}": use one of ${listed}`);
       }
       base = preset;
       return;
     }
     if (part.indexOf("=", eq + 1) >= 0) {
-      throw new TypeError(`"${quoted(part)}" holds several keys: separate keys with ';', e.g. "H0=70; Om=0.3; OL=0.7"`);
+      throw new TypeError(`"${quotedText(part)}" holds several keys: separate keys with ';', e.g. "H0=70; Om=0.3; OL=0.7"`);
     }
     const rawKey = part.slice(0, eq);
     const key = keyByLowerCase.get(rawKey.toLowerCase());
-    if (!key) throw new TypeError(`unknown key "${quoted(rawKey)}": use ${parameterKeys.join(", ")}`);
+    if (!key) throw new TypeError(`unknown key "${quotedText(rawKey)}": use ${parameterKeys.join(", ")}`);
     if (given.has(key)) throw new TypeError(`${key} is given twice`);
     given.set(key, part.slice(eq + 1));
   });
@@ -120,7 +125,7 @@ export function withChanges(p: ModelParameters, changes: readonly (readonly [str
   const seen = new Set<ParameterKey>();
   for (const [rawKey, value] of changes) {
     const key = keyByLowerCase.get(rawKey.trim().toLowerCase());
-    if (!key) throw new TypeError(`unknown key "${quoted(rawKey)}": use ${parameterKeys.join(", ")}`);
+    if (!key) throw new TypeError(`unknown key "${quotedText(rawKey)}": use ${parameterKeys.join(", ")}`);
     if (seen.has(key)) throw new TypeError(`${key} is given twice`);
     seen.add(key);
     const text = String(value).replace(/\s+/g, "");

@@ -45,7 +45,7 @@
       local = address.slice(bang + 1);
     }
     const [a, b = a] = local.replace(/\$/g, "").toUpperCase().split(":");
-    // a cell, or a whole column (A:A) or row (1:3) as Excel's sheet is 1,048,576 rows by 16,384 columns
+    // a cell, or a whole column (A:A) or row (1:3) as Excel's sheet is 1,048,576 rows by 16,384 columns ("Excel specifications and limits", from memory)
     const p = (x, end) => {
       const m = /^([A-Z]*)(\d*)$/.exec(x);
       return { c: m[1] ? colNum(m[1]) : end ? 16384 : 1, r: m[2] ? Number(m[2]) : end ? 1048576 : 1 };
