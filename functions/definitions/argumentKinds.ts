@@ -1,0 +1,50 @@
+/**
+ * The kinds of argument the worksheet functions share, as ArgSpec builders (a redshift, a magnitude,
+ * a 1σ error, a unit, the model …), and the two accessors every `compute` uses. Each family of
+ * definitions in this folder builds its arguments from these, so one kind reads alike everywhere.
+ */
+import { conversionFactor, type Cosmology } from "../../core/index.js";
+import type { Args, ArgSpec } from "../FunctionDef.js";
+import { messages } from "../messages.js";
+
+type NumberOptions = Omit<Extract<ArgSpec, { kind: "number" }>, "kind" | "name">;
+export const num = (name: string, extra: NumberOptions = {}): ArgSpec => ({ kind: "number", name, ...extra });
+/** A physical amount that cannot be negative (flux, luminosity, size). */
+export const amount = (name: string) => num(name, { min: 0 });
+/** A magnitude (catalogue flags of |m| ≥ 50 give #N/A). */
+export const mag = (name: string, extra: NumberOptions = {}) => num(name, { magnitude: true, ...extra });
+export const model: ArgSpec = { kind: "model", name: "model" };
+/** A unit argument: `reference` is what compute uses, `shown` the default a person sees. */
+export const unit = (name: string, reference: string, shown = reference, applies: string | string[] = "result"): ArgSpec => ({
+  kind: "unit",
+  name,
+  unit: reference,
+  default: shown,
+  applies,
+});
+export const z = num("z");
+export const zToday = num("z", { default: 0 });
+/** A 1σ error: ≥ 0. */
+export const err = (name: string, extra: NumberOptions = {}) => num(name, { min: 0, ...extra });
+/** An optional spectral index whose absence means the bolometric case (NaN stands for "not given"). */
+export const optionalAlpha = num("alpha", { default: Number.NaN, blankMeansDefault: true });
+export const isGiven = (x: number) => !Number.isNaN(x);
+/** A sky area argument: all sky when omitted or blank. */
+export const area = num("area", { default: 4 * Math.PI, blankMeansDefault: true, min: 0, max: { value: 4 * Math.PI, what: "the whole sky" } });
+export const angle = num("angle", { min: 0, max: { value: Math.PI, what: "180°" } });
+export const optionalText = (name: string): ArgSpec => ({ kind: "text", name, scalar: true, optional: true });
+
+/** The cell's model. */
+export const m = (a: Args) => a.model as Cosmology;
+/** A number argument of the cell, in its reference unit. */
+export const n = (a: Args, name: string) => a[name] as number;
+
+/** A unit given as text whose meaning depends on other arguments (blank: `shown`), as a factor into `reference`. */
+export function textUnitFactor(a: Args, name: string, shown: string, reference: string): number {
+  const text = (a[name] as string) || shown;
+  try {
+    return conversionFactor(text, reference, m(a).h);
+  } catch (e) {
+    throw new TypeError(messages.unitArgument(name, (e as Error).message));
+  }
+}

@@ -1,0 +1,115 @@
+/**
+ * Photometry: luminosities and fluxes, magnitudes, K-corrections, surface-brightness dimming.
+ * Each entry: the arguments in the order of the ZC.* signature (built from argumentKinds.ts) and what one
+ * cell computes in reference units; the declaration with its JSDoc is in ../declarations/photometry.ts.
+ */
+import {
+  abFluxDensityJy,
+  abMagnitude,
+  absoluteMagnitude,
+  apparentMagnitude,
+  bolometricAbsoluteMagnitude,
+  bolometricLuminosityW,
+  conversionFactor,
+  fluxWm2,
+  frequencyHz,
+  janskySI,
+  kCorrectionPowerLawMag,
+  luminosityW,
+  restFrameSpectralLuminosityWHz,
+  spectralLuminosityWHz,
+  spectralSurfaceBrightnessDimmingMag,
+  surfaceBrightnessDimmingMag,
+} from "../../core/index.js";
+import { messages } from "../messages.js";
+import type { Args, FunctionDef } from "../FunctionDef.js";
+import { num, amount, mag, model, unit, z, optionalAlpha, isGiven, optionalText, m, n } from "./argumentKinds.js";
+
+/** L_ν [W/Hz] at ν [Hz] in the out_unit asked: W/Hz and its kin give L_ν, a power unit (W, erg/s, Lsun) ν L_ν (= λ L_λ). */
+function inSpectralOrPowerUnit(a: Args, lnuWHz: number, nuHz: number): number {
+  const out = (a.out_unit as string) || "W/Hz";
+  const h = m(a).h;
+  try {
+    return lnuWHz * conversionFactor("W/Hz", out, h);
+  } catch (e) {
+    try {
+      return lnuWHz * nuHz * conversionFactor("W", out, h);
+    } catch {
+      throw new TypeError(messages.unitArgument("out_unit", `${(e as Error).message}; use W/Hz for L_ν or a power (W, erg/s, Lsun) for ν L_ν`));
+    }
+  }
+}
+
+/** Photometry functions, in the order of their declarations. */
+export const photometry: FunctionDef[] = [
+  {
+    name: "LUMINOSITY",
+    args: [amount("flux"), z, model, unit("flux_unit", "W/m2", "W/m2", "flux"), unit("lum_unit", "W")],
+    compute: (a) => luminosityW(m(a), n(a, "flux"), n(a, "z")),
+  },
+  {
+    name: "FLUX",
+    args: [amount("lum"), z, model, unit("lum_unit", "W", "W", "lum"), unit("flux_unit", "W/m2")],
+    compute: (a) => fluxWm2(m(a), n(a, "lum"), n(a, "z")),
+  },
+  {
+    name: "LUMINOSITY_NU",
+    args: [amount("flux_density"), z, num("alpha"), model, unit("in_unit", "Jy", "Jy", "flux_density"), unit("out_unit", "W/Hz")],
+    compute: (a) => spectralLuminosityWHz(m(a), n(a, "flux_density") * janskySI, n(a, "z"), n(a, "alpha")),
+  },
+  {
+    name: "KCORRECTION",
+    args: [z, num("alpha")],
+    compute: (a) => kCorrectionPowerLawMag(n(a, "z"), n(a, "alpha")),
+  },
+  {
+    name: "MAG_ABS",
+    args: [mag("m"), z, num("kcorr", { default: 0, blankMeansDefault: true }), model],
+    compute: (a) => absoluteMagnitude(m(a), n(a, "m"), n(a, "z"), n(a, "kcorr")),
+  },
+  {
+    name: "MAG_APP",
+    args: [mag("M"), z, num("kcorr", { default: 0, blankMeansDefault: true }), model],
+    compute: (a) => apparentMagnitude(m(a), n(a, "M"), n(a, "z"), n(a, "kcorr")),
+  },
+  {
+    name: "MAG_AB",
+    args: [num("flux_density", { min: 0, minExclusive: true }), unit("unit", "Jy", "Jy", "flux_density")],
+    compute: (a) => abMagnitude(n(a, "flux_density")),
+  },
+  {
+    name: "FLUX_AB",
+    args: [mag("m_ab"), unit("unit", "Jy")],
+    compute: (a) => abFluxDensityJy(n(a, "m_ab")),
+  },
+  {
+    name: "LUMINOSITY_REST",
+    args: [
+      amount("flux_density"), z, num("alpha"), num("observed"), num("rest"), model,
+      optionalText("band_unit"), unit("in_unit", "Jy", "Jy", "flux_density"), optionalText("out_unit"),
+    ],
+    compute: (a) => {
+      const band = (a.band_unit as string) || "GHz";
+      const restHz = frequencyHz(n(a, "rest"), band, "rest");
+      const lnu = restFrameSpectralLuminosityWHz(
+        m(a), n(a, "flux_density") * janskySI, n(a, "z"), n(a, "alpha"), frequencyHz(n(a, "observed"), band, "observed"), restHz,
+      );
+      return inSpectralOrPowerUnit(a, lnu, restHz);
+    },
+  },
+  {
+    name: "MAG_BOL",
+    args: [num("lum", { min: 0, minExclusive: true }), unit("unit", "W", "W", "lum")],
+    compute: (a) => bolometricAbsoluteMagnitude(n(a, "lum")),
+  },
+  {
+    name: "LUM_BOL",
+    args: [mag("mag_bol"), unit("unit", "W")],
+    compute: (a) => bolometricLuminosityW(n(a, "mag_bol")),
+  },
+  {
+    name: "DIMMING",
+    args: [z, optionalAlpha],
+    compute: (a) => (isGiven(n(a, "alpha")) ? spectralSurfaceBrightnessDimmingMag(n(a, "z"), n(a, "alpha")) : surfaceBrightnessDimmingMag(n(a, "z"))),
+  },
+];
