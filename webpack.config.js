@@ -4,7 +4,6 @@
 import CopyWebpackPlugin from "copy-webpack-plugin";
 import CustomFunctionsMetadataPlugin from "custom-functions-metadata-plugin";
 import HtmlWebpackPlugin from "html-webpack-plugin";
-import MinimizerPlugin from "minimizer-webpack-plugin";
 import { generateCustomFunctionsMetadata } from "custom-functions-metadata";
 import { marked } from "marked";
 import { readFileSync } from "node:fs";
@@ -86,13 +85,6 @@ export default async (env = {}, argv = {}) => {
     optimization: {
       splitChunks: false,
       runtimeChunk: false,
-      // functions.js alone: its anonymous functions (the registered ZC.* wrappers among them) become
-      // arrows, which the custom-functions runtime calls like any function (test/browser/realOffice
-      // registers and calls them through the real runtime); about 1 kB. The pane keeps the defaults.
-      minimizer: [
-        new MinimizerPlugin({ test: /^functions\.js$/, minimizerOptions: { compress: { passes: 2, unsafe_arrows: true } } }),
-        "...",
-      ],
     },
     performance: { hints: false },
     plugins: [

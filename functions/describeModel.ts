@@ -3,7 +3,9 @@
  * engine conventions (ZC.VERSION), so that every number a reader sees states its assumptions.
  */
 import { type Cosmology } from "../core/index.js";
-import { version } from "../package.json";
+import packageJson from "../package.json";
+
+const { version } = packageJson;
 
 /** zcell's version, from package.json. */
 export const zcellVersion: string = version;

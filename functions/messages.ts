@@ -20,7 +20,8 @@ export const messages = {
   inputError: (arg: string) => `${arg}: the input cell holds an error`,
   shapes: (a: string, ra: number, ca: number, b: string, rb: number, cb: number) =>
     `ranges do not fit together: ${a} is ${ra}×${ca} and ${b} is ${rb}×${cb} (use equal sizes, a single cell, or a row against a column)`,
-  tooLarge: (cells: number) => `the result would have ${cells} cells; at most 1,048,576 are allowed`,
+  tooLarge: (cells: number, most: number) => `the result would have ${cells.toLocaleString("en-US")} cells; at most ${most.toLocaleString("en-US")} are allowed`,
+  required: (arg: string) => `${arg} is required`,
   unitArgument: (arg: string, detail: string) => `${arg}: ${detail}`,
   choice: (arg: string, value: string, choices: readonly string[]) =>
     `${arg}: "${value}" is not one of ${choices.join(", ")}`,

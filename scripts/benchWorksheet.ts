@@ -68,6 +68,8 @@ export async function benchWorksheet(): Promise<void> {
       const r = figure(bundle, `range:${name}`, "ns");
       console.log(pad(`one call over 100k rows: ${name}`, 42) + pad(`${fmt(r, 0)} ns a cell`, 20) + pad(`≤ ${targets.range} ns`, 12) + (ref && name === "DIST_LUM" ? `${(ref.vector_ns / r.min).toFixed(0)}× vectorised` : ""));
     }
+    const floor = figure(bundle, "floor", "ns");
+    console.log(pad("  floor: the 100k-row result array alone", 42) + pad(`${fmt(floor, 0)} ns a cell`, 20) + pad("", 12) + "(this machine's allocation and GC; no computing)");
     const cold = figure(bundle, "cold", "ms");
     console.log(pad("first formula after load (cold)", 42) + pad(`${fmt(cold, 1)} ms`, 20) + `≤ ${targets.cold} ms`);
     if (bundle === bundles[0][1] && existsSync("/usr/bin/chromium")) {

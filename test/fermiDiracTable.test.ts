@@ -1,21 +1,27 @@
 /**
- * The shared Fermi–Dirac table built at first use by one fixed exp-sinh rule is the integral it claims
- * to be: every node equals an adaptive Gauss–Kronrod evaluation of the same integrals.
+ * The shared Fermi–Dirac table, computed by one fixed exp-sinh rule and stored in the bundle, is the
+ * integral it claims to be: every node equals an adaptive Gauss–Kronrod evaluation of the same
+ * integrals, and the stored nodes are the rule's.
  */
 import { describe, expect, test } from "vitest";
 import { fermiDiracDensityFactor, fermiDiracGrid, fermiDiracNodesByQuadrature, fermiDiracNodesByRule } from "../core/model/fermiDirac.js";
+import { fermiDiracNodes } from "../core/model/fermiDiracNodes.js";
 import { relativeError } from "./helpers.js";
 import { slowFermiDirac } from "./reference/slowCosmology.js";
 
 describe("Fermi–Dirac table by the fixed rule", () => {
   test("every node (F, dF/ds, d²F/ds²) matches adaptive quadrature to 2e-15 relative", () => {
-    const stored = fermiDiracNodesByRule();
+    const stored = fermiDiracNodes;
     const fresh = fermiDiracNodesByQuadrature();
     expect(stored.length).toBe(3 * fermiDiracGrid.nodes);
     let worst = 0;
     for (let i = 0; i < stored.length; i++) worst = Math.max(worst, relativeError(stored[i], fresh[i]));
     // a few ulps: the adaptive reference is itself asked for 1e-15 (measured worst 1.1e-15)
     expect(worst).toBeLessThanOrEqual(2e-15);
+  });
+
+  test("the stored nodes are the rule's, digit for digit (else run npm run tables)", () => {
+    expect(fermiDiracNodes).toEqual(Array.from(fermiDiracNodesByRule()));
   });
 
   test.each([

@@ -8,15 +8,17 @@
  * a quintic Hermite table in ln y (shared by all models), with the two-term small-y series
  * F = 1 + 5y²/(7π²) below y = e⁻¹⁰ and the large-y asymptotic series above y = e⁷.
  *
- * The table's nodes (F, dF/dln y, d²F/dln y²) are built at first use by one fixed exp-sinh rule
+ * The table's nodes (F, dF/dln y, d²F/dln y²) are computed by one fixed exp-sinh rule
  * (Takahasi & Mori 1974 double-exponential quadrature: x = exp((π/2) sinh t), 105 points, step 1/18,
  * t from −3.8 (x ≈ 6e-16) to 1.98 (x ≈ 290, where 1/(eˣ+1) < 1e-120)) shared by all 273 nodes, so the
- * occupation is evaluated once per point, not once per node: a few ms once per page, against ~80 ms for
- * adaptive quadrature at every node.
+ * occupation is evaluated once per point, not once per node (a few ms, against ~80 ms for adaptive
+ * quadrature at every node), and stored in fermiDiracNodes.ts (`npm run tables`), so that a page's first
+ * formula does not wait for them.
  * test/fermiDiracTable.test.ts checks every node against adaptive Gauss–Kronrod quadrature to 1e-15.
  */
 import { integrate } from "../numerics/quadrature.js";
 import { QuinticTable } from "../numerics/QuinticTable.js";
+import { fermiDiracNodes } from "./fermiDiracNodes.js";
 
 const normalisation = 120 / (7 * Math.PI ** 4);
 /** Small-y coefficient: dF/d(y²) at 0 = (K/2)∫x/(eˣ+1)dx = (K/2)(π²/12) = 5/(7π²). */
@@ -124,7 +126,7 @@ export function fermiDiracTable(): QuinticTable {
 
 function getTable(): QuinticTable {
   if (table) return table;
-  const nodes = fermiDiracNodesByRule();
+  const nodes = fermiDiracNodes;
   const n = fermiDiracGrid.nodes;
   const f = new Float64Array(n);
   const d1 = new Float64Array(n);

@@ -1,0 +1,420 @@
+/**
+ * Reading a call's arguments, all of them, once, before anything is computed: units (conversions
+ * cached) and scalar texts, then every cell argument, single or range, into a typed form (numbers in
+ * their reference unit with the domain checked in the unit the user gave, text numbers too; texts;
+ * models resolved; errors and blanks as they will show). `evaluate.ts` then only computes.
+ */
+import { Cosmology, scaledConversion } from "../core/index.js";
+import type { ActiveModelSetting } from "./activeModel.js";
+import { CellError, classify, isIncomingError } from "./cellError.js";
+import type { Args, ArgSpec, FunctionDef } from "./FunctionDef.js";
+import { messages } from "./messages.js";
+import { isBlank, keyValueBlockSpec } from "./modelArgument.js";
+import { modelFor } from "./modelCache.js";
+import { resolvedSpec } from "./workbookModels.js";
+
+/** Cells one call may return (4 × 1,048,576: four whole columns, our choice). */
+const maxCells = 4_194_304;
+/** Models one range call keeps at hand besides the shared cache (modelCache.ts): bounds its memory. */
+const modelsHeldPerCall = 16;
+
+/** One cell of an argument as read: its value in the reference unit, "" (blank result) or an error. */
+export type ReadCell = number | string | Cosmology | CellError | undefined;
+
+/**
+ * An argument given as a range of more than one cell, every cell read (row-major, rows × cols): see
+ * `cellAt`. A column of numbers keeps them in `numbers` (NaN where the cell read as something else,
+ * kept in `others`). A range of models holds each cell's spec text, checked, and `model` turns it into
+ * the model when its cell is computed: a column of thousands of distinct specs then holds only a few
+ * models at a time.
+ */
+export interface Column {
+  name: string;
+  rows: number;
+  cols: number;
+  numbers: Float64Array | undefined;
+  others: Map<number, ReadCell>;
+  model?: (spec: string) => Cosmology | CellError;
+}
+
+/** Cell `i` (row-major) of a range argument, as read. */
+export function cellAt(column: Column, i: number): ReadCell {
+  const x = column.numbers === undefined ? Number.NaN : column.numbers[i];
+  return x === x ? x : column.others.get(i);
+}
+
+/** Powers of h = H0/100 of the cell's model still to apply for h-scaled units: by argument, and on the result. */
+export type HScaling = { args: [name: string, power: number][]; result: number };
+
+/** A call's arguments, read: what `evaluate.ts` computes from. */
+export interface CallArguments {
+  /** Shape of the result (1 × 1 when no argument is a range). */
+  rows: number;
+  cols: number;
+  /** Every argument given as one cell (or a unit, or a scalar text), by name, read. */
+  args: Args;
+  /** The first of those that is an error or blank: every cell of the result shows it. */
+  problem: CellError | typeof blank | undefined;
+  /** Arguments given as ranges, in the order of the signature. */
+  ranges: readonly Column[];
+  /** Factor of the result into the output unit the user asked for. */
+  resultFactor: number;
+  /** h-scaled units still to apply with each cell's model, when any. */
+  h: HScaling | undefined;
+}
+
+/** What a blank input gives: a blank result. */
+export const blank = "";
+
+/**
+ * How a number argument is converted into its reference unit: the factor, the power of h = H0/100 of
+ * the cell's model still to apply (h-scaled units such as Mpc/h; 0 otherwise) and the unit the user gave.
+ */
+type Conversion = { factor: number; hPower: number; unit: string };
+/** Text that Excel's own functions would read as a number (CSV and archive pastes). */
+const numberText = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+
+/** Normalises a raw argument to a matrix (undefined when omitted). */
+function toMatrix(raw: unknown): unknown[][] | undefined {
+  if (raw === undefined || raw === null) return undefined;
+  if (Array.isArray(raw)) {
+    if (raw.length === 0) return undefined;
+    if (!Array.isArray(raw[0])) return [raw as unknown[]];
+    return raw[0].length === 0 ? undefined : (raw as unknown[][]);
+  }
+  return [[raw]];
+}
+
+/** Unit conversions already worked out, by argument and unit text (a sheet uses a handful of units). */
+const conversionCache = new Map<Extract<ArgSpec, { kind: "unit" }>, Map<string, Conversion>>();
+
+function unitConversion(spec: Extract<ArgSpec, { kind: "unit" }>, raw: unknown): Conversion {
+  const given = Array.isArray(raw) ? toMatrix(raw)?.[0]?.[0] : raw;
+  const text = isBlank(given) ? spec.default : given;
+  if (typeof text !== "string") throw new CellError("value", messages.notText(spec.name, text));
+  let known = conversionCache.get(spec);
+  const cached = known?.get(text);
+  if (cached) return cached;
+  let conversion: Conversion;
+  try {
+    const { factor, hPower } = spec.applies === "result" ? scaledConversion(spec.unit, text) : scaledConversion(text, spec.unit);
+    conversion = { factor, hPower, unit: text.trim() };
+  } catch (e) {
+    throw new CellError("value", messages.unitArgument(spec.name, (e as Error).message));
+  }
+  if (!known) conversionCache.set(spec, (known = new Map()));
+  if (known.size < 64) known.set(text, conversion);
+  return conversion;
+}
+
+/** Marks an argument that is a range of more than one cell. */
+const several = Symbol("several cells");
+
+/** The one value of an argument that is a single cell (or omitted: undefined), else `several`. */
+function singleCell(raw: unknown): unknown {
+  if (!Array.isArray(raw)) return raw ?? undefined;
+  if (raw.length !== 1) return raw.length === 0 ? undefined : several;
+  const row = raw[0];
+  if (!Array.isArray(row)) return raw.length === 1 ? row : several;
+  return row.length === 1 ? row[0] : row.length === 0 ? undefined : several;
+}
+
+/** The spec text of one cell of a model range (blank: the active model's), or an error. */
+function modelText(value: unknown, active: ActiveModelSetting): string | CellError {
+  if (isIncomingError(value)) return new CellError("value", messages.inputError("model"));
+  if (isBlank(value)) return active.spec;
+  if (typeof value !== "string") return new CellError("value", messages.model(messages.notText("model", value)));
+  const block = value.trim();
+  return block === "" ? active.spec : block;
+}
+
+/** Reads one cell of an argument: its value, "" for a blank result, or an error. */
+function readArg(
+  spec: ArgSpec,
+  value: unknown,
+  given: boolean,
+  conversion: Conversion | undefined,
+  active: ActiveModelSetting,
+  modelOf: (spec: string) => Cosmology | CellError,
+): number | string | Cosmology | CellError | undefined {
+  if (spec.kind === "number" && typeof value === "number") return readNumber(spec, value, conversion);
+  if (isIncomingError(value)) return new CellError("value", messages.inputError(spec.name));
+  switch (spec.kind) {
+    case "model": {
+      const text = modelText(value, active);
+      return text instanceof CellError ? text : modelOf(text);
+    }
+    case "number": {
+      if (isBlank(value)) {
+        if (given && !spec.blankMeansDefault) return blank;
+        if (spec.default === undefined) return blank;
+        return spec.default;
+      }
+      if (typeof value === "string" && numberText.test(value.trim())) return readNumber(spec, Number(value.trim()), conversion);
+      return new CellError("value", messages.notANumber(spec.name, value));
+    }
+    case "numberOrText": {
+      if (isBlank(value)) return spec.default;
+      if (typeof value === "string" && numberText.test(value.trim())) return Number(value.trim());
+      if (typeof value === "number" || typeof value === "string") return value;
+      return new CellError("value", messages.notANumber(spec.name, value));
+    }
+    case "text": {
+      if (isBlank(value)) return spec.optional ? undefined : blank;
+      try {
+        return readText(spec, value);
+      } catch (e) {
+        return classify(e, spec.name);
+      }
+    }
+    default:
+      return undefined;
+  }
+}
+
+/** A number argument's value in its reference unit, after the checks of its domain in the user's unit. */
+function readNumber(spec: Extract<ArgSpec, { kind: "number" }>, x: number, conversion: Conversion | undefined): number | CellError {
+  if (!Number.isFinite(x)) return new CellError("num", messages.notFinite(spec.name));
+  if (spec.magnitude && Math.abs(x) >= 50) return new CellError("na", messages.missingMagnitude(spec.name, x));
+  const factor = conversion === undefined ? 1 : conversion.factor;
+  const reference = x * factor;
+  if (spec.min !== undefined && (spec.minExclusive ? !(reference > spec.min) : !(reference >= spec.min))) {
+    return new CellError("num", messages.belowMin(spec.name, x, conversion?.unit ?? "", spec.min / factor, spec.minExclusive === true));
+  }
+  if (spec.max !== undefined && reference > spec.max.value) {
+    return new CellError("num", messages.aboveMax(spec.name, x, conversion?.unit ?? "", spec.max.value / factor, spec.max.what));
+  }
+  return reference;
+}
+
+function readText(spec: Extract<ArgSpec, { kind: "text" }>, value: unknown): string {
+  if (typeof value !== "string") throw new CellError("value", messages.notText(spec.name, value));
+  const text = value.trim();
+  if (!spec.choices) return text;
+  const match = spec.choices.find((c) => c.toLowerCase() === text.toLowerCase());
+  if (!match) throw new CellError("value", messages.choice(spec.name, text, spec.choices));
+  return match;
+}
+
+
+/** Which arguments of a function are units, scalar texts and cell values: worked out once per function. */
+interface Plan {
+  units: number[];
+  scalarTexts: number[];
+  cells: number[];
+}
+const plans = new WeakMap<FunctionDef, Plan>();
+
+function planOf(def: FunctionDef): Plan {
+  let plan = plans.get(def);
+  if (!plan) {
+    plan = { units: [], scalarTexts: [], cells: [] };
+    def.args.forEach((spec, i) => {
+      if (spec.kind === "unit") plan!.units.push(i);
+      else if (spec.kind === "text" && spec.scalar) plan!.scalarTexts.push(i);
+      else plan!.cells.push(i);
+    });
+    plans.set(def, plan);
+  }
+  return plan;
+}
+
+/**
+ * Reads a call's arguments. Units and scalar texts first (one value whatever the shape of the
+ * others), then the cell arguments: when each is one cell (one formula a row), straight into `args`;
+ * otherwise as matrices broadcast to one shape, single cells into `args` and ranges into columns.
+ *
+ * @param def the function's declaration
+ * @param raw the arguments as Excel passes them (numbers, text, booleans, null, or 2-D arrays)
+ * @param active the workbook's active model setting (blank/omitted model arguments use it)
+ * @throws CellError for what spoils the whole call: a bad unit or scalar text, a required argument
+ *   omitted, ranges of different shapes, a result of more than 4,194,304 cells
+ */
+export function readCall(def: FunctionDef, raw: readonly unknown[], active: ActiveModelSetting): CallArguments {
+  const plan = planOf(def);
+  const { conversions, resultFactor, args, h } = readFixed(def, raw, plan);
+  const specs = def.args;
+  const cells = plan.cells;
+  if (resolverFor?.active !== active) resolverFor = { active, resolve: (text) => singleModel(text, active) };
+  const resolve = resolverFor.resolve;
+  let problem: CellError | typeof blank | undefined;
+  for (let k = 0; k < cells.length; k++) {
+    const i = cells[k];
+    const value = singleCell(raw[i]);
+    if (value === several) return readRanges(def, raw, active, { conversions, resultFactor, args, h });
+    if (problem !== undefined) continue; // the first bad argument decides; the rest must still be single cells
+    const spec = specs[i];
+    if (value === undefined && spec.kind === "number" && spec.default === undefined) throw new CellError("value", messages.required(spec.name));
+    const read = readArg(spec, value, raw[i] !== undefined && raw[i] !== null, conversions[spec.name], active, resolve);
+    if (read instanceof CellError || read === blank) problem = read;
+    else args[spec.name] = read;
+  }
+  return { rows: 1, cols: 1, args, problem, ranges: noRanges, resultFactor, h };
+}
+
+/** The ranges of a call with none (shared: one formula a row allocates no list). */
+const noRanges: readonly Column[] = [];
+
+type Fixed = { conversions: Record<string, Conversion>; resultFactor: number; args: Args; h: HScaling | undefined };
+
+/**
+ * The arguments read once per call whatever the shape of the others: units (their conversions, the
+ * factor of the result, and any h-scaling left for the cell's model) and scalar texts (into a fresh
+ * args object).
+ */
+function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): Fixed {
+  const conversions: Record<string, Conversion> = {};
+  let resultFactor = 1;
+  let h: HScaling | undefined;
+  const args: Args = {};
+  for (const i of plan.units) {
+    const spec = def.args[i] as Extract<ArgSpec, { kind: "unit" }>;
+    const conversion = unitConversion(spec, raw[i]);
+    if (conversion.hPower !== 0) h ??= { args: [], result: 0 };
+    if (spec.applies === "result") {
+      resultFactor *= conversion.factor;
+      if (h) h.result += conversion.hPower;
+    } else {
+      for (const name of typeof spec.applies === "string" ? [spec.applies] : spec.applies) {
+        conversions[name] = conversion;
+        if (conversion.hPower !== 0) h!.args.push([name, conversion.hPower]);
+      }
+    }
+  }
+  for (const i of plan.scalarTexts) {
+    const spec = def.args[i] as Extract<ArgSpec, { kind: "text" }>;
+    const text = toMatrix(raw[i])?.[0]?.[0];
+    args[spec.name] = spec.optional && isBlank(text) ? "" : readText(spec, text);
+  }
+  return { conversions, resultFactor, args, h };
+}
+
+/** Model resolution for single cells, made again only when the settings are read anew. */
+let resolverFor: { active: ActiveModelSetting; resolve: (text: string) => Cosmology | CellError } | undefined;
+
+function singleModel(text: string, active: ActiveModelSetting): Cosmology | CellError {
+  try {
+    return modelFor(resolvedSpec(text, active.models));
+  } catch (e) {
+    const err = classify(e, "model");
+    return new CellError(err.kind, messages.model(err.message));
+  }
+}
+
+/**
+ * Model resolution for one call over ranges: the last model asked for is kept at hand, a few others
+ * in a map (bounded, so that a column of thousands of distinct specs holds no more models than the
+ * shared LRU cache does).
+ */
+function modelsOfCall(active: ActiveModelSetting, fn: string): (spec: string) => Cosmology | CellError {
+  let lastSpec: string | undefined;
+  let lastModel: Cosmology | CellError | undefined;
+  let others: Map<string, Cosmology | CellError> | undefined;
+  return (spec) => {
+    if (spec === lastSpec) return lastModel!;
+    let m = others?.get(spec);
+    if (m === undefined) {
+      try {
+        m = modelFor(resolvedSpec(spec, active.models));
+      } catch (e) {
+        const err = classify(e, fn);
+        m = new CellError(err.kind, messages.model(err.message));
+      }
+      others ??= new Map();
+      if (others.size >= modelsHeldPerCall) others.delete(others.keys().next().value as string);
+      others.set(spec, m);
+    }
+    lastSpec = spec;
+    lastModel = m;
+    return m;
+  };
+}
+
+/** The cell arguments when some is a range: broadcast to one shape, every cell read. */
+function readRanges(def: FunctionDef, raw: readonly unknown[], active: ActiveModelSetting, fixed: Fixed): CallArguments {
+  const { conversions, args } = fixed;
+  type Given = { spec: ArgSpec; matrix: unknown[][] | undefined; rows: number; cols: number };
+  const given: Given[] = [];
+  for (const index of planOf(def).cells) {
+    const spec = def.args[index];
+    let matrix = toMatrix(raw[index]);
+    if (spec.kind === "model" && matrix) {
+      const block = keyValueBlockSpec(matrix);
+      if (block !== undefined) matrix = [[block]];
+    }
+    if (!matrix && spec.kind === "number" && spec.default === undefined) throw new CellError("value", messages.required(spec.name));
+    given.push({ spec, matrix, rows: matrix?.length ?? 1, cols: matrix?.[0]?.length ?? 1 });
+  }
+
+  let rows = 1;
+  let cols = 1;
+  let rowsFrom = given[0];
+  let colsFrom = given[0];
+  for (const g of given) {
+    if (g.rows !== 1) {
+      if (rows !== 1 && g.rows !== rows) throw new CellError("value", messages.shapes(rowsFrom.spec.name, rowsFrom.rows, rowsFrom.cols, g.spec.name, g.rows, g.cols));
+      rows = g.rows;
+      rowsFrom = g;
+    }
+    if (g.cols !== 1) {
+      if (cols !== 1 && g.cols !== cols) throw new CellError("value", messages.shapes(colsFrom.spec.name, colsFrom.rows, colsFrom.cols, g.spec.name, g.rows, g.cols));
+      cols = g.cols;
+      colsFrom = g;
+    }
+  }
+  if (rows * cols > maxCells) throw new CellError("value", messages.tooLarge(rows * cols, maxCells));
+
+  const modelOf = modelsOfCall(active, def.name);
+  // one args object of fixed shape for every cell
+  for (const g of given) args[g.spec.name] = undefined;
+  let problem: CellError | typeof blank | undefined;
+  const ranges: Column[] = [];
+  for (const g of given) {
+    const conversion = conversions[g.spec.name];
+    if (g.rows === 1 && g.cols === 1) {
+      const read = readArg(g.spec, g.matrix?.[0][0], g.matrix !== undefined, conversion, active, modelOf);
+      if (read instanceof CellError || read === blank) problem ??= read;
+      else args[g.spec.name] = read;
+    } else {
+      const column: Column = { name: g.spec.name, rows: g.rows, cols: g.cols, numbers: undefined, others: new Map() };
+      readColumn(column, g.spec, g.matrix!, conversion, active, modelOf);
+      if (g.spec.kind === "model") column.model = modelOf;
+      ranges.push(column);
+    }
+  }
+  return { rows, cols, args, problem, ranges, resultFactor: fixed.resultFactor, h: fixed.h };
+}
+
+/** Reads every cell of a range argument into `column` (row-major). */
+function readColumn(
+  column: Column,
+  spec: ArgSpec,
+  matrix: unknown[][],
+  conversion: Conversion | undefined,
+  active: ActiveModelSetting,
+  modelOf: (spec: string) => Cosmology | CellError,
+): void {
+  const others = column.others;
+  let i = 0;
+  if (spec.kind !== "number") {
+    for (const row of matrix) {
+      for (const value of row) others.set(i++, spec.kind === "model" ? modelText(value, active) : readArg(spec, value, true, conversion, active, modelOf));
+    }
+    return;
+  }
+  const numbers = (column.numbers = new Float64Array(column.rows * column.cols));
+  // the common range, plain numbers with no domain to check: only the unit's factor
+  const plain = !spec.magnitude && spec.min === undefined && spec.max === undefined;
+  const factor = conversion === undefined ? 1 : conversion.factor;
+  for (const row of matrix) {
+    for (const value of row) {
+      let read: ReadCell = plain && typeof value === "number" && value - value === 0 ? value * factor : readArg(spec, value, true, conversion, active, modelOf);
+      if (typeof read === "number" && read === read) numbers[i] = read;
+      else {
+        numbers[i] = Number.NaN;
+        others.set(i, read);
+      }
+      i++;
+    }
+  }
+}
