@@ -81,3 +81,13 @@ describe("import graph of core/, functions/ and taskpane/", () => {
     }
   });
 });
+
+describe("source files of core/, functions/ and taskpane/", () => {
+  test("none is over 500 lines (a longer file usually holds two concepts)", () => {
+    const long = folders
+      .flatMap((f) => sources(join(root, f)))
+      .map((file) => ({ file: relative(root, file), lines: readFileSync(file, "utf8").split("\n").length }))
+      .filter(({ lines }) => lines > 500);
+    expect(long).toEqual([]);
+  });
+});
