@@ -55,6 +55,7 @@ export {
   surfaceBrightnessDimmingMag,
 } from "./observables/photometry.js";
 export { findPreset, presets, type Preset } from "./model/presets.js";
+export { spectralIndexAlpha, spectralIndexConventions, type SpectralIndexConvention } from "./observables/spectralIndex.js";
 export { checkRedshift, checkSourceRedshift } from "./checks/redshift.js";
 export { type InverseWording } from "./distances/redshiftInverse.js";
 export {
@@ -62,6 +63,7 @@ export {
   luminosityDistanceErrorMpc,
   luminosityErrorW,
   properSizeErrorMpc,
+  restFrameSpectralLuminosityErrorWHz,
   spectralLuminosityErrorWHz,
 } from "./observables/uncertainties.js";
 export { conversionFactor, convertUnit, frequencyHz, parseUnit, scaledConversion, type Unit } from "./units/units.js";

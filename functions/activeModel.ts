@@ -1,6 +1,6 @@
 /**
  * The workbook's active cosmology: spec text stored in the workbook's add-in settings (so it
- * travels with the file), P18-BAO until someone applies another. Functions wait until Office has
+ * travels with the file), P18-CMB until someone applies another. Functions wait until Office has
  * loaded the settings before they compute with it.
  */
 import { parseModelSpec } from "../core/index.js";
@@ -11,7 +11,7 @@ import { maxSpecLength, noWorkbookModels, readWorkbookModels, resolvedSpec, work
 /** Settings key under which the active model's spec text is stored. */
 export const activeModelSettingKey = "zcell.activeModel";
 /** The model used until a workbook stores another. */
-export const defaultModelSpec = "P18-BAO";
+export const defaultModelSpec = "P18-CMB";
 
 let ready: Promise<void> | undefined;
 let isReady = false;
@@ -37,7 +37,7 @@ export function settingsReady(): boolean {
 export interface ActiveModelSetting {
   /** Spec text to compute with. */
   spec: string;
-  /** Set when the stored value was unusable and P18-BAO is used instead. */
+  /** Set when the stored value was unusable and the default model is used instead. */
   warning?: string;
   /** True when the workbook stores a spec of its own. */
   stored: boolean;

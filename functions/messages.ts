@@ -2,6 +2,8 @@
  * Every message the worksheet functions show (Excel shows it with the error value). Core errors keep
  * their own words; these add what only the adapter knows: which argument, which cell, which shape.
  */
+import { quotedText } from "../core/index.js";
+
 export const messages = {
   /** The message as the sheet shows it: the ZC function first. */
   inFunction: (fn: string, message: string) => (message.startsWith("ZC.") ? message : `ZC.${fn}: ${message}`),
@@ -27,12 +29,18 @@ export const messages = {
     `${arg}: "${value}" is not one of ${choices.join(", ")}`,
   notFiniteResult: (fn: string) => `${fn}: the result is not a finite number for these arguments`,
   model: (detail: string) => `model: ${detail}`,
+  unitInModelSlot: (text: string) =>
+    `model: "${quotedText(text)}" is a unit, not a model: units come after the model; leave the model blank for the workbook's model (two commas: …, , "${quotedText(text)}")`,
+  modelInUnitSlot: (arg: string, text: string) =>
+    `${arg}: "${quotedText(text)}" is a model, not a unit: the model comes before the units (check the order of the arguments)`,
+  megajansky: (arg: string, text: string) =>
+    `${arg}: "${quotedText(text)}" is megajansky (10⁹ mJy), not a likely flux density for a source: did you mean mJy? (units are case-sensitive)`,
   hScaledWithoutModel: "units in h = H0/100 (such as Mpc/h) need a model, and this function takes none",
   notGiven: (what: string) => `${what} is not given in this model`,
   noEquality: "z_eq: this model has no radiation (Tcmb = 0), so no matter–radiation equality",
   internal: (fn: string, detail: string) => `${fn}: unexpected problem (${detail}); please report it`,
   activeModelFallback: (detail: string) =>
-    `the workbook's stored cosmology could not be read (${detail}); using P18-BAO until one is applied`,
+    `the workbook's stored cosmology could not be read (${detail}); using P18-CMB (the default) until one is applied`,
 } as const;
 
 /** A number as the sheet shows it in a message: at most 6 significant digits. */

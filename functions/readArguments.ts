@@ -4,7 +4,7 @@
  * their reference unit with the domain checked in the unit the user gave, text numbers too; texts;
  * models resolved; errors and blanks as they will show). `evaluate.ts` then only computes.
  */
-import { Cosmology, scaledConversion } from "../core/index.js";
+import { Cosmology, parseModelSpec, parseUnit, scaledConversion } from "../core/index.js";
 import type { ActiveModelSetting } from "./activeModel.js";
 import { CellError, classify, isIncomingError } from "./cellError.js";
 import type { Args, ArgSpec, FunctionDef } from "./FunctionDef.js";
@@ -100,7 +100,11 @@ function unitConversion(spec: Extract<ArgSpec, { kind: "unit" }>, raw: unknown):
     const { factor, hPower } = spec.applies === "result" ? scaledConversion(spec.unit, text) : scaledConversion(text, spec.unit);
     conversion = { factor, hPower, unit: text.trim() };
   } catch (e) {
-    throw new CellError("value", messages.unitArgument(spec.name, (e as Error).message));
+    throw new CellError("value", isModelText(text) ? messages.modelInUnitSlot(spec.name, text) : messages.unitArgument(spec.name, (e as Error).message));
+  }
+  if ((spec.unit === "Jy" || spec.unit === "W/m2/Hz") && /(^|[^A-Za-z])MJy(?![A-Za-z])/.test(text)) {
+    // a source's flux density in megajansky is almost surely mJy typed in the wrong case (10⁹ apart)
+    throw new CellError("value", messages.megajansky(spec.name, text));
   }
   if (!known) conversionCache.set(spec, (known = new Map()));
   if (known.size < 64) known.set(text, conversion);
@@ -296,7 +300,27 @@ function singleModel(text: string, active: ActiveModelSetting): Cosmology | Cell
   try {
     return modelFor(resolvedSpec(text, active.models));
   } catch (e) {
-    const err = classify(e, "model");
+    return modelProblem(e, text, "model");
+  }
+}
+
+/** Text that reads as a model: a preset or a spec (workbook model names are not consulted). */
+function isModelText(text: string): boolean {
+  try {
+    parseModelSpec(text);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+/** Why a model argument's text gives no model: a unit typed where the model belongs, or the spec's own problem. */
+function modelProblem(e: unknown, text: string, fn: string): CellError {
+  try {
+    parseUnit(text);
+    return new CellError("value", messages.unitInModelSlot(text));
+  } catch {
+    const err = classify(e, fn);
     return new CellError(err.kind, messages.model(err.message));
   }
 }
@@ -317,8 +341,7 @@ function modelsOfCall(active: ActiveModelSetting, fn: string): (spec: string) =>
       try {
         m = modelFor(resolvedSpec(spec, active.models));
       } catch (e) {
-        const err = classify(e, fn);
-        m = new CellError(err.kind, messages.model(err.message));
+        m = modelProblem(e, spec, fn);
       }
       others ??= new Map();
       if (others.size >= modelsHeldPerCall) others.delete(others.keys().next().value as string);

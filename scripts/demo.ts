@@ -7,7 +7,7 @@
  * Every formula is written the way Excel itself saves a JavaScript custom function,
  * `_xldudf_ZC_DIST_LUM(B3)` (see functions/storedFormula.ts): a file holding the bare `ZC.` spelling
  * would show #NAME? even after the add-in loads. Every formula cell carries a cached value computed
- * by the same code the worksheet functions run (under P18-BAO, the model of a new workbook), so a
+ * by the same code the worksheet functions run (under P18-CMB, the model of a new workbook), so a
  * reader without the add-in sees the numbers.
  *
  * The what-if table holds one formula per cell, `=ZC.DIST_LUM($A2,B$1)`, rather than one spilling
@@ -111,15 +111,15 @@ recipes.addRow(["INVENTED sample and survey for the catalogue recipes: made up, 
 recipes.addRow([
   "source", "z", "z_err", "RA [deg]", "Dec [deg]", "S_3GHz [mJy]", "S_err [mJy]", "alpha", "flux [erg/s/cm2]", "flux_err", "m", "m_err",
   "angle [arcsec]", "angle_err", "z_cmb", "D_L err [Mpc]", "D_C [Mpc/h]", "L [erg/s]", "L err [erg/s]", "M_bol", "L_1.4GHz [W/Hz]",
-  "L_nu err [W/Hz]", "M", "M err", "size err [kpc]", "dimming [mag]", "z_max", "1/V_max [Mpc-3]", "z_max (m)",
+  "L_1.4GHz err [W/Hz]", "M", "M err", "size err [kpc]", "dimming [mag]", "z_max", "1/V_max [Mpc-3]", "z_max (m)",
 ]);
 let weights = 0;
 recipeSources.forEach(([name, z, zErr, ra, dec, s, sErr, alpha, flux, fluxErr, m, mErr, angle, angleErr], i) => {
   const r = i + 3;
   const value = (fn: string, ...args: unknown[]) => evaluate(definitions[fn], args, active)[0][0] as number;
-  const lum = value("LUMINOSITY", flux, z, null, "erg/s/cm2", "erg/s");
+  const lum = value("LUMINOSITY", flux, z);
   const absMag = value("MAG_ABS", m, z);
-  const zMax = value("REDSHIFT_LIMIT", lum, survey.fluxLimit, null, null, "erg/s", "erg/s/cm2");
+  const zMax = value("REDSHIFT_LIMIT", lum, survey.fluxLimit);
   const vMax = value("VOLUME_MAX", zMax, survey.zLo, survey.zHi, survey.areaDeg2);
   weights += 1 / vMax;
   recipes.addRow([
@@ -127,16 +127,16 @@ recipeSources.forEach(([name, z, zErr, ra, dec, s, sErr, alpha, flux, fluxErr, m
     zc(`ZC.REDSHIFT_CMB(B${r},D${r},E${r})`, "REDSHIFT_CMB", z, ra, dec),
     zc(`ZC.DIST_LUM_ERR(B${r},C${r})`, "DIST_LUM_ERR", z, zErr),
     zc(`ZC.DIST_LOS(B${r},,"Mpc/h")`, "DIST_LOS", z, null, "Mpc/h"),
-    zc(`ZC.LUMINOSITY(I${r},B${r},,"erg/s/cm2","erg/s")`, "LUMINOSITY", flux, z, null, "erg/s/cm2", "erg/s"),
-    zc(`ZC.LUMINOSITY_ERR(I${r},J${r},B${r},C${r},,"erg/s/cm2","erg/s")`, "LUMINOSITY_ERR", flux, fluxErr, z, zErr, null, "erg/s/cm2", "erg/s"),
-    zc(`ZC.MAG_BOL(R${r},"erg/s")`, "MAG_BOL", lum, "erg/s"),
+    zc(`ZC.LUMINOSITY(I${r},B${r})`, "LUMINOSITY", flux, z),
+    zc(`ZC.LUMINOSITY_ERR(I${r},J${r},B${r},C${r})`, "LUMINOSITY_ERR", flux, fluxErr, z, zErr),
+    zc(`ZC.MAG_BOL(R${r})`, "MAG_BOL", lum),
     zc(`ZC.LUMINOSITY_REST(F${r},B${r},H${r},3,1.4,,,"mJy")`, "LUMINOSITY_REST", s, z, alpha, 3, 1.4, null, null, "mJy"),
-    zc(`ZC.LUMINOSITY_NU_ERR(F${r},G${r},B${r},C${r},H${r},0.1,,"mJy")`, "LUMINOSITY_NU_ERR", s, sErr, z, zErr, alpha, 0.1, null, "mJy"),
+    zc(`ZC.LUMINOSITY_REST_ERR(F${r},G${r},B${r},C${r},H${r},0.1,3,1.4,,,"mJy")`, "LUMINOSITY_REST_ERR", s, sErr, z, zErr, alpha, 0.1, 3, 1.4, null, null, "mJy"),
     zc(`ZC.MAG_ABS(K${r},B${r})`, "MAG_ABS", m, z),
     zc(`ZC.MAG_ABS_ERR(L${r},B${r},C${r})`, "MAG_ABS_ERR", mErr, z, zErr),
     zc(`ZC.SIZE_ERR(M${r},N${r},B${r},C${r})`, "SIZE_ERR", angle, angleErr, z, zErr),
     zc(`ZC.DIMMING(B${r})`, "DIMMING", z),
-    zc(`ZC.REDSHIFT_LIMIT(R${r},$AF$2,,,"erg/s","erg/s/cm2")`, "REDSHIFT_LIMIT", lum, survey.fluxLimit, null, null, "erg/s", "erg/s/cm2"),
+    zc(`ZC.REDSHIFT_LIMIT(R${r},$AF$2)`, "REDSHIFT_LIMIT", lum, survey.fluxLimit),
     { formula: storedFormula(`1/ZC.VOLUME_MAX(AA${r},$AF$3,$AF$4,$AF$5)`), result: 1 / vMax, date1904: false },
     zc(`ZC.REDSHIFT_LIMIT_MAG(W${r},$AF$6)`, "REDSHIFT_LIMIT_MAG", absMag, survey.magLimit),
   ]);
@@ -152,7 +152,7 @@ surveyCells.forEach(([label, v], i) => {
   recipes.getCell(`AE${i + 2}`).value = label;
   recipes.getCell(`AF${i + 2}`).value = v;
 });
-recipes.getCell("A13").value = "Cached values computed under P18-BAO; first-order errors assume independent inputs.";
+recipes.getCell("A13").value = "Cached values computed under P18-CMB; first-order errors assume independent inputs.";
 
 const out = fileURLToPath(new URL("../demo/", import.meta.url));
 mkdirSync(out, { recursive: true });

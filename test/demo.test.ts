@@ -98,8 +98,8 @@ describe("demo workbook, read as Excel reads it", () => {
   test("the README's what-if and model-in-cells descriptions match the file", () => {
     const readme = readFileSync(`${root}README.md`, "utf8");
     const whatIf = sheets.get("What-if")!;
-    expect(["B1", "C1", "D1"].map((a) => whatIf.get(a)!.value)).toEqual(["P18-BAO", "W9-ALL", "P18-BAO; H0=73"]);
-    expect(readme).toContain("the models `P18-BAO`, `W9-ALL` and `P18-BAO; H0=73` in B1:D1");
+    expect(["B1", "C1", "D1"].map((a) => whatIf.get(a)!.value)).toEqual(["P18-CMB", "W9-ALL", "P18-CMB; H0=73"]);
+    expect(readme).toContain("the models `P18-CMB`, `W9-ALL` and `P18-CMB; H0=73` in B1:D1");
     const [, typed] = /in B2:D9 one formula per cell, `=([^`]+)`/.exec(readme)!;
     expect(whatIf.get("B2")!.formula).toBe(storedFormula(typed));
     for (const column of ["B", "C", "D"]) for (let r = 2; r <= 9; r++) {
@@ -130,8 +130,8 @@ describe("demo workbook, read as Excel reads it", () => {
 
   test("recipe cached values hang together: the flux at z_max is the survey limit, AB12 is the sum of the weights", () => {
     // reference: the flux of L at z, L / (4π D_L²) (Hogg 1999 eq. 22), with D_L of the independent slow
-    // path (test/reference/slowCosmology.ts) under P18-BAO as Planck 2018 VI Table 2 gives it
-    const p18 = new SlowCosmology(publishedModels["P18-BAO"]);
+    // path (test/reference/slowCosmology.ts) under P18-CMB as Planck 2018 VI Table 2 gives it
+    const p18 = new SlowCosmology(publishedModels["P18-CMB"]);
     const cells = sheets.get("Recipes (invented)")!;
     const num = (a: string) => Number(cells.get(a)!.value);
     const limit = num("AF2"); // erg/s/cm2
@@ -146,10 +146,10 @@ describe("demo workbook, read as Excel reads it", () => {
     expectRelative(num("AB12"), sum, 1e-12, "Σ 1/V_max");
   });
 
-  test("cached D_L values are those of P18-BAO, the model of a new workbook", () => {
+  test("cached D_L values are those of P18-CMB, the model of a new workbook", () => {
     // reference: the independent slow path (tanh-sinh quadrature of the same equations, no tables),
     // with the parameters of Planck 2018 VI Table 2 written out; 1e-9 is the two codes' agreement
-    const p18 = new SlowCosmology(publishedModels["P18-BAO"]);
+    const p18 = new SlowCosmology(publishedModels["P18-CMB"]);
     const cells = sheets.get("Catalogue (invented)")!;
     for (let r = 3; r <= 14; r++) {
       expectRelative(Number(cells.get(`F${r}`)!.value), p18.luminosityDistanceMpc(Number(cells.get(`B${r}`)!.value)), 1e-9, `F${r}`);

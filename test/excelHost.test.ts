@@ -64,13 +64,13 @@ describe("workbook settings", () => {
 
     fake = install({ settings: { "zcell.activeModel": 42 }, sheets: sheets() });
     const corrupt = readActiveModel();
-    expect(corrupt.spec).toBe("P18-BAO");
+    expect(corrupt.spec).toBe("P18-CMB");
     expect(corrupt.warning).toMatch(/could not be read \(not text\)/);
     install({ settings: { "zcell.activeModel": "P18-BAO; Om=x" }, sheets: sheets() });
     expect(readActiveModel().warning).toMatch(/Om: "x" is not a number/);
     install({ settings: {}, sheets: sheets() });
     expect(readModelSetting()).toBeUndefined();
-    expect(readActiveModel()).toMatchObject({ spec: "P18-BAO", stored: false });
+    expect(readActiveModel()).toMatchObject({ spec: "P18-CMB", stored: false });
   });
 
   test("a failed save is reported, not swallowed", async () => {

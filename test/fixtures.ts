@@ -31,6 +31,8 @@ export const distanceQuantities = [
 export const publishedModels = {
   /** Planck 2018 VI (A&A 641, A6) Table 2, last column (TT,TE,EE+lowE+lensing+BAO); one 0.06 eV ν, Neff 3.046, Tcmb 2.7255 K (Fixsen 2009). */
   "P18-BAO": { ...lcdm, H0: 67.66, Om: 0.3111, Tcmb: 2.7255, mnu: [0.06] },
+  /** Planck 2018 VI (A&A 641, A6) Table 2, TT,TE,EE+lowE+lensing column (the default model); one 0.06 eV ν, Neff 3.046, Tcmb 2.7255 K. */
+  "P18-CMB": { ...lcdm, H0: 67.36, Om: 0.3153, Tcmb: 2.7255, mnu: [0.06] },
   /** WMAP nine-year, Hinshaw et al. 2013 (ApJS 208, 19) Table 4 (WMAP+eCMB+BAO+H0); Tcmb 2.725 K, Neff 3.04, massless ν. */
   "W9-ALL": { ...lcdm, H0: 69.32, Om: 0.2865, Tcmb: 2.725, Neff: 3.04 },
 } satisfies Record<string, ModelParameters>;

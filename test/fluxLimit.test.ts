@@ -65,9 +65,9 @@ describe("limiting redshift", () => {
     for (let zz = 0.001; zz < z; zz *= 1.05) expect(fluxAt(p18, lum, zz, alpha)).toBeGreaterThan(limit);
     // and below its minimum the source is never lost: #N/A with the reason
     expect(() => limitingRedshift(p18, lum, 0.5 * minimum, alpha)).toThrow(NoSolutionError);
-    const cell = one("REDSHIFT_LIMIT", lum, (0.5 * minimum) / 1e-26, alpha) as CellError;
+    const cell = one("REDSHIFT_LIMIT_NU", lum, (0.5 * minimum) / 1e-26, alpha) as CellError;
     expect(cell.kind).toBe("na");
-    expect(cell.message).toMatch(/^ZC\.REDSHIFT_LIMIT: the source stays at or above the flux limit out to z = 1e8/);
+    expect(cell.message).toMatch(/^ZC\.REDSHIFT_LIMIT_NU: the source stays at or above the flux limit out to z = 1e8/);
   });
 
   test.each([
@@ -82,11 +82,17 @@ describe("limiting redshift", () => {
     expect(Math.abs(absMag + m.distanceModulusMag(z) + k - limit)).toBeLessThanOrEqual(1e-10);
   });
 
-  test("the sheet reads units by the case: W and W/m2 without alpha, W/Hz and Jy with it", () => {
-    expectRelative(one("REDSHIFT_LIMIT", 1e45, 1e-13, "", "P18-BAO", "erg/s", "erg/s/cm2") as number, limitingRedshift(p18, 1e38, 1e-16), 1e-14, "CGS");
-    expectRelative(one("REDSHIFT_LIMIT", 1e25, 1, -0.7, "P18-BAO", "", "mJy") as number, limitingRedshift(p18, 1e25, 1e-29, -0.7), 1e-14, "mJy");
-    const wrong = one("REDSHIFT_LIMIT", 1e25, 1, -0.7, "P18-BAO", "W") as CellError;
-    expect(wrong.message).toMatch(/^ZC\.REDSHIFT_LIMIT: lum_unit: cannot convert "W" \(power\) to "W\/Hz"/);
+  test("bolometric and spectral limits are two functions, each with its own default units", () => {
+    // 1 erg/s = 1e-7 W, 1 erg/s/cm2 = 1e-3 W/m2, 1 mJy = 1e-29 W/m2/Hz (common practice)
+    expectRelative(one("REDSHIFT_LIMIT", 1e45, 1e-13, "P18-BAO") as number, limitingRedshift(p18, 1e38, 1e-16), 1e-14, "erg/s and erg/s/cm2 by default");
+    expectRelative(one("REDSHIFT_LIMIT", 1e38, 1e-16, "P18-BAO", "W", "W/m2") as number, limitingRedshift(p18, 1e38, 1e-16), 1e-14, "SI given");
+    expectRelative(one("REDSHIFT_LIMIT_NU", 1e25, 1, -0.7, "P18-BAO", "", "mJy") as number, limitingRedshift(p18, 1e25, 1e-29, -0.7), 1e-14, "mJy");
+    expectRelative(one("REDSHIFT_LIMIT_NU", 1e25, 1e-3, -0.7, "P18-BAO") as number, limitingRedshift(p18, 1e25, 1e-29, -0.7), 1e-14, "W/Hz and Jy by default");
+    const wrong = one("REDSHIFT_LIMIT_NU", 1e25, 1, -0.7, "P18-BAO", "W") as CellError;
+    expect(wrong.message).toMatch(/^ZC\.REDSHIFT_LIMIT_NU: lum_unit: cannot convert "W" \(power\) to "W\/Hz"/);
+    // alpha = −1 typed into the bolometric function is no longer a silent switch: it is a model argument
+    const slot = one("REDSHIFT_LIMIT", 1e45, 1e-13, -1) as CellError;
+    expect(slot.kind).toBe("value");
   });
 });
 
@@ -101,11 +107,11 @@ describe("V_max", () => {
   test("a 1/V_max sum over an invented catalogue: ranges equal the same sum cell by cell", () => {
     // invented sources (not real objects): bolometric luminosity [W] and a 2e-17 W/m2 survey over 100 deg², 0.05 < z < 2
     const lums = [3e37, 8e37, 1.5e38, 4e38, 9e38, 2e39, 5e39, 1.2e40].map((l) => [l]);
-    const zMax = run("REDSHIFT_LIMIT", lums, 2e-17);
+    const zMax = run("REDSHIFT_LIMIT", lums, 2e-17, "", "W", "W/m2");
     const vMax = run("VOLUME_MAX", zMax, 0.05, 2, 100);
     let byCells = 0;
     lums.forEach(([lum], r) => {
-      const zm = one("REDSHIFT_LIMIT", lum, 2e-17) as number;
+      const zm = one("REDSHIFT_LIMIT", lum, 2e-17, "", "W", "W/m2") as number;
       expect(zMax[r][0]).toBe(zm);
       const v = one("VOLUME_MAX", zm, 0.05, 2, 100) as number;
       expect(vMax[r][0]).toBe(v);

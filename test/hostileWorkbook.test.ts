@@ -102,7 +102,7 @@ describe("provenance notes", () => {
 describe("stored settings: whatever they hold, a bounded reading and a plain warning", () => {
   const settingsOf = (active: unknown, models?: unknown) => install({ settings: { "zcell.activeModel": active, ...(models === undefined ? {} : { "zcell.workbookModels": models }) } });
 
-  // stored active model | warning (fragment) — the functions and the pane then use P18-BAO
+  // stored active model | warning (fragment) — the functions and the pane then use the default, P18-CMB
   const unusable: [unknown, RegExp][] = [
     ["H0=70; Om=0; OL=2", /no big bang/],
     [42, /not text/],
@@ -111,10 +111,10 @@ describe("stored settings: whatever they hold, a bounded reading and a plain war
     ["x".repeat(maxSpecLength + 1), /longer than 500 characters/],
     ["NO-SUCH-MODEL", /unknown preset/],
   ];
-  test.each(unusable)("active model %j falls back to P18-BAO with a warning", (stored, warning) => {
+  test.each(unusable)("active model %j falls back to the default model (P18-CMB) with a warning", (stored, warning) => {
     settingsOf(stored);
     const active = readActiveModel();
-    expect(active).toMatchObject({ spec: "P18-BAO", stored: false });
+    expect(active).toMatchObject({ spec: "P18-CMB", stored: false });
     expect(active.warning).toMatch(warning);
     expect(active.warning!.length).toBeLessThan(400);
   });

@@ -39,7 +39,7 @@ describe("messages name the function and speak in the user's units", () => {
     [["VOLUME_SHELL", 0, 1, 50000, null, null, "deg2"],         "num",  "ZC.VOLUME_SHELL: area = 50000 deg2 is above 41253 deg2 (the whole sky)"],
     [["SIZE", 1e6, 1],                                          "num",  "ZC.SIZE: angle = 1000000 arcsec is above 648000 arcsec (180°)"],
     [["DIST_LUM", -1],                                          "num",  "ZC.DIST_LUM: z = -1 is negative: a blueshifted source needs a redshift-independent distance"],
-    [["OMEGA", "m"],                                            "value", 'ZC.OMEGA: component: "m" is not one of matter, darkenergy, curvature, radiation, photons, neutrinos'],
+    [["OMEGA", "m"],                                            "value", 'ZC.OMEGA: component: "m" is not one of matter, cold, darkenergy, curvature, radiation, photons, neutrinos'],
   ])("%j gives #%s with the message %j", (call, kind, message) => {
     const [name, ...args] = call as [string, ...unknown[]];
     expect(errorOf(one(name, ...args))).toEqual({ kind, message });
@@ -112,9 +112,9 @@ describe("fixes found in review", () => {
     expect(one("DESCRIBE", "H0=70; Om=0.3; OL=0.8; w0=-0.9")).toMatch(/^H0=70; Om=0.3; OL=0.8; w0=-0.9: closed: matter \+ w0–wa dark energy;/);
   });
 
-  test("REDSHIFT of VOLUME reads Gpc3 by default, the unit ZC.VOLUME returns", () => {
+  test("REDSHIFT of VOLUME reads Mpc3 by default, the unit ZC.VOLUME returns", () => {
     expectRelative(one("REDSHIFT", one("VOLUME", 2), "VOLUME") as number, 2, 1e-12, "round trip");
-    expectRelative(one("VOLUME", 2) as number, p18.comovingVolumeMpc3(2) / 1e9, 1e-15, "Gpc3");
+    expectRelative(one("VOLUME", 2) as number, p18.comovingVolumeMpc3(2), 1e-15, "Mpc3");
   });
 
   test("OMEGA takes words, in any case", () => {

@@ -52,8 +52,31 @@ describe("unit conversion", () => {
     expect(() => convertUnit(1, from, to)).toThrow(message);
   });
 
-  test("units are case-sensitive as in FITS: mpc is a milliparsec", () => {
-    expectRelative(convertUnit(1, "Mpc", "mpc"), 1e9, 1e-15, "Mpc/mpc");
+  test("units are case-sensitive as in FITS; a trade unit in the wrong case that would still parse is refused", () => {
+    // "mpc" would be a milliparsec (FITS Standard 4.0 §4.3 prefixes are case-sensitive): 1e9 from Mpc
+    expect(() => convertUnit(1, "Mpc", "mpc")).toThrow('"mpc" would be milliparsecs (units are case-sensitive): did you mean Mpc?');
+    expect(() => parseUnit("mpc3")).toThrow("did you mean Mpc3?");
+    expect(() => parseUnit("myr")).toThrow("did you mean Myr?");
+    expect(() => parseUnit("km/s/mpc")).toThrow("did you mean km/s/Mpc?");
+    expectRelative(convertUnit(1, "Mpc", "kpc"), 1e3, 1e-15, "Mpc/kpc, SI prefixes (common practice)");
     expect(parseUnit("Mpc").dimensions).toEqual([1, 0, 0, 0, 0]);
+  });
+
+  test.each([
+    // typed          | suggestion in the message
+    ["ergs/s/cm2",    "did you mean erg/s/cm2?"],
+    ["L_sun",         "did you mean Lsun or solLum?"],
+    ["gpc",           "did you mean Gpc?"],
+    ["MPC",           "did you mean Mpc?"],
+    ["gyr",           "did you mean Gyr?"],
+    ["mjy",           "did you mean mJy?"],
+    ["kev",           "did you mean keV?"],
+    ["msun",          "did you mean Msun or solMass?"],
+  ])("an unknown unit %j names the nearest known spellings (%s)", (typed, suggestion) => {
+    expect(() => parseUnit(typed)).toThrow(suggestion);
+  });
+
+  test("a unit nothing is near gets no invented suggestion", () => {
+    expect(() => parseUnit("qqqqqq")).toThrow(/^unknown unit "qqqqqq" in "qqqqqq"$/);
   });
 });

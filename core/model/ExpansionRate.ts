@@ -18,8 +18,8 @@ import type { QuinticTable } from "../numerics/QuinticTable.js";
 import type { ModelParameters } from "./ModelParameters.js";
 import { checkRedshift, formatRedshift } from "../checks/redshift.js";
 
-/** Density components of `densityParameter`: matter (massive ν included), dark energy, curvature, radiation (photons + massless ν), photons, all neutrinos. */
-export type DensityComponent = "matter" | "darkenergy" | "curvature" | "radiation" | "photons" | "neutrinos";
+/** Density components of `densityParameter`: matter (massive ν included), cold matter (CDM + baryons), dark energy, curvature, radiation (photons + massless ν), photons, all neutrinos. */
+export type DensityComponent = "matter" | "cold" | "darkenergy" | "curvature" | "radiation" | "photons" | "neutrinos";
 
 /** Radiation-like exponents are compared exactly; terms of E² as (coefficient, power of 1+z). */
 type Term = { coefficient: number; power: number };
@@ -31,6 +31,17 @@ function requireFinite(key: string, value: unknown, unit: string, test: (v: numb
 }
 
 /** Throws RangeError naming the first parameter outside its domain. */
+/**
+ * Largest |Ω| read as a density parameter: a larger one is almost surely a percentage (Om=30 for 0.30),
+ * which would otherwise give a valid-looking model (age 2.4 Gyr). Our choice; no model in use comes near.
+ */
+const largestDensityParameter = 5;
+
+function requireFraction(key: string, value: number | undefined): void {
+  if (value === undefined || !(Math.abs(value) > largestDensityParameter)) return;
+  throw new RangeError(`${key} = ${value}: a density parameter is a fraction (${value} → ${Number((value / 100).toPrecision(6)).toFixed(2)}), |${key}| ≤ ${largestDensityParameter}`);
+}
+
 function checkParameters(p: ModelParameters): void {
   requireFinite("H0", p.H0, " km/s/Mpc", (v) => v > 0, "a positive number");
   if (p.H0 < 10 || p.H0 > 1000) {
@@ -42,6 +53,7 @@ function checkParameters(p: ModelParameters): void {
   if (p.OL !== undefined) requireFinite("OL", p.OL, "", () => true, "a finite number");
   if (p.Ok !== undefined) requireFinite("Ok", p.Ok, "", () => true, "a finite number");
   if (p.Ob !== undefined) requireFinite("Ob", p.Ob, ` (Om = ${p.Om})`, (v) => v >= 0 && v <= p.Om, "between 0 and Om");
+  for (const key of ["Om", "OL", "Ok", "Ob"] as const) requireFraction(key, p[key]);
   requireFinite("w0", p.w0, "", () => true, "a finite number");
   requireFinite("wa", p.wa, "", () => true, "a finite number");
   requireFinite("Tcmb", p.Tcmb, " K", (v) => v >= 0, "≥ 0");
@@ -230,9 +242,10 @@ export class ExpansionRate {
   /**
    * Density parameter Ω_x(z) = ρ_x(z)/ρ_crit(z) of one component. "matter" counts massive neutrinos
    * with matter at every z (the Om convention) and "radiation" is photons plus massless species, so
-   * matter + darkenergy + curvature + radiation = 1; "neutrinos" is all neutrinos (massless and
-   * massive), "photons" the CMB alone.
-   * @param component "matter", "darkenergy", "curvature", "radiation", "photons" or "neutrinos"
+   * matter + darkenergy + curvature + radiation = 1; "cold" is CDM and baryons alone (massive
+   * neutrinos left out: the matter of the equality redshift `equalityRedshift`, which counts every
+   * neutrino as radiation); "neutrinos" is all neutrinos (massless and massive), "photons" the CMB alone.
+   * @param component "matter", "cold", "darkenergy", "curvature", "radiation", "photons" or "neutrinos"
    * @param z redshift ≥ 0
    * @returns dimensionless density parameter; e.g. "matter" at z = 0 equals Om
    */
@@ -248,6 +261,9 @@ export class ExpansionRate {
     switch (component) {
       case "matter":
         density = this.coldMatter * zp ** 3 + massive;
+        break;
+      case "cold":
+        density = this.coldMatter * zp ** 3;
         break;
       case "darkenergy":
         density = this.OL * this.darkEnergyFactor(zp, lnZp);
@@ -265,7 +281,7 @@ export class ExpansionRate {
         density = this.masslessNeutrinos * zp4 + massive;
         break;
       default:
-        throw new TypeError(`unknown component "${String(component)}": use matter, darkenergy, curvature, radiation, photons or neutrinos`);
+        throw new TypeError(`unknown component "${String(component)}": use matter, cold, darkenergy, curvature, radiation, photons or neutrinos`);
     }
     return density / e2;
   }

@@ -27,7 +27,8 @@ const planckNeff = 3.046;
 
 /**
  * The presets by name. The names say the data combination: P18-BAO (Planck 2018 CMB with lensing and
- * BAO, the default), P18-CMB (Planck 2018 CMB with lensing), P15-EXT (Planck 2015 with external data),
+ * BAO), P18-CMB (Planck 2018 CMB with lensing, the values papers quote as "Planck 2018": the add-in's
+ * default), P15-EXT (Planck 2015 with external data),
  * W9-ALL (WMAP nine-year with every external set), W7-BAO (WMAP seven-year with BAO and H0).
  */
 export const presets: readonly Preset[] = [

@@ -100,22 +100,28 @@ export function limitingRedshiftMag(model: Cosmology, absoluteMag: number, magLi
 }
 
 /**
- * V_max: the comoving volume over a sky area between z_lo and min(z_max, z_hi) (Schmidt 1968), 0 when
- * z_max ≤ z_lo; 1/V_max is the source's weight in a luminosity function.
+ * V_max: the comoving volume over a sky area between max(z_lo, z_min) and min(z_max, z_hi) (Schmidt
+ * 1968), 0 when that range is empty; 1/V_max is the source's weight in a luminosity function. z_min is
+ * the source's bright limit: the lowest redshift at which it would enter the sample (0 when the sample
+ * has no bright limit).
  *
  * @param model the cosmology
- * @param zMax the source's limiting redshift, ≥ 0
+ * @param zMax the source's limiting redshift (faint limit), ≥ 0
  * @param zLo the sample's lower redshift bound, ≥ 0
  * @param zHi the sample's upper redshift bound, ≥ zLo
  * @param areaSr the survey's area [sr], 0 … 4π
- * @returns Mpc³; zMax ≥ zHi gives the whole survey volume between zLo and zHi
+ * @param zMin the source's bright-limit redshift, ≥ 0 (default 0)
+ * @returns Mpc³; zMax ≥ zHi and zMin ≤ zLo give the whole survey volume between zLo and zHi
  * @example maxVolumeMpc3(Cosmology.fromSpec("P18-BAO"), 2, 0.1, 1, 0.1) // 1.3023e9
  */
-export function maxVolumeMpc3(model: Cosmology, zMax: number, zLo: number, zHi: number, areaSr: number): number {
+export function maxVolumeMpc3(model: Cosmology, zMax: number, zLo: number, zHi: number, areaSr: number, zMin = 0): number {
   checkRedshift(zMax, "z_max");
   checkRedshift(zLo, "z_lo");
   checkRedshift(zHi, "z_hi");
+  checkRedshift(zMin, "z_min");
   if (zHi < zLo) throw new RangeError(`z_hi = ${zHi} is below z_lo = ${zLo}`);
-  if (zMax <= zLo) return 0;
-  return model.comovingVolumeShellMpc3(zLo, Math.min(zMax, zHi), areaSr);
+  const from = Math.max(zLo, zMin);
+  const to = Math.min(zMax, zHi);
+  if (to <= from) return 0;
+  return model.comovingVolumeShellMpc3(from, to, areaSr);
 }

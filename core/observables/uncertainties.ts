@@ -6,7 +6,7 @@
  */
 import type { Cosmology } from "../distances/Cosmology.js";
 import { angularDiameterDistanceSlopeMpc, luminosityDistanceLogSlope, luminosityDistanceSlopeMpc } from "../distances/distanceSlopes.js";
-import { luminosityW, spectralLuminosityWHz } from "./photometry.js";
+import { luminosityW, restFrameSpectralLuminosityWHz, spectralLuminosityWHz } from "./photometry.js";
 import { requireNonNegative } from "../checks/numberChecks.js";
 import { checkSourceRedshift } from "../checks/redshift.js";
 
@@ -72,22 +72,62 @@ export function spectralLuminosityErrorWHz(
 }
 
 /**
- * Error of an absolute magnitude M = m − μ(z) − K: σ_M = √(σ_m² + (dμ/dz σ_z)² + σ_K²), with
- * dμ/dz = (5/ln 10) d ln D_L/dz.
+ * Error of a rest-frame spectral luminosity at another frequency (restFrameSpectralLuminosityWHz),
+ * L = 4π D_L² S_ν (1+z)^−1 (ν_rest / ((1+z) ν_obs))^α:
+ * σ_L/L = √((σ_S/S)² + (σ_z (2 d ln D_L/dz − (1+α)/(1+z)))² + (σ_α ln(ν_rest / ((1+z) ν_obs)))²).
+ * @param model the cosmology
+ * @param fluxDensityWm2Hz flux density observed at ν_obs [W m⁻² Hz⁻¹], ≥ 0
+ * @param fluxDensityErrWm2Hz its 1σ error [W m⁻² Hz⁻¹], ≥ 0
+ * @param z redshift > 0
+ * @param zErr 1σ error of z, ≥ 0
+ * @param alpha spectral index α of S_ν ∝ ν^α
+ * @param alphaErr 1σ error of α, ≥ 0
+ * @param observedHz observed frequency ν_obs [Hz], > 0
+ * @param restHz rest-frame frequency ν_rest [Hz], > 0
+ * @returns W Hz⁻¹; ν_rest = (1+z) ν_obs makes the α term vanish
+ */
+export function restFrameSpectralLuminosityErrorWHz(
+  model: Cosmology,
+  fluxDensityWm2Hz: number,
+  fluxDensityErrWm2Hz: number,
+  z: number,
+  zErr: number,
+  alpha: number,
+  alphaErr: number,
+  observedHz: number,
+  restHz: number,
+): number {
+  requireNonNegative("flux_density_err", fluxDensityErrWm2Hz);
+  requireNonNegative("z_err", zErr);
+  requireNonNegative("alpha_err", alphaErr);
+  const perUnitFlux = restFrameSpectralLuminosityWHz(model, 1, z, alpha, observedHz, restHz);
+  const lum = perUnitFlux * fluxDensityWm2Hz;
+  const zTerm = zErr * (2 * luminosityDistanceLogSlope(model, z) - (1 + alpha) / (1 + z));
+  const alphaTerm = alphaErr * Math.log(restHz / ((1 + z) * observedHz));
+  return Math.hypot(perUnitFlux * fluxDensityErrWm2Hz, lum * zTerm, lum * alphaTerm);
+}
+
+/**
+ * Error of an absolute magnitude M = m − μ(z) − K: σ_M = √(σ_m² + (d(μ + K)/dz σ_z)² + σ_K²), with
+ * dμ/dz = (5/ln 10) d ln D_L/dz and, when K is the power-law K-correction of spectral index α
+ * (K = −2.5 (1+α) log10(1+z)), dK/dz = −2.5 (1+α) / ((1+z) ln 10); otherwise K is taken as fixed.
  * @param model the cosmology
  * @param mErr 1σ error of the apparent magnitude [mag], ≥ 0
  * @param z redshift > 0
  * @param zErr 1σ error of z, ≥ 0
  * @param kCorrectionErr 1σ error of the K-correction [mag], ≥ 0
+ * @param alpha spectral index α of a power-law K-correction; NaN (the default) for a K that does not change with z
  * @returns mag; e.g. σ_z = 0 gives √(σ_m² + σ_K²)
+ * @example absoluteMagnitudeErrorMag(Cosmology.fromSpec("EDS"), 0, 1, 0.1) // 0.23963 ((5/ln10) × 0.1 × (1 − 1/(2√2))/(2 − √2), from D_L = 2 D_H (1 + z − √(1+z)))
  */
-export function absoluteMagnitudeErrorMag(model: Cosmology, mErr: number, z: number, zErr: number, kCorrectionErr = 0): number {
+export function absoluteMagnitudeErrorMag(model: Cosmology, mErr: number, z: number, zErr: number, kCorrectionErr = 0, alpha = Number.NaN): number {
   requireNonNegative("m_err", mErr);
   requireNonNegative("z_err", zErr);
   requireNonNegative("kcorr_err", kCorrectionErr);
   checkSourceRedshift(z);
-  const modulusSlope = (5 / Math.LN10) * luminosityDistanceLogSlope(model, z);
-  return Math.hypot(mErr, modulusSlope * zErr, kCorrectionErr);
+  const kSlope = Number.isNaN(alpha) ? 0 : (-2.5 * (1 + alpha)) / ((1 + z) * Math.LN10);
+  const slope = (5 / Math.LN10) * luminosityDistanceLogSlope(model, z) + kSlope;
+  return Math.hypot(mErr, slope * zErr, kCorrectionErr);
 }
 
 /**

@@ -25,6 +25,7 @@ import {
   solarMassKg,
   speedOfLightMPerS,
 } from "./constants.js";
+import { caseSlip, nearestUnits } from "./unitSuggestions.js";
 
 /** Exponents of the base dimensions, in the order m, kg, s, K, rad. */
 type Dimensions = readonly [number, number, number, number, number];
@@ -130,6 +131,11 @@ function describeDimensions(dims: Dimensions): string {
 }
 
 function resolveSymbol(symbol: string, whole: string): { factor: number; dimensions: Dimensions } {
+  const slip = caseSlip(symbol);
+  if (slip) {
+    const meant = whole.replace(new RegExp(`(^|[^A-Za-z])${symbol}(?![A-Za-z])`), `$1${slip.meant}`);
+    throw new TypeError(`"${whole}" would be ${slip.reads} (units are case-sensitive): did you mean ${meant}?`);
+  }
   const name = aliases[symbol] ?? symbol;
   const exact = definitions[name];
   if (exact) return exact;
@@ -269,7 +275,14 @@ export function parseUnit(text: string): Unit {
   const trimmed = text.trim();
   if (trimmed === "") throw new TypeError("empty unit");
   const parser = new UnitParser(trimmed);
-  const parsed = parser.parse();
+  let parsed: ReturnType<UnitParser["parse"]>;
+  try {
+    parsed = parser.parse();
+  } catch (e) {
+    const near = e instanceof TypeError && !/did you mean|magnitudes/.test(e.message) ? nearestUnits(trimmed) : [];
+    if (near.length === 0) throw e;
+    throw new TypeError(`${(e as Error).message}: did you mean ${near.join(" or ")}?`);
+  }
   const dims = parsed.dimensions;
   const hPower = dims[hSymbol];
   let factor = parsed.factor;

@@ -141,10 +141,10 @@ export function HUBBLE(z?: any[][], model?: any[][], unit?: string): any[][] {
 }
 
 /**
- * Density parameter of one component at z: "matter" (incl. massive ν), "darkenergy", "curvature", "radiation" (photons + massless ν), "photons" or "neutrinos" (all ν).
+ * Density parameter of one component at z: "matter" (CDM + baryons + massive ν at every z, as Om), "cold" (CDM + baryons: the matter of PARAM("z_eq")), "darkenergy", "curvature", "radiation" (photons + massless ν), "photons" or "neutrinos" (all ν).
  * @customfunction OMEGA OMEGA
  * @helpurl https://localhost:3000/help.html#function-reference
- * @param component "matter", "darkenergy", "curvature", "radiation", "photons" or "neutrinos" (value or range).
+ * @param component "matter", "cold", "darkenergy", "curvature", "radiation", "photons" or "neutrinos" (value or range).
  * @param [z] Redshift, ≥ 0 (value or range); omitted = today.
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @returns Density parameter (dimensionless).
@@ -222,29 +222,29 @@ export function ANGLE(size: any[][], z: any[][], model?: any[][], size_unit?: st
 }
 
 /**
- * All-sky comoving volume within redshift z, in Gpc3 unless a unit is given.
+ * All-sky comoving volume within redshift z, in Mpc3 unless a unit is given.
  * @customfunction VOLUME VOLUME
  * @helpurl https://localhost:3000/help.html#function-reference
  * @param z Redshift, ≥ 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
- * @param [unit] Output unit, default "Gpc3" (e.g. "Mpc3").
- * @returns Comoving volume (Gpc3 by default).
+ * @param [unit] Output unit, default "Mpc3" (e.g. "Gpc3").
+ * @returns Comoving volume (Mpc3 by default).
  */
 export function VOLUME(z: any[][], model?: any[][], unit?: string): any[][] {
   return callFromSheet(d.VOLUME, [z, model, unit]);
 }
 
 /**
- * Comoving volume between z1 and z2 over a sky area (all sky if omitted), in Gpc3 (area in deg2).
+ * Comoving volume between z1 and z2 over a sky area (all sky if omitted), in Mpc3 (area in deg2).
  * @customfunction VOLUME_SHELL VOLUME_SHELL
  * @helpurl https://localhost:3000/help.html#function-reference
  * @param z1 Inner redshift, ≥ 0 (value or range).
  * @param z2 Outer redshift, ≥ z1 (value or range).
  * @param [area] Sky area, in deg2 by default; omitted = whole sky (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
- * @param [unit] Output unit, default "Gpc3".
+ * @param [unit] Output unit, default "Mpc3" (e.g. "Gpc3").
  * @param [area_unit] Unit of area, default "deg2" (e.g. "sr", "arcmin2").
- * @returns Shell volume (Gpc3 by default).
+ * @returns Shell volume (Mpc3 by default).
  */
 export function VOLUME_SHELL(z1: any[][], z2: any[][], area?: any[][], model?: any[][], unit?: string, area_unit?: string): any[][] {
   return callFromSheet(d.VOLUME_SHELL, [z1, z2, area, model, unit, area_unit]);
@@ -270,7 +270,7 @@ export function VOLUME_ELEMENT(z: any[][], model?: any[][], unit?: string): any[
  * @param value Value of the quantity, in its default unit unless one is given (value or range).
  * @param quantity Name of the function inverted, e.g. "DIST_LUM".
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
- * @param [unit] Unit of value; default that of the function inverted (Mpc, Gyr, Gpc3 for VOLUME; MODULUS in mag takes none).
+ * @param [unit] Unit of value; default that of the function inverted (Mpc, Gyr, Mpc3 for VOLUME; MODULUS in mag takes none).
  * @returns Redshift.
  */
 export function REDSHIFT(value: any[][], quantity: string, model?: any[][], unit?: string): any[][] {

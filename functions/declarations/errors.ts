@@ -26,14 +26,14 @@ export function DIST_LUM_ERR(z: any[][], z_err: any[][], model?: any[][], unit?:
  * 1σ error of a bolometric luminosity from independent flux and redshift errors (first order): σ_L/L = √((σ_F/F)² + (2σ_z dlnD_L/dz)²).
  * @customfunction LUMINOSITY_ERR LUMINOSITY_ERR
  * @helpurl https://localhost:3000/help.html#function-reference
- * @param flux Bolometric flux, ≥ 0, in W/m2 by default (value or range).
+ * @param flux Bolometric flux, ≥ 0, in erg/s/cm2 by default (value or range).
  * @param flux_err 1σ error of the flux, ≥ 0, in the flux's unit (value or range).
  * @param z Redshift, > 0 (value or range).
  * @param z_err 1σ error of z, ≥ 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
- * @param [flux_unit] Unit of flux and flux_err, default "W/m2" (e.g. "erg/s/cm2").
- * @param [lum_unit] Output unit, default "W" (e.g. "erg/s", "Lsun").
- * @returns Error of the luminosity (W by default).
+ * @param [flux_unit] Unit of flux and flux_err, default "erg/s/cm2" (e.g. "W/m2").
+ * @param [lum_unit] Output unit, default "erg/s" (e.g. "W", "Lsun").
+ * @returns Error of the luminosity (erg/s by default).
  */
 export function LUMINOSITY_ERR(flux: any[][], flux_err: any[][], z: any[][], z_err: any[][], model?: any[][], flux_unit?: string, lum_unit?: string): any[][] {
   return callFromSheet(d.LUMINOSITY_ERR, [flux, flux_err, z, z_err, model, flux_unit, lum_unit]);
@@ -47,7 +47,7 @@ export function LUMINOSITY_ERR(flux: any[][], flux_err: any[][], z: any[][], z_e
  * @param flux_density_err 1σ error of the flux density, ≥ 0, in its unit (value or range).
  * @param z Redshift, > 0 (value or range).
  * @param z_err 1σ error of z, ≥ 0 (value or range).
- * @param alpha Spectral index α of S_ν ∝ ν^α (value or range).
+ * @param alpha Spectral index: S_ν ∝ ν^alpha; synchrotron ≈ −0.7; other conventions via ZC.SPECTRAL_INDEX (value or range).
  * @param [alpha_err] 1σ error of α, ≥ 0; blank = 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [in_unit] Unit of flux_density and its error, default "Jy" (e.g. "mJy").
@@ -59,18 +59,19 @@ export function LUMINOSITY_NU_ERR(flux_density: any[][], flux_density_err: any[]
 }
 
 /**
- * 1σ error of an absolute magnitude M = m − μ − K from independent errors of m, z and K (first order): √(σ_m² + (dμ/dz σ_z)² + σ_K²).
+ * 1σ error of an absolute magnitude M = m − μ − K from independent errors of m, z and K (first order): √(σ_m² + (d(μ + K)/dz σ_z)² + σ_K²); K's slope enters when alpha is given.
  * @customfunction MAG_ABS_ERR MAG_ABS_ERR
  * @helpurl https://localhost:3000/help.html#function-reference
- * @param m_err 1σ error of the apparent magnitude, ≥ 0 (value or range).
+ * @param m_err 1σ error of the apparent magnitude, ≥ 0; ±99 (|value| ≥ 50) is a missing-value flag, #N/A (value or range).
  * @param z Redshift, > 0 (value or range).
  * @param z_err 1σ error of z, ≥ 0 (value or range).
  * @param [kcorr_err] 1σ error of the K-correction, ≥ 0; blank = 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [alpha] Spectral index of the power-law K-correction used (as ZC.KCORRECTION): S_ν ∝ ν^alpha; synchrotron ≈ −0.7; other conventions via ZC.SPECTRAL_INDEX; blank = K taken as fixed in z (value or range).
  * @returns Error of M (mag).
  */
-export function MAG_ABS_ERR(m_err: any[][], z: any[][], z_err: any[][], kcorr_err?: any[][], model?: any[][]): any[][] {
-  return callFromSheet(d.MAG_ABS_ERR, [m_err, z, z_err, kcorr_err, model]);
+export function MAG_ABS_ERR(m_err: any[][], z: any[][], z_err: any[][], kcorr_err?: any[][], model?: any[][], alpha?: any[][]): any[][] {
+  return callFromSheet(d.MAG_ABS_ERR, [m_err, z, z_err, kcorr_err, model, alpha]);
 }
 
 /**
@@ -88,4 +89,26 @@ export function MAG_ABS_ERR(m_err: any[][], z: any[][], z_err: any[][], kcorr_er
  */
 export function SIZE_ERR(angle: any[][], angle_err: any[][], z: any[][], z_err: any[][], model?: any[][], angle_unit?: string, size_unit?: string): any[][] {
   return callFromSheet(d.SIZE_ERR, [angle, angle_err, z, z_err, model, angle_unit, size_unit]);
+}
+
+/**
+ * 1σ error of a rest-frame spectral luminosity at another frequency (as ZC.LUMINOSITY_REST) from independent errors of flux density, z and spectral index (first order); the α term is ln(rest / ((1+z) observed)) σ_α.
+ * @customfunction LUMINOSITY_REST_ERR LUMINOSITY_REST_ERR
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param flux_density Flux density observed at `observed`, ≥ 0, in Jy by default (value or range).
+ * @param flux_density_err 1σ error of the flux density, ≥ 0, in its unit (value or range).
+ * @param z Redshift, > 0 (value or range).
+ * @param z_err 1σ error of z, ≥ 0 (value or range).
+ * @param alpha Spectral index: S_ν ∝ ν^alpha; synchrotron ≈ −0.7; other conventions via ZC.SPECTRAL_INDEX (value or range).
+ * @param alpha_err 1σ error of alpha, ≥ 0 (value or range).
+ * @param observed Observed frequency, wavelength or energy, > 0, in band_unit (value or range).
+ * @param rest Rest-frame frequency, wavelength or energy, > 0, in band_unit (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [band_unit] Unit of observed and rest, default "GHz" (e.g. "MHz", "um", "keV").
+ * @param [in_unit] Unit of flux_density and its error, default "Jy" (e.g. "mJy").
+ * @param [out_unit] Default "W/Hz" (error of L_ν); a power unit ("W", "erg/s", "Lsun") gives the error of ν L_ν.
+ * @returns Error of the rest-frame L_ν (W/Hz by default).
+ */
+export function LUMINOSITY_REST_ERR(flux_density: any[][], flux_density_err: any[][], z: any[][], z_err: any[][], alpha: any[][], alpha_err: any[][], observed: any[][], rest: any[][], model?: any[][], band_unit?: string, in_unit?: string, out_unit?: string): any[][] {
+  return callFromSheet(d.LUMINOSITY_REST_ERR, [flux_density, flux_density_err, z, z_err, alpha, alpha_err, observed, rest, model, band_unit, in_unit, out_unit]);
 }

@@ -9,19 +9,34 @@ import { definitions as d } from "../definitions.js";
 import { callFromSheet } from "../evaluate.js";
 
 /**
- * Largest redshift at which a source stays at or above a flux limit (the first crossing): bolometric, or with alpha a spectral luminosity against a flux-density limit (S_ν = L_ν (1+z)^(1+α) / 4πD_L²).
+ * Largest redshift at which a source of bolometric luminosity L stays at or above a bolometric flux limit (the first crossing of L / 4πD_L² = limit).
  * @customfunction REDSHIFT_LIMIT REDSHIFT_LIMIT
  * @helpurl https://localhost:3000/help.html#function-reference
- * @param lum Luminosity, > 0: bolometric (W by default), or L_ν (W/Hz by default) when alpha is given (value or range).
- * @param flux_limit Survey limit, > 0: flux (W/m2 by default), or flux density (Jy by default) when alpha is given (value or range).
- * @param [alpha] Spectral index α of S_ν ∝ ν^α; blank = bolometric (value or range).
+ * @param lum Bolometric luminosity, > 0, in erg/s by default (value or range).
+ * @param flux_limit Survey's bolometric flux limit, > 0, in erg/s/cm2 by default (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
- * @param [lum_unit] Unit of lum, default "W", or "W/Hz" with alpha.
- * @param [flux_unit] Unit of flux_limit, default "W/m2", or "Jy" with alpha (e.g. "erg/s/cm2", "mJy").
+ * @param [lum_unit] Unit of lum, default "erg/s" (e.g. "W", "Lsun").
+ * @param [flux_unit] Unit of flux_limit, default "erg/s/cm2" (e.g. "W/m2").
  * @returns z_max.
  */
-export function REDSHIFT_LIMIT(lum: any[][], flux_limit: any[][], alpha?: any[][], model?: any[][], lum_unit?: string, flux_unit?: string): any[][] {
-  return callFromSheet(d.REDSHIFT_LIMIT, [lum, flux_limit, alpha, model, lum_unit, flux_unit]);
+export function REDSHIFT_LIMIT(lum: any[][], flux_limit: any[][], model?: any[][], lum_unit?: string, flux_unit?: string): any[][] {
+  return callFromSheet(d.REDSHIFT_LIMIT, [lum, flux_limit, model, lum_unit, flux_unit]);
+}
+
+/**
+ * Largest redshift at which a power-law source of spectral luminosity L_ν stays at or above a flux-density limit: S_ν = L_ν (1+z)^(1+α) / 4πD_L² (the first crossing).
+ * @customfunction REDSHIFT_LIMIT_NU REDSHIFT_LIMIT_NU
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param lum_nu Spectral luminosity L_ν at the observed frequency (as ZC.LUMINOSITY_NU gives it), > 0, in W/Hz by default (value or range).
+ * @param flux_density_limit Survey's flux-density limit, > 0, in Jy by default (value or range).
+ * @param alpha Spectral index: S_ν ∝ ν^alpha; synchrotron ≈ −0.7; other conventions via ZC.SPECTRAL_INDEX (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [lum_unit] Unit of lum_nu, default "W/Hz" (e.g. "erg/s/Hz").
+ * @param [flux_unit] Unit of flux_density_limit, default "Jy" (e.g. "mJy", "uJy").
+ * @returns z_max.
+ */
+export function REDSHIFT_LIMIT_NU(lum_nu: any[][], flux_density_limit: any[][], alpha: any[][], model?: any[][], lum_unit?: string, flux_unit?: string): any[][] {
+  return callFromSheet(d.REDSHIFT_LIMIT_NU, [lum_nu, flux_density_limit, alpha, model, lum_unit, flux_unit]);
 }
 
 /**
@@ -30,7 +45,7 @@ export function REDSHIFT_LIMIT(lum: any[][], flux_limit: any[][], alpha?: any[][
  * @helpurl https://localhost:3000/help.html#function-reference
  * @param abs_mag Absolute magnitude M (value or range).
  * @param mag_limit Limiting apparent magnitude (value or range).
- * @param [alpha] Spectral index α for K = −2.5(1+α)log10(1+z); blank = −1 (no K-correction) (value or range).
+ * @param [alpha] Spectral index for K = −2.5(1+alpha)log10(1+z): S_ν ∝ ν^alpha; synchrotron ≈ −0.7; other conventions via ZC.SPECTRAL_INDEX; blank = −1 (no K-correction) (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @returns z_max.
  */
@@ -39,18 +54,19 @@ export function REDSHIFT_LIMIT_MAG(abs_mag: any[][], mag_limit: any[][], alpha?:
 }
 
 /**
- * V_max of the 1/V_max estimator (Schmidt 1968): comoving volume between z_lo and min(z_max, z_hi) over the survey area, 0 when z_max ≤ z_lo; in Mpc3 unless a unit is given.
+ * V_max of the 1/V_max estimator (Schmidt 1968): comoving volume over the survey area between max(z_lo, z_min) and min(z_max, z_hi), 0 when that range is empty; in Mpc3 unless a unit is given.
  * @customfunction VOLUME_MAX VOLUME_MAX
  * @helpurl https://localhost:3000/help.html#function-reference
- * @param z_max The source's limiting redshift (e.g. from ZC.REDSHIFT_LIMIT), ≥ 0 (value or range).
+ * @param z_max The source's limiting redshift at the faint limit (e.g. from ZC.REDSHIFT_LIMIT), ≥ 0 (value or range).
  * @param z_lo Lower redshift bound of the sample, ≥ 0 (value or range).
  * @param z_hi Upper redshift bound of the sample, ≥ z_lo (value or range).
- * @param [area] Survey area, in deg2 by default; blank = whole sky (value or range).
+ * @param area Survey area, required, in deg2 by default (value or range).
+ * @param [z_min] The source's bright limit: the lowest redshift at which it would enter the sample; blank = 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [unit] Output unit, default "Mpc3" (e.g. "Gpc3", "(Mpc/h)3").
  * @param [area_unit] Unit of area, default "deg2" (e.g. "sr").
  * @returns V_max (Mpc3 by default).
  */
-export function VOLUME_MAX(z_max: any[][], z_lo: any[][], z_hi: any[][], area?: any[][], model?: any[][], unit?: string, area_unit?: string): any[][] {
-  return callFromSheet(d.VOLUME_MAX, [z_max, z_lo, z_hi, area, model, unit, area_unit]);
+export function VOLUME_MAX(z_max: any[][], z_lo: any[][], z_hi: any[][], area: any[][], z_min?: any[][], model?: any[][], unit?: string, area_unit?: string): any[][] {
+  return callFromSheet(d.VOLUME_MAX, [z_max, z_lo, z_hi, area, z_min, model, unit, area_unit]);
 }

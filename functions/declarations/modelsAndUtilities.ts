@@ -49,7 +49,7 @@ export function MODEL(
 }
 
 /**
- * A parameter or derived value of a model: H0, h, Om, OL, Ok, Or, Ob, w0, wa, Tcmb, Neff, mnu, age_today (Gyr), hubble_time (Gyr), hubble_distance (Mpc), z_eq.
+ * A parameter or derived value of a model: H0, h, Om, OL, Ok, Or, Ob, w0, wa, Tcmb, Neff, mnu, age_today (Gyr), hubble_time (Gyr), hubble_distance (Mpc), z_eq (cold matter = photons + all neutrinos counted as radiation, as OMEGA("cold")).
  * @customfunction PARAM PARAM
  * @helpurl https://localhost:3000/help.html#function-reference
  * @param name Parameter name, e.g. "age_today" (value or range).

@@ -10,30 +10,30 @@ import { definitions as d } from "../definitions.js";
 import { callFromSheet } from "../evaluate.js";
 
 /**
- * Bolometric luminosity L = 4π D_L² F, in W (flux in W/m2) unless units are given.
+ * Bolometric luminosity L = 4π D_L² F, in erg/s (flux in erg/s/cm2) unless units are given.
  * @customfunction LUMINOSITY LUMINOSITY
  * @helpurl https://localhost:3000/help.html#function-reference
- * @param flux Bolometric flux, ≥ 0, in W/m2 by default (value or range).
+ * @param flux Bolometric flux, ≥ 0, in erg/s/cm2 by default (value or range).
  * @param z Redshift, > 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
- * @param [flux_unit] Unit of flux, default "W/m2" (e.g. "erg/s/cm2").
- * @param [lum_unit] Output unit, default "W" (e.g. "erg/s", "Lsun").
- * @returns Luminosity (W by default).
+ * @param [flux_unit] Unit of flux, default "erg/s/cm2" (e.g. "W/m2").
+ * @param [lum_unit] Output unit, default "erg/s" (e.g. "W", "Lsun").
+ * @returns Luminosity (erg/s by default).
  */
 export function LUMINOSITY(flux: any[][], z: any[][], model?: any[][], flux_unit?: string, lum_unit?: string): any[][] {
   return callFromSheet(d.LUMINOSITY, [flux, z, model, flux_unit, lum_unit]);
 }
 
 /**
- * Bolometric flux F = L / (4π D_L²), in W/m2 (luminosity in W) unless units are given.
+ * Bolometric flux F = L / (4π D_L²), in erg/s/cm2 (luminosity in erg/s) unless units are given.
  * @customfunction FLUX FLUX
  * @helpurl https://localhost:3000/help.html#function-reference
- * @param lum Luminosity, ≥ 0, in W by default (value or range).
+ * @param lum Luminosity, ≥ 0, in erg/s by default (value or range).
  * @param z Redshift, > 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
- * @param [lum_unit] Unit of luminosity, default "W" (e.g. "Lsun").
- * @param [flux_unit] Output unit, default "W/m2" (e.g. "erg/s/cm2").
- * @returns Flux (W/m2 by default).
+ * @param [lum_unit] Unit of luminosity, default "erg/s" (e.g. "W", "Lsun").
+ * @param [flux_unit] Output unit, default "erg/s/cm2" (e.g. "W/m2").
+ * @returns Flux (erg/s/cm2 by default).
  */
 export function FLUX(lum: any[][], z: any[][], model?: any[][], lum_unit?: string, flux_unit?: string): any[][] {
   return callFromSheet(d.FLUX, [lum, z, model, lum_unit, flux_unit]);
@@ -45,7 +45,7 @@ export function FLUX(lum: any[][], z: any[][], model?: any[][], lum_unit?: strin
  * @helpurl https://localhost:3000/help.html#function-reference
  * @param flux_density Observed flux density, ≥ 0, in Jy by default (value or range).
  * @param z Redshift, > 0 (value or range).
- * @param alpha Spectral index of S_ν ∝ ν^alpha, e.g. -0.7 (value or range).
+ * @param alpha Spectral index: S_ν ∝ ν^alpha; synchrotron ≈ −0.7; other conventions via ZC.SPECTRAL_INDEX (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [in_unit] Unit of flux density, default "Jy" (e.g. "mJy", "uJy").
  * @param [out_unit] Output unit, default "W/Hz" (e.g. "erg/s/Hz").
@@ -60,7 +60,7 @@ export function LUMINOSITY_NU(flux_density: any[][], z: any[][], alpha: any[][],
  * @customfunction KCORRECTION KCORRECTION
  * @helpurl https://localhost:3000/help.html#function-reference
  * @param z Redshift, ≥ 0 (value or range).
- * @param alpha Spectral index of S_ν ∝ ν^alpha (value or range).
+ * @param alpha Spectral index: S_ν ∝ ν^alpha; synchrotron ≈ −0.7; other conventions via ZC.SPECTRAL_INDEX (value or range).
  * @returns K-correction (mag).
  */
 export function KCORRECTION(z: any[][], alpha: any[][]): any[][] {
@@ -125,7 +125,7 @@ export function FLUX_AB(m_ab: any[][], unit?: string): any[][] {
  * @helpurl https://localhost:3000/help.html#function-reference
  * @param flux_density Flux density observed at `observed`, ≥ 0, in Jy by default (value or range).
  * @param z Redshift, > 0 (value or range).
- * @param alpha Spectral index α of S_ν ∝ ν^α (value or range).
+ * @param alpha Spectral index: S_ν ∝ ν^alpha; synchrotron ≈ −0.7; other conventions via ZC.SPECTRAL_INDEX (value or range).
  * @param observed Observed frequency, wavelength or energy, > 0, in band_unit (value or range).
  * @param rest Rest-frame frequency, wavelength or energy wanted, > 0, in band_unit (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
@@ -142,8 +142,8 @@ export function LUMINOSITY_REST(flux_density: any[][], z: any[][], alpha: any[][
  * Absolute bolometric magnitude of a luminosity, −2.5 log10(L / 3.0128e28 W) (IAU 2015 Resolution B2).
  * @customfunction MAG_BOL MAG_BOL
  * @helpurl https://localhost:3000/help.html#function-reference
- * @param lum Bolometric luminosity, > 0, in W by default (value or range).
- * @param [unit] Unit of lum, default "W" (e.g. "Lsun", "erg/s").
+ * @param lum Bolometric luminosity, > 0, in erg/s by default (value or range).
+ * @param [unit] Unit of lum, default "erg/s" (e.g. "W", "Lsun").
  * @returns M_bol (mag).
  */
 export function MAG_BOL(lum: any[][], unit?: string): any[][] {
@@ -155,8 +155,8 @@ export function MAG_BOL(lum: any[][], unit?: string): any[][] {
  * @customfunction LUM_BOL LUM_BOL
  * @helpurl https://localhost:3000/help.html#function-reference
  * @param mag_bol Absolute bolometric magnitude (value or range).
- * @param [unit] Output unit, default "W" (e.g. "Lsun").
- * @returns Luminosity (W by default).
+ * @param [unit] Output unit, default "erg/s" (e.g. "W", "Lsun").
+ * @returns Luminosity (erg/s by default).
  */
 export function LUM_BOL(mag_bol: any[][], unit?: string): any[][] {
   return callFromSheet(d.LUM_BOL, [mag_bol, unit]);
@@ -167,9 +167,21 @@ export function LUM_BOL(mag_bol: any[][], unit?: string): any[][] {
  * @customfunction DIMMING DIMMING
  * @helpurl https://localhost:3000/help.html#function-reference
  * @param z Redshift, ≥ 0 (value or range).
- * @param [alpha] Spectral index α; blank = bolometric (value or range).
+ * @param [alpha] Spectral index: S_ν ∝ ν^alpha; synchrotron ≈ −0.7; other conventions via ZC.SPECTRAL_INDEX; blank = bolometric (value or range).
  * @returns Dimming (mag).
  */
 export function DIMMING(z: any[][], alpha?: any[][]): any[][] {
   return callFromSheet(d.DIMMING, [z, alpha]);
+}
+
+/**
+ * A spectral index in another field's convention as zcell's alpha (S_ν ∝ ν^alpha): "photon" (X-ray photon index Γ of N(E) ∝ E^−Γ: alpha = 1 − Γ), "lambda" (f_λ ∝ λ^β: alpha = −2 − β) or "radio" (S_ν ∝ ν^−value: alpha = −value).
+ * @customfunction SPECTRAL_INDEX SPECTRAL_INDEX
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param value The index as its convention writes it, e.g. Γ = 1.9 (value or range).
+ * @param convention "photon", "lambda" or "radio" (value or range).
+ * @returns alpha of S_ν ∝ ν^alpha, for every alpha argument of ZC, as in ZC.KCORRECTION(z, ZC.SPECTRAL_INDEX(1.9, "photon")).
+ */
+export function SPECTRAL_INDEX(value: any[][], convention: any[][]): any[][] {
+  return callFromSheet(d.SPECTRAL_INDEX, [value, convention]);
 }

@@ -26,11 +26,15 @@ export const z = num("z");
 export const zToday = num("z", { default: 0 });
 /** A 1σ error: ≥ 0. */
 export const err = (name: string, extra: NumberOptions = {}) => num(name, { min: 0, ...extra });
+/** A 1σ error of a magnitude: ≥ 0, and ±99 or any |value| ≥ 50 is a catalogue's missing-value flag (#N/A) as for the magnitude. */
+export const magErr = (name: string, extra: NumberOptions = {}) => num(name, { min: 0, magnitude: true, ...extra });
 /** An optional spectral index whose absence means the bolometric case (NaN stands for "not given"). */
 export const optionalAlpha = num("alpha", { default: Number.NaN, blankMeansDefault: true });
 export const isGiven = (x: number) => !Number.isNaN(x);
 /** A sky area argument: all sky when omitted or blank. */
 export const area = num("area", { default: 4 * Math.PI, blankMeansDefault: true, min: 0, max: { value: 4 * Math.PI, what: "the whole sky" } });
+/** A survey's sky area, required (a blank would silently mean the whole sky). */
+export const requiredArea = num("area", { min: 0, max: { value: 4 * Math.PI, what: "the whole sky" } });
 export const angle = num("angle", { min: 0, max: { value: Math.PI, what: "180°" } });
 export const optionalText = (name: string): ArgSpec => ({ kind: "text", name, scalar: true, optional: true });
 
@@ -46,5 +50,20 @@ export function textUnitFactor(a: Args, name: string, shown: string, reference: 
     return conversionFactor(text, reference, m(a).h);
   } catch (e) {
     throw new TypeError(messages.unitArgument(name, (e as Error).message));
+  }
+}
+
+/** L_ν [W/Hz] at ν [Hz] in the out_unit asked: W/Hz and its kin give L_ν, a power unit (W, erg/s, Lsun) ν L_ν (= λ L_λ). */
+export function inSpectralOrPowerUnit(a: Args, lnuWHz: number, nuHz: number): number {
+  const out = (a.out_unit as string) || "W/Hz";
+  const h = m(a).h;
+  try {
+    return lnuWHz * conversionFactor("W/Hz", out, h);
+  } catch (e) {
+    try {
+      return lnuWHz * nuHz * conversionFactor("W", out, h);
+    } catch {
+      throw new TypeError(messages.unitArgument("out_unit", `${(e as Error).message}; use W/Hz for L_ν or a power (W, erg/s, Lsun) for ν L_ν`));
+    }
   }
 }

@@ -44,7 +44,7 @@ const inverses: Record<string, { quantity: InvertibleQuantity; unit?: string; sh
   MODULUS: { quantity: "distanceModulus" },
   LOOKBACK: { quantity: "lookbackTime", unit: "Gyr", shown: "Gyr" },
   AGE: { quantity: "age", unit: "Gyr", shown: "Gyr" },
-  VOLUME: { quantity: "comovingVolume", unit: "Mpc3", shown: "Gpc3" },
+  VOLUME: { quantity: "comovingVolume", unit: "Mpc3", shown: "Mpc3" },
 };
 
 /** ZC.REDSHIFT: the redshift at which a quantity takes a value given in the user's unit. */
@@ -60,7 +60,7 @@ function invert(model: Cosmology, name: string, value: number, given: string): n
   });
 }
 
-const components: readonly DensityComponent[] = ["matter", "darkenergy", "curvature", "radiation", "photons", "neutrinos"];
+const components: readonly DensityComponent[] = ["matter", "cold", "darkenergy", "curvature", "radiation", "photons", "neutrinos"];
 
 /** Distances, times, volumes and the state of the universe at a redshift, and the inverse (ZC.REDSHIFT). functions, in the order of their declarations. */
 export const distancesAndTimes: FunctionDef[] = [
@@ -99,10 +99,10 @@ export const distancesAndTimes: FunctionDef[] = [
     args: [amount("size"), z, model, unit("size_unit", "Mpc", "kpc", "size"), unit("angle_unit", "rad", "arcsec")],
     compute: (a) => m(a).angleRad(n(a, "size"), n(a, "z")),
   },
-  ofRedshift("VOLUME", "Mpc3", (x, zz) => x.comovingVolumeMpc3(zz), z, "Gpc3"),
+  ofRedshift("VOLUME", "Mpc3", (x, zz) => x.comovingVolumeMpc3(zz)),
   {
     name: "VOLUME_SHELL",
-    args: [num("z1"), num("z2"), area, model, unit("unit", "Mpc3", "Gpc3"), unit("area_unit", "sr", "deg2", "area")],
+    args: [num("z1"), num("z2"), area, model, unit("unit", "Mpc3"), unit("area_unit", "sr", "deg2", "area")],
     compute: (a) => m(a).comovingVolumeShellMpc3(n(a, "z1"), n(a, "z2"), n(a, "area")),
   },
   ofRedshift("VOLUME_ELEMENT", "Mpc3/sr", (x, zz) => x.comovingVolumeElementMpc3Sr(zz)),

@@ -5,15 +5,16 @@
  */
 import {
   absoluteMagnitudeErrorMag,
+  frequencyHz,
   janskySI,
   luminosityDistanceErrorMpc,
   luminosityErrorW,
   properSizeErrorMpc,
+  restFrameSpectralLuminosityErrorWHz,
   spectralLuminosityErrorWHz,
 } from "../../core/index.js";
 import type { FunctionDef } from "../FunctionDef.js";
-import { num, amount, model, unit, z, err, angle, m, n } from "./argumentKinds.js";
-
+import { num, amount, model, unit, z, err, magErr, angle, optionalAlpha, optionalText, m, n, inSpectralOrPowerUnit } from "./argumentKinds.js";
 
 /** Uncertainties functions, in the order of their declarations. */
 export const errors: FunctionDef[] = [
@@ -24,7 +25,7 @@ export const errors: FunctionDef[] = [
   },
   {
     name: "LUMINOSITY_ERR",
-    args: [amount("flux"), err("flux_err"), z, err("z_err"), model, unit("flux_unit", "W/m2", "W/m2", ["flux", "flux_err"]), unit("lum_unit", "W")],
+    args: [amount("flux"), err("flux_err"), z, err("z_err"), model, unit("flux_unit", "W/m2", "erg/s/cm2", ["flux", "flux_err"]), unit("lum_unit", "W", "erg/s")],
     compute: (a) => luminosityErrorW(m(a), n(a, "flux"), n(a, "flux_err"), n(a, "z"), n(a, "z_err")),
   },
   {
@@ -40,12 +41,28 @@ export const errors: FunctionDef[] = [
   },
   {
     name: "MAG_ABS_ERR",
-    args: [err("m_err"), z, err("z_err"), err("kcorr_err", { default: 0, blankMeansDefault: true }), model],
-    compute: (a) => absoluteMagnitudeErrorMag(m(a), n(a, "m_err"), n(a, "z"), n(a, "z_err"), n(a, "kcorr_err")),
+    args: [magErr("m_err"), z, err("z_err"), magErr("kcorr_err", { default: 0, blankMeansDefault: true }), model, optionalAlpha],
+    compute: (a) => absoluteMagnitudeErrorMag(m(a), n(a, "m_err"), n(a, "z"), n(a, "z_err"), n(a, "kcorr_err"), n(a, "alpha")),
   },
   {
     name: "SIZE_ERR",
     args: [angle, err("angle_err"), z, err("z_err"), model, unit("angle_unit", "rad", "arcsec", ["angle", "angle_err"]), unit("size_unit", "Mpc", "kpc")],
     compute: (a) => properSizeErrorMpc(m(a), n(a, "angle"), n(a, "angle_err"), n(a, "z"), n(a, "z_err")),
+  },
+  {
+    name: "LUMINOSITY_REST_ERR",
+    args: [
+      amount("flux_density"), err("flux_density_err"), z, err("z_err"), num("alpha"), err("alpha_err"), num("observed"), num("rest"), model,
+      optionalText("band_unit"), unit("in_unit", "Jy", "Jy", ["flux_density", "flux_density_err"]), optionalText("out_unit"),
+    ],
+    compute: (a) => {
+      const band = (a.band_unit as string) || "GHz";
+      const restHz = frequencyHz(n(a, "rest"), band, "rest");
+      const sigma = restFrameSpectralLuminosityErrorWHz(
+        m(a), n(a, "flux_density") * janskySI, n(a, "flux_density_err") * janskySI, n(a, "z"), n(a, "z_err"), n(a, "alpha"), n(a, "alpha_err"),
+        frequencyHz(n(a, "observed"), band, "observed"), restHz,
+      );
+      return inSpectralOrPowerUnit(a, sigma, restHz);
+    },
   },
 ];

@@ -9,7 +9,7 @@ import {
   maxVolumeMpc3,
 } from "../../core/index.js";
 import type { FunctionDef } from "../FunctionDef.js";
-import { num, mag, model, unit, optionalAlpha, isGiven, area, optionalText, m, n, textUnitFactor } from "./argumentKinds.js";
+import { num, mag, model, unit, requiredArea, m, n } from "./argumentKinds.js";
 
 
 /** Flux limits and survey volumes functions, in the order of their declarations. */
@@ -17,17 +17,18 @@ export const limitsAndPopulations: FunctionDef[] = [
   {
     name: "REDSHIFT_LIMIT",
     args: [
-      num("lum", { min: 0, minExclusive: true }), num("flux_limit", { min: 0, minExclusive: true }), optionalAlpha, model,
-      optionalText("lum_unit"), optionalText("flux_unit"),
+      num("lum", { min: 0, minExclusive: true }), num("flux_limit", { min: 0, minExclusive: true }), model,
+      unit("lum_unit", "W", "erg/s", "lum"), unit("flux_unit", "W/m2", "erg/s/cm2", "flux_limit"),
     ],
-    compute: (a) => {
-      // with alpha, a spectral luminosity against a flux-density limit; without, bolometric
-      const alpha = n(a, "alpha");
-      const spectral = isGiven(alpha);
-      const lum = n(a, "lum") * textUnitFactor(a, "lum_unit", spectral ? "W/Hz" : "W", spectral ? "W/Hz" : "W");
-      const limit = n(a, "flux_limit") * textUnitFactor(a, "flux_unit", spectral ? "Jy" : "W/m2", spectral ? "W/m2/Hz" : "W/m2");
-      return limitingRedshift(m(a), lum, limit, spectral ? alpha : -1);
-    },
+    compute: (a) => limitingRedshift(m(a), n(a, "lum"), n(a, "flux_limit")),
+  },
+  {
+    name: "REDSHIFT_LIMIT_NU",
+    args: [
+      num("lum_nu", { min: 0, minExclusive: true }), num("flux_density_limit", { min: 0, minExclusive: true }), num("alpha"), model,
+      unit("lum_unit", "W/Hz", "W/Hz", "lum_nu"), unit("flux_unit", "W/m2/Hz", "Jy", "flux_density_limit"),
+    ],
+    compute: (a) => limitingRedshift(m(a), n(a, "lum_nu"), n(a, "flux_density_limit"), n(a, "alpha")),
   },
   {
     name: "REDSHIFT_LIMIT_MAG",
@@ -36,7 +37,10 @@ export const limitsAndPopulations: FunctionDef[] = [
   },
   {
     name: "VOLUME_MAX",
-    args: [num("z_max"), num("z_lo"), num("z_hi"), area, model, unit("unit", "Mpc3"), unit("area_unit", "sr", "deg2", "area")],
-    compute: (a) => maxVolumeMpc3(m(a), n(a, "z_max"), n(a, "z_lo"), n(a, "z_hi"), n(a, "area")),
+    args: [
+      num("z_max"), num("z_lo"), num("z_hi"), requiredArea, num("z_min", { default: 0, blankMeansDefault: true }), model,
+      unit("unit", "Mpc3"), unit("area_unit", "sr", "deg2", "area"),
+    ],
+    compute: (a) => maxVolumeMpc3(m(a), n(a, "z_max"), n(a, "z_lo"), n(a, "z_hi"), n(a, "area"), n(a, "z_min")),
   },
 ];

@@ -10,7 +10,6 @@ import {
   apparentMagnitude,
   bolometricAbsoluteMagnitude,
   bolometricLuminosityW,
-  conversionFactor,
   fluxWm2,
   frequencyHz,
   janskySI,
@@ -18,38 +17,26 @@ import {
   luminosityW,
   restFrameSpectralLuminosityWHz,
   spectralLuminosityWHz,
+  spectralIndexAlpha,
+  spectralIndexConventions,
   spectralSurfaceBrightnessDimmingMag,
+  type SpectralIndexConvention,
   surfaceBrightnessDimmingMag,
 } from "../../core/index.js";
-import { messages } from "../messages.js";
-import type { Args, FunctionDef } from "../FunctionDef.js";
-import { num, amount, mag, model, unit, z, optionalAlpha, isGiven, optionalText, m, n } from "./argumentKinds.js";
+import type { FunctionDef } from "../FunctionDef.js";
+import { num, amount, mag, model, unit, z, optionalAlpha, isGiven, optionalText, m, n, inSpectralOrPowerUnit } from "./argumentKinds.js";
 
-/** L_ν [W/Hz] at ν [Hz] in the out_unit asked: W/Hz and its kin give L_ν, a power unit (W, erg/s, Lsun) ν L_ν (= λ L_λ). */
-function inSpectralOrPowerUnit(a: Args, lnuWHz: number, nuHz: number): number {
-  const out = (a.out_unit as string) || "W/Hz";
-  const h = m(a).h;
-  try {
-    return lnuWHz * conversionFactor("W/Hz", out, h);
-  } catch (e) {
-    try {
-      return lnuWHz * nuHz * conversionFactor("W", out, h);
-    } catch {
-      throw new TypeError(messages.unitArgument("out_unit", `${(e as Error).message}; use W/Hz for L_ν or a power (W, erg/s, Lsun) for ν L_ν`));
-    }
-  }
-}
 
 /** Photometry functions, in the order of their declarations. */
 export const photometry: FunctionDef[] = [
   {
     name: "LUMINOSITY",
-    args: [amount("flux"), z, model, unit("flux_unit", "W/m2", "W/m2", "flux"), unit("lum_unit", "W")],
+    args: [amount("flux"), z, model, unit("flux_unit", "W/m2", "erg/s/cm2", "flux"), unit("lum_unit", "W", "erg/s")],
     compute: (a) => luminosityW(m(a), n(a, "flux"), n(a, "z")),
   },
   {
     name: "FLUX",
-    args: [amount("lum"), z, model, unit("lum_unit", "W", "W", "lum"), unit("flux_unit", "W/m2")],
+    args: [amount("lum"), z, model, unit("lum_unit", "W", "erg/s", "lum"), unit("flux_unit", "W/m2", "erg/s/cm2")],
     compute: (a) => fluxWm2(m(a), n(a, "lum"), n(a, "z")),
   },
   {
@@ -99,17 +86,22 @@ export const photometry: FunctionDef[] = [
   },
   {
     name: "MAG_BOL",
-    args: [num("lum", { min: 0, minExclusive: true }), unit("unit", "W", "W", "lum")],
+    args: [num("lum", { min: 0, minExclusive: true }), unit("unit", "W", "erg/s", "lum")],
     compute: (a) => bolometricAbsoluteMagnitude(n(a, "lum")),
   },
   {
     name: "LUM_BOL",
-    args: [mag("mag_bol"), unit("unit", "W")],
+    args: [mag("mag_bol"), unit("unit", "W", "erg/s")],
     compute: (a) => bolometricLuminosityW(n(a, "mag_bol")),
   },
   {
     name: "DIMMING",
     args: [z, optionalAlpha],
     compute: (a) => (isGiven(n(a, "alpha")) ? spectralSurfaceBrightnessDimmingMag(n(a, "z"), n(a, "alpha")) : surfaceBrightnessDimmingMag(n(a, "z"))),
+  },
+  {
+    name: "SPECTRAL_INDEX",
+    args: [num("value"), { kind: "text", name: "convention", choices: spectralIndexConventions }],
+    compute: (a) => spectralIndexAlpha(n(a, "value"), a.convention as SpectralIndexConvention),
   },
 ];
