@@ -273,7 +273,12 @@ function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): Fixed
   const args: Args = {};
   for (const i of plan.units) {
     const spec = def.args[i] as Extract<ArgSpec, { kind: "unit" }>;
-    const conversion = unitConversion(spec, raw[i]);
+    let conversion: Conversion;
+    try {
+      conversion = unitConversion(spec, raw[i]);
+    } catch (e) {
+      throw unitInModelSlot(def, raw) ?? e;
+    }
     if (conversion.hPower !== 0) h ??= { args: [], result: 0 };
     if (spec.applies === "result") {
       resultFactor *= conversion.factor;
@@ -302,6 +307,22 @@ function singleModel(text: string, active: ActiveModelSetting): Cosmology | Cell
   } catch (e) {
     return modelProblem(e, text, "model");
   }
+}
+
+/**
+ * When a call's units do not read because they sit one place early, in the model's slot (the model
+ * left out, not left blank: ZC.LUMINOSITY(F2, B2, "erg/s/cm2", "Lsun")), the error that says so.
+ */
+function unitInModelSlot(def: FunctionDef, raw: readonly unknown[]): CellError | undefined {
+  const at = def.args.findIndex((a) => a.kind === "model");
+  const given = at < 0 ? undefined : singleCell(raw[at]);
+  if (typeof given !== "string" || given.trim() === "" || isModelText(given.trim())) return undefined;
+  try {
+    parseUnit(given.trim());
+  } catch {
+    return undefined;
+  }
+  return new CellError("value", messages.unitInModelSlot(given.trim()));
 }
 
 /** Text that reads as a model: a preset or a spec (workbook model names are not consulted). */

@@ -21,7 +21,7 @@ import {
 import type { ModelParameters } from "../core/model/ModelParameters.js";
 import { definitions } from "../functions/definitions.js";
 import { evaluate, type Cell } from "../functions/evaluate.js";
-import { expectRelative, seededRandom } from "./helpers.js";
+import { expectRelative, fivePoint, normal, seededRandom, standardDeviation } from "./helpers.js";
 
 const lcdm = { w0: -1, wa: 0, Tcmb: 2.7255, Neff: 3.046, mnu: [0.06] };
 const geometries: Record<string, ModelParameters> = {
@@ -31,21 +31,6 @@ const geometries: Record<string, ModelParameters> = {
 };
 const active = { spec: "P18-BAO", stored: false };
 const one = (name: string, ...args: unknown[]): Cell => evaluate(definitions[name], args, active)[0][0];
-
-/** Five-point central difference f'(x) ≈ (−f(x+2h) + 8f(x+h) − 8f(x−h) + f(x−2h)) / 12h (Abramowitz & Stegun 25.3.6). */
-function fivePoint(f: (x: number) => number, x: number, h: number): number {
-  return (-f(x + 2 * h) + 8 * f(x + h) - 8 * f(x - h) + f(x - 2 * h)) / (12 * h);
-}
-
-/** A standard normal draw from two uniforms (Box–Muller; Box & Muller 1958). */
-function normal(random: () => number): () => number {
-  return () => Math.sqrt(-2 * Math.log(1 - random())) * Math.cos(2 * Math.PI * random());
-}
-
-function standardDeviation(values: number[]): number {
-  const mean = values.reduce((s, v) => s + v, 0) / values.length;
-  return Math.sqrt(values.reduce((s, v) => s + (v - mean) ** 2, 0) / (values.length - 1));
-}
 
 describe("exact redshift derivatives of the distances", () => {
   const redshifts = [0.05, 0.5, 1, 2, 5];

@@ -38,7 +38,7 @@ function requireFinite(key: string, value: unknown, unit: string, test: (v: numb
 const largestDensityParameter = 5;
 
 function requireFraction(key: string, value: number | undefined): void {
-  if (value === undefined || !(Math.abs(value) > largestDensityParameter)) return;
+  if (value === undefined || !Number.isFinite(value) || !(Math.abs(value) > largestDensityParameter)) return;
   throw new RangeError(`${key} = ${value}: a density parameter is a fraction (${value} → ${Number((value / 100).toPrecision(6)).toFixed(2)}), |${key}| ≤ ${largestDensityParameter}`);
 }
 
@@ -49,11 +49,11 @@ function checkParameters(p: ModelParameters): void {
     throw new RangeError(`H0 = ${p.H0} km/s/Mpc is outside 10 … 1000 km/s/Mpc${hint}`);
   }
   requireFinite("Om", p.Om, "", (v) => v >= 0, "≥ 0");
+  for (const key of ["Om", "OL", "Ok", "Ob"] as const) requireFraction(key, p[key]);
   if (p.OL !== undefined && p.Ok !== undefined) throw new RangeError("give OL or Ok, not both");
   if (p.OL !== undefined) requireFinite("OL", p.OL, "", () => true, "a finite number");
   if (p.Ok !== undefined) requireFinite("Ok", p.Ok, "", () => true, "a finite number");
   if (p.Ob !== undefined) requireFinite("Ob", p.Ob, ` (Om = ${p.Om})`, (v) => v >= 0 && v <= p.Om, "between 0 and Om");
-  for (const key of ["Om", "OL", "Ok", "Ob"] as const) requireFraction(key, p[key]);
   requireFinite("w0", p.w0, "", () => true, "a finite number");
   requireFinite("wa", p.wa, "", () => true, "a finite number");
   requireFinite("Tcmb", p.Tcmb, " K", (v) => v >= 0, "≥ 0");

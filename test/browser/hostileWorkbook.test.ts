@@ -114,7 +114,7 @@ describe.runIf(browserAvailable())("a crafted shared workbook against the pane",
     test(`settings holding ${what}: the pane starts, says what is wrong, and a valid model can be applied`, async () => {
       const page = await openPane(host, { settings, sheets: { Sheet1: { A1: { formula: "=ZC.AGE()", value: 13.8 } } }, selection: "Sheet1!A1" });
       await expect.poll(() => page.locator("#settings-warning").textContent()).toMatch(warning);
-      expect(await page.locator("#model-badge").textContent()).toBe("Workbook model: P18-BAO");
+      expect(await page.locator("#model-badge").textContent()).toBe("Workbook model: P18-CMB");
       expect(await page.locator("#preset option").count()).toBeGreaterThan(3);
       await page.selectOption("#preset", "W9-ALL");
       await page.locator("#apply").click();

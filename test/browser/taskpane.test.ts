@@ -139,13 +139,13 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await page.getByRole("tab", { name: "This cell" }).click();
       await expect.poll(() => page.locator("#cell-explanation").textContent()).toMatch(/D_L = \(1\+z\)·D_M/);
       const text = await page.locator("#cell-explanation").textContent();
-      expect(text).toMatch(/P18-BAO \(the workbook's model\)/);
+      expect(text).toMatch(/P18-CMB \(the workbook's model\)/);
       expect(text).toMatch(/Om is all matter today, massive neutrinos included/);
       expect(text).toMatch(/relative error ≤ 1e-10/);
       expect(text).toMatch(/A2 → 0.5/);
-      // the result shown is D_L(0.5) under P18-BAO (Planck 2018 VI Table 2), from the independent slow path
+      // the result shown is D_L(0.5) under P18-CMB (Planck 2018 VI Table 2), from the independent slow path
       const shown = Number(/Result([\d.]+) Mpc/.exec(text!)![1]);
-      expectRelative(shown, slow(publishedModels["P18-BAO"]).luminosityDistanceMpc(0.5), 1e-9, "inspector result");
+      expectRelative(shown, slow(publishedModels["P18-CMB"]).luminosityDistanceMpc(0.5), 1e-9, "inspector result");
       await page.screenshot({ path: `${shots}cell-${themeName}.png`, fullPage: true });
       await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!B3"));
       await expect.poll(() => page.locator("#cell-explanation").textContent()).toMatch(/Why the error#NUM! — ZC.DIST_LUM: model: no big bang/);
@@ -167,13 +167,13 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await expect.poll(() => page.locator("#table-status").textContent()).toMatch(/Inserted a 5-row table/);
       const cells = (await fake(page, "sheets.Sheet1")) as Record<string, { formula?: string; value?: unknown }>;
       expect(cells.D10.value).toBe("z");
-      expect([cells.E10.value, cells.F10.value, cells.G10.value]).toEqual(["P18-BAO", "W9-ALL", "P18-BAO; H0=73"]);
+      expect([cells.E10.value, cells.F10.value, cells.G10.value]).toEqual(["P18-CMB", "W9-ALL", "P18-CMB; H0=73"]);
       expect([cells.D11.value, cells.D12.value, cells.D13.value, cells.D14.value, cells.D15]).toEqual([0.1, 0.35, 0.6, 0.85, undefined]);
       expect(cells.E11.formula).toBe("=ZC.DIST_LUM($D$11:$D$14,$E$10:$G$10)");
       // the table's numbers, computed by the built functions: D_L for each redshift and model
       await page.evaluate("window.__fake.settled()");
       const table = (await fake(page, "sheets.Sheet1")) as Record<string, { value?: unknown }>;
-      const models = [publishedModels["P18-BAO"], publishedModels["W9-ALL"], { ...publishedModels["P18-BAO"], H0: 73 }].map(slow);
+      const models = [publishedModels["P18-CMB"], publishedModels["W9-ALL"], { ...publishedModels["P18-CMB"], H0: 73 }].map(slow);
       ["E", "F", "G"].forEach((col, k) =>
         [0.1, 0.35, 0.6, 0.85].forEach((z, i) => expectRelative(table[`${col}${11 + i}`].value as number, models[k].luminosityDistanceMpc(z), 1e-9, `${col}${11 + i}`)),
       );
@@ -204,14 +204,14 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       expect(charts.length).toBe(1);
       const [chart] = charts;
       expect(chart.type).toBe("XYScatterLinesNoMarkers");
-      expect(chart.title).toBe("luminosity distance (Mpc) against redshift — P18-BAO, W9-ALL, P18-BAO; H0=73");
+      expect(chart.title).toBe("luminosity distance (Mpc) against redshift — P18-CMB, W9-ALL, P18-CMB; H0=73");
       expect([chart.xTitle, chart.yTitle]).toEqual(["redshift z", "luminosity distance (Mpc)"]);
       expect(chart.position).toBe("I10"); // two columns right of the table D10:G14
       // the host's own guess at series is replaced: exactly ours, each reading the table's cells
       expect(chart.series).toEqual([
-        { name: "P18-BAO", xValues: "Sheet1!D11:D14", values: "Sheet1!E11:E14" },
+        { name: "P18-CMB", xValues: "Sheet1!D11:D14", values: "Sheet1!E11:E14" },
         { name: "W9-ALL", xValues: "Sheet1!D11:D14", values: "Sheet1!F11:F14" },
-        { name: "P18-BAO; H0=73", xValues: "Sheet1!D11:D14", values: "Sheet1!G11:G14" },
+        { name: "P18-CMB; H0=73", xValues: "Sheet1!D11:D14", values: "Sheet1!G11:G14" },
       ]);
       await page.close();
     });
@@ -330,10 +330,10 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
     await page.close();
   });
 
-  test("corrupt settings fall back to P18-BAO with a visible warning and nothing overwritten", async () => {
+  test("corrupt settings fall back to the default model (P18-CMB) with a visible warning and nothing overwritten", async () => {
     const page = await openPane(light, { "zcell.activeModel": "H0=abc" });
     await expect.poll(() => page.locator("#settings-warning").textContent()).toMatch(/could not be read.*Nothing has been overwritten/);
-    expect(await page.locator("#model-badge").textContent()).toBe("Workbook model: P18-BAO");
+    expect(await page.locator("#model-badge").textContent()).toBe("Workbook model: P18-CMB");
     expect(await fake(page, "saved")).toBe(null);
     await page.close();
   });
@@ -342,7 +342,7 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
     const page = await openPane(light, {}, false);
     await expect.poll(() => page.locator("#outside-office").isVisible()).toBe(true);
     expect(await page.locator("#outside-office h2").textContent()).toBe("zcell runs inside Excel");
-    expect(await page.locator("#reference dt").count()).toBe(47);
+    expect(await page.locator("#reference dt").count()).toBe(50);
     await page.screenshot({ path: `${shots}outside-office.png`, fullPage: true });
     await page.close();
   });

@@ -1,0 +1,106 @@
+/**
+ * Defaults are an interface saved workbooks depend on: every function's default units and optional
+ * values, and the default model, are pinned here. A change must come through an issue and be
+ * recorded in CHANGELOG.md; then update this table on purpose. (The values are zcell's own choices,
+ * listed in README "Default units"; 0.2.0 set them, CHANGELOG.md says why.)
+ */
+import { describe, expect, test } from "vitest";
+import { defaultModelSpec, readActiveModel } from "../functions/activeModel.js";
+import { definitions } from "../functions/definitions.js";
+import { evaluate } from "../functions/evaluate.js";
+import type { FunctionDef } from "../functions/FunctionDef.js";
+
+/** What the declarations say each argument means when left out (units, optional numbers, optional texts). */
+function declaredDefaults(d: FunctionDef): string {
+  const parts: string[] = [];
+  for (const a of d.args) {
+    if (a.kind === "unit") parts.push(`${a.name}=${a.default}`);
+    else if (a.kind === "number" && a.default !== undefined) {
+      parts.push(`${a.name}=${Number.isNaN(a.default) ? "not given" : a.default === 4 * Math.PI ? "whole sky" : a.default}`);
+    } else if (a.kind === "text" && a.optional) parts.push(`${a.name}=blank`);
+  }
+  return parts.join("; ");
+}
+
+const pinned: [string, string][] = [
+  // function              | defaults when left out (0.2.0)
+    ["DIST_LUM"            , "unit=Mpc"],
+    ["DIST_ANG"            , "unit=Mpc"],
+    ["DIST_LOS"            , "unit=Mpc"],
+    ["DIST_TRANS"          , "unit=Mpc"],
+    ["DIST_BETWEEN"        , "unit=Mpc"],
+    ["DIST_LIGHT"          , "unit=Mpc"],
+    ["MODULUS"             , ""],
+    ["LOOKBACK"            , "unit=Gyr"],
+    ["AGE"                 , "z=0; unit=Gyr"],
+    ["HUBBLE"              , "z=0; unit=km/s/Mpc"],
+    ["OMEGA"               , "z=0"],
+    ["CMB_TEMP"            , "z=0"],
+    ["CRIT_DENSITY"        , "z=0; unit=kg/m3"],
+    ["PROPER_SCALE"        , "unit=kpc/arcsec"],
+    ["SIZE"                , "angle_unit=arcsec; size_unit=kpc"],
+    ["ANGLE"               , "size_unit=kpc; angle_unit=arcsec"],
+    ["VOLUME"              , "unit=Mpc3"],
+    ["VOLUME_SHELL"        , "area=whole sky; unit=Mpc3; area_unit=deg2"],
+    ["VOLUME_ELEMENT"      , "unit=Mpc3/sr"],
+    ["REDSHIFT"            , "unit=blank"],
+    ["REDSHIFT_CMB"        , "angle_unit=deg"],
+    ["LUMINOSITY"          , "flux_unit=erg/s/cm2; lum_unit=erg/s"],
+    ["FLUX"                , "lum_unit=erg/s; flux_unit=erg/s/cm2"],
+    ["LUMINOSITY_NU"       , "in_unit=Jy; out_unit=W/Hz"],
+    ["KCORRECTION"         , ""],
+    ["MAG_ABS"             , "kcorr=0"],
+    ["MAG_APP"             , "kcorr=0"],
+    ["MAG_AB"              , "unit=Jy"],
+    ["FLUX_AB"             , "unit=Jy"],
+    ["LUMINOSITY_REST"     , "band_unit=blank; in_unit=Jy; out_unit=blank"],
+    ["MAG_BOL"             , "unit=erg/s"],
+    ["LUM_BOL"             , "unit=erg/s"],
+    ["DIMMING"             , "alpha=not given"],
+    ["SPECTRAL_INDEX"      , ""],
+    ["DIST_LUM_ERR"        , "unit=Mpc"],
+    ["LUMINOSITY_ERR"      , "flux_unit=erg/s/cm2; lum_unit=erg/s"],
+    ["LUMINOSITY_NU_ERR"   , "alpha_err=0; in_unit=Jy; out_unit=W/Hz"],
+    ["MAG_ABS_ERR"         , "kcorr_err=0; alpha=not given"],
+    ["SIZE_ERR"            , "angle_unit=arcsec; size_unit=kpc"],
+    ["LUMINOSITY_REST_ERR" , "band_unit=blank; in_unit=Jy; out_unit=blank"],
+    ["REDSHIFT_LIMIT"      , "lum_unit=erg/s; flux_unit=erg/s/cm2"],
+    ["REDSHIFT_LIMIT_NU"   , "lum_unit=W/Hz; flux_unit=Jy"],
+    ["REDSHIFT_LIMIT_MAG"  , "alpha=-1"],
+    ["VOLUME_MAX"          , "z_min=0; unit=Mpc3; area_unit=deg2"],
+    ["CONVERT"             , ""],
+    ["MODEL"               , "key1=blank; key2=blank; key3=blank; key4=blank; key5=blank; key6=blank"],
+    ["PARAM"               , ""],
+    ["PRESETS"             , ""],
+    ["DESCRIBE"            , ""],
+    ["VERSION"             , ""],
+];
+
+describe("defaults that saved workbooks depend on", () => {
+  test("the default model of a workbook that never chose one is P18-CMB", () => {
+    expect(defaultModelSpec).toBe("P18-CMB");
+    expect(readActiveModel()).toMatchObject({ spec: "P18-CMB", stored: false });
+  });
+
+  test("every function is pinned, and no pinned function is gone", () => {
+    expect(Object.keys(definitions).sort()).toEqual(pinned.map(([name]) => name).sort());
+  });
+
+  test.each(pinned)("%s: %s", (name, defaults) => {
+    expect(declaredDefaults(definitions[name])).toBe(defaults);
+  });
+
+  test.each([
+    // function, arguments with the text unit left blank | the same with the unit written out (its default)
+    ["LUMINOSITY_REST", [0.01, 1, -0.7, 3, 1.4, "EDS", "", "", ""], [0.01, 1, -0.7, 3, 1.4, "EDS", "GHz", "", "W/Hz"]],
+    ["LUMINOSITY_REST_ERR", [0.01, 0.001, 1, 0.01, -0.7, 0.1, 3, 1.4, "EDS", "", "", ""], [0.01, 0.001, 1, 0.01, -0.7, 0.1, 3, 1.4, "EDS", "GHz", "", "W/Hz"]],
+    ["REDSHIFT", [1e5, "VOLUME", "EDS", ""], [1e5, "VOLUME", "EDS", "Mpc3"]],
+    ["REDSHIFT", [3000, "DIST_LUM", "EDS", ""], [3000, "DIST_LUM", "EDS", "Mpc"]],
+    ["REDSHIFT", [5, "LOOKBACK", "EDS", ""], [5, "LOOKBACK", "EDS", "Gyr"]],
+  ])("%s: a blank text unit means its default", (name, blank, written) => {
+    const active = { spec: defaultModelSpec, stored: false };
+    const a = evaluate(definitions[name], blank, active)[0][0];
+    expect(typeof a).toBe("number");
+    expect(a).toBe(evaluate(definitions[name], written, active)[0][0]);
+  });
+});
