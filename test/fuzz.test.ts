@@ -8,7 +8,7 @@ import { HostError, loadBundle } from "./reference/hostBundle.js";
 
 const hostile: unknown[] = [
   undefined, null, "", " ", "abc", "1.5", "P18-BAO", "H0=70; Om=", "H0=70;Om=0.3;OL=9", "Mpc", "furlong",
-  "m**(", "Gpc3", true, false, 0, -0, -1, -1e-300, 1e-300, 0.5, 3, 1e4, 1e7, 1e12, 1e308, -1e308, Number.NaN,
+  "m**(", "Gpc3", "mpc3", "MJy", "ergs/s/cm2", "erg/s/cm2", "H0=70; Om=30", "photon", "cold", true, false, 0, -0, -1, -1e-300, 1e-300, 0.5, 3, 1e4, 1e7, 1e12, 1e308, -1e308, Number.NaN,
   Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY, Number.MIN_VALUE, -2, {}, [], [[]], [[1, 2], [3]],
   { errorCode: "#DIV/0!" }, new HostError("#REF!"),
 ];

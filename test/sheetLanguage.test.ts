@@ -182,7 +182,7 @@ describe("no name of another tool's interface reaches a reader", () => {
   });
 
   test("error messages from hostile input hold no camelCase identifier (unit strings aside)", () => {
-    const inputs: unknown[] = [-1, 0, 1e9, "abc", "", true, "H0=70, Om=0.3", "P18-BAO", "H0=0.7; Om=0.3", 99, [[1, 2]], [[1], [2], [3]]];
+    const inputs: unknown[] = [-1, 0, 1e9, "abc", "", true, "H0=70, Om=0.3", "P18-BAO", "H0=0.7; Om=0.3", "H0=70; Om=30", "mpc3", "MJy", "L_sun", 99, [[1, 2]], [[1], [2], [3]]];
     const camel = /\b[a-z]+[A-Z][A-Za-z0-9]*\b/g;
     const seen = new Set<string>();
     for (const def of Object.values(definitions)) {
