@@ -219,3 +219,12 @@ describe("units and arguments that refuse a likely mistake", () => {
     expect(failure("SPECTRAL_INDEX", 1.9, "gamma").message).toBe('ZC.SPECTRAL_INDEX: convention: "gamma" is not one of photon, lambda, radio');
   });
 });
+
+describe("spectral-index conventions in the core", () => {
+  test("an unknown convention or a value that is no number is refused, naming it", async () => {
+    const { spectralIndexAlpha } = await import("../core/index.js");
+    expect(() => spectralIndexAlpha(1, "gamma" as never)).toThrow('unknown convention "gamma": use photon, lambda or radio');
+    expect(() => spectralIndexAlpha(Number.NaN, "photon")).toThrow(/^value must be a number/);
+    expect(() => spectralIndexAlpha(Number.POSITIVE_INFINITY, "radio")).toThrow(/^value must be finite/);
+  });
+});

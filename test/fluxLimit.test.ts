@@ -130,3 +130,17 @@ test("a source that never fades below a magnitude limit is #N/A with the reason"
   const cell = one("REDSHIFT_LIMIT_MAG", -30, 30, 3) as CellError;
   expect([cell.kind, cell.message]).toEqual(["na", "ZC.REDSHIFT_LIMIT_MAG: the source stays at or brighter than the magnitude limit out to z = 1e8, where this model's tables end"]);
 });
+
+describe("limits refuse arguments outside their domain, naming them", () => {
+  test.each([
+    // call                                                     | message starts with
+    [() => limitingRedshift(p18, -1, 1e-16),                    /^luminosity = -1 must be > 0/],
+    [() => limitingRedshift(p18, 1e38, 0),                      /^flux limit = 0 must be > 0/],
+    [() => limitingRedshift(p18, 1e38, 1e-16, Number.NaN),      /^alpha must be a number/],
+    [() => limitingRedshiftMag(p18, Number.NaN, 20),            /^abs_mag must be a number/],
+    [() => limitingRedshiftMag(p18, -20, Number.POSITIVE_INFINITY), /^mag_limit must be finite/],
+    [() => limitingRedshiftMag(p18, -20, 20, Number.NaN),       /^alpha must be a number/],
+  ])("%#: %s", (call, message) => {
+    expect(call).toThrow(message);
+  });
+});

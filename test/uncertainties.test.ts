@@ -14,6 +14,7 @@ import {
   luminosityErrorW,
   luminosityW,
   properSizeErrorMpc,
+  restFrameSpectralLuminosityErrorWHz,
   spectralLuminosityErrorWHz,
   spectralLuminosityWHz,
   transverseComovingDistanceSlopeMpc,
@@ -136,5 +137,42 @@ describe("the worksheet error functions", () => {
   test("a negative error is #NUM! in the sheet's words", () => {
     const cell = one("DIST_LUM_ERR", 1, -0.1);
     expect(String((cell as { message: string }).message)).toBe("ZC.DIST_LUM_ERR: z_err = -0.1 must be ≥ 0");
+  });
+});
+
+describe("each error term against a finite difference of its own function (rel ≤ 1e-6)", () => {
+  const flat = new Cosmology(geometries.flat);
+
+  test("LUMINOSITY_NU_ERR's redshift term with α ≠ −1: |dL_ν/dz| σ_z, the (1+z)^−(1+α) factor included", () => {
+    const [s, z, zErr, alpha] = [1e-28, 1.5, 0.02, 0.5]; // W/m2/Hz; α = 0.5 makes (1+α)/(1+z) matter
+    const slope = fivePoint((x) => spectralLuminosityWHz(flat, s, x, alpha), z, 1e-3);
+    expectRelative(spectralLuminosityErrorWHz(flat, s, 0, z, zErr, alpha, 0), Math.abs(slope) * zErr, 1e-6, "z term");
+  });
+
+  test("SIZE_ERR's redshift term for an angle other than 1 rad: θ |dD_A/dz| σ_z", () => {
+    const [angle, z, zErr] = [1e-5, 0.5, 0.01]; // rad
+    const slope = fivePoint((x) => flat.properSizeMpc(angle, x), z, 1e-3);
+    expectRelative(properSizeErrorMpc(flat, angle, 0, z, zErr), Math.abs(slope) * zErr, 1e-6, "z term");
+  });
+
+  test.each([
+    // call with one negative error                                                  | the error it names
+    [() => luminosityDistanceErrorMpc(flat, 1, -1),                                     /^z_err = -1 must be ≥ 0/],
+    [() => luminosityErrorW(flat, 1, -1, 1, 0),                                         /^flux_err = -1 must be ≥ 0/],
+    [() => luminosityErrorW(flat, 1, 0, 1, -1),                                         /^z_err = -1 must be ≥ 0/],
+    [() => spectralLuminosityErrorWHz(flat, 1, -1, 1, 0, 0, 0),                         /^flux_density_err = -1 must be ≥ 0/],
+    [() => spectralLuminosityErrorWHz(flat, 1, 0, 1, -1, 0, 0),                         /^z_err = -1 must be ≥ 0/],
+    [() => spectralLuminosityErrorWHz(flat, 1, 0, 1, 0, 0, -1),                         /^alpha_err = -1 must be ≥ 0/],
+    [() => restFrameSpectralLuminosityErrorWHz(flat, 1, -1, 1, 0, 0, 0, 1e9, 2e9),      /^flux_density_err = -1 must be ≥ 0/],
+    [() => restFrameSpectralLuminosityErrorWHz(flat, 1, 0, 1, -1, 0, 0, 1e9, 2e9),      /^z_err = -1 must be ≥ 0/],
+    [() => restFrameSpectralLuminosityErrorWHz(flat, 1, 0, 1, 0, 0, -1, 1e9, 2e9),      /^alpha_err = -1 must be ≥ 0/],
+    [() => absoluteMagnitudeErrorMag(flat, -1, 1, 0),                                   /^m_err = -1 must be ≥ 0/],
+    [() => absoluteMagnitudeErrorMag(flat, 0, 1, -1),                                   /^z_err = -1 must be ≥ 0/],
+    [() => absoluteMagnitudeErrorMag(flat, 0, 1, 0, -1),                                /^kcorr_err = -1 must be ≥ 0/],
+    [() => properSizeErrorMpc(flat, 1e-5, -1, 1, 0),                                    /^angle_err = -1 must be ≥ 0/],
+    [() => properSizeErrorMpc(flat, 1e-5, 0, 1, -1),                                    /^z_err = -1 must be ≥ 0/],
+  ])("a negative error is refused by the core, naming it (%#)", (call, message) => {
+    expect(call).toThrow(RangeError);
+    expect(call).toThrow(message);
   });
 });

@@ -1,4 +1,5 @@
 import { describe, expect, test } from "vitest";
+import { caseSlip, nearestUnits } from "../core/units/unitSuggestions.js";
 import { conversionFactor, convertUnit, parseUnit } from "../core/units/units.js";
 import { expectRelative } from "./helpers.js";
 
@@ -74,6 +75,28 @@ describe("unit conversion", () => {
     ["msun",          "did you mean Msun or solMass?"],
   ])("an unknown unit %j names the nearest known spellings (%s)", (typed, suggestion) => {
     expect(() => parseUnit(typed)).toThrow(suggestion);
+  });
+
+  test.each([
+    // typed          | nearest known spellings (one or two edits; ties in the order of the common list)
+    ["arcsek",        ["arcsec"]],
+    ["Mpcc",          ["Mpc", "Mpc3"]],
+    ["kpc/arcsek",    ["kpc/arcsec"]],
+    ["erg/s/cm^2",    ["erg/s/cm2"]],
+    ["Lsol",          ["Lsun", "solLum"]],
+    ["Ms",            []],          // two letters: one edit would reach too much, so none is offered
+    ["",              []],
+    ["  ",            []],
+    ["x".repeat(41),  []],          // longer than any unit: not searched
+  ])("nearestUnits(%j) = %j", (typed, expected) => {
+    expect(nearestUnits(typed)).toEqual(expected);
+  });
+
+  test("only trade units in the wrong case that would still parse are case slips", () => {
+    expect(caseSlip("mpc")).toEqual({ meant: "Mpc", reads: "milliparsecs" });
+    expect(caseSlip("myr")?.meant).toBe("Myr");
+    expect(caseSlip("ma")?.meant).toBe("Ma");
+    for (const fine of ["Mpc", "kpc", "mJy", "MJy", "ms", "mas", "toString", "constructor"]) expect(caseSlip(fine)).toBeUndefined();
   });
 
   test("a unit nothing is near gets no invented suggestion", () => {

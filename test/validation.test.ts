@@ -2,6 +2,8 @@
 import { describe, expect, test } from "vitest";
 import { Cosmology } from "../core/distances/Cosmology.js";
 import { absoluteMagnitude, fluxWm2, luminosityW } from "../core/observables/photometry.js";
+import { NoSolutionError } from "../core/checks/NoSolutionError.js";
+import { maxVolumeMpc3 } from "../core/observables/fluxLimit.js";
 
 const ok = { H0: 70, Om: 0.3, w0: -1, wa: 0, Tcmb: 2.7255, Neff: 3.046, mnu: [] as number[] };
 
@@ -60,5 +62,48 @@ describe("arguments outside their domain", () => {
   ])("%#: %s", (call, kind, message) => {
     expect(call).toThrow(kind);
     expect(call).toThrow(message);
+  });
+});
+
+describe("the inverse: a value no redshift has is refused with the reason", () => {
+  // closed Ωm = 0.4, ΩΛ = 0.85, no radiation: Ωk = −0.25, so D_M ≤ D_H/√|Ωk| = (299792.458/70)/0.5 = 8565.5 Mpc (Hogg 1999 eq. 16, sin ≤ 1)
+  test.each([
+    // model                     | quantity                       | value        | message
+    ["H0=70; Om=0.4; OL=0.85",   "transverseComovingDistance",    1e6,           "transverse comoving distance 1000000 Mpc exceeds its maximum in this closed model (8565.5 Mpc)"],
+    ["P18-CMB",                  "comovingDistance",              1e6,           "comoving distance 1000000 Mpc lies beyond the particle horizon of this model"],
+    ["H0=70; Om=0; OL=0",        "comovingDistance",              2e6,           "comoving distance 2000000 Mpc: this model's integrals do not converge that far back (z > 1e8)"],
+    ["P18-CMB",                  "age",                           0,             "age 0 Gyr must be positive"],
+    ["P18-CMB",                  "age",                           -1,            "age -1 Gyr is negative: no redshift z ≥ 0 has it"],
+    ["P18-CMB",                  "age",                           Number.POSITIVE_INFINITY, "age Infinity Gyr: no finite redshift has it"],
+    ["P18-CMB",                  "distanceModulus",               1e5,           "distance modulus 100000 mag: no finite redshift has it"],
+    ["EDS",                      "lookbackTime",                  1e4,           "look-back time 10000 Gyr is not below the age of the universe in this model (9.31231 Gyr)"],
+  ])("%s: %s = %d", (spec, quantity, value, message) => {
+    const call = () => Cosmology.fromSpec(spec).redshiftAt(quantity as never, value);
+    expect(call).toThrow(NoSolutionError);
+    expect(call).toThrow(message);
+  });
+
+  test("a value that is no number is a TypeError", () => {
+    expect(() => Cosmology.fromSpec("P18-CMB").redshiftAt("comovingDistance", Number.NaN)).toThrow(new TypeError("value must be a number"));
+  });
+});
+
+describe("V_max: bounds that cannot be a sample", () => {
+  const m = Cosmology.fromSpec("EDS");
+  test.each([
+    // z_max | z_lo | z_hi | area | z_min | message
+    [1,       0.5,   0.2,   0.1,   0,      "z_hi = 0.2 is below z_lo = 0.5"],
+    [-1,      0.1,   1,     0.1,   0,      "z_max"],
+    [1,       -0.1,  1,     0.1,   0,      "z_lo"],
+    [1,       0.1,   -1,    0.1,   0,      "z_hi"],
+    [1,       0.1,   1,     0.1,   -0.5,   "z_min"],
+  ])("VOLUME_MAX(%d, %d, %d, %d, %d) is refused: %s", (zMax, zLo, zHi, area, zMin, message) => {
+    expect(() => maxVolumeMpc3(m, zMax, zLo, zHi, area, zMin)).toThrow(RangeError);
+    expect(() => maxVolumeMpc3(m, zMax, zLo, zHi, area, zMin)).toThrow(message);
+  });
+
+  test("an empty range gives 0, also when it closes exactly (z_min = z_max)", () => {
+    expect(maxVolumeMpc3(m, 0.5, 0.1, 1, 0.1, 0.5)).toBe(0);
+    expect(maxVolumeMpc3(m, 0.5, 0.5, 1, 0.1)).toBe(0);
   });
 });
