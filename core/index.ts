@@ -55,6 +55,11 @@ export {
   surfaceBrightnessDimmingMag,
 } from "./observables/photometry.js";
 export { findPreset, presets, type Preset } from "./model/presets.js";
+export { rescaledValue, rescaleQuantities, type RescaleQuantity } from "./distances/rescale.js";
+export { hubbleDistanceAtMpc, volumeAveragedDistanceMpc } from "./distances/baoScales.js";
+export { criticalSurfaceDensityMsunPc2 } from "./observables/lensing.js";
+export { haloMassMsun, haloOverdensity, haloRadiusMpc } from "./observables/halos.js";
+export { surfaceBrightnessOffsetMag, surfaceLuminosityLsunPc2, surfaceMagnitude } from "./observables/surfaceBrightness.js";
 export { spectralIndexAlpha, spectralIndexConventions, type SpectralIndexConvention } from "./observables/spectralIndex.js";
 export { checkRedshift, checkSourceRedshift } from "./checks/redshift.js";
 export { type InverseWording } from "./distances/redshiftInverse.js";

@@ -28,7 +28,13 @@ export type ArgSpec =
       /** A magnitude: |value| ≥ 50 is a catalogue's missing-value flag (#N/A). */
       magnitude?: boolean;
     }
-  | { kind: "model"; name: string }
+  | {
+      /** A model (or range of models): blank means the workbook's model, unless `required`. */
+      kind: "model";
+      name: string;
+      /** Must be given (a function comparing two models): omitted is #VALUE!. */
+      required?: boolean;
+    }
   | {
       /** Text (or range of text), optionally one of fixed choices (matched case-insensitively). */
       kind: "text";

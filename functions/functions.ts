@@ -10,4 +10,5 @@ import "./declarations/distancesAndTimes.js";
 import "./declarations/photometry.js";
 import "./declarations/errors.js";
 import "./declarations/limitsAndPopulations.js";
+import "./declarations/structure.js";
 import "./declarations/modelsAndUtilities.js";

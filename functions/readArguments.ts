@@ -201,6 +201,11 @@ function readText(spec: Extract<ArgSpec, { kind: "text" }>, value: unknown): str
 }
 
 
+/** An argument that may not be left out: a number without a default, a model marked required. */
+function isRequired(spec: ArgSpec): boolean {
+  return (spec.kind === "number" && spec.default === undefined) || (spec.kind === "model" && spec.required === true);
+}
+
 /** Which arguments of a function are units, scalar texts and cell values: worked out once per function. */
 interface Plan {
   units: number[];
@@ -248,7 +253,7 @@ export function readCall(def: FunctionDef, raw: readonly unknown[], active: Acti
     if (value === several) return readRanges(def, raw, active, { conversions, resultFactor, args, h });
     if (problem !== undefined) continue; // the first bad argument decides; the rest must still be single cells
     const spec = specs[i];
-    if (value === undefined && spec.kind === "number" && spec.default === undefined) throw new CellError("value", messages.required(spec.name));
+    if (value === undefined && isRequired(spec)) throw new CellError("value", messages.required(spec.name));
     const read = readArg(spec, value, raw[i] !== undefined && raw[i] !== null, conversions[spec.name], active, resolve);
     if (read instanceof CellError || read === blank) problem = read;
     else args[spec.name] = read;
@@ -386,7 +391,7 @@ function readRanges(def: FunctionDef, raw: readonly unknown[], active: ActiveMod
       const block = keyValueBlockSpec(matrix);
       if (block !== undefined) matrix = [[block]];
     }
-    if (!matrix && spec.kind === "number" && spec.default === undefined) throw new CellError("value", messages.required(spec.name));
+    if (!matrix && isRequired(spec)) throw new CellError("value", messages.required(spec.name));
     given.push({ spec, matrix, rows: matrix?.length ?? 1, cols: matrix?.[0]?.length ?? 1 });
   }
 

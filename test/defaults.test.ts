@@ -18,6 +18,7 @@ function declaredDefaults(d: FunctionDef): string {
     else if (a.kind === "number" && a.default !== undefined) {
       parts.push(`${a.name}=${Number.isNaN(a.default) ? "not given" : a.default === 4 * Math.PI ? "whole sky" : a.default}`);
     } else if (a.kind === "text" && a.optional) parts.push(`${a.name}=blank`);
+    else if (a.kind === "model" && a.name !== "model" && !a.required) parts.push(`${a.name}=the workbook's model`);
   }
   return parts.join("; ");
 }
@@ -74,6 +75,16 @@ const pinned: [string, string][] = [
     ["PRESETS"             , ""],
     ["DESCRIBE"            , ""],
     ["VERSION"             , ""],
+  // new in 0.2.0 as well: structure, rescaling and surface brightness (CHANGELOG.md)
+    ["SURFACE_LUM"         , "kcorr=0"],
+    ["SURFACE_MAG"         , "kcorr=0"],
+    ["DIST_HUBBLE"         , "unit=Mpc"],
+    ["DIST_VOLUME"         , "unit=Mpc"],
+    ["SIGMA_CRIT"          , "unit=Msun/pc2"],
+    ["OVERDENSITY"         , ""],
+    ["HALO_RADIUS"         , "mass_unit=Msun; radius_unit=kpc"],
+    ["HALO_MASS"           , "radius_unit=kpc; mass_unit=Msun"],
+    ["RESCALE"             , "to_model=the workbook's model"],
 ];
 
 describe("defaults that saved workbooks depend on", () => {

@@ -185,3 +185,31 @@ export function DIMMING(z: any[][], alpha?: any[][]): any[][] {
 export function SPECTRAL_INDEX(value: any[][], convention: any[][]): any[][] {
   return callFromSheet(d.SPECTRAL_INDEX, [value, convention]);
 }
+
+/**
+ * Intrinsic surface luminosity density from an observed surface brightness, removing the (1+z)⁴ dimming (10 log10(1+z) mag) and K: Σ = 10^(−0.4 (μ − 10 log10(1+z) − K − M☉ − 21.572)) Lsun/pc2. No cosmology enters.
+ * @customfunction SURFACE_LUM SURFACE_LUM
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param mu Observed surface brightness, mag/arcsec2 (value or range).
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param sun_abs_mag The Sun's absolute magnitude in the band (value or range).
+ * @param [kcorr] K-correction of the band (mag); blank = 0 (value or range).
+ * @returns Σ (Lsun/pc2).
+ */
+export function SURFACE_LUM(mu: any[][], z: any[][], sun_abs_mag: any[][], kcorr?: any[][]): any[][] {
+  return callFromSheet(d.SURFACE_LUM, [mu, z, sun_abs_mag, kcorr]);
+}
+
+/**
+ * Observed surface brightness of an intrinsic surface luminosity density (the inverse of ZC.SURFACE_LUM): μ = M☉ + 21.572 − 2.5 log10(Σ) + 10 log10(1+z) + K.
+ * @customfunction SURFACE_MAG SURFACE_MAG
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param sigma Surface luminosity density, > 0, Lsun/pc2 (value or range).
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param sun_abs_mag The Sun's absolute magnitude in the band (value or range).
+ * @param [kcorr] K-correction of the band (mag); blank = 0 (value or range).
+ * @returns μ (mag/arcsec2).
+ */
+export function SURFACE_MAG(sigma: any[][], z: any[][], sun_abs_mag: any[][], kcorr?: any[][]): any[][] {
+  return callFromSheet(d.SURFACE_MAG, [sigma, z, sun_abs_mag, kcorr]);
+}

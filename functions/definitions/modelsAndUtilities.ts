@@ -8,12 +8,15 @@ import {
   Cosmology,
   formatModelSpec,
   presets,
+  rescaledValue,
+  rescaleQuantities,
   withChanges,
+  type RescaleQuantity,
 } from "../../core/index.js";
 import { messages } from "../messages.js";
 import { describeModel, versionText } from "../describeModel.js";
 import type { ArgSpec, Cell, FunctionDef } from "../FunctionDef.js";
-import { num, model, m, n } from "./argumentKinds.js";
+import { num, model, m, n, z } from "./argumentKinds.js";
 
 /** ZC.PARAM names → value. */
 const parameters: Record<string, (model: Cosmology) => number> = {
@@ -101,5 +104,13 @@ export const modelsAndUtilities: FunctionDef[] = [
     name: "VERSION",
     args: [],
     table: (): Cell[][] => [[versionText()]],
+  },
+  {
+    name: "RESCALE",
+    args: [
+      num("value"), z, { kind: "text", name: "quantity", choices: rescaleQuantities },
+      { kind: "model", name: "from_model", required: true }, { kind: "model", name: "to_model" },
+    ],
+    compute: (a) => rescaledValue(n(a, "value"), n(a, "z"), a.quantity as RescaleQuantity, a.from_model as Cosmology, a.to_model as Cosmology),
   },
 ];

@@ -20,6 +20,8 @@ import {
   spectralIndexAlpha,
   spectralIndexConventions,
   spectralSurfaceBrightnessDimmingMag,
+  surfaceLuminosityLsunPc2,
+  surfaceMagnitude,
   type SpectralIndexConvention,
   surfaceBrightnessDimmingMag,
 } from "../../core/index.js";
@@ -103,5 +105,15 @@ export const photometry: FunctionDef[] = [
     name: "SPECTRAL_INDEX",
     args: [num("value"), { kind: "text", name: "convention", choices: spectralIndexConventions }],
     compute: (a) => spectralIndexAlpha(n(a, "value"), a.convention as SpectralIndexConvention),
+  },
+  {
+    name: "SURFACE_LUM",
+    args: [num("mu"), z, num("sun_abs_mag"), num("kcorr", { default: 0, blankMeansDefault: true })],
+    compute: (a) => surfaceLuminosityLsunPc2(n(a, "mu"), n(a, "z"), n(a, "sun_abs_mag"), n(a, "kcorr")),
+  },
+  {
+    name: "SURFACE_MAG",
+    args: [num("sigma", { min: 0, minExclusive: true }), z, num("sun_abs_mag"), num("kcorr", { default: 0, blankMeansDefault: true })],
+    compute: (a) => surfaceMagnitude(n(a, "sigma"), n(a, "z"), n(a, "sun_abs_mag"), n(a, "kcorr")),
   },
 ];

@@ -1,0 +1,93 @@
+/**
+ * Structure: the distances of BAO measurements, gravitational lensing, halos and clusters.
+ * Each function is its JSDoc (read by the metadata plugin into functions.json) plus one line handing
+ * the arguments to the shared wrapper; see functions/functions.ts for the conventions of all families.
+ */
+/* eslint-disable @typescript-eslint/no-explicit-any */
+import { definitions as d } from "../definitions.js";
+import { callFromSheet } from "../evaluate.js";
+
+/**
+ * Hubble distance at z, D_H(z) = c / H(z), the radial BAO distance (D_H/r_d is a ratio of cells); in Mpc unless a unit is given.
+ * @customfunction DIST_HUBBLE DIST_HUBBLE
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [unit] Output unit, default "Mpc" (e.g. "Mpc/h").
+ * @returns D_H(z) (Mpc by default).
+ */
+export function DIST_HUBBLE(z: any[][], model?: any[][], unit?: string): any[][] {
+  return callFromSheet(d.DIST_HUBBLE, [z, model, unit]);
+}
+
+/**
+ * Volume-averaged distance D_V(z) = [z D_M² c/H(z)]^(1/3) (Eisenstein et al. 2005), the isotropic BAO distance; in Mpc unless a unit is given.
+ * @customfunction DIST_VOLUME DIST_VOLUME
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [unit] Output unit, default "Mpc" (e.g. "Mpc/h").
+ * @returns D_V(z) (Mpc by default).
+ */
+export function DIST_VOLUME(z: any[][], model?: any[][], unit?: string): any[][] {
+  return callFromSheet(d.DIST_VOLUME, [z, model, unit]);
+}
+
+/**
+ * Critical surface density of a thin gravitational lens, Σ_cr = c² D_s / (4πG D_l D_ls) (angular-diameter distances; D_ls from lens to source, any curvature); in Msun/pc2 unless a unit is given.
+ * @customfunction SIGMA_CRIT SIGMA_CRIT
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z_lens Lens redshift, > 0 (value or range).
+ * @param z_source Source redshift, > z_lens (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [unit] Output unit, default "Msun/pc2" (e.g. "kg/m2", "h Msun/pc2").
+ * @returns Σ_cr (Msun/pc2 by default).
+ */
+export function SIGMA_CRIT(z_lens: any[][], z_source: any[][], model?: any[][], unit?: string): any[][] {
+  return callFromSheet(d.SIGMA_CRIT, [z_lens, z_source, model, unit]);
+}
+
+/**
+ * Overdensity Δ of a halo definition relative to the critical density at z: "vir" (Bryan & Norman 1998: flat models with Λ, or no dark energy), "200c", "500c", "200m" (200 Ωm(z)), any "<N>c" or "<N>m".
+ * @customfunction OVERDENSITY OVERDENSITY
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param definition "vir", "200c", "500c", "200m", or any "<N>c" / "<N>m" (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @returns Δ relative to ρ_crit(z).
+ */
+export function OVERDENSITY(z: any[][], definition: any[][], model?: any[][]): any[][] {
+  return callFromSheet(d.OVERDENSITY, [z, definition, model]);
+}
+
+/**
+ * Radius within which a halo of mass M has mean density Δ ρ_crit(z): R = (3M / (4π Δ ρ_crit(z)))^(1/3); mass in Msun, radius in kpc unless units are given.
+ * @customfunction HALO_RADIUS HALO_RADIUS
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param mass Halo mass, ≥ 0, in Msun by default (value or range).
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param definition "vir", "200c", "500c", "200m", or any "<N>c" / "<N>m" (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [mass_unit] Unit of mass, default "Msun" (e.g. "h-1 Msun").
+ * @param [radius_unit] Output unit, default "kpc" (e.g. "Mpc").
+ * @returns R_Δ (kpc by default).
+ */
+export function HALO_RADIUS(mass: any[][], z: any[][], definition: any[][], model?: any[][], mass_unit?: string, radius_unit?: string): any[][] {
+  return callFromSheet(d.HALO_RADIUS, [mass, z, definition, model, mass_unit, radius_unit]);
+}
+
+/**
+ * Mass within a radius at mean density Δ ρ_crit(z): M = (4π/3) Δ ρ_crit(z) R³ (the inverse of ZC.HALO_RADIUS); radius in kpc, mass in Msun unless units are given.
+ * @customfunction HALO_MASS HALO_MASS
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param radius Radius, ≥ 0, in kpc by default (value or range).
+ * @param z Redshift, ≥ 0 (value or range).
+ * @param definition "vir", "200c", "500c", "200m", or any "<N>c" / "<N>m" (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [radius_unit] Unit of radius, default "kpc" (e.g. "Mpc").
+ * @param [mass_unit] Output unit, default "Msun" (e.g. "h-1 Msun").
+ * @returns M_Δ (Msun by default).
+ */
+export function HALO_MASS(radius: any[][], z: any[][], definition: any[][], model?: any[][], radius_unit?: string, mass_unit?: string): any[][] {
+  return callFromSheet(d.HALO_MASS, [radius, z, definition, model, radius_unit, mass_unit]);
+}

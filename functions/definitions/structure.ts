@@ -1,0 +1,55 @@
+/**
+ * Structure: the distances of BAO measurements (D_H, D_V), gravitational lensing (Σ_cr), and halos
+ * (overdensities, radius and mass).
+ * Each entry: the arguments in the order of the ZC.* signature (built from argumentKinds.ts) and what one
+ * cell computes in reference units; the declaration with its JSDoc is in ../declarations/structure.ts.
+ */
+import {
+  criticalSurfaceDensityMsunPc2,
+  haloMassMsun,
+  haloOverdensity,
+  haloRadiusMpc,
+  hubbleDistanceAtMpc,
+  volumeAveragedDistanceMpc,
+} from "../../core/index.js";
+import type { ArgSpec, FunctionDef } from "../FunctionDef.js";
+import { amount, m, model, n, num, unit, z } from "./argumentKinds.js";
+
+const definition: ArgSpec = { kind: "text", name: "definition" };
+const def = (a: Parameters<NonNullable<FunctionDef["compute"]>>[0]) => a.definition as string;
+
+/** Structure functions, in the order of their declarations. */
+export const structure: FunctionDef[] = [
+  {
+    name: "DIST_HUBBLE",
+    args: [z, model, unit("unit", "Mpc")],
+    compute: (a) => hubbleDistanceAtMpc(m(a), n(a, "z")),
+    kernel: { arg: "z", of: (a, zz) => hubbleDistanceAtMpc(m(a), zz) },
+  },
+  {
+    name: "DIST_VOLUME",
+    args: [z, model, unit("unit", "Mpc")],
+    compute: (a) => volumeAveragedDistanceMpc(m(a), n(a, "z")),
+    kernel: { arg: "z", of: (a, zz) => volumeAveragedDistanceMpc(m(a), zz) },
+  },
+  {
+    name: "SIGMA_CRIT",
+    args: [num("z_lens"), num("z_source"), model, unit("unit", "Msun/pc2")],
+    compute: (a) => criticalSurfaceDensityMsunPc2(m(a), n(a, "z_lens"), n(a, "z_source")),
+  },
+  {
+    name: "OVERDENSITY",
+    args: [z, definition, model],
+    compute: (a) => haloOverdensity(m(a), n(a, "z"), def(a)),
+  },
+  {
+    name: "HALO_RADIUS",
+    args: [amount("mass"), z, definition, model, unit("mass_unit", "Msun", "Msun", "mass"), unit("radius_unit", "Mpc", "kpc")],
+    compute: (a) => haloRadiusMpc(m(a), n(a, "mass"), n(a, "z"), def(a)),
+  },
+  {
+    name: "HALO_MASS",
+    args: [amount("radius"), z, definition, model, unit("radius_unit", "Mpc", "kpc", "radius"), unit("mass_unit", "Msun")],
+    compute: (a) => haloMassMsun(m(a), n(a, "radius"), n(a, "z"), def(a)),
+  },
+];

@@ -1,0 +1,143 @@
+/**
+ * From columns to populations and today's cosmology: restating published values under another model,
+ * BAO distances, lensing, halos and surface brightness. Expected values come from the definitions
+ * written out with the existing functions (DIST_*, HUBBLE, CRIT_DENSITY, OMEGA), closed forms, and the
+ * published formulas named beside each.
+ */
+import { describe, expect, test } from "vitest";
+import { CellError } from "../functions/cellError.js";
+import { definitions } from "../functions/definitions.js";
+import { evaluate, type Cell } from "../functions/evaluate.js";
+import { expectRelative } from "./helpers.js";
+
+const active = { spec: "P18-CMB", stored: false };
+const one = (name: string, ...args: unknown[]): Cell => evaluate(definitions[name], args, active)[0][0];
+const num = (name: string, ...args: unknown[]): number => {
+  const cell = one(name, ...args);
+  if (typeof cell !== "number") throw new Error(`${name}(${args.join(", ")}) gave ${cell instanceof CellError ? cell.message : String(cell)}`);
+  return cell;
+};
+const failure = (name: string, ...args: unknown[]): CellError => {
+  const cell = one(name, ...args);
+  if (!(cell instanceof CellError)) throw new Error(`${name}(${args.join(", ")}) gave ${String(cell)}, not an error`);
+  return cell;
+};
+
+const GMsun = 1.3271244e20; // m³ s⁻², IAU 2015 Resolution B3 nominal solar mass parameter
+const c = 299_792_458; // m/s, exact (SI)
+const mpcM = 3.0856775814913673e22; // m, IAU 2015 Resolution B2 parsec × 1e6
+const pcM = mpcM / 1e6;
+
+describe("RESCALE: a published value restated under another cosmology", () => {
+  const [from, to, z] = ["W9-ALL", "P18-CMB", 0.8];
+  test.each([
+    // quantity     | published | expected, from the existing functions under each model
+    ["distance",    1000,       () => 1000 * num("DIST_TRANS", z, to) / num("DIST_TRANS", z, from)],
+    ["luminosity",  1e44,       () => 1e44 * (num("DIST_LUM", z, to) / num("DIST_LUM", z, from)) ** 2],
+    ["size",        12.5,       () => 12.5 * num("DIST_ANG", z, to) / num("DIST_ANG", z, from)],
+    ["magnitude",   -21.3,      () => -21.3 + 5 * Math.log10(num("DIST_LUM", z, from) / num("DIST_LUM", z, to))],
+    ["density",     3e-4,       () => 3e-4 * num("VOLUME_ELEMENT", z, from) / num("VOLUME_ELEMENT", z, to)],
+  ])("%s: the ratio of the distance functions (rel ≤ 1e-12)", (quantity, value, expected) => {
+    expectRelative(num("RESCALE", value, z, quantity, from, to), expected(), 1e-12, quantity as string);
+    // to_model blank: the workbook's model (P18-CMB here)
+    expect(num("RESCALE", value, z, quantity, from)).toBe(num("RESCALE", value, z, quantity, from, to));
+    // the same model both ways changes nothing
+    expect(num("RESCALE", value, z, quantity, to, to)).toBe(value);
+  });
+
+  test("a luminosity rescaled by H0 alone scales as H0⁻² (D_L ∝ 1/H0 with Ωm fixed and no radiation: common practice)", () => {
+    expectRelative(num("RESCALE", 1e44, 2, "luminosity", "EDS", "EDS; H0=35"), 4e44, 1e-12, "(70/35)²");
+  });
+
+  test("from_model is required; a redshift of 0 is refused", () => {
+    expect(failure("RESCALE", 1, 1, "distance", null).message).toBe("ZC.RESCALE: from_model is required");
+    expect(failure("RESCALE", 1, 0, "distance", "W9-ALL").kind).toBe("num");
+    expect(failure("RESCALE", 1, 1, "volume", "W9-ALL").message).toBe('ZC.RESCALE: quantity: "volume" is not one of distance, luminosity, size, magnitude, density');
+  });
+});
+
+describe("BAO distances", () => {
+  test.each([0.1, 0.51, 1.32, 2.33])("at z = %d: D_H = c/H(z) and D_V = [z D_M² D_H]^(1/3) (Eisenstein et al. 2005 eq. 2) from DIST_TRANS and HUBBLE", (z) => {
+    const dh = c / 1000 / num("HUBBLE", z);
+    expectRelative(num("DIST_HUBBLE", z), dh, 1e-14, "D_H");
+    expectRelative(num("DIST_VOLUME", z), Math.cbrt(z * num("DIST_TRANS", z) ** 2 * dh), 1e-13, "D_V");
+  });
+
+  test("Einstein–de Sitter: D_H(z) = (c/H0) (1+z)^−3/2 (closed form)", () => {
+    expectRelative(num("DIST_HUBBLE", 3, "EDS"), 299792.458 / 70 / 8, 1e-14, "D_H(3)");
+  });
+});
+
+describe("SIGMA_CRIT: the critical surface density of a thin lens", () => {
+  test.each([
+    // lens | source | model
+    [0.3,    1,       "P18-CMB"],
+    [0.5,    2,       "EDS"],
+    [0.2,    3.5,     "H0=70; Om=0.3; OL=0.8"],   // closed: D_ls from the sin form
+    [0.4,    1.5,     "H0=70; Om=0.3; OL=0.5"],   // open
+  ])("z_l = %d, z_s = %d in %s: c² D_s / (4π G D_l D_ls) from DIST_ANG and DIST_BETWEEN, IAU GM☉ (rel ≤ 1e-6)", (zl, zs, model) => {
+    const dl = num("DIST_ANG", zl, model) * mpcM;
+    const ds = num("DIST_ANG", zs, model) * mpcM;
+    const dls = num("DIST_BETWEEN", zl, zs, model) * mpcM;
+    const expected = ((c * c * ds) / (4 * Math.PI * GMsun * dl * dls)) * pcM * pcM; // M☉ per pc²
+    expectRelative(num("SIGMA_CRIT", zl, zs, model), expected, 1e-6, "Σ_cr");
+  });
+
+  test("a source in front of the lens is #NUM! with the reason", () => {
+    const cell = failure("SIGMA_CRIT", 1, 0.5);
+    expect(cell.kind).toBe("num");
+    expect(cell.message).toBe("ZC.SIGMA_CRIT: z_source = 0.5 must be above z_lens = 1: the source lies behind the lens");
+  });
+});
+
+describe("halos", () => {
+  test("Δ_vir at z = 0 in a flat Ωm = 0.3 model without radiation is 18π² − 82·0.7 − 39·0.49 = 101.14 (Bryan & Norman 1998 eq. 6)", () => {
+    expectRelative(num("OVERDENSITY", 0, "vir", "H0=70; Om=0.3"), 18 * Math.PI ** 2 - 82 * 0.7 - 39 * 0.49, 1e-14, "Δ_vir");
+    expectRelative(num("OVERDENSITY", 0, "vir", "EDS"), 18 * Math.PI ** 2, 1e-14, "18π² in Einstein–de Sitter");
+    // an open model without dark energy: the Λ = 0 form, 18π² + 60x − 32x² (same equation)
+    expectRelative(num("OVERDENSITY", 0, "vir", "H0=70; Om=0.3; OL=0"), 18 * Math.PI ** 2 - 60 * 0.7 - 32 * 0.49, 1e-14, "Λ = 0 form");
+    const x = num("OMEGA", "matter", 1, "H0=70; Om=0.3") - 1;
+    expectRelative(num("OVERDENSITY", 1, "vir", "H0=70; Om=0.3"), 18 * Math.PI ** 2 + 82 * x - 39 * x * x, 1e-14, "Δ_vir(z = 1)");
+  });
+
+  test("fixed definitions: Nc is N, Nm is N Ωm(z) (from OMEGA); other models for vir are #N/A with the reason", () => {
+    expect(num("OVERDENSITY", 0.5, "200c")).toBe(200);
+    expect(num("OVERDENSITY", 0.5, "500C")).toBe(500);
+    expectRelative(num("OVERDENSITY", 0.5, "200m"), 200 * num("OMEGA", "matter", 0.5), 1e-15, "200 Ωm(z)");
+    expectRelative(num("OVERDENSITY", 2, "2500c"), 2500, 0, "any N");
+    const curved = failure("OVERDENSITY", 0, "vir", "H0=70; Om=0.3; OL=0.8");
+    expect(curved.kind).toBe("na");
+    expect(curved.message).toMatch(/^ZC\.OVERDENSITY: the virial overdensity of Bryan & Norman 1998 covers flat models/);
+    expect(failure("OVERDENSITY", 0, "200x").message).toBe('ZC.OVERDENSITY: unknown halo definition "200x": use vir, 200c, 500c, 200m or any <N>c, <N>m');
+  });
+
+  test.each([
+    // mass [Msun] | z   | definition
+    [1e14,          0,    "200c"],
+    [3e12,          0.7,  "500c"],
+    [1e15,          0.3,  "vir"],
+    [5e11,          1.5,  "200m"],
+  ])("R(%d Msun, z = %d, %s) = (3M / (4π Δ ρ_crit(z)))^(1/3) from CRIT_DENSITY and OVERDENSITY; HALO_MASS inverts it", (mass, z, def) => {
+    const rho = num("CRIT_DENSITY", z); // kg/m3
+    const msunKg = GMsun / 6.6743e-11; // IAU 2015 B3 GM☉ / CODATA 2018 G
+    const rM = Math.cbrt((3 * mass * msunKg) / (4 * Math.PI * num("OVERDENSITY", z, def) * rho));
+    expectRelative(num("HALO_RADIUS", mass, z, def), rM / (pcM * 1e3), 1e-12, "R in kpc");
+    expectRelative(num("HALO_MASS", num("HALO_RADIUS", mass, z, def), z, def), mass, 1e-12, "round trip");
+    expectRelative(num("HALO_RADIUS", mass, z, def, "", "Msun", "Mpc") * 1000, num("HALO_RADIUS", mass, z, def), 1e-14, "Mpc = 1000 kpc");
+  });
+});
+
+describe("surface brightness", () => {
+  test("1 Lsun/pc2 is μ = M☉ + 21.572 mag/arcsec² at z = 0: 5 log10(206264.806 / 10) (derived)", () => {
+    const offset = 5 * Math.log10(206264.806 / 10);
+    expectRelative(num("SURFACE_LUM", 4.83 + offset, 0, 4.83), 1, 1e-8, "1 Lsun/pc2");
+    expectRelative(num("SURFACE_MAG", 1, 0, 4.83), 4.83 + 21.572, 1e-5, "21.572 to the digits quoted");
+  });
+
+  test.each([0.1, 1, 3])("round trip and the (1+z)⁴ dimming at z = %d", (z) => {
+    const mu = 23.7;
+    expectRelative(num("SURFACE_MAG", num("SURFACE_LUM", mu, z, 5.11, 0.3), z, 5.11, 0.3), mu, 1e-14, "round trip");
+    // dimming: the same galaxy at z is 10 log10(1+z) mag fainter per arcsec² (Tolman 1930) plus K
+    expectRelative(num("SURFACE_LUM", mu + 10 * Math.log10(1 + z) + 0.3, z, 5.11, 0.3), num("SURFACE_LUM", mu, 0, 5.11), 1e-12, "(1+z)⁴ and K removed");
+  });
+});
