@@ -110,17 +110,27 @@ if (figure === "cold") {
   }
   result = { ns: (best * 1e6) / n, check: sink };
 } else if (figure.startsWith("catalogue:")) {
-  // each function's column against typical constant arguments (a 2e-17 W/m2 survey over 100 deg²)
+  // each function's column against typical constant arguments (a 2e-14 erg/s/cm2 survey over 100 deg²)
   const name = figure.slice("catalogue:".length);
   const zs = redshifts(n).map((z) => [z]);
-  const lums = zs.map(([z]) => [1e36 * 10 ** (z / 2.5)]);
+  const lums = zs.map(([z]) => [1e43 * 10 ** (z / 2.5)]);
   const calls = {
     DIST_LUM_ERR: (z) => [z, 0.01],
-    LUMINOSITY_ERR: (z) => [1e-16, 1e-17, z, 0.01],
+    LUMINOSITY_ERR: (z) => [1e-13, 1e-14, z, 0.01],
     LUMINOSITY_REST: (z) => [0.01, z, -0.7, 3, 1.4],
-    REDSHIFT_LIMIT: (_z, lum) => [lum, 2e-17],
+    LUMINOSITY_REST_ERR: (z) => [0.01, 0.001, z, 0.01, -0.7, 0.1, 3, 1.4],
+    REDSHIFT_LIMIT: (_z, lum) => [lum, 2e-14],
     VOLUME_MAX: (z) => [z, 0.05, 3, 100],
     REDSHIFT_CMB: (z) => [z, 150, 20],
+    RESCALE: (z) => [1e44, z, "luminosity", "W9-ALL"],
+    DIST_HUBBLE: (z) => [z],
+    DIST_VOLUME: (z) => [z],
+    SIGMA_CRIT: (z) => [0.005, z],
+    OVERDENSITY: (z) => [z, "vir"],
+    HALO_RADIUS: (z) => [1e14, z, "200c"],
+    HALO_MASS: (z) => [1000, z, "500c"],
+    SURFACE_LUM: (z) => [24, z, 4.65],
+    SURFACE_MAG: (z) => [100, z, 4.65],
   };
   const fn = registered.get(name);
   const args = (rows) => calls[name](zs.slice(0, rows), lums.slice(0, rows));

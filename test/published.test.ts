@@ -2,6 +2,7 @@
 import { describe, expect, test } from "vitest";
 import { abZeroPointJy, solarLuminosityW } from "../core/units/constants.js";
 import { Cosmology } from "../core/distances/Cosmology.js";
+import { findPreset } from "../core/model/presets.js";
 import { abFluxDensityJy, abMagnitude, bolometricAbsoluteMagnitude, fluxWm2 } from "../core/observables/photometry.js";
 import { expectRelative } from "./helpers.js";
 
@@ -49,5 +50,23 @@ describe("rules of thumb (common practice, no source)", () => {
       const l = 1e38;
       expectRelative(fluxWm2(m, l, z), l / (4 * Math.PI * dm * dm) / (1 + z) ** 2, 1e-14, `z=${z}`);
     }
+  });
+});
+
+describe("DESI DR2 presets (DESI Collaboration 2025, arXiv:2503.14738)", () => {
+  test.each([
+    // preset        | H0    | Om     | w0      | wa     — the values the issue supplied, from memory and unverified (the paper's table could not be read)
+    ["DR2-CMB",       68.17,  0.3027,  -1,       0],
+    ["DR2-CMB-PP",    67.51,  0.3114,  -0.838,   -0.62],
+    ["DR2-CMB-U3",    65.91,  0.3275,  -0.667,   -1.09],
+    ["DR2-CMB-DY5",   66.74,  0.3191,  -0.752,   -0.86],
+  ])("%s: H0 %d, Om %d, w0 %d, wa %d, flat, and its description says the values are unverified", (name, H0, Om, w0, wa) => {
+    const m = Cosmology.fromSpec(name);
+    expect([m.H0, m.Om, m.parameters.w0, m.parameters.wa, m.Ok]).toEqual([H0, Om, w0, wa, 0]);
+    // Ob assumed from Ωb h² = 0.02242 (Planck 2018 VI Table 2), with the preset's own h
+    expect(m.Ob * m.h ** 2).toBeCloseTo(0.02242, 12);
+    const description = findPreset(name)!.description;
+    expect(description).toContain("arXiv:2503.14738");
+    expect(description).toContain("from memory, unverified");
   });
 });

@@ -57,6 +57,30 @@ export const presets: readonly Preset[] = [
     "H0 70.4, Ωm 0.272, massless ν, flat — WMAP seven-year, Komatsu et al. 2011, ApJS 192, 18, Table 1, +BAO+H0",
     { H0: 70.4, Om: 0.272, Ob: 0.0455, w0: -1, wa: 0, Tcmb: 2.725, Neff: 3.04, mnu: [] },
   ),
+  // DESI DR2 (DESI Collaboration 2025, "DESI DR2 Results II", arXiv:2503.14738), flat. The parameter
+  // table of that paper could not be read here: H0, Ωm, w0 and wa below are FROM MEMORY AND UNVERIFIED
+  // (as each description says); Ob from Ωb h² = 0.02242 with the preset's h is ASSUMED (Planck 2018's
+  // value, not the paper's); neutrinos as in the P18 sets. Check against the paper before publishing.
+  preset(
+    "DR2-CMB",
+    "H0 68.17, Ωm 0.3027, ΛCDM, flat — DESI DR2 BAO + CMB, DESI Collaboration 2025, arXiv:2503.14738 (values from memory, unverified; Ob assumed)",
+    { H0: 68.17, Om: 0.3027, Ob: 0.02242 / 0.6817 ** 2, w0: -1, wa: 0, Tcmb: 2.7255, Neff: planckNeff, mnu: [0.06] },
+  ),
+  preset(
+    "DR2-CMB-PP",
+    "H0 67.51, Ωm 0.3114, w0 −0.838, wa −0.62, flat — DESI DR2 BAO + CMB + Pantheon+, DESI Collaboration 2025, arXiv:2503.14738 (values from memory, unverified; Ob assumed)",
+    { H0: 67.51, Om: 0.3114, Ob: 0.02242 / 0.6751 ** 2, w0: -0.838, wa: -0.62, Tcmb: 2.7255, Neff: planckNeff, mnu: [0.06] },
+  ),
+  preset(
+    "DR2-CMB-U3",
+    "H0 65.91, Ωm 0.3275, w0 −0.667, wa −1.09, flat — DESI DR2 BAO + CMB + Union3, DESI Collaboration 2025, arXiv:2503.14738 (values from memory, unverified; Ob assumed)",
+    { H0: 65.91, Om: 0.3275, Ob: 0.02242 / 0.6591 ** 2, w0: -0.667, wa: -1.09, Tcmb: 2.7255, Neff: planckNeff, mnu: [0.06] },
+  ),
+  preset(
+    "DR2-CMB-DY5",
+    "H0 66.74, Ωm 0.3191, w0 −0.752, wa −0.86, flat — DESI DR2 BAO + CMB + DES Y5 supernovae, DESI Collaboration 2025, arXiv:2503.14738 (values from memory, unverified; Ob assumed)",
+    { H0: 66.74, Om: 0.3191, Ob: 0.02242 / 0.6674 ** 2, w0: -0.752, wa: -0.86, Tcmb: 2.7255, Neff: planckNeff, mnu: [0.06] },
+  ),
   preset(
     "CONCORDANCE",
     "H0 70, Ωm 0.3, ΩΛ 0.7, no radiation, flat — round numbers, common practice (no source)",
