@@ -58,6 +58,7 @@ export { findPreset, presets, type Preset } from "./model/presets.js";
 export { rescaledValue, rescaleQuantities, type RescaleQuantity } from "./distances/rescale.js";
 export { hubbleDistanceAtMpc, volumeAveragedDistanceMpc } from "./distances/baoScales.js";
 export { criticalSurfaceDensityMsunPc2 } from "./observables/lensing.js";
+export { growthFactor, growthRate } from "./observables/growth.js";
 export { haloMassMsun, haloOverdensity, haloRadiusMpc } from "./observables/halos.js";
 export { surfaceBrightnessOffsetMag, surfaceLuminosityLsunPc2, surfaceMagnitude } from "./observables/surfaceBrightness.js";
 export { spectralIndexAlpha, spectralIndexConventions, type SpectralIndexConvention } from "./observables/spectralIndex.js";

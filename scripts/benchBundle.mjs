@@ -125,12 +125,14 @@ if (figure === "cold") {
     RESCALE: (z) => [1e44, z, "luminosity", "W9-ALL"],
     DIST_HUBBLE: (z) => [z],
     DIST_VOLUME: (z) => [z],
-    SIGMA_CRIT: (z) => [0.005, z],
+    SIGMA_CRIT: (z) => [z, 11],
     OVERDENSITY: (z) => [z, "vir"],
     HALO_RADIUS: (z) => [1e14, z, "200c"],
     HALO_MASS: (z) => [1000, z, "500c"],
     SURFACE_LUM: (z) => [24, z, 4.65],
     SURFACE_MAG: (z) => [100, z, 4.65],
+    GROWTH: (z) => [z],
+    GROWTH_RATE: (z) => [z],
   };
   const fn = registered.get(name);
   const args = (rows) => calls[name](zs.slice(0, rows), lums.slice(0, rows));

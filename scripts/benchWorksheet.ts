@@ -19,7 +19,7 @@ const rangeFunctions = ["DIST_LUM", "DIST_ANG", "DIST_LOS", "DIST_TRANS", "DIST_
 /** Catalogue functions timed over a 100k-row column (no target: for the record), production build only. */
 const catalogueFunctions = ["DIST_LUM_ERR", "LUMINOSITY_ERR", "LUMINOSITY_REST", "REDSHIFT_LIMIT", "VOLUME_MAX", "REDSHIFT_CMB"];
 /** The population and structure functions of 0.2.0, each timed against ≤ 1 µs a cell over a 100k-row column. */
-const structureFunctions = ["LUMINOSITY_REST_ERR", "RESCALE", "DIST_HUBBLE", "DIST_VOLUME", "SIGMA_CRIT", "OVERDENSITY", "HALO_RADIUS", "HALO_MASS", "SURFACE_LUM", "SURFACE_MAG"];
+const structureFunctions = ["LUMINOSITY_REST_ERR", "RESCALE", "DIST_HUBBLE", "DIST_VOLUME", "SIGMA_CRIT", "OVERDENSITY", "HALO_RADIUS", "HALO_MASS", "SURFACE_LUM", "SURFACE_MAG", "GROWTH", "GROWTH_RATE"];
 
 /** Targets of the worksheet path (issue: one formula per row, whole ranges, first formula, new models). */
 const targets = { single: 500, range: 100, cold: 15, models: 1, degenerate: 50, specsMiB: 100, paneMs: 1000, structure: 1000 };

@@ -91,6 +91,8 @@ const about: Record<string, { summary: string; equation: string; method: string;
   OVERDENSITY: { summary: "overdensity of a halo definition relative to ρ_crit(z)", equation: "Δ = N (Nc), N·Ωm(z) (Nm), 18π² + 82x − 39x², x = Ωm(z) − 1 (vir, Bryan & Norman 1998)", method: closedForm },
   HALO_RADIUS: { summary: "halo radius at mean density Δ·ρ_crit(z)", equation: "R = (3M/(4π·Δ·ρ_crit(z)))^(1/3)", method: closedForm },
   HALO_MASS: { summary: "halo mass within a radius at mean density Δ·ρ_crit(z)", equation: "M = (4π/3)·Δ·ρ_crit(z)·R³", method: closedForm },
+  GROWTH: { summary: "linear growth factor D(z)/D(0) of cold matter", equation: "D″ + (2 + ½·dlnE²/dlna)·D′ − (3/2)·Ωm(a)·D = 0 in ln a", method: "fourth-order Runge–Kutta from a = 1e-5 on the Mészáros growing mode, cubic Hermite between steps" },
+  GROWTH_RATE: { summary: "linear growth rate f = dlnD/dlna", equation: "f = D′/D from the growth equation", method: "fourth-order Runge–Kutta from a = 1e-5 on the Mészáros growing mode, cubic Hermite between steps" },
   RESCALE: { summary: "a published value restated under another cosmology", equation: "× D_M ratio (distance), × D_L² ratio (luminosity), × D_A ratio (size), + 5·log10(D_L,from/D_L,to) (magnitude), × dV/dz ratio (density)", method: tabled },
   SURFACE_LUM: { summary: "intrinsic surface luminosity density", equation: "Σ = 10^(−0.4(μ − 10·log10(1+z) − K − M☉ − 21.572)) L☉/pc²", method: closedForm },
   SURFACE_MAG: { summary: "observed surface brightness of a surface luminosity density", equation: "μ = M☉ + 21.572 − 2.5·log10(Σ) + 10·log10(1+z) + K", method: closedForm },

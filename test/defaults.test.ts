@@ -85,6 +85,8 @@ const pinned: [string, string][] = [
     ["HALO_RADIUS"         , "mass_unit=Msun; radius_unit=kpc"],
     ["HALO_MASS"           , "radius_unit=kpc; mass_unit=Msun"],
     ["RESCALE"             , "to_model=the workbook's model"],
+    ["GROWTH"              , ""],
+    ["GROWTH_RATE"         , ""],
 ];
 
 describe("defaults that saved workbooks depend on", () => {

@@ -141,3 +141,48 @@ describe("surface brightness", () => {
     expectRelative(num("SURFACE_LUM", mu + 10 * Math.log10(1 + z) + 0.3, z, 5.11, 0.3), num("SURFACE_LUM", mu, 0, 5.11), 1e-12, "(1+z)⁴ and K removed");
   });
 });
+
+describe("linear growth", () => {
+  test.each([0, 0.5, 2, 10, 1000])("Einstein–de Sitter at z = %d: D = 1/(1+z) and f = 1 (D ∝ a, Peebles 1980 §11)", (z) => {
+    // 384 Runge–Kutta steps in ln a from z = 1e5: measured 4e-8 at z = 1000, 5e-9 at z = 2
+    expectRelative(num("GROWTH", z, "EDS"), 1 / (1 + z), 1e-7, "D");
+    expectRelative(num("GROWTH_RATE", z, "EDS"), 1, 1e-7, "f");
+  });
+
+  test.each([0.3, 1, 3, 10, 50])("flat ΛCDM without radiation at z = %d: the Heath (1977) integral D ∝ H ∫₀^a da′/(a′H)³ (rel ≤ 1e-7)", (z) => {
+    // Ωm = 0.3, ΩΛ = 0.7, E(a) = √(0.3 a⁻³ + 0.7); the integral by composite Simpson on a fine grid in a (Abramowitz & Stegun 25.4.6)
+    const E = (a: number) => Math.sqrt(0.3 / a ** 3 + 0.7);
+    const heath = (a: number) => {
+      const n = 20_000;
+      const h = a / n;
+      let sum = 0;
+      for (let i = 0; i <= n; i++) {
+        const x = i * h;
+        const f = x === 0 ? 0 : 1 / (x * E(x)) ** 3; // → x^1.5/0.3^1.5, 0 at a = 0
+        sum += (i === 0 || i === n ? 1 : i % 2 === 1 ? 4 : 2) * f;
+      }
+      return E(a) * (sum * h) / 3;
+    };
+    expectRelative(num("GROWTH", z, "H0=70; Om=0.3"), heath(1 / (1 + z)) / heath(1), 1e-7, "D(z)/D(0)");
+  });
+
+  test.each([
+    // model                          | z
+    ["P18-CMB",                         0.5],
+    ["DR2-CMB-DY5",                     1.2],   // w0–wa
+    ["H0=70; Om=0.3; OL=0.5",           0.8],   // open
+    ["H0=70; Om=0.35; OL=0.8",          2],     // closed
+  ])("%s at z = %d: f = −(1+z) dlnD/dz from a finite difference of GROWTH (rel ≤ 1e-6)", (model, z) => {
+    const h = 1e-3;
+    const dlnD = (Math.log(num("GROWTH", z + h, model)) - Math.log(num("GROWTH", z - h, model))) / (2 * h);
+    expectRelative(num("GROWTH_RATE", z, model), -(1 + z) * dlnD, 1e-6, "f");
+  });
+
+  test("f today in flat ΛCDM is close to Ωm^0.55 (Linder 2005, PRD 72, 043529, a fit: to about 1%)", () => {
+    expectRelative(num("GROWTH_RATE", 0, "H0=70; Om=0.3"), 0.3 ** 0.55, 1e-2, "γ = 0.55");
+  });
+
+  test("beyond z = 1e5 the growth is not computed: #NUM! with the reason", () => {
+    expect(failure("GROWTH", 2e5).message).toBe("ZC.GROWTH: z = 200000: linear growth is computed from z = 1e5 on (matter and radiation alone before)");
+  });
+});

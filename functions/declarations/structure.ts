@@ -91,3 +91,27 @@ export function HALO_RADIUS(mass: any[][], z: any[][], definition: any[][], mode
 export function HALO_MASS(radius: any[][], z: any[][], definition: any[][], model?: any[][], radius_unit?: string, mass_unit?: string): any[][] {
   return callFromSheet(d.HALO_MASS, [radius, z, definition, model, radius_unit, mass_unit]);
 }
+
+/**
+ * Linear growth factor D(z)/D(0) of cold matter: sub-horizon, scale-independent, massive neutrinos clustering like matter (free streaming ignored); from the growth equation in ln a, for any curvature, radiation and w0–wa dark energy.
+ * @customfunction GROWTH GROWTH
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshift, 0 … 99999 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @returns D(z)/D(0).
+ */
+export function GROWTH(z: any[][], model?: any[][]): any[][] {
+  return callFromSheet(d.GROWTH, [z, model]);
+}
+
+/**
+ * Linear growth rate f = d ln D / d ln a (same assumptions as ZC.GROWTH); fσ8 is f times σ8(z) = σ8 · ZC.GROWTH(z).
+ * @customfunction GROWTH_RATE GROWTH_RATE
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshift, 0 … 99999 (value or range).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @returns f.
+ */
+export function GROWTH_RATE(z: any[][], model?: any[][]): any[][] {
+  return callFromSheet(d.GROWTH_RATE, [z, model]);
+}

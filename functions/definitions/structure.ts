@@ -1,11 +1,13 @@
 /**
- * Structure: the distances of BAO measurements (D_H, D_V), gravitational lensing (Σ_cr), and halos
- * (overdensities, radius and mass).
+ * Structure: the distances of BAO measurements (D_H, D_V), gravitational lensing (Σ_cr), halos
+ * (overdensities, radius and mass), and the linear growth of structure.
  * Each entry: the arguments in the order of the ZC.* signature (built from argumentKinds.ts) and what one
  * cell computes in reference units; the declaration with its JSDoc is in ../declarations/structure.ts.
  */
 import {
   criticalSurfaceDensityMsunPc2,
+  growthFactor,
+  growthRate,
   haloMassMsun,
   haloOverdensity,
   haloRadiusMpc,
@@ -51,5 +53,17 @@ export const structure: FunctionDef[] = [
     name: "HALO_MASS",
     args: [amount("radius"), z, definition, model, unit("radius_unit", "Mpc", "kpc", "radius"), unit("mass_unit", "Msun")],
     compute: (a) => haloMassMsun(m(a), n(a, "radius"), n(a, "z"), def(a)),
+  },
+  {
+    name: "GROWTH",
+    args: [z, model],
+    compute: (a) => growthFactor(m(a), n(a, "z")),
+    kernel: { arg: "z", of: (a, zz) => growthFactor(m(a), zz) },
+  },
+  {
+    name: "GROWTH_RATE",
+    args: [z, model],
+    compute: (a) => growthRate(m(a), n(a, "z")),
+    kernel: { arg: "z", of: (a, zz) => growthRate(m(a), zz) },
   },
 ];
