@@ -56,7 +56,7 @@ export {
 } from "./observables/photometry.js";
 export { findPreset, presets, type Preset } from "./model/presets.js";
 export { rescaledValue, rescaleQuantities, type RescaleQuantity } from "./distances/rescale.js";
-export { hubbleDistanceAtMpc, volumeAveragedDistanceMpc } from "./distances/baoScales.js";
+export { hubbleDistanceAtMpc, soundHorizonDragMpc, volumeAveragedDistanceMpc } from "./distances/baoScales.js";
 export { criticalSurfaceDensityMsunPc2 } from "./observables/lensing.js";
 export { growthFactor, growthRate } from "./observables/growth.js";
 export { haloMassMsun, haloOverdensity, haloRadiusMpc } from "./observables/halos.js";

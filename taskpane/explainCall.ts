@@ -87,6 +87,7 @@ const about: Record<string, { summary: string; equation: string; method: string;
   DIMMING: { summary: "surface-brightness dimming", equation: "10·log10(1+z) bolometric; 2.5·(3 − α)·log10(1+z) per unit frequency", method: closedForm },
   DIST_HUBBLE: { summary: "Hubble distance at z (radial BAO distance)", equation: "D_H(z) = c/H(z)", method: closedForm },
   DIST_VOLUME: { summary: "volume-averaged distance (isotropic BAO distance)", equation: "D_V = [z·D_M²·c/H(z)]^(1/3) (Eisenstein et al. 2005)", method: tabled },
+  SOUND_HORIZON: { summary: "sound horizon at the drag epoch", equation: "r_d = 55.154·exp(−72.3(ω_ν + 0.0006)²)/(ω_cb^0.25351·ω_b^0.12807) Mpc (Aubourg et al. 2015 eq. 16)", method: "fit to a Boltzmann code, about 0.02% for the standard Neff" },
   SIGMA_CRIT: { summary: "critical surface density of a thin lens", equation: "Σ_cr = c²·D_s/(4πG·D_l·D_ls), angular-diameter distances", method: tabled },
   OVERDENSITY: { summary: "overdensity of a halo definition relative to ρ_crit(z)", equation: "Δ = N (Nc), N·Ωm(z) (Nm), 18π² + 82x − 39x², x = Ωm(z) − 1 (vir, Bryan & Norman 1998)", method: closedForm },
   HALO_RADIUS: { summary: "halo radius at mean density Δ·ρ_crit(z)", equation: "R = (3M/(4π·Δ·ρ_crit(z)))^(1/3)", method: closedForm },

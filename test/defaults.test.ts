@@ -86,6 +86,7 @@ const pinned: [string, string][] = [
     ["HALO_MASS"           , "radius_unit=kpc; mass_unit=Msun"],
     ["RESCALE"             , "to_model=the workbook's model"],
     ["GROWTH"              , ""],
+    ["SOUND_HORIZON"       , "unit=Mpc"],
     ["GROWTH_RATE"         , ""],
 ];
 

@@ -186,3 +186,27 @@ describe("linear growth", () => {
     expect(failure("GROWTH", 2e5).message).toBe("ZC.GROWTH: z = 200000: linear growth is computed from z = 1e5 on (matter and radiation alone before)");
   });
 });
+
+describe("the sound horizon", () => {
+  test.each([
+    // preset   | r_drag [Mpc] and 1σ, Planck 2018 VI (A&A 641, A6) Table 2
+    ["P18-CMB",  147.09, 0.26],
+    ["P18-BAO",  147.21, 0.23],
+  ])("%s: r_d within the 1σ of Planck 2018's r_drag (%d ± %d Mpc)", (model, rDrag, sigma) => {
+    expect(Math.abs(num("SOUND_HORIZON", model) - rDrag)).toBeLessThan(sigma);
+  });
+
+  test("the fit's formula written out (Aubourg et al. 2015 eq. 16) for a model of its own", () => {
+    // h = 0.7, Ωm = 0.3 with one 0.06 eV ν (ω_ν = 0.06/93.14, common practice), Ωb = 0.045
+    const [h, omegaNu] = [0.7, 0.06 / 93.14];
+    const expected = (55.154 * Math.exp(-72.3 * (omegaNu + 0.0006) ** 2)) / ((0.3 * h * h - omegaNu) ** 0.25351 * (0.045 * h * h) ** 0.12807);
+    expectRelative(num("SOUND_HORIZON", "H0=70; Om=0.3; Ob=0.045; Tcmb=2.7255; mnu=0.06"), expected, 1e-14, "r_d");
+    expectRelative(num("SOUND_HORIZON", "H0=70; Om=0.3; Ob=0.045; Tcmb=2.7255; mnu=0.06", "Mpc/h"), expected * h, 1e-14, "in Mpc/h");
+  });
+
+  test("a model without Ob is #N/A saying so", () => {
+    const cell = failure("SOUND_HORIZON", "H0=70; Om=0.3");
+    expect(cell.kind).toBe("na");
+    expect(cell.message).toBe("ZC.SOUND_HORIZON: the sound horizon needs the baryon density: give Ob in the model (e.g. P18-CMB; Ob=0.049)");
+  });
+});

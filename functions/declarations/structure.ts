@@ -34,6 +34,18 @@ export function DIST_VOLUME(z: any[][], model?: any[][], unit?: string): any[][]
 }
 
 /**
+ * Sound horizon at the drag epoch r_d, from the fit of Aubourg et al. 2015 (eq. 16) in ω_b, ω_cb and ω_ν, for the standard Neff; needs Ob in the model. D_M/r_d, D_H/r_d and D_V/r_d are then ratios of cells.
+ * @customfunction SOUND_HORIZON SOUND_HORIZON
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [unit] Output unit, default "Mpc" (e.g. "Mpc/h").
+ * @returns r_d (Mpc by default).
+ */
+export function SOUND_HORIZON(model?: any[][], unit?: string): any[][] {
+  return callFromSheet(d.SOUND_HORIZON, [model, unit]);
+}
+
+/**
  * Critical surface density of a thin gravitational lens, Σ_cr = c² D_s / (4πG D_l D_ls) (angular-diameter distances; D_ls from lens to source, any curvature); in Msun/pc2 unless a unit is given.
  * @customfunction SIGMA_CRIT SIGMA_CRIT
  * @helpurl https://localhost:3000/help.html#function-reference

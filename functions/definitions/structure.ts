@@ -12,6 +12,7 @@ import {
   haloOverdensity,
   haloRadiusMpc,
   hubbleDistanceAtMpc,
+  soundHorizonDragMpc,
   volumeAveragedDistanceMpc,
 } from "../../core/index.js";
 import type { ArgSpec, FunctionDef } from "../FunctionDef.js";
@@ -33,6 +34,11 @@ export const structure: FunctionDef[] = [
     args: [z, model, unit("unit", "Mpc")],
     compute: (a) => volumeAveragedDistanceMpc(m(a), n(a, "z")),
     kernel: { arg: "z", of: (a, zz) => volumeAveragedDistanceMpc(m(a), zz) },
+  },
+  {
+    name: "SOUND_HORIZON",
+    args: [model, unit("unit", "Mpc")],
+    compute: (a) => soundHorizonDragMpc(m(a)),
   },
   {
     name: "SIGMA_CRIT",
