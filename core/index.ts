@@ -59,6 +59,8 @@ export { rescaledValue, rescaleQuantities, type RescaleQuantity } from "./distan
 export { hubbleDistanceAtMpc, soundHorizonDragMpc, volumeAveragedDistanceMpc } from "./distances/baoScales.js";
 export { criticalSurfaceDensityMsunPc2 } from "./observables/lensing.js";
 export { growthFactor, growthRate } from "./observables/growth.js";
+export { binnedLuminosityFunction, type LuminosityFunctionBin } from "./observables/luminosityFunction.js";
+export { hubbleDiagramChi2 } from "./observables/hubbleDiagram.js";
 export { haloMassMsun, haloOverdensity, haloRadiusMpc } from "./observables/halos.js";
 export { surfaceBrightnessOffsetMag, surfaceLuminosityLsunPc2, surfaceMagnitude } from "./observables/surfaceBrightness.js";
 export { spectralIndexAlpha, spectralIndexConventions, type SpectralIndexConvention } from "./observables/spectralIndex.js";

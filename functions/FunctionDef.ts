@@ -82,5 +82,14 @@ export interface FunctionDef {
   kernel?: { arg: string; of: (a: Args, x: number) => number };
   /** For functions that return a whole table at once (ZC.PRESETS). */
   table?: (active: ActiveModelSetting) => Cell[][];
+  /**
+   * For functions of whole columns (a luminosity function, a χ²): the arguments named in `columns`
+   * are read as lists of cells (row-major; blanks and errors kept in place), the others as one cell
+   * each into `args`; the result is the whole output (one cell, or a table that spills).
+   */
+  over?: { columns: readonly string[]; compute: (columns: Record<string, ColumnCell[]>, args: Args) => Cell[][] };
 }
+
+/** One cell of a whole-column argument: its number, "" when blank, or the error it holds. */
+export type ColumnCell = number | "" | CellError;
 

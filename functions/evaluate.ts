@@ -11,6 +11,7 @@ import { Cosmology } from "../core/index.js";
 import { readActiveModel, settingsReady, whenSettingsReady, type ActiveModelSetting } from "./activeModel.js";
 import { CellError, classify, inFunction, toHostError } from "./cellError.js";
 import type { Args, Cell, FunctionDef } from "./FunctionDef.js";
+import { evaluateOver } from "./evaluateOver.js";
 import { messages } from "./messages.js";
 import { blank, cellAt, readCall, type CallArguments, type HScaling } from "./readArguments.js";
 
@@ -34,6 +35,10 @@ function evaluateNoting(def: FunctionDef, raw: readonly unknown[], active: Activ
     if (def.table) {
       seen.error = true;
       return def.table(active);
+    }
+    if (def.over) {
+      seen.error = true;
+      return evaluateOver(def, raw, active);
     }
     const call = readCall(def, raw, active);
     if (call.ranges.length > 0) return allCells(def, call, seen);

@@ -24,6 +24,9 @@ export const messages = {
     `ranges do not fit together: ${a} is ${ra}×${ca} and ${b} is ${rb}×${cb} (use equal sizes, a single cell, or a row against a column)`,
   tooLarge: (cells: number, most: number) => `the result would have ${cells.toLocaleString("en-US")} cells; at most ${most.toLocaleString("en-US")} are allowed`,
   required: (arg: string) => `${arg} is required`,
+  oneCellOnly: (arg: string) => `${arg} must be one cell here (the other arguments are whole columns)`,
+  columnLengths: (a: string, na: number, b: string, nb: number) => `${a} has ${na} cells and ${b} has ${nb}: give columns of the same length`,
+  inRow: (arg: string, row: number, detail: string) => `${arg} in row ${row} of the range: ${detail}`,
   unitArgument: (arg: string, detail: string) => `${arg}: ${detail}`,
   choice: (arg: string, value: string, choices: readonly string[]) =>
     `${arg}: "${value}" is not one of ${choices.join(", ")}`,

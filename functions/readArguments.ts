@@ -127,7 +127,7 @@ function singleCell(raw: unknown): unknown {
 function modelText(value: unknown, active: ActiveModelSetting): string | CellError {
   if (isIncomingError(value)) return new CellError("value", messages.inputError("model"));
   if (isBlank(value)) return active.spec;
-  if (typeof value !== "string") return new CellError("value", messages.model(messages.notText("model", value)));
+  if (typeof value !== "string") return new CellError("value", messages.notText("model", value));
   const block = value.trim();
   return block === "" ? active.spec : block;
 }

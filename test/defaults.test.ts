@@ -87,6 +87,8 @@ const pinned: [string, string][] = [
     ["RESCALE"             , "to_model=the workbook's model"],
     ["GROWTH"              , ""],
     ["SOUND_HORIZON"       , "unit=Mpc"],
+    ["LUMINOSITY_FUNCTION" , ""],
+    ["CHI2_MODULUS"        , "offset=not given"],
     ["GROWTH_RATE"         , ""],
 ];
 

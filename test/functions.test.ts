@@ -81,7 +81,7 @@ describe("the model argument", () => {
   test("bad specs give #VALUE! and unphysical models #NUM!, with the core's words", () => {
     expectError(one("DIST_LUM", 1, "PLANK2018"), "value", /model: unknown preset "PLANK2018"/);
     expectError(one("DIST_LUM", 1, "H0=70; Om=0; OL=2"), "num", /model: no big bang/);
-    expectError(one("DIST_LUM", 1, 42), "value", /model: model: 42 where text belongs/);
+    expectError(one("DIST_LUM", 1, 42), "value", /^ZC.DIST_LUM: model: 42 where text belongs$/);
   });
 });
 

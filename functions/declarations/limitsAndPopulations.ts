@@ -70,3 +70,31 @@ export function REDSHIFT_LIMIT_MAG(abs_mag: any[][], mag_limit: any[][], alpha?:
 export function VOLUME_MAX(z_max: any[][], z_lo: any[][], z_hi: any[][], area: any[][], z_min?: any[][], model?: any[][], unit?: string, area_unit?: string): any[][] {
   return callFromSheet(d.VOLUME_MAX, [z_max, z_lo, z_hi, area, z_min, model, unit, area_unit]);
 }
+
+/**
+ * Binned luminosity (or mass) function by 1/V_max (Schmidt 1968; Felten 1976): one row per bin, five columns: bin low, bin high, N, Φ = Σ(1/V_max)/Δbin, σ_Φ = √Σ(1/V_max²)/Δbin; per unit of values (per dex for log10 L, per mag for magnitudes) per unit of V_max's volume (Mpc3 from ZC.VOLUME_MAX).
+ * @customfunction LUMINOSITY_FUNCTION LUMINOSITY_FUNCTION
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param values Each source's binned quantity, e.g. log10 L (range).
+ * @param v_max Each source's V_max, > 0, e.g. from ZC.VOLUME_MAX (range of the same size).
+ * @param edges Bin edges, increasing (range); values outside them are ignored.
+ * @returns A table that spills: low, high, N, Φ, σ_Φ per bin.
+ */
+export function LUMINOSITY_FUNCTION(values: any[][], v_max: any[][], edges: any[][]): any[][] {
+  return callFromSheet(d.LUMINOSITY_FUNCTION, [values, v_max, edges]);
+}
+
+/**
+ * χ² of a Hubble diagram against a model, Σ((μ − μ_model(z) − offset)/σ)²; a blank offset is minimised over analytically (the H0–M degeneracy: χ² = A − B²/C, Goliath et al. 2001). What Solver or a what-if table over models minimises.
+ * @customfunction CHI2_MODULUS CHI2_MODULUS
+ * @helpurl https://localhost:3000/help.html#function-reference
+ * @param z Redshifts, > 0 (range).
+ * @param mu Distance moduli, mag (range of the same size).
+ * @param mu_err Their 1σ errors, > 0, mag (range of the same size).
+ * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [offset] A fixed offset in μ (mag); blank = the best one (analytic minimum).
+ * @returns χ².
+ */
+export function CHI2_MODULUS(z: any[][], mu: any[][], mu_err: any[][], model?: any[][], offset?: any[][]): any[][] {
+  return callFromSheet(d.CHI2_MODULUS, [z, mu, mu_err, model, offset]);
+}

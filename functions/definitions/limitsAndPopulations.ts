@@ -4,12 +4,50 @@
  * cell computes in reference units; the declaration with its JSDoc is in ../declarations/limitsAndPopulations.ts.
  */
 import {
+  binnedLuminosityFunction,
+  hubbleDiagramChi2,
   limitingRedshift,
   limitingRedshiftMag,
   maxVolumeMpc3,
 } from "../../core/index.js";
-import type { FunctionDef } from "../FunctionDef.js";
+import { CellError } from "../cellError.js";
+import type { ArgSpec, ColumnCell, FunctionDef } from "../FunctionDef.js";
+import { messages } from "../messages.js";
 import { num, mag, model, unit, requiredArea, m, n } from "./argumentKinds.js";
+
+const column = (name: string): ArgSpec => ({ kind: "number", name });
+
+/**
+ * Rows of equal-length columns as numbers: a row blank in every column is skipped; a row blank in
+ * some, or holding an error, is an error naming the column and the row of the range (from 1).
+ */
+function rowsOf(columns: Record<string, ColumnCell[]>, names: readonly string[]): { values: number[][]; rows: number[] } {
+  const [first] = names;
+  for (const name of names) {
+    if (columns[name].length !== columns[first].length) throw new CellError("value", messages.columnLengths(first, columns[first].length, name, columns[name].length));
+  }
+  const values: number[][] = names.map(() => []);
+  const rows: number[] = [];
+  for (let i = 0; i < columns[first].length; i++) {
+    const cells = names.map((name) => columns[name][i]);
+    if (cells.every((c) => c === "")) continue;
+    cells.forEach((c, k) => {
+      if (c instanceof CellError) throw new CellError(c.kind, messages.inRow(names[k], i + 1, c.message));
+      if (c === "") throw new CellError("value", messages.inRow(names[k], i + 1, "blank where the other columns of the row hold values"));
+      values[k].push(c);
+    });
+    rows.push(i + 1);
+  }
+  return { values, rows };
+}
+
+/** The row of the range a core error's index (among the rows read) points at, in the sheet's words. */
+function atRow(e: unknown, rows: number[]): never {
+  const message = (e as Error).message;
+  const m = /^(\w+) (\d+)( .*)$/.exec(message);
+  if (e instanceof RangeError && m) throw new CellError("num", messages.inRow(m[1], rows[Number(m[2])], m[3].trim().replace(/^= /, "")));
+  throw e;
+}
 
 
 /** Flux limits and survey volumes functions, in the order of their declarations. */
@@ -42,5 +80,41 @@ export const limitsAndPopulations: FunctionDef[] = [
       unit("unit", "Mpc3"), unit("area_unit", "sr", "deg2", "area"),
     ],
     compute: (a) => maxVolumeMpc3(m(a), n(a, "z_max"), n(a, "z_lo"), n(a, "z_hi"), n(a, "area"), n(a, "z_min")),
+  },
+  {
+    name: "LUMINOSITY_FUNCTION",
+    args: [column("values"), column("v_max"), column("edges")],
+    over: {
+      columns: ["values", "v_max", "edges"],
+      compute: (c) => {
+        const { values, rows } = rowsOf(c, ["values", "v_max"]);
+        const edges = c.edges.filter((e) => e !== "");
+        const bad = edges.find((e) => e instanceof CellError);
+        if (bad instanceof CellError) throw bad;
+        let bins;
+        try {
+          bins = binnedLuminosityFunction(values[0], values[1], edges as number[]);
+        } catch (e) {
+          if (/^edge/.test((e as Error).message)) throw new CellError("num", `edges: ${(e as Error).message}`);
+          atRow(e, rows);
+        }
+        return bins.map((b) => [b.low, b.high, b.count, b.phi, b.phiError]);
+      },
+    },
+  },
+  {
+    name: "CHI2_MODULUS",
+    args: [column("z"), column("mu"), column("mu_err"), model, num("offset", { default: Number.NaN, blankMeansDefault: true })],
+    over: {
+      columns: ["z", "mu", "mu_err"],
+      compute: (c, a) => {
+        const { values, rows } = rowsOf(c, ["z", "mu", "mu_err"]);
+        try {
+          return [[hubbleDiagramChi2(m(a), values[0], values[1], values[2], n(a, "offset"))]];
+        } catch (e) {
+          return atRow(e, rows);
+        }
+      },
+    },
   },
 ];
