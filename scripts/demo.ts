@@ -154,6 +154,30 @@ surveyCells.forEach(([label, v], i) => {
 });
 recipes.getCell("A13").value = "Cached values computed under P18-CMB; first-order errors assume independent inputs.";
 
+const structure = workbook.addWorksheet("Structure (invented)");
+structure.addRow(["INVENTED inputs for the population and structure recipes: made up, not measurements."]);
+structure.addRow(["quantity", "value", "how"]);
+const structureValue = (fn: string, ...args: unknown[]) => evaluate(definitions[fn], args, active)[0][0] as number;
+const rd = structureValue("SOUND_HORIZON");
+const structureRows: [string, ExcelJS.CellFormulaValue, string, string][] = [
+  ["r_d [Mpc]", zc("ZC.SOUND_HORIZON()", "SOUND_HORIZON"), "0.00", "sound horizon at the drag epoch (Aubourg et al. 2015 fit)"],
+  ["D_V(0.51) / r_d", { formula: storedFormula("ZC.DIST_VOLUME(0.51)/B3"), result: structureValue("DIST_VOLUME", 0.51) / rd, date1904: false }, "0.000", "isotropic BAO distance in units of r_d"],
+  ["L from a W7-BAO paper [erg/s]", zc('ZC.RESCALE(3.2E44,0.84,"luminosity","W7-BAO")', "RESCALE", 3.2e44, 0.84, "luminosity", "W7-BAO"), "0.000E+00", "3.2e44 erg/s published under W7-BAO, restated"],
+  ["Σ_cr, lens 0.35, sources 1.2 [Msun/pc2]", zc("ZC.SIGMA_CRIT(0.35,1.2)", "SIGMA_CRIT", 0.35, 1.2), "0", "critical surface density"],
+  ["R_500c of 2e14 Msun at z = 0.3 [kpc]", zc('ZC.HALO_RADIUS(2E14,0.3,"500c")', "HALO_RADIUS", 2e14, 0.3, "500c"), "0", "radius at 500 ρ_crit(z)"],
+  ["Δ_vir at z = 0.3", zc('ZC.OVERDENSITY(0.3,"vir")', "OVERDENSITY", 0.3, "vir"), "0.0", "Bryan & Norman 1998, relative to ρ_crit(z)"],
+  ["D(z = 1) / D(0)", zc("ZC.GROWTH(1)", "GROWTH", 1), "0.0000", "linear growth factor"],
+  ["f(z = 0.5)", zc("ZC.GROWTH_RATE(0.5)", "GROWTH_RATE", 0.5), "0.0000", "linear growth rate dlnD/dlna"],
+  ["Σ of 24.1 mag/arcsec² at z = 0.6 [Lsun/pc2]", zc("ZC.SURFACE_LUM(24.1,0.6,4.65,0.4)", "SURFACE_LUM", 24.1, 0.6, 4.65, 0.4), "0.00", "M☉ = 4.65, K = 0.4; dimming removed"],
+];
+structureRows.forEach(([label, value, format, how], i) => {
+  structure.getCell(`A${i + 3}`).value = label;
+  structure.getCell(`B${i + 3}`).value = value;
+  structure.getCell(`B${i + 3}`).numFmt = format;
+  structure.getCell(`C${i + 3}`).value = how;
+});
+structure.getCell(`A${structureRows.length + 4}`).value = "Cached values computed under P18-CMB.";
+
 const out = fileURLToPath(new URL("../demo/", import.meta.url));
 mkdirSync(out, { recursive: true });
 await workbook.xlsx.writeFile(`${out}zcell-demo.xlsx`);

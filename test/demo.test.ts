@@ -50,8 +50,9 @@ beforeAll(async () => {
 const formulaCells = () => [...sheets.entries()].flatMap(([sheet, cells]) => [...cells].filter(([, c]) => c.formula !== undefined).map(([address, c]) => ({ sheet, address, ...c })));
 
 describe("demo workbook, read as Excel reads it", () => {
-  test("holds the invented catalogue and recipe sample, marked as invented, and four sheets", () => {
-    expect([...sheets.keys()]).toEqual(["Catalogue (invented)", "What-if", "Model in cells", "Recipes (invented)"]);
+  test("holds the invented catalogue and recipe sample, marked as invented, and five sheets", () => {
+    expect([...sheets.keys()]).toEqual(["Catalogue (invented)", "What-if", "Model in cells", "Recipes (invented)", "Structure (invented)"]);
+    expect(sheets.get("Structure (invented)")!.get("A1")!.value).toMatch(/^INVENTED/);
     expect(sheets.get("Recipes (invented)")!.get("A1")!.value).toMatch(/^INVENTED/);
     expect(sheets.get("Recipes (invented)")!.get("AE1")!.value).toBe("survey (invented)");
     expect(sheets.get("Catalogue (invented)")!.get("A1")!.value).toMatch(/^INVENTED/);
@@ -60,13 +61,21 @@ describe("demo workbook, read as Excel reads it", () => {
 
   test("every formula calls ZC in the stored spelling, never the bare ZC. name", () => {
     const all = formulaCells();
-    expect(all.length).toBe(12 * 6 + 1 + 8 * 3 + 1 + 8 * 15 + 1);
+    expect(all.length).toBe(12 * 6 + 1 + 8 * 3 + 1 + 8 * 15 + 1 + 9);
     for (const c of all) {
       expect(c.formula, `${c.sheet}!${c.address}`).not.toMatch(/(^|[^_\w])ZC\./);
       // the one formula without ZC is the sum of the 1/V_max weights
       if (c.sheet === "Recipes (invented)" && c.address === "AB12") expect(c.formula).toBe("SUM(AB3:AB10)");
       else expect(c.formula, `${c.sheet}!${c.address}`).toMatch(/^(1\/)?_xldudf_ZC_[A-Z_]+\(/);
     }
+  });
+
+  test("the structure sheet's cached r_d is Planck 2018's r_drag within its 1σ (147.09 ± 0.26 Mpc, Planck 2018 VI Table 2)", () => {
+    const cells = sheets.get("Structure (invented)")!;
+    expect(cells.get("B3")!.formula).toBe("_xldudf_ZC_SOUND_HORIZON()");
+    expect(Math.abs(Number(cells.get("B3")!.value) - 147.09)).toBeLessThan(0.26);
+    // D_V(0.51)/r_d is the ratio of the two cached values' functions: the formula refers to B3
+    expect(cells.get("B4")!.formula).toBe("_xldudf_ZC_DIST_VOLUME(0.51)/B3");
   });
 
   test("every formula cell carries a cached value: a finite number, or text for DESCRIBE", () => {
