@@ -52,6 +52,24 @@ function zc(formula: string, name: string, ...args: unknown[]): ExcelJS.CellForm
   return { formula: storedFormula(formula), result: value, date1904: false };
 }
 
+/**
+ * Number formats a reader without zcell needs (Excel shows up to 15 digits otherwise): each column's
+ * format fits its quantity, and its width fits its header.
+ * @param ws the sheet
+ * @param headerRow the row of the headers
+ * @param formats column letter → number format of its data rows
+ * @param rows the data rows
+ */
+function formatColumns(ws: ExcelJS.Worksheet, headerRow: number, formats: Record<string, string>, rows: [number, number]): void {
+  for (const [letter, format] of Object.entries(formats)) {
+    for (let r = rows[0]; r <= rows[1]; r++) ws.getCell(`${letter}${r}`).numFmt = format;
+    const header = String(ws.getCell(`${letter}${headerRow}`).value ?? "");
+    ws.getColumn(letter).width = Math.max(11, header.length + 2);
+  }
+}
+/** Formats by quantity (common practice): redshift, distance, time, luminosity, magnitude, angle, small numbers. */
+const fmt = { z: "0.000", zErr: "0.0000", dist: "0.0", time: "0.000", sci: "0.00E+00", mag: "0.00", angle: "0.00", deg: "0.0", ratio: "0.000" };
+
 const workbook = new ExcelJS.Workbook();
 workbook.creator = "zcell demo (invented data)";
 
@@ -72,8 +90,9 @@ catalogue.forEach(([name, z, flux, m, angle], i) => {
   ]);
 });
 sheet.addRow([]);
-sheet.addRow(["Model used above: the workbook's active cosmology.", zc("ZC.DESCRIBE()", "DESCRIBE")]);
-sheet.columns.forEach((c) => (c.width = 16));
+sheet.addRow(["Model used above:", zc("ZC.DESCRIBE()", "DESCRIBE")]);
+formatColumns(sheet, 2, { B: fmt.z, C: fmt.sci, D: fmt.mag, E: fmt.angle, F: fmt.dist, G: fmt.time, H: fmt.sci, I: fmt.dist, J: fmt.ratio, K: fmt.mag }, [3, 14]);
+sheet.getColumn("A").width = 18;
 
 const whatIf = workbook.addWorksheet("What-if");
 const models = [defaultModelSpec, "W9-ALL", `${defaultModelSpec}; H0=73`];
@@ -84,10 +103,13 @@ const columns = ["B", "C", "D"];
   whatIf.addRow([z, ...models.map((model, j) => zc(`ZC.DIST_LUM($A${r},${columns[j]}$1)`, "DIST_LUM", z, model))]);
 });
 whatIf.getCell("F1").value = "D_L in Mpc: one formula per cell, a redshift from column A against a model from row 1.";
+formatColumns(whatIf, 1, { A: fmt.z, B: fmt.dist, C: fmt.dist, D: fmt.dist }, [2, 9]);
+whatIf.getColumn("D").width = 17;
 
 const inCells = workbook.addWorksheet("Model in cells");
 inCells.addRows([["H0", 70], ["Om", 0.3], ["OL", 0.7], [], ["z", "D_L [Mpc]"], [1, zc("ZC.DIST_LUM(A6,$A$1:$B$3)", "DIST_LUM", 1, [["H0", 70], ["Om", 0.3], ["OL", 0.7]])]]);
 inCells.getCell("D1").value = "A block of keys and values is one model: change H0 and every dependent formula recalculates.";
+formatColumns(inCells, 5, { A: fmt.z, B: fmt.dist }, [6, 6]);
 
 /**
  * Catalogue recipes on a second invented sample: name, z, σz, RA, Dec [deg], S_3GHz, σS [mJy], α,
@@ -153,6 +175,19 @@ surveyCells.forEach(([label, v], i) => {
   recipes.getCell(`AF${i + 2}`).value = v;
 });
 recipes.getCell("A13").value = "Cached values computed under P18-CMB; first-order errors assume independent inputs.";
+// source, z, z_err, RA, Dec, S, S_err, alpha, flux, flux_err, m, m_err, angle, angle_err, then the recipe columns O … AC
+formatColumns(
+  recipes,
+  2,
+  {
+    B: fmt.z, C: fmt.zErr, D: fmt.deg, E: fmt.deg, F: fmt.mag, G: fmt.mag, H: fmt.mag, I: fmt.sci, J: fmt.sci, K: fmt.mag, L: fmt.mag,
+    M: fmt.angle, N: fmt.angle, O: "0.00000", P: fmt.dist, Q: fmt.dist, R: fmt.sci, S: fmt.sci, T: fmt.mag, U: fmt.sci, V: fmt.sci,
+    W: fmt.mag, X: fmt.mag, Y: fmt.angle, Z: fmt.mag, AA: fmt.z, AB: fmt.sci, AC: fmt.z,
+  },
+  [3, 10],
+);
+recipes.getCell("AB12").numFmt = fmt.sci;
+recipes.getColumn("AE").width = 22;
 
 const structure = workbook.addWorksheet("Structure (invented)");
 structure.addRow(["INVENTED inputs for the population and structure recipes: made up, not measurements."]);

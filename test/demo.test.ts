@@ -17,7 +17,7 @@ import { expectRelative } from "./helpers.js";
 
 const root = fileURLToPath(new URL("..", import.meta.url));
 
-interface SheetCell { formula?: string; value?: string; type?: string }
+interface SheetCell { formula?: string; value?: string; type?: string; numFmtId?: number }
 /** Sheet name → cell address → formula, cached value text and cell type, from the raw sheet XML. */
 const sheets = new Map<string, Map<string, SheetCell>>();
 
@@ -31,6 +31,9 @@ beforeAll(async () => {
   const strings = zip.file("xl/sharedStrings.xml")
     ? parseStrictXml(await zip.file("xl/sharedStrings.xml")!.async("string")).children.map((si) => textOf(si) ?? "")
     : [];
+  // the number format of each cell style (styles.xml cellXfs; numFmtId 0 is General)
+  const styles = parseStrictXml(await zip.file("xl/styles.xml")!.async("string"));
+  const formatOfStyle = styles.children.find((c) => c.name === "cellXfs")!.children.map((xf) => Number(xf.attributes.numFmtId ?? 0));
   for (const s of book.children.find((c) => c.name === "sheets")!.children) {
     const target = rels.children.find((r) => r.attributes.Id === s.attributes["r:id"])!.attributes.Target;
     const xml = parseStrictXml(await zip.file(`xl/${target.replace(/^\/xl\//, "")}`)!.async("string"));
@@ -40,7 +43,7 @@ beforeAll(async () => {
         const f = c.children.find((x) => x.name === "f");
         const v = c.children.find((x) => x.name === "v");
         const value = c.attributes.t === "s" ? strings[Number(textOf(v))] : c.attributes.t === "inlineStr" ? textOf(c) : textOf(v);
-        cells.set(c.attributes.r, { formula: textOf(f), value, type: c.attributes.t });
+        cells.set(c.attributes.r, { formula: textOf(f), value, type: c.attributes.t, numFmtId: formatOfStyle[Number(c.attributes.s ?? 0)] });
       }
     }
     sheets.set(s.attributes.name, cells);
@@ -76,6 +79,11 @@ describe("demo workbook, read as Excel reads it", () => {
     expect(Math.abs(Number(cells.get("B3")!.value) - 147.09)).toBeLessThan(0.26);
     // D_V(0.51)/r_d is the ratio of the two cached values' functions: the formula refers to B3
     expect(cells.get("B4")!.formula).toBe("_xldudf_ZC_DIST_VOLUME(0.51)/B3");
+  });
+
+  test("every number a formula gives has a number format (not General, which shows up to 15 digits)", () => {
+    const general = formulaCells().filter((c) => c.type !== "str" && !c.numFmtId);
+    expect(general.map((c) => `${c.sheet}!${c.address}`)).toEqual([]);
   });
 
   test("every formula cell carries a cached value: a finite number, or text for DESCRIBE", () => {
