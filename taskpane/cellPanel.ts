@@ -43,6 +43,13 @@ function renderCall(c: CallExplanation): HTMLElement {
   if (c.conventions.length) add("Conventions", c.conventions.join(" "));
   add("Method", c.method);
   add(c.isError ? "Why the error" : "Result", c.result, c.isError ? "result-error" : undefined);
+  if (c.exact) {
+    // every digit, one click away and selectable for copying
+    const details = document.createElement("details");
+    details.append(el("summary", "Exact value"), el("code", c.exact, "exact-value"));
+    dl.append(el("dt", ""), Object.assign(document.createElement("dd"), { className: "exact" }));
+    (dl.lastElementChild as HTMLElement).append(details);
+  }
   box.append(dl);
   return box;
 }

@@ -13,6 +13,7 @@ import { describeModel } from "../functions/describeModel.js";
 import { evaluate, type Cell } from "../functions/evaluate.js";
 import { modelFor } from "../functions/modelCache.js";
 import { resolvedSpec } from "../functions/workbookModels.js";
+import { formatValue } from "../functions/messages.js";
 import { columnNumber, splitAddress } from "./cellAddress.js";
 import { findCalls, parseArrayConstant, type FormulaCall, type Token } from "./formulaCalls.js";
 
@@ -25,7 +26,10 @@ export interface CallExplanation {
   model?: { spec: string; source: "given in the formula" | "the workbook's model"; description: string };
   conventions: string[];
   method: string;
+  /** The result as a person reads it: at most 6 significant digits, with the unit. */
   result: string;
+  /** The result's full value (every digit Excel holds), when it is a number. */
+  exact?: string;
   isError: boolean;
 }
 
@@ -258,6 +262,7 @@ async function explainCall(
   if (info.kcorr) conventions.push("K-correction sign: M = m − μ − K, with K = −2.5(1+α)log10(1+z) for S_ν ∝ ν^α.");
 
   let result: string;
+  let exact: string | undefined;
   let isError = false;
   if (allKnown) {
     const cells = evaluate(def, raw, active);
@@ -271,11 +276,13 @@ async function explainCall(
       const unitIndex = resultUnit ? def.args.indexOf(resultUnit) : -1;
       const unitText = unitIndex >= 0 && typeof raw[unitIndex] === "string" && raw[unitIndex] ? (raw[unitIndex] as string) : resultUnit?.kind === "unit" ? resultUnit.default : "";
       const size = cells.length * cells[0].length;
-      result = `${size > 1 ? `${cells.length}×${cells[0].length} values, first ` : ""}${showValue(first)}${unitText ? ` ${unitText}` : ""}`;
+      const shown = typeof first === "number" ? formatValue(first) : showValue(first);
+      result = `${size > 1 ? `${cells.length}×${cells[0].length} values, first ` : ""}${shown}${unitText ? ` ${unitText}` : ""}`;
+      if (typeof first === "number" && shown !== String(first)) exact = `${String(first)}${unitText ? ` ${unitText}` : ""}`;
     }
   } else {
     result = `${showValue(cellValue)} (as Excel shows it; an argument is computed by Excel)`;
     isError = typeof cellValue === "string" && cellValue.startsWith("#");
   }
-  return { name: call.name, summary: info.summary, equation: info.equation, args, model, conventions, method: info.method, result, isError };
+  return { name: call.name, summary: info.summary, equation: info.equation, args, model, conventions, method: info.method, result, exact, isError };
 }
