@@ -6,7 +6,7 @@ import { parseModelSpec } from "../core/index.js";
 import { columnName, qualifiedAddress, splitAddress, topLeft } from "./cellAddress.js";
 import { $ } from "./dom.js";
 import { chartSeriesSupported, insertChart, readReference, readSelection, writeBlock } from "./excelHost.js";
-import { chartTitle, planTableForColumn, planTableWithRedshifts, redshiftSteps, tableQuantities, type TablePlan } from "./whatIfTable.js";
+import { chartTitle, tableCounts, planTableForColumn, planTableWithRedshifts, redshiftSteps, tableQuantities, type TablePlan } from "./whatIfTable.js";
 
 let pendingTable: TablePlan | undefined;
 
@@ -63,7 +63,7 @@ export function setupTables(): void {
   const write = async (plan: TablePlan, sheet?: string) => {
     await writeBlock(blockAddress(plan, sheet), plan.cells);
     $("table-confirm").hidden = true;
-    status.textContent = `Inserted a ${plan.cells.length}-row table with one live formula at ${plan.anchor}.`;
+    status.textContent = `Inserted ${tableCounts(plan)}, one live formula at ${plan.anchor}.`;
     if ($<HTMLInputElement>("table-chart").checked) status.textContent += ` ${await chartOf(plan, sheet)}`;
   };
   $("insert-table").addEventListener("click", async () => {

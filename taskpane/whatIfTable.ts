@@ -16,7 +16,7 @@ export const tableQuantities: Record<string, string> = {
   AGE: "age at z (Gyr)",
   HUBBLE: "Hubble parameter (km/s/Mpc)",
   PROPER_SCALE: "proper scale (kpc/arcsec)",
-  VOLUME: "comoving volume (Gpc3)",
+  VOLUME: "comoving volume (Mpc3)",
   VOLUME_ELEMENT: "volume element (Mpc3/sr)",
   CMB_TEMP: "CMB temperature (K)",
   CRIT_DENSITY: "critical density (kg/m3)",
@@ -42,6 +42,14 @@ export interface TablePlan {
   area: string;
   /** What a chart of the table plots: the redshift column and each model's column of values (addresses). */
   chart: { z: string; series: { name: string; values: string }[] };
+  /** How many redshifts and models the table holds (for the message that says what was inserted). */
+  counts: { redshifts: number; models: number };
+}
+
+/** What a table holds, in words: "4 redshifts × 3 models". */
+export function tableCounts(plan: TablePlan): string {
+  const { redshifts, models } = plan.counts;
+  return `${redshifts} redshift${redshifts === 1 ? "" : "s"} × ${models} model${models === 1 ? "" : "s"}`;
 }
 
 /** A chart's title: the quantity with its unit, against z, and the models. */
@@ -74,6 +82,7 @@ export function planTableWithRedshifts(quantity: string, redshifts: number[], mo
     cells,
     area: `${zCol}${row}:${last}${bottom}`,
     chart: { z: `${zCol}${top}:${zCol}${bottom}`, series: seriesOf(models, col + 1, top, bottom) },
+    counts: { redshifts: redshifts.length, models: models.length },
   };
 }
 
@@ -98,6 +107,7 @@ export function planTableForColumn(quantity: string, zRange: { row: number; col:
     cells,
     area: `${first}${header}:${last}${bottom}`,
     chart: { z: `${zCol}${zRange.row}:${zCol}${bottom}`, series: seriesOf(models, zRange.col + 1, zRange.row, bottom) },
+    counts: { redshifts: zRange.rows, models: models.length },
   };
 }
 

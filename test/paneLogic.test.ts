@@ -6,7 +6,7 @@ import { derivedValues, formFromSpec, modelFromForm } from "../taskpane/modelFor
 import { provenanceNote } from "../taskpane/provenanceNote.js";
 import { contrast } from "../taskpane/theme.js";
 import { columnName, columnNumber } from "../taskpane/cellAddress.js";
-import { chartTitle, planTableForColumn, planTableWithRedshifts, redshiftSteps } from "../taskpane/whatIfTable.js";
+import { chartTitle, planTableForColumn, planTableWithRedshifts, redshiftSteps, tableCounts } from "../taskpane/whatIfTable.js";
 
 describe("model form", () => {
   test("shows a preset and gives back its canonical spec; an edit is a change to the preset", () => {
@@ -44,9 +44,16 @@ describe("what-if tables", () => {
   test("redshift steps are inclusive of stop and refuse nonsense", () => {
     expect(redshiftSteps(0, 1, 0.25)).toEqual([0, 0.25, 0.5, 0.75, 1]);
     expect(redshiftSteps(0.1, 0.3, 0.1)).toEqual([0.1, 0.2, 0.3]);
+    // 0.1 to 1 by 0.1 ends at 1 although 0.1 + 9 × 0.1 is 0.9999999999999999 in binary floating point
+    expect(redshiftSteps(0.1, 1, 0.1)).toEqual([0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9, 1]);
     expect(() => redshiftSteps(-1, 1, 0.1)).toThrow(/not negative/);
     expect(() => redshiftSteps(0, 1, 0)).toThrow(/step must be > 0/);
     expect(() => redshiftSteps(0, 1e6, 1)).toThrow(/at most 10,000/);
+  });
+
+  test("the message after inserting counts redshifts and models, not rows", () => {
+    expect(tableCounts(planTableWithRedshifts("DIST_LUM", redshiftSteps(0.1, 1, 0.25), ["P18-CMB", "W9-ALL", "EDS"], 10, 4))).toBe("4 redshifts × 3 models");
+    expect(tableCounts(planTableForColumn("AGE", { row: 2, col: 1, rows: 1 }, ["EDS"]))).toBe("1 redshift × 1 model");
   });
 
   test("a selected column gets the models in the row above and one formula beside it", () => {

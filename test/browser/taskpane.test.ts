@@ -169,7 +169,7 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await page.fill("#table-step", "0.25");
       await page.screenshot({ path: `${shots}tables-${themeName}.png`, fullPage: true });
       await page.locator("#insert-table").click();
-      await expect.poll(() => page.locator("#table-status").textContent()).toMatch(/Inserted a 5-row table/);
+      await expect.poll(() => page.locator("#table-status").textContent()).toBe("Inserted 4 redshifts × 3 models, one live formula at D10.");
       const cells = (await fake(page, "sheets.Sheet1")) as Record<string, { formula?: string; value?: unknown }>;
       expect(cells.D10.value).toBe("z");
       expect([cells.E10.value, cells.F10.value, cells.G10.value]).toEqual(["P18-CMB", "W9-ALL", "P18-CMB; H0=73"]);
@@ -227,7 +227,7 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!D10"));
       await page.check("#table-chart");
       await page.locator("#insert-table").click();
-      await expect.poll(() => page.locator("#table-status").textContent()).toMatch(/Inserted a .*No chart: this Excel lacks the chart series API \(ExcelApi 1\.7\)/);
+      await expect.poll(() => page.locator("#table-status").textContent()).toMatch(/Inserted 20 redshifts × 3 models, .*No chart: this Excel lacks the chart series API \(ExcelApi 1\.7\)/);
       expect(await fake(page, "charts")).toEqual([]);
       await page.close();
     });
