@@ -9,7 +9,7 @@ import { defaultModelSpec, readActiveModel } from "../functions/activeModel.js";
 import { modelNameProblem, noWorkbookModels, type WorkbookModels } from "../functions/workbookModels.js";
 import { $, el, plural } from "./dom.js";
 import { countCellsNaming, readModelSetting, recalculateWorkbook, writeModelSetting, writeWorkbookModels } from "./excelHost.js";
-import { derivedValues, formFields, formFromSpec, formGroups, modelFromForm, shownText, type FormValues } from "./modelForm.js";
+import { changedFields, derivedValues, formFields, formFromSpec, formGroups, modelFromForm, shownText, type FormValues } from "./modelForm.js";
 
 const fieldLabels: Record<(typeof formFields)[number], string> = {
   H0: "H0 (km/s/Mpc)", Om: "Om (matter incl. ν)", OL: "OL (or “flat”)", w0: "w0", wa: "wa",
@@ -63,6 +63,25 @@ function refreshForm(): void {
   currentSpec = result.spec;
   $<HTMLInputElement>("spec").value = result.spec ?? "";
   ($("apply") as HTMLElement & { disabled: boolean }).disabled = !result.spec;
+  showNotApplied();
+}
+
+/** The model the workbook uses (as stored, or the default), for the "not applied" mark. */
+let appliedSpec = defaultModelSpec;
+
+/** Marks a form that differs from the workbook's model, naming what differs; clears the mark otherwise. */
+function showNotApplied(): void {
+  const mark = $("not-applied");
+  let applied: FormValues | undefined;
+  try {
+    applied = formFromSpec(appliedSpec, workbookModels.named);
+  } catch {
+    applied = undefined;
+  }
+  const changed = applied ? changedFields(readForm(), applied) : ["preset" as const];
+  mark.hidden = changed.length === 0;
+  const names = changed.map((k) => (k === "preset" ? "Start from" : k));
+  mark.textContent = changed.length === 0 ? "" : `Not applied — the workbook still uses ${appliedSpec}. Changed here: ${names.join(", ")}.`;
 }
 
 /** Builds the form, shows the stored model (or the fallback with its warning) and wires Apply. */
@@ -248,8 +267,10 @@ function setupWorkbookModels(): void {
 
 let askToDelete: (name: string) => Promise<void> = async () => undefined;
 
-/** The header badge naming the workbook's model. */
+/** The header badge naming the workbook's model (and the "not applied" mark measured against it). */
 export function showBadge(spec: string): void {
   $("model-badge").textContent = `Workbook model: ${spec}`;
+  appliedSpec = spec;
+  showNotApplied();
 }
 

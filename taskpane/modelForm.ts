@@ -140,3 +140,14 @@ export function derivedValues(m: Cosmology): { label: string; value: string }[] 
     { label: "Matter–radiation equality z_eq", value: Number.isFinite(m.equalityRedshift) ? fmt(m.equalityRedshift) : "none (Tcmb = 0)" },
   ];
 }
+
+/**
+ * The entries of the form that differ from the model the workbook uses (both as the form shows them):
+ * "preset" and the parameter fields, in the form's order; empty when the form shows that model.
+ * @param form the form as it stands
+ * @param applied the workbook's model, as the form would show it
+ */
+export function changedFields(form: FormValues, applied: FormValues): (keyof FormValues)[] {
+  const keys: (keyof FormValues)[] = ["preset", ...formFields];
+  return keys.filter((k) => form[k].trim() !== applied[k].trim());
+}

@@ -2,7 +2,7 @@
 import { describe, expect, test } from "vitest";
 import { definitions } from "../functions/definitions.js";
 import { explainFormula } from "../taskpane/explainCall.js";
-import { derivedValues, formFromSpec, modelFromForm } from "../taskpane/modelForm.js";
+import { changedFields, derivedValues, formFromSpec, modelFromForm } from "../taskpane/modelForm.js";
 import { provenanceNote } from "../taskpane/provenanceNote.js";
 import { contrast } from "../taskpane/theme.js";
 import { columnName, columnNumber } from "../taskpane/cellAddress.js";
@@ -113,5 +113,16 @@ describe("charts of what-if tables", () => {
     const selected = planTableForColumn("DIST_LUM", { row: 6, col: 4, rows: 3 }, ["W9-ALL"]); // z in D6:D8
     expect(selected.chart).toEqual({ z: "D6:D8", series: [{ name: "W9-ALL", values: "E6:E8" }] });
     expect(chartTitle("LOOKBACK", ["P18-BAO", "EDS"])).toBe("look-back time (Gyr) against redshift — P18-BAO, EDS");
+  });
+});
+
+describe("the not-applied mark", () => {
+  test("names the entries of the form that differ from the workbook's model, none when they agree", () => {
+    const applied = formFromSpec("W9-ALL");
+    expect(changedFields(formFromSpec("W9-ALL"), applied)).toEqual([]);
+    expect(changedFields({ ...applied, H0: "73" }, applied)).toEqual(["H0"]);
+    expect(changedFields({ ...applied, H0: " 69.32 " }, applied)).toEqual([]); // spaces are not a change
+    expect(changedFields(formFromSpec("W9-ALL; Om=0.3"), applied)).toEqual(["Om"]);
+    expect(changedFields(formFromSpec("P18-CMB"), applied)[0]).toBe("preset");
   });
 });

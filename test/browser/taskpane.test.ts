@@ -70,6 +70,7 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await page.getByRole("tab", { name: "Cosmology" }).waitFor();
       expect(await page.locator("#model-badge").textContent()).toBe("Workbook model: W9-ALL");
       expect(await page.locator("#f-H0").inputValue()).toBe("69.32"); // W9-ALL H0, Hinshaw et al. 2013 Table 4
+      expect(await page.locator("#not-applied").isHidden()).toBe(true); // the form shows the workbook's model
       // the derived age shown for W9-ALL, to the 5 digits the form shows
       const age = Number(/Age today([\d.]+) Gyr/.exec((await page.locator("#derived").textContent())!)![1]);
       expect(age).toBe(Number(slow(publishedModels["W9-ALL"]).ageGyr(0).toPrecision(5)));
@@ -84,9 +85,12 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await page.fill("#f-H0", "73");
       expect(await page.locator("#spec").inputValue()).toBe("P18-BAO; H0=73");
       expect(await page.locator("#derived").textContent()).toMatch(/Age today/);
+      // edited but not applied: said plainly, with what differs from the workbook's model
+      expect(await page.locator("#not-applied").textContent()).toBe("Not applied — the workbook still uses W9-ALL. Changed here: Start from, H0, Om, Tcmb, Neff, mnu, Ob.");
       await page.screenshot({ path: `${shots}cosmology-${themeName}.png`, fullPage: true });
       await page.locator("#apply").click();
       await expect.poll(() => page.locator("#apply-status").textContent()).toBe("Applied P18-BAO; H0=73; 3 formulas recalculated.");
+      expect(await page.locator("#not-applied").isHidden()).toBe(true);
       expect(await fake(page, "saved")).toEqual({ "zcell.activeModel": "P18-BAO; H0=73" });
       expect(await fake(page, "calculations")).toEqual(["Full"]);
       // the recalculated cells hold the numbers of the new model (computed by the built functions)
