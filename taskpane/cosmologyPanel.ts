@@ -62,8 +62,16 @@ function refreshForm(): void {
   }
   currentSpec = result.spec;
   $<HTMLInputElement>("spec").value = result.spec ?? "";
+  describeChoice();
   ($("apply") as HTMLElement & { disabled: boolean }).disabled = !result.spec;
   showNotApplied();
+}
+
+/** The chosen preset's description and source (or a workbook model's spec) in full, under the short name in the list. */
+function describeChoice(): void {
+  const name = $<HTMLSelectElement>("preset").value;
+  const builtIn = presets.find((p) => p.name === name);
+  $("preset-description").textContent = builtIn ? builtIn.description : name ? `defined in this workbook: ${workbookModels.specs.get(name) ?? ""}` : "";
 }
 
 /** The model the workbook uses (as stored, or the default), for the "not applied" mark. */
@@ -110,6 +118,7 @@ export function setupCosmology(): void {
   preset.addEventListener("change", () => {
     if (preset.value) fillForm(formFromSpec(preset.value, workbookModels.named));
     else refreshForm();
+    describeChoice();
   });
 
   // The settings were written by whoever last saved the workbook: whatever they hold, the form
@@ -178,7 +187,7 @@ function showModelChoices(): void {
   preset.replaceChildren(new Option("(no preset: parameters only)", ""));
   const builtIn = document.createElement("optgroup");
   builtIn.label = "Built in";
-  for (const p of presets) builtIn.append(new Option(`${p.name} — ${p.description}`, p.name));
+  for (const p of presets) builtIn.append(new Option(p.name, p.name));
   preset.append(builtIn);
   const list = $("workbook-models");
   list.replaceChildren();
@@ -186,7 +195,7 @@ function showModelChoices(): void {
     const own = document.createElement("optgroup");
     own.label = "Defined in this workbook";
     for (const [name, spec] of workbookModels.specs) {
-      own.append(new Option(`${name} — ${spec}`, name));
+      own.append(new Option(name, name));
       const item = el("li");
       const remove = el("fluent-button", "Delete");
       remove.append(el("span", ` ${name}`, "visually-hidden")); // its accessible name says which model

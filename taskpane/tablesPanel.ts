@@ -57,7 +57,10 @@ async function chartOf(plan: TablePlan, sheet: string | undefined): Promise<stri
 /** Fills the quantity list and wires the panel's buttons. */
 export function setupTables(): void {
   const q = $<HTMLSelectElement>("table-quantity");
-  for (const [name, label] of Object.entries(tableQuantities)) q.append(new Option(`${label} — ZC.${name}`, name));
+  for (const [name, label] of Object.entries(tableQuantities)) q.append(new Option(label, name));
+  const describeQuantity = () => ($("table-quantity-description").textContent = `computed by ZC.${q.value}, one live formula over the redshifts and models`);
+  q.addEventListener("change", describeQuantity);
+  describeQuantity();
   const status = $("table-status");
   let sheetOfPending: string | undefined;
   const write = async (plan: TablePlan, sheet?: string) => {

@@ -78,6 +78,9 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       // shown as a person types it (≤ 6 significant digits); the exact value stays behind it
       expect(await page.locator("#f-Ob").inputValue()).toBe("0.0489747"); // Ωb h² = 0.02242 (Planck 2018 VI Table 2) / 0.6766², to 6 digits
       expect(await page.locator("#spec").inputValue()).toBe("P18-BAO");
+      // the list shows short names (it is cut at the pane's 320 px otherwise); the full source is below it
+      expect(await page.locator("#preset").evaluate((sel) => (sel as HTMLSelectElement).selectedOptions[0].textContent)).toBe("P18-BAO");
+      expect(await page.locator("#preset-description").textContent()).toMatch(/Planck 2018 VI, A&A 641, A6, Table 2, CMB\+lensing\+BAO$/);
       await page.selectOption("#preset", "P18-BAO");
       await page.fill("#f-H0", "-5");
       await expect.poll(() => page.locator("#e-H0").textContent()).toMatch(/H0 must be a positive number/);
