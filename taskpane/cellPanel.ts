@@ -41,7 +41,14 @@ function renderCall(c: CallExplanation): HTMLElement {
   for (const a of c.args) add(a.name, `${a.text} → ${a.value}${a.unit ? ` [${a.unit}]` : ""}`);
   if (c.model) add("Model", `${c.model.spec} (${c.model.source}): ${c.model.description}`);
   if (c.conventions.length) add("Conventions", c.conventions.join(" "));
-  add("Method", c.method);
+  add("Method", c.methodPlain);
+  if (c.methodPlain !== c.method) {
+    const details = document.createElement("details");
+    details.append(el("summary", "How exactly"), el("span", c.method));
+    const dd = el("dd", undefined, "method-detail");
+    dd.append(details);
+    dl.append(el("dt", ""), dd);
+  }
   add(c.isError ? "Why the error" : "Result", c.result, c.isError ? "result-error" : undefined);
   if (c.exact) {
     // every digit, one click away and selectable for copying

@@ -26,6 +26,8 @@ export interface CallExplanation {
   model?: { spec: string; source: "given in the formula" | "the workbook's model"; description: string };
   conventions: string[];
   method: string;
+  /** The method in one plain line; `method` holds the detail. */
+  methodPlain: string;
   /** The result as a person reads it: at most 6 significant digits, with the unit. */
   result: string;
   /** The result's full value (every digit Excel holds), when it is a number. */
@@ -40,9 +42,20 @@ const tabled =
   "quintic Hermite tables in ln(1+z) built once per model from Gauss–Legendre panels of the exact integrals " +
   "(direct quadrature below z ≈ 0.065 and above z = 1e8); relative error ≤ 1e-10 for z ≤ 1e4, ≤ 1e-8 to 1e7";
 const closedForm = "closed form, exact to rounding";
+const growthMethod = "fourth-order Runge–Kutta in ln a from a = 1e-5 on the Mészáros growing mode, cubic Hermite between steps; relative error ≤ 1e-7";
 const inverse = "Newton's method on the same tables, bracketed by bisection; |Δz| ≤ 1e-9 (1+z)";
 const firstOrder = "first-order propagation of independent errors with the exact derivative dD_C/dz = D_H/E(z) (no covariances)";
 const firstCrossing = "scan upward in ln(1+z), then Newton with the exact derivative on the first crossing";
+
+/** The method in one plain line (the detail stays one click away in the pane). */
+function plainMethod(method: string): string {
+  if (method === tabled) return "From tables of the exact integrals: relative error ≤ 1e-10 for z ≤ 10⁴.";
+  if (method === inverse) return "Solved for z on the same tables as the forward function.";
+  if (method === firstOrder) return "First-order error propagation from independent inputs (no covariances).";
+  if (method === firstCrossing) return "The first redshift at which the source crosses the limit.";
+  if (method === growthMethod) return "Solved from the growth equation: relative error ≤ 1e-7.";
+  return method;
+}
 
 /** What each function computes, in plain notation, and how. */
 const about: Record<string, { summary: string; equation: string; method: string; kcorr?: boolean }> = {
@@ -98,8 +111,8 @@ const about: Record<string, { summary: string; equation: string; method: string;
   OVERDENSITY: { summary: "overdensity of a halo definition relative to ρ_crit(z)", equation: "Δ = N (Nc), N·Ωm(z) (Nm), 18π² + 82x − 39x², x = Ωm(z) − 1 (vir, Bryan & Norman 1998)", method: closedForm },
   HALO_RADIUS: { summary: "halo radius at mean density Δ·ρ_crit(z)", equation: "R = (3M/(4π·Δ·ρ_crit(z)))^(1/3)", method: closedForm },
   HALO_MASS: { summary: "halo mass within a radius at mean density Δ·ρ_crit(z)", equation: "M = (4π/3)·Δ·ρ_crit(z)·R³", method: closedForm },
-  GROWTH: { summary: "linear growth factor D(z)/D(0) of cold matter", equation: "D″ + (2 + ½·dlnE²/dlna)·D′ − (3/2)·Ωm(a)·D = 0 in ln a", method: "fourth-order Runge–Kutta from a = 1e-5 on the Mészáros growing mode, cubic Hermite between steps" },
-  GROWTH_RATE: { summary: "linear growth rate f = dlnD/dlna", equation: "f = D′/D from the growth equation", method: "fourth-order Runge–Kutta from a = 1e-5 on the Mészáros growing mode, cubic Hermite between steps" },
+  GROWTH: { summary: "linear growth factor D(z)/D(0) of cold matter", equation: "D″ + (2 + ½·dlnE²/dlna)·D′ − (3/2)·Ωm(a)·D = 0 in ln a", method: growthMethod },
+  GROWTH_RATE: { summary: "linear growth rate f = dlnD/dlna", equation: "f = D′/D from the growth equation", method: growthMethod },
   RESCALE: { summary: "a published value restated under another cosmology", equation: "× D_M ratio (distance), × D_L² ratio (luminosity), × D_A ratio (size), + 5·log10(D_L,from/D_L,to) (magnitude), × dV/dz ratio (density)", method: tabled },
   SURFACE_LUM: { summary: "intrinsic surface luminosity density", equation: "Σ = 10^(−0.4(μ − 10·log10(1+z) − K − M☉ − 21.572)) L☉/pc²", method: closedForm },
   SURFACE_MAG: { summary: "observed surface brightness of a surface luminosity density", equation: "μ = M☉ + 21.572 − 2.5·log10(Σ) + 10·log10(1+z) + K", method: closedForm },
@@ -284,5 +297,5 @@ async function explainCall(
     result = `${showValue(cellValue)} (as Excel shows it; an argument is computed by Excel)`;
     isError = typeof cellValue === "string" && cellValue.startsWith("#");
   }
-  return { name: call.name, summary: info.summary, equation: info.equation, args, model, conventions, method: info.method, result, exact, isError };
+  return { name: call.name, summary: info.summary, equation: info.equation, args, model, conventions, method: info.method, methodPlain: plainMethod(info.method), result, exact, isError };
 }

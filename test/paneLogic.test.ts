@@ -96,6 +96,9 @@ describe("cell inspector", () => {
       expect(call.summary, name).not.toBe("");
       expect(call.equation, name).not.toBe("");
       expect(call.method, name).not.toBe("");
+      // plain words first: one short line, the detail behind it
+      expect(call.methodPlain.length, name).toBeLessThanOrEqual(call.method.length);
+      expect(call.methodPlain, name).not.toMatch(/Hermite|Gauss–Legendre|bisection/);
     }
   });
 
