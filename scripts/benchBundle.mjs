@@ -11,6 +11,7 @@
 //   cold            the first DIST_LUM after the bundle loads (shared tables + model), ms
 //   models          DIST_LUM(1, "P18-BAO; H0=…") with a new model each call, ms a model (mean of 200)
 //   degenerate      the slowest single cell among inverses and distances in models at the edge, ms
+//   growthTable     the growth table a new model builds at its first GROWTH (GROWTH minus DIST_LUM of a new model), ms
 //   specs:<N>       DIST_LUM(1, <column of N distinct specs>): ms a spec and the extra RSS the call took, MiB
 //   catalogue:<NAME> one call over a 100k-row column of a catalogue function (arguments below), ns a cell
 import { readFileSync } from "node:fs";
@@ -155,6 +156,26 @@ if (figure === "cold") {
   const t0 = now();
   for (let i = 0; i < count; i++) sink += (await settle(fn([[1]], [[`${preset}; H0=${60 + i / 20}`]])))[0][0];
   result = { ms: (now() - t0) / count, check: sink };
+} else if (figure === "growthTable") {
+  // the growth table a model builds at its first GROWTH: a new model's GROWTH minus its DIST_LUM
+  const distance = registered.get("DIST_LUM");
+  const growth = registered.get("GROWTH");
+  await settle(growth([[1]]));
+  const count = 100;
+  let sink = 0;
+  let both = 0;
+  let alone = 0;
+  for (let i = 0; i < count; i++) {
+    const spec = [[`${preset}; H0=${60 + i / 20}`]];
+    const other = [[`${preset}; H0=${80 + i / 20}`]];
+    let t0 = now();
+    sink += (await settle(distance([[1]], other)))[0][0];
+    alone += now() - t0;
+    t0 = now();
+    sink += (await settle(growth([[1]], spec)))[0][0];
+    both += now() - t0;
+  }
+  result = { ms: (both - alone) / count, check: sink };
 } else if (figure.startsWith("specs:")) {
   // one DIST_LUM over a column of distinct model specs: time a spec and the memory the call keeps
   const count = Number(figure.slice("specs:".length));
