@@ -315,6 +315,11 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       for (const tab of ["Cosmology", "This cell", "Tables", "Freeze"]) {
         await page.getByRole("tab", { name: tab }).click();
         if (tab === "This cell") await expect.poll(() => page.locator("#cell-explanation").textContent()).toMatch(/D_L/);
+        if (tab === "Cosmology") {
+          // the edited-but-not-applied state is checked too
+          await page.fill("#f-H0", "73");
+          await expect.poll(() => page.locator("#not-applied").isVisible()).toBe(true);
+        }
         expect(await axeViolations(page), tab).toEqual([]);
       }
       await page.close();
