@@ -7,7 +7,7 @@
 import { Cosmology, parseModelSpec, parseUnit, scaledConversion } from "../core/index.js";
 import type { ActiveModelSetting } from "./activeModel.js";
 import { CellError, classify, isIncomingError } from "./cellError.js";
-import type { Args, ArgSpec, FunctionDef } from "./FunctionDef.js";
+import type { Args, ArgSpec, ColumnCell, FunctionDef } from "./FunctionDef.js";
 import { messages } from "./messages.js";
 import { isBlank, keyValueBlockSpec } from "./modelArgument.js";
 import { modelFor } from "./modelCache.js";
@@ -466,4 +466,29 @@ function readColumn(
       i++;
     }
   }
+}
+
+/** Cells one whole-column argument may hold (a whole column of a sheet, 1,048,576 rows: from memory). */
+const maxColumnCells = 1_048_576;
+
+/**
+ * A whole-column argument (FunctionDef.over) as a list of cells, row-major: numbers (text numbers
+ * too), "" for blanks, and errors in place, so the function can name the row a problem came from.
+ * @throws CellError when the argument is omitted or longer than a sheet's column
+ */
+export function readColumnCells(name: string, raw: unknown): ColumnCell[] {
+  const matrix = toMatrix(raw);
+  if (!matrix) throw new CellError("value", messages.required(name));
+  const cells: ColumnCell[] = [];
+  for (const row of matrix) {
+    for (const value of row) {
+      if (cells.length >= maxColumnCells) throw new CellError("value", messages.tooLarge(cells.length + 1, maxColumnCells));
+      if (typeof value === "number") cells.push(Number.isFinite(value) ? value : new CellError("num", messages.notFinite(name)));
+      else if (isBlank(value)) cells.push("");
+      else if (typeof value === "string" && numberText.test(value.trim())) cells.push(Number(value.trim()));
+      else if (isIncomingError(value)) cells.push(new CellError("value", messages.inputError(name)));
+      else cells.push(new CellError("value", messages.notANumber(name, value)));
+    }
+  }
+  return cells;
 }

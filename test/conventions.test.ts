@@ -6,25 +6,12 @@
  */
 import { describe, expect, test } from "vitest";
 import { defaultModelSpec } from "../functions/activeModel.js";
-import { CellError } from "../functions/cellError.js";
-import { definitions } from "../functions/definitions.js";
-import { evaluate, type Cell } from "../functions/evaluate.js";
 import { publishedModels } from "./fixtures.js";
+import { sheetCalls } from "./sheetCalls.js";
 import { expectRelative, fivePoint, normal, seededRandom, standardDeviation } from "./helpers.js";
 import { SlowCosmology } from "./reference/slowCosmology.js";
 
-const active = { spec: defaultModelSpec, stored: false };
-const one = (name: string, ...args: unknown[]): Cell => evaluate(definitions[name], args, active)[0][0];
-const num = (name: string, ...args: unknown[]): number => {
-  const cell = one(name, ...args);
-  if (typeof cell !== "number") throw new Error(`${name}(${args.join(", ")}) gave ${cell instanceof CellError ? cell.message : String(cell)}`);
-  return cell;
-};
-const failure = (name: string, ...args: unknown[]): CellError => {
-  const cell = one(name, ...args);
-  if (!(cell instanceof CellError)) throw new Error(`${name}(${args.join(", ")}) gave ${String(cell)}, not an error`);
-  return cell;
-};
+const { one, num, failure } = sheetCalls(defaultModelSpec);
 
 // Einstein–de Sitter (preset EDS: H0 = 70, Ωm = 1, no radiation): D_M = 2 D_H (1 − 1/√(1+z)) (Hogg 1999 eq. 16 with Ωm = 1, derived)
 const dH = 299792.458 / 70; // Mpc, c/H0 (c exact, SI 2019)

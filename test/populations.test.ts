@@ -5,12 +5,10 @@
  */
 import { describe, expect, test } from "vitest";
 import { CellError } from "../functions/cellError.js";
-import { definitions } from "../functions/definitions.js";
-import { evaluate, type Cell } from "../functions/evaluate.js";
+import { sheetCalls } from "./sheetCalls.js";
 import { expectRelative } from "./helpers.js";
 
-const active = { spec: "P18-CMB", stored: false };
-const run = (name: string, ...args: unknown[]): Cell[][] => evaluate(definitions[name], args, active);
+const { run } = sheetCalls("P18-CMB");
 const col = (xs: unknown[]) => xs.map((x) => [x]);
 
 // an INVENTED sample of eight sources: log10 L [erg/s] and V_max [Mpc3]

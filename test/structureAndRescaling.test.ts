@@ -5,23 +5,10 @@
  * published formulas named beside each.
  */
 import { describe, expect, test } from "vitest";
-import { CellError } from "../functions/cellError.js";
-import { definitions } from "../functions/definitions.js";
-import { evaluate, type Cell } from "../functions/evaluate.js";
+import { sheetCalls } from "./sheetCalls.js";
 import { expectRelative } from "./helpers.js";
 
-const active = { spec: "P18-CMB", stored: false };
-const one = (name: string, ...args: unknown[]): Cell => evaluate(definitions[name], args, active)[0][0];
-const num = (name: string, ...args: unknown[]): number => {
-  const cell = one(name, ...args);
-  if (typeof cell !== "number") throw new Error(`${name}(${args.join(", ")}) gave ${cell instanceof CellError ? cell.message : String(cell)}`);
-  return cell;
-};
-const failure = (name: string, ...args: unknown[]): CellError => {
-  const cell = one(name, ...args);
-  if (!(cell instanceof CellError)) throw new Error(`${name}(${args.join(", ")}) gave ${String(cell)}, not an error`);
-  return cell;
-};
+const { num, failure } = sheetCalls("P18-CMB");
 
 const GMsun = 1.3271244e20; // m³ s⁻², IAU 2015 Resolution B3 nominal solar mass parameter
 const c = 299_792_458; // m/s, exact (SI)

@@ -239,6 +239,18 @@ export class ExpansionRate {
     if (leading && leading.coefficient < 0) this.noBigBang(previous, Number.POSITIVE_INFINITY);
   }
 
+  /** Massive neutrinos' density in units of today's critical density, at 1+z = zp. */
+  private massiveNeutrinoDensity(zp: number): number {
+    let massive = 0;
+    for (const y0 of this.massiveY0) massive += this.neutrinoSpeciesDensity * zp ** 4 * fermiDiracDensityFactor(y0 / zp);
+    return massive;
+  }
+
+  /** All matter (cold matter and massive neutrinos) in units of today's critical density, Ωm(z) E²(z), at 1+z = zp. */
+  matterDensity(zp: number): number {
+    return this.coldMatter * zp ** 3 + this.massiveNeutrinoDensity(zp);
+  }
+
   /**
    * Density parameter Ω_x(z) = ρ_x(z)/ρ_crit(z) of one component. "matter" counts massive neutrinos
    * with matter at every z (the Om convention) and "radiation" is photons plus massless species, so
@@ -255,12 +267,10 @@ export class ExpansionRate {
     const lnZp = Math.log1p(z);
     const e2 = this.e2(zp, lnZp);
     const zp4 = zp ** 4;
-    let massive = 0;
-    for (const y0 of this.massiveY0) massive += this.neutrinoSpeciesDensity * zp4 * fermiDiracDensityFactor(y0 / zp);
     let density: number;
     switch (component) {
       case "matter":
-        density = this.coldMatter * zp ** 3 + massive;
+        density = this.matterDensity(zp);
         break;
       case "cold":
         density = this.coldMatter * zp ** 3;
@@ -278,7 +288,7 @@ export class ExpansionRate {
         density = this.Ogamma * zp4;
         break;
       case "neutrinos":
-        density = this.masslessNeutrinos * zp4 + massive;
+        density = this.masslessNeutrinos * zp4 + this.massiveNeutrinoDensity(zp);
         break;
       default:
         throw new TypeError(`unknown component "${String(component)}": use matter, cold, darkenergy, curvature, radiation, photons or neutrinos`);

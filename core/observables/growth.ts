@@ -37,7 +37,7 @@ function buildTable(model: Cosmology): GrowthTable {
     const zp = Math.exp(lnZp);
     const e2 = expansion.e2(zp, lnZp);
     const dlnE2 = (-zp * expansion.de2dz(zp, lnZp)) / e2;
-    const om = model.densityParameter("matter", Math.max(0, zp - 1)); // rounding can put a = 1 a hair past today
+    const om = expansion.matterDensity(zp) / e2;
     return -(2 + 0.5 * dlnE2) * v + 1.5 * om * y;
   };
   const d = new Float64Array(steps + 1);

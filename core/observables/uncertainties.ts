@@ -6,7 +6,7 @@
  */
 import type { Cosmology } from "../distances/Cosmology.js";
 import { angularDiameterDistanceSlopeMpc, luminosityDistanceLogSlope, luminosityDistanceSlopeMpc } from "../distances/distanceSlopes.js";
-import { luminosityW, restFrameSpectralLuminosityWHz, spectralLuminosityWHz } from "./photometry.js";
+import { luminosityW, restFrameSpectralLuminosityWHz } from "./photometry.js";
 import { requireNonNegative } from "../checks/numberChecks.js";
 import { checkSourceRedshift } from "../checks/redshift.js";
 
@@ -62,13 +62,8 @@ export function spectralLuminosityErrorWHz(
   alpha: number,
   alphaErr = 0,
 ): number {
-  requireNonNegative("flux_density_err", fluxDensityErrWm2Hz);
-  requireNonNegative("z_err", zErr);
-  requireNonNegative("alpha_err", alphaErr);
-  const perUnitFlux = spectralLuminosityWHz(model, 1, z, alpha);
-  const lum = perUnitFlux * fluxDensityWm2Hz;
-  const zTerm = zErr * (2 * luminosityDistanceLogSlope(model, z) - (1 + alpha) / (1 + z));
-  return Math.hypot(perUnitFlux * fluxDensityErrWm2Hz, lum * zTerm, lum * alphaErr * Math.log1p(z));
+  // L_ν at ν_obs is the rest-frame luminosity at ν_rest = ν_obs: the α term is then ln(1/(1+z)) σ_α
+  return restFrameSpectralLuminosityErrorWHz(model, fluxDensityWm2Hz, fluxDensityErrWm2Hz, z, zErr, alpha, alphaErr, 1, 1);
 }
 
 /**
@@ -103,7 +98,7 @@ export function restFrameSpectralLuminosityErrorWHz(
   const perUnitFlux = restFrameSpectralLuminosityWHz(model, 1, z, alpha, observedHz, restHz);
   const lum = perUnitFlux * fluxDensityWm2Hz;
   const zTerm = zErr * (2 * luminosityDistanceLogSlope(model, z) - (1 + alpha) / (1 + z));
-  const alphaTerm = alphaErr * Math.log(restHz / ((1 + z) * observedHz));
+  const alphaTerm = alphaErr * (Math.log(restHz / observedHz) - Math.log1p(z));
   return Math.hypot(perUnitFlux * fluxDensityErrWm2Hz, lum * zTerm, lum * alphaTerm);
 }
 

@@ -15,11 +15,11 @@ import {
   soundHorizonDragMpc,
   volumeAveragedDistanceMpc,
 } from "../../core/index.js";
-import type { ArgSpec, FunctionDef } from "../FunctionDef.js";
+import type { Args, ArgSpec, FunctionDef } from "../FunctionDef.js";
 import { amount, m, model, n, num, unit, z } from "./argumentKinds.js";
 
 const definition: ArgSpec = { kind: "text", name: "definition" };
-const def = (a: Parameters<NonNullable<FunctionDef["compute"]>>[0]) => a.definition as string;
+const def = (a: Args) => a.definition as string;
 
 /** Structure functions, in the order of their declarations. */
 export const structure: FunctionDef[] = [
