@@ -8,7 +8,8 @@
 //   single          100k single-cell calls of DIST_LUM, ns a call
 //   range:<NAME>    one call over a 100k-row column, ns a cell
 //   floor           only building a 100k-row result array (no computing), ns a cell: the floor of range:*
-//   cold            the first DIST_LUM after the bundle loads (shared tables + model), ms
+//   cold            the first DIST_LUM(1) after the bundle loads (shared tables + model), ms
+//   cold:<NAME>     the first formula of another kind (AGE(1), LOOKBACK(1), REDSHIFT(6791,"DIST_LUM"), DIST_LUM_FAR = DIST_LUM(1000)), ms
 //   models          DIST_LUM(1, "P18-BAO; H0=…") with a new model each call, ms a model (mean of 200)
 //   degenerate      the slowest single cell among inverses and distances in models at the edge, ms
 //   growthTable     the growth table a new model builds at its first GROWTH (GROWTH minus DIST_LUM of a new model), ms
@@ -61,9 +62,19 @@ const loaded = now();
 await Promise.resolve(); // let the bundle's own start-up microtasks run, as a page would
 
 let result;
-if (figure === "cold") {
+/** First formulas timed by cold:<NAME> (omitted optional arguments are null, as Excel passes them). */
+const coldCalls = {
+  DIST_LUM: [[[1]], null, null],
+  AGE: [[[1]], null, null],
+  LOOKBACK: [[[1]], null, null],
+  REDSHIFT: [[[6791]], [["DIST_LUM"]], null, null],
+  DIST_LUM_FAR: [[[1000]], null, null],
+};
+if (figure === "cold" || figure.startsWith("cold:")) {
+  const name = figure === "cold" ? "DIST_LUM" : figure.slice("cold:".length);
+  const fn = registered.get(name === "DIST_LUM_FAR" ? "DIST_LUM" : name);
   const t0 = now();
-  const out = await settle(registered.get("DIST_LUM")([[1]]));
+  const out = await settle(fn(...coldCalls[name]));
   result = { ms: now() - t0, loadMs: loaded - loadStart, check: out[0][0] };
 } else if (figure === "single") {
   const fn = registered.get("DIST_LUM");

@@ -6,6 +6,10 @@ import { NoSolutionError } from "../core/checks/NoSolutionError.js";
 import { testModels } from "./fixtures.js";
 import { SlowCosmology, slowFermiDirac } from "./reference/slowCosmology.js";
 import { expectRelative, logRedshifts } from "./helpers.js";
+import type { ModelParameters } from "../core/model/ModelParameters.js";
+
+/** ΛCDM defaults without radiation, for the models written out below. */
+const lcdmParameters = { w0: -1, wa: 0, Tcmb: 0, Neff: 3.046, mnu: [] as number[] };
 
 const zs = logRedshifts(-6, 4, 4);
 /** The whole documented domain of the inverse, 1e-8 ≤ z ≤ 1e8, and the top of the tables (z = 1e8) closely. */
@@ -121,6 +125,64 @@ describe.each(Object.entries(testModels))("identities: %s", (_name, params) => {
     expect(() => m.redshiftAt("lookbackTime", m.ageTodayGyr * 1.01)).toThrow(NoSolutionError);
     expect(() => m.redshiftAt("age", m.ageTodayGyr * 1.01)).toThrow(NoSolutionError);
     expect(() => m.redshiftAt("luminosityDistance", -1)).toThrow(NoSolutionError);
+  });
+});
+
+describe.each(Object.entries(testModels))("tables that grow as they are read: %s", (_name, params) => {
+  // The tables grow one unit of ln(1+z) at a time from z = 0 (core/distances/distanceTables.ts), and
+  // the age table from the exact age at the top of each unit: a value must not depend on what was
+  // asked before it. Expected values: the same model asked in another order (identity).
+  const zs = [0.5, 3, 1e3, 2e7, 1e8];
+  const quantities = ["luminosityDistanceMpc", "lookbackTimeGyr", "ageGyr", "comovingVolumeMpc3"] as const;
+  test("every value is the same, to the last bit, whether asked first, after z = 1e8, or in reverse order", () => {
+    for (const q of quantities) {
+      const first = zs.map((z) => new Cosmology(params)[q](z));
+      const grown = new Cosmology(params);
+      grown[q](1e8);
+      const reverse = new Cosmology(params);
+      const backwards = [...zs].reverse().map((z) => reverse[q](z)).reverse();
+      expect(zs.map((z) => grown[q](z)), q).toEqual(first);
+      expect(backwards, q).toEqual(first);
+    }
+  });
+
+  test("inverses are the same whether the tables have grown or not", () => {
+    for (const [q, f] of [["luminosityDistance", 5000], ["age", 1], ["lookbackTime", 2], ["angularDiameterDistance", 1000]] as const) {
+      const fresh = new Cosmology(params);
+      const grown = new Cosmology(params);
+      grown.ageGyr(1e8);
+      grown.luminosityDistanceMpc(1e8);
+      const inverse = (m: Cosmology) => {
+        try {
+          return m.redshiftAt(q, f);
+        } catch (e) {
+          return (e as Error).message;
+        }
+      };
+      expect(inverse(fresh), q).toBe(inverse(grown));
+    }
+  });
+});
+
+describe("a model whose E² could vanish is checked in full when made", () => {
+  // E² is a sum of terms; with none negative it cannot vanish (core/model/ExpansionRate.ts cannotBounce),
+  // otherwise the tables are built, and E² > 0 checked at every node, as the model is made.
+  //   parameters                                        bounce possible   why (common practice: the terms of E²)
+  const cases: [string, ModelParameters, boolean][] = [
+    ["flat ΛCDM + radiation + 0.06 eV ν",            testModels["flat ΛCDM + radiation + 0.06 eV ν"], false],
+    ["open w0–wa",                                      testModels["open w0–wa, no radiation"],           false],
+    ["closed (Ωk < 0)",                                 testModels["closed, radiation, three massive ν"], true],
+    ["negative Λ",                                      { ...lcdmParameters, H0: 70, Om: 1.2, OL: -0.2 },   true],
+    ["de Sitter (only Λ: nothing that does not fall)", { ...lcdmParameters, H0: 70, Om: 0, OL: 1 },          true],
+  ];
+  test.each(cases)("%s", (_name, params, couldBounce) => {
+    expect(new Cosmology(params).expansion.cannotBounce()).toBe(!couldBounce);
+  });
+
+  test("a bounce far beyond the first values asked for is still refused as the model is made", () => {
+    // Ωm = 0.001, ΩΛ = 1.2 (closed): E² = 0.001(1+z)³ − 0.201(1+z)² + 1.2 turns negative near z ≈ 1.5
+    // and positive again near z ≈ 200 (the cubic's roots), so no big bang: the error must come at once.
+    expect(() => new Cosmology({ ...lcdmParameters, H0: 70, Om: 0.001, OL: 1.2 })).toThrow(/no big bang/);
   });
 });
 

@@ -33,7 +33,7 @@ describe("quintic Hermite table", () => {
     const h = 0.05;
     const n = 40;
     const xs = Array.from({ length: n + 1 }, (_, i) => i * h);
-    const table = new QuinticTable(0, h, xs.map(Math.sin), xs.map(Math.cos), xs.map((x) => -Math.sin(x)));
+    const table = QuinticTable.fromNodes(0, h, xs.map(Math.sin), xs.map(Math.cos), xs.map((x) => -Math.sin(x)));
     let worst = 0;
     let worstSlope = 0;
     for (let x = 0; x <= n * h; x += 0.0013) {
@@ -45,6 +45,31 @@ describe("quintic Hermite table", () => {
     expect(worst).toBeGreaterThan(0);
     expect(worstSlope).toBeLessThan(1e-9);
     expect(table.node(n)).toBe(Math.sin(n * h));
+  });
+
+  test("a growing table sets its panels in order as look-ups reach them, and equals the complete table", () => {
+    const h = 0.05;
+    const n = 40;
+    const xs = Array.from({ length: n + 1 }, (_, i) => i * h);
+    const [f, df, d2f] = [xs.map(Math.sin), xs.map(Math.cos), xs.map((x) => -Math.sin(x))];
+    const complete = QuinticTable.fromNodes(0, h, f, df, d2f);
+    const asked: number[] = [];
+    let set = 0;
+    const growing = new QuinticTable(0, h, n, (panel) => {
+      asked.push(panel);
+      const to = Math.min(n, Math.max(set + 8, panel + 1)); // 8 panels at a time, as far as asked
+      growing.setPanels(set, to, f, df, d2f);
+      set = to;
+    });
+    expect(growing.value(0.13)).toBe(complete.value(0.13)); // panel 2: the first 8 panels
+    expect(growing.derivative(0.3)).toBe(complete.derivative(0.3)); // panel 6: already set, no call
+    expect(asked).toEqual([2]);
+    expect(growing.value(1.01)).toBe(complete.value(1.01)); // panel 20: set up to panel 21
+    expect(growing.node(n)).toBe(Math.sin(n * h)); // the last node sets every panel
+    expect(asked).toEqual([2, 20, n - 1]);
+    for (let x = 0; x <= n * h; x += 0.0371) expect(growing.value(x)).toBe(complete.value(x));
+    expect(() => growing.setPanels(3, 5, f, df, d2f)).toThrow(RangeError); // panels are set once, in order
+    expect(() => new QuinticTable(0, h, n).value(0.5)).toThrow(RangeError); // no panel and no way to grow
   });
 });
 

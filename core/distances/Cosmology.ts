@@ -3,7 +3,8 @@
  * curvature, photons and neutrinos (massless and massive, exact Fermi–Dirac), and every distance,
  * time and volume of Hogg (1999, astro-ph/9905116) as fast table look-ups.
  *
- * Build once (validation and tables, about a millisecond), evaluate many times (tens of ns a value).
+ * Build once (validation; the tables grow as values are asked for, about a millisecond a unit of
+ * ln(1+z)), evaluate many times (tens of ns a value).
  * Distances are in Mpc, times in Gyr, volumes in Mpc³, unless a name says otherwise.
  */
 import { gravitationalConstantSI, megaparsecKm, megaparsecM, secondsPerGyr, speedOfLightKmPerS } from "../units/constants.js";
@@ -11,9 +12,9 @@ import { ExpansionRate, type DensityComponent } from "../model/ExpansionRate.js"
 import { hyperbolicRemainder } from "../numerics/hyperbolicRemainder.js";
 import type { ModelParameters } from "../model/ModelParameters.js";
 import { formatModelSpec, parseModelSpec } from "../model/modelSpec.js";
-import { ageSinceBigBang, buildDistanceTables } from "./distanceTables.js";
+import { ageSinceBigBang, buildDistanceTables, type AgeTable } from "./distanceTables.js";
 import { integrate, kronrod15 } from "../numerics/quadrature.js";
-import { QuinticTable } from "../numerics/QuinticTable.js";
+import type { QuinticTable } from "../numerics/QuinticTable.js";
 import { checkRedshift } from "../checks/redshift.js";
 import { RedshiftInverse, type InverseWording, type InvertibleQuantity } from "./redshiftInverse.js";
 
@@ -67,8 +68,6 @@ export class Cosmology {
   readonly hubbleDistanceMpc: number;
   /** Hubble time t_H = 1 / H0 [Gyr]. */
   readonly hubbleTimeGyr: number;
-  /** Age of the universe today [Gyr] (Infinity for a model without a big bang in finite time, e.g. de Sitter). */
-  readonly ageTodayGyr: number;
   /**
    * Redshift of matter–radiation equality, 1 + z_eq = (Om − Ων,massive) / (Ωγ (1 + Neff (7/8)(4/11)^{4/3})):
    * cold matter against photons plus all neutrino species counted as relativistic, as in Planck 2018 VI
@@ -88,8 +87,8 @@ export class Cosmology {
   readonly chi: QuinticTable;
   /** @internal τ = t_lookback/t_H against u. */
   readonly tau: QuinticTable;
-  /** @internal ln(t_age/t_H) against u (absent when the past is infinite). */
-  readonly lnAge: QuinticTable | undefined;
+  /** The age table and age today, made at the first age asked for. */
+  private readonly ageTable: () => AgeTable;
   private inverse: RedshiftInverse | undefined;
 
   /**
@@ -125,8 +124,17 @@ export class Cosmology {
     this.uMax = tables.uMax;
     this.chi = tables.chi;
     this.tau = tables.tau;
-    this.lnAge = tables.lnAge;
-    this.ageTodayGyr = tables.ageToday * this.hubbleTimeGyr; // +∞ (infinite past) or NaN stay so
+    this.ageTable = tables.age;
+  }
+
+  /** Age of the universe today [Gyr] (Infinity for a model without a big bang in finite time, e.g. de Sitter; NaN when its age integral does not converge numerically). */
+  get ageTodayGyr(): number {
+    return this.ageTable().ageToday * this.hubbleTimeGyr; // +∞ (infinite past) or NaN stay so
+  }
+
+  /** @internal ln(t_age/t_H) against u (absent when the past is infinite). */
+  get lnAge(): QuinticTable | undefined {
+    return this.ageTable().lnAge;
   }
 
   /**
@@ -235,8 +243,9 @@ export class Cosmology {
 
   /** @internal */
   ageAtU(u: number): number {
-    if (!this.lnAge) return this.ageTodayGyr; // +∞ (infinite past) or NaN (no numerical age)
-    return u <= this.uMax ? Math.exp(this.lnAge.value(u)) : this.ageBeyond(u);
+    const { lnAge, ageToday } = this.ageTable();
+    if (!lnAge) return ageToday; // +∞ (infinite past) or NaN (no numerical age)
+    return u <= this.uMax ? Math.exp(lnAge.value(u)) : this.ageBeyond(u);
   }
 
   /** S_k(χ) = sinh(√Ωk χ)/√Ωk, χ, or sin(√−Ωk χ)/√−Ωk (Hogg eq. 16, in units of D_H). */

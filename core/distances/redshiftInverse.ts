@@ -11,6 +11,8 @@ import { formatRedshift } from "../checks/redshift.js";
 import { solveBracketed } from "../numerics/solveBracketed.js";
 
 const relTolExact = 1e-14;
+/** Nodes searched first by invertTable before doubling: one unit of ln(1+z) of the distance tables. */
+const firstSearchPanels = 48;
 
 /** Quantities that `redshiftAt` can invert, in the units of the matching method of Cosmology. */
 export type InvertibleQuantity =
@@ -80,7 +82,7 @@ function defaultWording(quantity: InvertibleQuantity, value: number): InverseWor
 /** The inverse of one model, with what it finds once per model (maxima, the horizon) kept. */
 export class RedshiftInverse {
   private horizonChi: number | undefined;
-  private readonly inverters = new Map<string, { values: Float64Array; peakU: number; peakValue: number }>();
+  private readonly inverters = new Map<string, { values: Float64Array; count: number; peakU: number; peakValue: number }>();
 
   /** @param m the model inverted (its tables and exact integrals) */
   constructor(private readonly m: TabulatedModel) {}
@@ -130,10 +132,19 @@ export class RedshiftInverse {
     return this.horizonChi;
   }
 
-  /** u with table(u) = target for an increasing table, from node bisection then Newton on the interpolant. */
-  private invertTable(table: QuinticTable, target: number, sign: 1 | -1): number {
+  /**
+   * u with table(u) = target for a table increasing in sign × value (its node 0 at or below the target),
+   * or undefined when the target lies beyond its last node. Nodes are searched by doubling from the
+   * start (a growing table is built only as far as the target), then bisected, then Newton on the interpolant.
+   */
+  private invertTable(table: QuinticTable, target: number, sign: 1 | -1): number | undefined {
     let lo = 0;
-    let hi = table.panels;
+    let hi = Math.min(table.panels, firstSearchPanels);
+    while (hi < table.panels && sign * table.node(hi) <= sign * target) {
+      lo = hi;
+      hi = Math.min(table.panels, 2 * hi);
+    }
+    if (sign * table.node(hi) < sign * target) return undefined;
     while (hi - lo > 1) {
       const mid = (lo + hi) >> 1;
       if (sign * table.node(mid) <= sign * target) lo = mid;
@@ -177,7 +188,8 @@ export class RedshiftInverse {
 
   private uOfChi(chi: number, w: InverseWording): number {
     if (chi <= 0) return 0;
-    if (chi <= this.m.chi.node(this.m.chi.panels)) return this.invertTable(this.m.chi, chi, 1);
+    const u = this.invertTable(this.m.chi, chi, 1);
+    if (u !== undefined) return u;
     if (chi >= this.horizon()) throw new NoSolutionError(`${w.asked()} lies beyond the particle horizon of this model`);
     return this.invertBeyond((u) => this.m.chiBeyond(u), chi, w);
   }
@@ -190,8 +202,7 @@ export class RedshiftInverse {
       throw new NoSolutionError(`${w.asked()} is not below the age of the universe in this model (${w.limit(ageToday * scale)})`);
     }
     if (this.m.lnAge && tau > 0.5 * ageToday) return this.uOfAge(ageToday - tau, w);
-    if (tau <= this.m.tau.node(this.m.tau.panels)) return this.invertTable(this.m.tau, tau, 1);
-    return this.invertBeyond((u) => this.m.tauAtU(u), tau, w);
+    return this.invertTable(this.m.tau, tau, 1) ?? this.invertBeyond((u) => this.m.tauAtU(u), tau, w);
   }
 
   private uOfAge(age: number, w: InverseWording): number {
@@ -209,8 +220,7 @@ export class RedshiftInverse {
     }
     if (!(age > 0)) throw new NoSolutionError(`${w.asked()} must be positive`);
     const lnT = Math.log(age);
-    if (lnT >= table.node(table.panels)) return this.invertTable(table, lnT, -1);
-    return this.invertBeyond((u) => -this.m.ageBeyond(u), -age, w);
+    return this.invertTable(table, lnT, -1) ?? this.invertBeyond((u) => -this.m.ageBeyond(u), -age, w);
   }
 
   /** D_L/D_H = e^u S_k(χ) or D_A/D_H = e^{−u} S_k(χ) and its u-derivative, for the inverse. */
@@ -233,45 +243,52 @@ export class RedshiftInverse {
 
   /**
    * u solving curve(u) = target on the lower branch of D_L or D_A (units of D_H), which may rise to a
-   * maximum and fall again: node values and the maximum are found once per model and kept.
+   * maximum and fall again. Node values are computed from z = 0 only as far as a target needs (past it,
+   * or to the maximum, or to the end of the tables) and kept, with the maximum once found.
    */
   private uOfCurve(key: "DL" | "DA", target: number, w: InverseWording): number {
     const { g, dg } = this.curves[key];
-    let inv = this.inverters.get(key);
     const h = this.m.chi.h;
+    const n = this.m.chi.panels;
+    let inv = this.inverters.get(key);
     if (!inv) {
-      const n = this.m.chi.panels;
-      const values = new Float64Array(n + 1);
-      let peak = n;
-      for (let i = 0; i <= n; i++) {
-        values[i] = g(i * h);
-        if (peak === n && i > 0 && values[i] <= values[i - 1]) peak = i - 1;
-      }
-      let peakU = Number.POSITIVE_INFINITY;
-      let peakValue = Number.POSITIVE_INFINITY;
-      if (peak < n) {
-        let lo = Math.max(0, peak - 1) * h;
-        let hi = (peak + 1) * h;
-        for (let i = 0; i < 200 && hi - lo > 1e-15; i++) {
-          const mid = 0.5 * (lo + hi);
-          if (dg(mid) > 0) lo = mid;
-          else hi = mid;
-        }
-        peakU = 0.5 * (lo + hi);
-        peakValue = g(peakU);
-      }
-      inv = { values: values.subarray(0, Math.min(peak, n) + 1), peakU, peakValue };
+      inv = { values: new Float64Array(n + 1), count: 1, peakU: Number.NaN, peakValue: Number.NaN };
+      inv.values[0] = g(0);
       this.inverters.set(key, inv);
     }
     if (target <= 0) return 0;
+    const values = inv.values;
+    // rising node values 0 … count − 1; the maximum is NaN until the rise is known to stop (∞ if it never does)
+    while (Number.isNaN(inv.peakU) && values[inv.count - 1] <= target) {
+      const i = inv.count;
+      if (i > n) {
+        inv.peakU = inv.peakValue = Number.POSITIVE_INFINITY;
+        break;
+      }
+      const v = g(i * h);
+      if (v > values[i - 1]) {
+        values[i] = v;
+        inv.count = i + 1;
+        continue;
+      }
+      const peak = i - 1;
+      let lo = Math.max(0, peak - 1) * h;
+      let hi = (peak + 1) * h;
+      for (let k = 0; k < 200 && hi - lo > 1e-15; k++) {
+        const mid = 0.5 * (lo + hi);
+        if (dg(mid) > 0) lo = mid;
+        else hi = mid;
+      }
+      inv.peakU = 0.5 * (lo + hi);
+      inv.peakValue = g(inv.peakU);
+    }
     if (target > inv.peakValue) {
       const dh = this.m.hubbleDistanceMpc;
       throw new NoSolutionError(
         `${w.asked()} exceeds its maximum in this model (${w.limit(inv.peakValue * dh)} at z = ${formatRedshift(Math.expm1(inv.peakU))})`,
       );
     }
-    const values = inv.values;
-    const last = values.length - 1;
+    const last = inv.count - 1;
     if (target > values[last]) {
       if (Number.isFinite(inv.peakU)) return solveBracketed(g, dg, target, last * h, inv.peakU);
       return this.invertBeyond(g, target, w);

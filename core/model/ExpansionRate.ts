@@ -192,6 +192,17 @@ export class ExpansionRate {
     return d;
   }
 
+  /**
+   * True when E² > 0 at every z ≥ 0 follows from the parameters alone: every term of E² is ≥ 0
+   * (cold matter, radiation, curvature, dark energy; massive neutrinos always are) and the terms that
+   * do not fall with z (all but dark energy) sum to more than 0 today, so E²(z) is at least that sum.
+   * A model for which it is false is checked for a bounce numerically (distanceTables.ts).
+   */
+  cannotBounce(): boolean {
+    if (!(this.coldMatter >= 0 && this.Or >= 0 && this.Ok >= 0 && this.OL >= 0)) return false;
+    return this.coldMatter + this.Or + this.Ok + this.OnuMassive > 0;
+  }
+
   /** Highest power of (1+z) in E² with a non-zero coefficient. */
   leadingPower(): number {
     return this.leadingTerm()?.power ?? Number.NEGATIVE_INFINITY;

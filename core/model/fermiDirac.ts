@@ -132,7 +132,7 @@ function getTable(): QuinticTable {
   const d1 = new Float64Array(n);
   const d2 = new Float64Array(n);
   for (let i = 0; i < n; i++) [f[i], d1[i], d2[i]] = [nodes[3 * i], nodes[3 * i + 1], nodes[3 * i + 2]];
-  table = new QuinticTable(sMin, step, f, d1, d2);
+  table = QuinticTable.fromNodes(sMin, step, f, d1, d2);
   return table;
 }
 
