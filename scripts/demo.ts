@@ -213,6 +213,56 @@ structureRows.forEach(([label, value, format, how], i) => {
 });
 structure.getCell(`A${structureRows.length + 4}`).value = "Cached values computed under P18-CMB.";
 
+// Populations: an INVENTED sample (log10 L, V_max, distance moduli made up for the tour) for the binned
+// luminosity function and the χ² of a Hubble diagram. LUMINOSITY_FUNCTION returns a table: it is
+// written as an array formula over its fixed range, the form of ISO/IEC 29500-1 §18.3.1.40 (f with
+// t="array" and ref on the top-left cell; every other cell of the range holds its value only, Part 4
+// "Array Formulas"), which every Excel version reads; typed by hand in Excel with dynamic arrays the same
+// formula spills.
+const populations = workbook.addWorksheet("Populations (invented)");
+populations.addRow(["INVENTED sample for the luminosity-function and Hubble-diagram recipes: made up, not measurements."]);
+const populationHeaders = ["source", "z", "log10 L [erg/s]", "V_max [Mpc3]", "μ [mag]", "σ_μ [mag]"];
+//   source    z       log10 L  V_max [Mpc3]  μ [mag]  σ_μ [mag]   (all invented)
+const sample: [string, number, number, number, number, number][] = [
+  ["POP-01",   0.031,  42.12,   3.1e5,        35.88,   0.15],
+  ["POP-02",   0.058,  42.41,   1.2e6,        37.09,   0.14],
+  ["POP-03",   0.112,  42.77,   6.8e6,        38.76,   0.12],
+  ["POP-04",   0.19,   42.95,   2.4e7,        39.94,   0.12],
+  ["POP-05",   0.27,   43.18,   6.1e7,        40.94,   0.13],
+  ["POP-06",   0.36,   43.36,   1.3e8,        41.47,   0.11],
+  ["POP-07",   0.48,   43.52,   2.6e8,        42.31,   0.12],
+  ["POP-08",   0.63,   43.71,   5.0e8,        42.90,   0.14],
+  ["POP-09",   0.81,   43.88,   8.7e8,        43.75,   0.16],
+  ["POP-10",   1.02,   44.17,   1.4e9,        44.23,   0.18],
+];
+populations.addRow(populationHeaders);
+for (const row of sample) populations.addRow(row);
+const lastSample = 2 + sample.length; // rows 3 … 12
+const edges = [42, 42.5, 43, 43.5, 44, 44.5];
+populations.getCell("H2").value = "bin edges (log10 L)";
+edges.forEach((edge, i) => (populations.getCell(`H${i + 3}`).value = edge));
+const tableHeaders = ["low", "high", "N", "Φ [Mpc-3 dex-1]", "σ_Φ [Mpc-3 dex-1]"];
+tableHeaders.forEach((header, i) => (populations.getCell(2, 10 + i).value = header)); // J2:N2
+const column = (k: number) => sample.map((row) => [row[k]]);
+const lfFormula = `ZC.LUMINOSITY_FUNCTION(C3:C${lastSample},D3:D${lastSample},H3:H${2 + edges.length})`;
+const lf = evaluate(definitions.LUMINOSITY_FUNCTION, [column(2), column(3), edges.map((e) => [e])], active) as number[][];
+const lfRange = `J3:N${2 + lf.length}`;
+populations.fillFormula(lfRange, storedFormula(lfFormula), lf, "array");
+const chiRow = lastSample + 3;
+const chi2Models = ["P18-CMB", "W9-ALL", "EDS"];
+populations.getCell(`A${chiRow - 1}`).value = "χ² of the Hubble diagram (offset minimised), by model";
+chi2Models.forEach((spec, i) => {
+  populations.getCell(`A${chiRow + i}`).value = spec;
+  const formula = `ZC.CHI2_MODULUS(B3:B${lastSample},E3:E${lastSample},F3:F${lastSample},A${chiRow + i})`;
+  populations.getCell(`B${chiRow + i}`).value = zc(formula, "CHI2_MODULUS", column(1), column(4), column(5), spec);
+  populations.getCell(`B${chiRow + i}`).numFmt = "0.00";
+});
+formatColumns(populations, 2, { B: fmt.z, C: fmt.mag, D: fmt.sci, E: fmt.mag, F: fmt.mag }, [3, lastSample]);
+formatColumns(populations, 2, { H: "0.0" }, [3, 2 + edges.length]);
+formatColumns(populations, 2, { J: "0.0", K: "0.0", L: "0", M: fmt.sci, N: fmt.sci }, [3, 2 + lf.length]);
+populations.getColumn("A").width = 12;
+populations.getCell(`A${chiRow + chi2Models.length + 1}`).value = "Cached values computed under P18-CMB (the χ² under the model in column A).";
+
 const out = fileURLToPath(new URL("../demo/", import.meta.url));
 mkdirSync(out, { recursive: true });
 await workbook.xlsx.writeFile(`${out}zcell-demo.xlsx`);

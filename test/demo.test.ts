@@ -17,7 +17,7 @@ import { expectRelative } from "./helpers.js";
 
 const root = fileURLToPath(new URL("..", import.meta.url));
 
-interface SheetCell { formula?: string; value?: string; type?: string; numFmtId?: number }
+interface SheetCell { formula?: string; formulaType?: string; formulaRef?: string; value?: string; type?: string; numFmtId?: number }
 /** Sheet name → cell address → formula, cached value text and cell type, from the raw sheet XML. */
 const sheets = new Map<string, Map<string, SheetCell>>();
 
@@ -43,7 +43,7 @@ beforeAll(async () => {
         const f = c.children.find((x) => x.name === "f");
         const v = c.children.find((x) => x.name === "v");
         const value = c.attributes.t === "s" ? strings[Number(textOf(v))] : c.attributes.t === "inlineStr" ? textOf(c) : textOf(v);
-        cells.set(c.attributes.r, { formula: textOf(f), value, type: c.attributes.t, numFmtId: formatOfStyle[Number(c.attributes.s ?? 0)] });
+        cells.set(c.attributes.r, { formula: textOf(f), formulaType: f?.attributes.t, formulaRef: f?.attributes.ref, value, type: c.attributes.t, numFmtId: formatOfStyle[Number(c.attributes.s ?? 0)] });
       }
     }
     sheets.set(s.attributes.name, cells);
@@ -53,8 +53,9 @@ beforeAll(async () => {
 const formulaCells = () => [...sheets.entries()].flatMap(([sheet, cells]) => [...cells].filter(([, c]) => c.formula !== undefined).map(([address, c]) => ({ sheet, address, ...c })));
 
 describe("demo workbook, read as Excel reads it", () => {
-  test("holds the invented catalogue and recipe sample, marked as invented, and five sheets", () => {
-    expect([...sheets.keys()]).toEqual(["Catalogue (invented)", "What-if", "Model in cells", "Recipes (invented)", "Structure (invented)"]);
+  test("holds the invented catalogue and recipe sample, marked as invented, and six sheets", () => {
+    expect([...sheets.keys()]).toEqual(["Catalogue (invented)", "What-if", "Model in cells", "Recipes (invented)", "Structure (invented)", "Populations (invented)"]);
+    expect(sheets.get("Populations (invented)")!.get("A1")!.value).toMatch(/^INVENTED/);
     expect(sheets.get("Structure (invented)")!.get("A1")!.value).toMatch(/^INVENTED/);
     expect(sheets.get("Recipes (invented)")!.get("A1")!.value).toMatch(/^INVENTED/);
     expect(sheets.get("Recipes (invented)")!.get("AE1")!.value).toBe("survey (invented)");
@@ -64,12 +65,12 @@ describe("demo workbook, read as Excel reads it", () => {
 
   test("every formula calls ZC in the stored spelling, never the bare ZC. name", () => {
     const all = formulaCells();
-    expect(all.length).toBe(12 * 6 + 1 + 8 * 3 + 1 + 8 * 15 + 1 + 9);
+    expect(all.length).toBe(12 * 6 + 1 + 8 * 3 + 1 + 8 * 15 + 1 + 9 + 1 + 3);
     for (const c of all) {
       expect(c.formula, `${c.sheet}!${c.address}`).not.toMatch(/(^|[^_\w])ZC\./);
       // the one formula without ZC is the sum of the 1/V_max weights
       if (c.sheet === "Recipes (invented)" && c.address === "AB12") expect(c.formula).toBe("SUM(AB3:AB10)");
-      else expect(c.formula, `${c.sheet}!${c.address}`).toMatch(/^(1\/)?_xldudf_ZC_[A-Z_]+\(/);
+      else expect(c.formula, `${c.sheet}!${c.address}`).toMatch(/^(1\/)?_xldudf_ZC_[A-Z0-9_]+\(/);
     }
   });
 
@@ -161,6 +162,63 @@ describe("demo workbook, read as Excel reads it", () => {
       sum += num(`AB${r}`);
     }
     expectRelative(num("AB12"), sum, 1e-12, "Σ 1/V_max");
+  });
+
+  test("the luminosity function is one array formula over its table, with the 1/V_max sums of the typed sample", () => {
+    // the array-formula form of ISO/IEC 29500-1 §18.3.1.40: t="array" and ref on the top-left cell,
+    // values only in the rest of the range (Part 4, "Array Formulas")
+    const cells = sheets.get("Populations (invented)")!;
+    const num = (a: string) => Number(cells.get(a)!.value);
+    const master = cells.get("J3")!;
+    expect(master.formula).toBe(storedFormula("ZC.LUMINOSITY_FUNCTION(C3:C12,D3:D12,H3:H8)"));
+    expect([master.formulaType, master.formulaRef]).toEqual(["array", "J3:N7"]);
+    const edges = [3, 4, 5, 6, 7, 8].map((r) => num(`H${r}`));
+    const sample = [3, 4, 5, 6, 7, 8, 9, 10, 11, 12].map((r) => ({ logL: num(`C${r}`), vMax: num(`D${r}`) }));
+    for (let bin = 0; bin < 5; bin++) {
+      const r = 3 + bin;
+      if (bin > 0) expect(cells.get(`J${r}`)!.formula, `J${r}`).toBeUndefined();
+      const [low, high] = [edges[bin], edges[bin + 1]];
+      // Schmidt (1968) 1/V_max, binned as Felten (1976): Φ = Σ 1/V_max / Δ, σ_Φ = √Σ 1/V_max² / Δ, per dex
+      const inBin = sample.filter((s) => s.logL >= low && s.logL < high);
+      const phi = inBin.reduce((sum, s) => sum + 1 / s.vMax, 0) / (high - low);
+      const sigma = Math.sqrt(inBin.reduce((sum, s) => sum + 1 / s.vMax ** 2, 0)) / (high - low);
+      expect([num(`J${r}`), num(`K${r}`), num(`L${r}`)], `bin ${bin}`).toEqual([low, high, inBin.length]);
+      if (inBin.length === 0) expect([num(`M${r}`), num(`N${r}`)]).toEqual([0, 0]);
+      else {
+        expectRelative(num(`M${r}`), phi, 1e-12, `Φ bin ${bin}`);
+        expectRelative(num(`N${r}`), sigma, 1e-12, `σ_Φ bin ${bin}`);
+      }
+    }
+    expect(sample.every((s) => s.logL >= edges[0] && s.logL < edges[5])).toBe(true); // every source counted once
+    expect([3, 4, 5, 6, 7].reduce((n, r) => n + num(`L${r}`), 0)).toBe(sample.length);
+  });
+
+  test("the Hubble-diagram χ² cached for each model is the offset-minimised sum of the typed moduli", () => {
+    // χ²(δ) = Σ ((μ − μ_model − δ)/σ)² is least at δ = B/C, where it is A − B²/C with A = Σ Δ²/σ²,
+    // B = Σ Δ/σ², C = Σ 1/σ², Δ = μ − μ_model (derived here; the form of Goliath et al. 2001).
+    // μ_model from the independent slow path with the papers' parameters (fixtures.ts), and EdS
+    // (Ωm = 1, H0 = 70; its μ is independent of H0 after the offset is minimised).
+    const cells = sheets.get("Populations (invented)")!;
+    const num = (a: string) => Number(cells.get(a)!.value);
+    const rows = [3, 4, 5, 6, 7, 8, 9, 10, 11, 12];
+    const models: [string, SlowCosmology][] = [
+      ["P18-CMB", new SlowCosmology(publishedModels["P18-CMB"])],
+      ["W9-ALL", new SlowCosmology(publishedModels["W9-ALL"])],
+      ["EDS", new SlowCosmology({ H0: 70, Om: 1, w0: -1, wa: 0, Tcmb: 0, Neff: 3.046, mnu: [] })],
+    ];
+    models.forEach(([name, model], i) => {
+      const r = 15 + i;
+      expect(cells.get(`A${r}`)!.value).toBe(name);
+      expect(cells.get(`B${r}`)!.formula).toBe(storedFormula(`ZC.CHI2_MODULUS(B3:B12,E3:E12,F3:F12,A${r})`));
+      let [a, b, c] = [0, 0, 0];
+      for (const row of rows) {
+        const delta = num(`E${row}`) - (5 * Math.log10(model.luminosityDistanceMpc(num(`B${row}`))) + 25);
+        const w = 1 / num(`F${row}`) ** 2;
+        [a, b, c] = [a + delta * delta * w, b + delta * w, c + w];
+      }
+      expectRelative(num(`B${r}`), a - (b * b) / c, 1e-8, name);
+    });
+    expect(num("B15")).toBeLessThan(num("B17")); // the invented moduli were drawn near P18-CMB, far from EdS
   });
 
   test("cached D_L values are those of P18-CMB, the model of a new workbook", () => {
