@@ -63,8 +63,10 @@ function zc(formula: string, name: string, ...args: unknown[]): ExcelJS.CellForm
 function formatColumns(ws: ExcelJS.Worksheet, headerRow: number, formats: Record<string, string>, rows: [number, number]): void {
   for (const [letter, format] of Object.entries(formats)) {
     for (let r = rows[0]; r <= rows[1]; r++) ws.getCell(`${letter}${r}`).numFmt = format;
-    const header = String(ws.getCell(`${letter}${headerRow}`).value ?? "");
+    const headerCell = ws.getCell(`${letter}${headerRow}`);
+    const header = String(headerCell.value ?? "");
     ws.getColumn(letter).width = Math.max(11, header.length + 2);
+    if (header) headerCell.alignment = { horizontal: "right" }; // over its numbers, which a sheet aligns right
   }
 }
 /** Formats by quantity (common practice): redshift, distance, time, luminosity, magnitude, angle, small numbers. */
@@ -90,7 +92,12 @@ catalogue.forEach(([name, z, flux, m, angle], i) => {
   ]);
 });
 sheet.addRow([]);
-sheet.addRow(["Model used above:", zc("ZC.DESCRIBE()", "DESCRIBE")]);
+const describeRow = sheet.addRow(["Model used above:", zc("ZC.DESCRIBE()", "DESCRIBE")]);
+// the model in words is a paragraph: wrapped over the table's width rather than running off the page
+sheet.mergeCells(`B${describeRow.number}:K${describeRow.number}`);
+describeRow.getCell(2).alignment = { wrapText: true, vertical: "top" };
+describeRow.getCell(1).alignment = { vertical: "top" };
+describeRow.height = 48;
 formatColumns(sheet, 2, { B: fmt.z, C: fmt.sci, D: fmt.mag, E: fmt.angle, F: fmt.dist, G: fmt.time, H: fmt.sci, I: fmt.dist, J: fmt.ratio, K: fmt.mag }, [3, 14]);
 sheet.getColumn("A").width = 18;
 
@@ -212,13 +219,17 @@ structureRows.forEach(([label, value, format, how], i) => {
   structure.getCell(`C${i + 3}`).value = how;
 });
 structure.getCell(`A${structureRows.length + 4}`).value = "Cached values computed under P18-CMB.";
+// every label and value shows in full (a value too wide for its column shows as ###)
+structure.getColumn("A").width = Math.max(...structureRows.map(([label]) => label.length)) + 2;
+structure.getColumn("B").width = 12;
+structure.getCell("B2").alignment = { horizontal: "right" };
 
 // Populations: an INVENTED sample (log10 L, V_max, distance moduli made up for the tour) for the binned
-// luminosity function and the χ² of a Hubble diagram. LUMINOSITY_FUNCTION returns a table: it is
-// written as an array formula over its fixed range, the form of ISO/IEC 29500-1 §18.3.1.40 (f with
-// t="array" and ref on the top-left cell; every other cell of the range holds its value only, Part 4
-// "Array Formulas"), which every Excel version reads; typed by hand in Excel with dynamic arrays the same
-// formula spills.
+// luminosity function and the χ² of a Hubble diagram. LUMINOSITY_FUNCTION returns a table; as on the
+// what-if sheet the file holds one formula per cell, INDEX(ZC.LUMINOSITY_FUNCTION(…), row, column),
+// which needs no dynamic-array support and keeps its cached value in another reader (an array formula
+// over the range showed #NAME? in LibreOffice, scripts/renderDemo.mjs); typed by hand in Excel with
+// dynamic arrays, the one formula spills the same table.
 const populations = workbook.addWorksheet("Populations (invented)");
 populations.addRow(["INVENTED sample for the luminosity-function and Hubble-diagram recipes: made up, not measurements."]);
 const populationHeaders = ["source", "z", "log10 L [erg/s]", "V_max [Mpc3]", "μ [mag]", "σ_μ [mag]"];
@@ -244,10 +255,13 @@ edges.forEach((edge, i) => (populations.getCell(`H${i + 3}`).value = edge));
 const tableHeaders = ["low", "high", "N", "Φ [Mpc-3 dex-1]", "σ_Φ [Mpc-3 dex-1]"];
 tableHeaders.forEach((header, i) => (populations.getCell(2, 10 + i).value = header)); // J2:N2
 const column = (k: number) => sample.map((row) => [row[k]]);
-const lfFormula = `ZC.LUMINOSITY_FUNCTION(C3:C${lastSample},D3:D${lastSample},H3:H${2 + edges.length})`;
+const lfFormula = `ZC.LUMINOSITY_FUNCTION($C$3:$C$${lastSample},$D$3:$D$${lastSample},$H$3:$H$${2 + edges.length})`;
 const lf = evaluate(definitions.LUMINOSITY_FUNCTION, [column(2), column(3), edges.map((e) => [e])], active) as number[][];
-const lfRange = `J3:N${2 + lf.length}`;
-populations.fillFormula(lfRange, storedFormula(lfFormula), lf, "array");
+lf.forEach((row, i) =>
+  row.forEach((value, j) => {
+    populations.getCell(3 + i, 10 + j).value = { formula: storedFormula(`INDEX(${lfFormula},${i + 1},${j + 1})`), result: value, date1904: false };
+  }),
+);
 const chiRow = lastSample + 3;
 const chi2Models = ["P18-CMB", "W9-ALL", "EDS"];
 populations.getCell(`A${chiRow - 1}`).value = "χ² of the Hubble diagram (offset minimised), by model";
@@ -262,6 +276,13 @@ formatColumns(populations, 2, { H: "0.0" }, [3, 2 + edges.length]);
 formatColumns(populations, 2, { J: "0.0", K: "0.0", L: "0", M: fmt.sci, N: fmt.sci }, [3, 2 + lf.length]);
 populations.getColumn("A").width = 12;
 populations.getCell(`A${chiRow + chi2Models.length + 1}`).value = "Cached values computed under P18-CMB (the χ² under the model in column A).";
+
+// Printed (or rendered to PDF by another reader), each sheet is one page wide, in landscape: a table
+// split across pages by columns is hard to read.
+for (const ws of workbook.worksheets) {
+  const pagesWide = Math.ceil(ws.columnCount / 12); // about 12 columns a landscape page stay legible
+  ws.pageSetup = { ...ws.pageSetup, orientation: "landscape", fitToPage: true, fitToWidth: pagesWide, fitToHeight: 0 };
+}
 
 const out = fileURLToPath(new URL("../demo/", import.meta.url));
 mkdirSync(out, { recursive: true });

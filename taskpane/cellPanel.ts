@@ -50,6 +50,8 @@ function renderCall(c: CallExplanation): HTMLElement {
     dl.append(el("dt", ""), dd);
   }
   add(c.isError ? "Why the error" : "Result", c.result, c.isError ? "result-error" : undefined);
+  if (c.fault?.argument) add("Argument at fault", `${c.fault.argument}${c.fault.text ? `: ${c.fault.text} → ${c.fault.value}` : ""}`);
+  if (c.fault) add("How to fix", c.fault.fix);
   if (c.exact) {
     // every digit, one click away and selectable for copying
     const details = document.createElement("details");

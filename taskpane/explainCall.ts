@@ -7,7 +7,8 @@
  */
 import type { Cosmology } from "../core/index.js";
 import type { ActiveModelSetting } from "../functions/activeModel.js";
-import { CellError } from "../functions/cellError.js";
+import { CellError, type ErrorKind } from "../functions/cellError.js";
+import { adviseOnError } from "./errorAdvice.js";
 import { definitions } from "../functions/definitions.js";
 import { describeModel } from "../functions/describeModel.js";
 import { evaluate, type Cell } from "../functions/evaluate.js";
@@ -33,6 +34,8 @@ export interface CallExplanation {
   /** The result's full value (every digit Excel holds), when it is a number. */
   exact?: string;
   isError: boolean;
+  /** For an error: the argument its message is about (its formula text and value), and how to fix it. */
+  fault?: { argument?: string; text?: string; value?: string; fix: string };
 }
 
 /** Reads the values behind a reference written in a formula (e.g. "B2", "'Sheet 2'!A1:A9"). */
@@ -198,6 +201,9 @@ function modelConventions(m: Cosmology): string[] {
   return out;
 }
 
+/** The error values ZC functions give, as Excel shows them. */
+const excelErrorKinds: Record<string, ErrorKind> = { "#VALUE!": "value", "#NUM!": "num", "#N/A": "na" };
+
 /**
  * Explains every ZC call in a formula.
  * @param formula the cell's formula
@@ -277,6 +283,7 @@ async function explainCall(
   let result: string;
   let exact: string | undefined;
   let isError = false;
+  let fault: CallExplanation["fault"];
   if (allKnown) {
     const cells = evaluate(def, raw, active);
     const first = cells[0][0];
@@ -284,6 +291,9 @@ async function explainCall(
     if (first instanceof CellError) {
       isError = true;
       result = `${first.excelText} — ${first.message}`;
+      const advice = adviseOnError(def, first.kind, first.message);
+      const at = args.find((a) => a.name === advice.argument);
+      fault = { ...advice, text: at?.text, value: at?.value };
     } else {
       const resultUnit = def.args.find((a) => a.kind === "unit" && a.applies === "result");
       const unitIndex = resultUnit ? def.args.indexOf(resultUnit) : -1;
@@ -296,6 +306,8 @@ async function explainCall(
   } else {
     result = `${showValue(cellValue)} (as Excel shows it; an argument is computed by Excel)`;
     isError = typeof cellValue === "string" && cellValue.startsWith("#");
+    const kind = excelErrorKinds[String(cellValue)];
+    if (kind) fault = adviseOnError(def, kind, "");
   }
-  return { name: call.name, summary: info.summary, equation: info.equation, args, model, conventions, method: info.method, methodPlain: plainMethod(info.method), result, exact, isError };
+  return { name: call.name, summary: info.summary, equation: info.equation, args, model, conventions, method: info.method, methodPlain: plainMethod(info.method), result, exact, isError, fault };
 }

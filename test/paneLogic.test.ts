@@ -109,6 +109,41 @@ describe("cell inspector", () => {
   });
 });
 
+describe("an error explained: the argument at fault and how to fix it", () => {
+  const active = { spec: "P18-CMB", stored: false };
+  // The messages are the functions' own (functions/messages.ts and the core's checks); what is
+  // expected here is our own advice, so each row names the argument the message is about.
+  //   formula                                              argument   formula text   how to fix (part)
+  const cases: [string, string | undefined, string | undefined, RegExp][] = [
+    ["=ZC.DIST_LUM(-0.5)",                                  "z",       "-0.5",        /^Give z a redshift ≥ 0 \(> 0 where the result needs the source's distance/],
+    ["=ZC.DIST_BETWEEN(2,1)",                               "z2",      "1",           /^Give z2 a redshift ≥ 0/],
+    ['=ZC.DIST_LUM(1,"H0=70; Om=0; OL=2")',                 "model",   '"H0=70; Om=0; OL=2"', /needs a big bang \(check Om, OL or Ok, w0, wa\)/],
+    ['=ZC.DIST_LUM(1,"P99")',                                "model",   '"P99"',       /^Give a preset name \(ZC.PRESETS\(\) lists them\)/],
+    ['=ZC.DIST_LUM(1,,"mpc")',                              "unit",    '"mpc"',       /FITS spelling, case as shown \(default "Mpc"\)/],
+    ["=ZC.SIZE(-2,1)",                                      "angle",   "-2",          /^Give angle a value from 0 to 180° in the unit of angle_unit \(default arcsec\)/],
+    ["=ZC.MAG_ABS(99,0.5)",                                 "m",       "99",          /missing magnitude in a catalogue/],
+    ['=ZC.OMEGA("dust",1)',                                  "component", '"dust"',   /^Use one of: matter, cold, darkenergy/],
+    ['=ZC.REDSHIFT(1E5,"DIST_ANG")',                         undefined, undefined,    /^No value answers these arguments in this model/],
+  ];
+  test.each(cases)("%s", async (formula, argument, text, fix) => {
+    const [call] = await explainFormula(formula, async () => [[""]], active);
+    expect(call.isError).toBe(true);
+    expect(call.fault?.argument).toBe(argument);
+    expect(call.fault?.text).toBe(text);
+    expect(call.fault?.fix).toMatch(fix);
+  });
+
+  test("a cell whose arguments only Excel computes gets the advice of its error kind", async () => {
+    const [call] = await explainFormula("=ZC.DIST_LUM(SUM(A1:A3))", async () => [[""]], active, "#NUM!");
+    expect(call.fault).toEqual({ fix: "A value lies outside its physical domain, or the result does: the message says which." });
+  });
+
+  test("a value that is not an error has no advice", async () => {
+    const [call] = await explainFormula("=ZC.DIST_LUM(1)", async () => [[""]], active);
+    expect(call.fault).toBeUndefined();
+  });
+});
+
 describe("charts of what-if tables", () => {
   test("plot each model's column against the redshift column, titled with quantity, unit and models", () => {
     const own = planTableWithRedshifts("LOOKBACK", [0.5, 1, 2], ["P18-BAO", "EDS"], 4, 2); // table at B4

@@ -41,6 +41,7 @@ const workbook = {
     // values as Excel would show them before any recalculation (invented; the fake recomputes on Apply)
     A2: { value: 0.5 }, B2: { formula: "=ZC.DIST_LUM(A2)", value: 2919.6 },
     A3: { value: 1 }, B3: { formula: '=ZC.DIST_LUM(A3,"H0=70; Om=0; OL=2")', value: "#NUM!" },
+    A4: { value: -0.5 }, B4: { formula: "=ZC.DIST_LUM(A4)", value: "#NUM!" },
     C2: { formula: "=ZC.MAG_ABS(22, A2, ZC.KCORRECTION(A2, -0.5))", value: -20.3 },
     E5: { value: "occupied" },
   },
@@ -161,6 +162,16 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await page.screenshot({ path: `${shots}cell-${themeName}.png`, fullPage: true });
       await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!B3"));
       await expect.poll(() => page.locator("#cell-explanation").textContent()).toMatch(/Why the error#NUM! — ZC.DIST_LUM: model: no big bang/);
+      expect(await page.locator("#cell-explanation").textContent()).toMatch(/Argument at faultmodel: "H0=70; Om=0; OL=2"/);
+      // an error explained: the message, the argument at fault with its value, and how to fix it
+      await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!B4"));
+      await expect.poll(() => page.locator("#cell-explanation").textContent()).toMatch(/Why the error#NUM! — ZC.DIST_LUM: z = -0.5/);
+      const errorText = await page.locator("#cell-explanation").textContent();
+      expect(errorText).toMatch(/Argument at faultz: A4 → -0.5/);
+      expect(errorText).toMatch(/How to fixGive z a redshift ≥ 0/);
+      await page.evaluate(axeSource);
+      expect(await axeViolations(page)).toEqual([]);
+      await page.screenshot({ path: `${shots}cell-error-${themeName}.png`, fullPage: true });
       await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!C2"));
       await expect.poll(() => page.locator("#cell-explanation").textContent()).toMatch(/K-correction sign: M = m − μ − K/);
       await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!A2"));
