@@ -112,7 +112,16 @@ export function setupRepairBanner(): void {
       const after = await findUnboundFormulas();
       const entered = new Set(found.filter((f) => !leftAlone.has(f.sheet)).map((f) => `${f.sheet}!${f.address}`));
       const still = after.formulas.filter((f) => entered.has(`${f.sheet}!${f.address}`)).length;
-      text += still ? ` ${plural(still, "formula")} still show #NAME?: is the add-in loaded in this workbook?` : " None of them shows #NAME? now.";
+      text += still
+        ? ` ${plural(still, "formula")} entered again still show #NAME?: is the add-in loaded in this workbook?`
+        : ` None of the ${plural(total, "formula")} entered again shows #NAME? now.`;
+      // what remains: the formulas on protected sheets, by address
+      const remaining = after.formulas.filter((f) => leftAlone.has(f.sheet));
+      if (remaining.length) {
+        const listed = remaining.slice(0, listedAtMost).map((f) => `${f.sheet}!${f.address}`).join(", ");
+        const more = remaining.length > listedAtMost ? ` and ${remaining.length - listedAtMost} more` : "";
+        text += ` Still showing #NAME? on protected sheets: ${listed}${more}; remove the protection, then open the pane again to enter ${remaining.length === 1 ? "it" : "them"} again.`;
+      }
       $("repair-go").hidden = true;
       status.textContent = text;
     } catch (e) {
