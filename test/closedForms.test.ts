@@ -2,6 +2,7 @@
 import { describe, expect, test } from "vitest";
 import { Cosmology } from "../core/distances/Cosmology.js";
 import { expectRelative } from "./helpers.js";
+import { tanhSinh } from "./reference/slowCosmology.js";
 
 const base = { w0: -1, wa: 0, Tcmb: 0, Neff: 3.046, mnu: [] as number[] };
 const zs = [1e-5, 1e-3, 0.05, 0.3, 1, 2.5, 7, 30, 300, 1e4];
@@ -89,5 +90,41 @@ describe("flat matter + radiation age", () => {
     const w = om * a + or;
     const t = (m.hubbleTimeGyr * (2 * Math.sqrt(w) * (om * a - 2 * or) + 4 * or ** 1.5)) / (3 * om * om);
     expectRelative(m.ageGyr(z), t, tol, "age");
+  });
+});
+
+describe("dark energy alone with a constant w (Om = 0, OL = 1)", () => {
+  // E = (1+z)^p with p = 3(1+w)/2 (the Friedmann equation with ρ ∝ a^{−3(1+w)}), so
+  // D_C = D_H ((1+z)^{1−p} − 1)/(1 − p), t_L = t_H (1 − (1+z)^{−p})/p, t = t_H (1+z)^{−p}/p (elementary integrals)
+  test.each([
+    // w       p = 3(1+w)/2
+    [-0.5,     0.75],
+    [-0.8,     0.3],
+    [0,        1.5],
+  ])("w = %d", (w, p) => {
+    const m = new Cosmology({ ...base, H0: 70, Om: 0, OL: 1, w0: w });
+    const [dh, th] = [m.hubbleDistanceMpc, m.hubbleTimeGyr];
+    for (const z of zs) {
+      const u = Math.log1p(z);
+      expectRelative(m.expansionRate(z), Math.exp(p * u), tol, `E(${z})`);
+      expectRelative(m.comovingDistanceMpc(z), (dh * Math.expm1((1 - p) * u)) / (1 - p), tol, `D_C(${z})`);
+      expectRelative(m.lookbackTimeGyr(z), (th * -Math.expm1(-p * u)) / p, tol, `t_L(${z})`);
+      expectRelative(m.ageGyr(z), (th * Math.exp(-p * u)) / p, tol, `age(${z})`);
+    }
+    expectRelative(m.ageTodayGyr, th / p, tol, "age today");
+  });
+});
+
+describe("dark energy alone with w0–wa (CPL: w = w0 + wa (1 − a))", () => {
+  // ρ_DE/ρ_DE,0 = a^{−3(1+w0+wa)} exp(−3 wa (1 − a)) (Chevallier & Polarski 2001; Linder 2003 eq. 3),
+  // so E(z) is closed; D_C = D_H ∫ dz/E is checked against the independent tanh-sinh quadrature of
+  // that E (test/reference/slowCosmology.ts), not against the engine's own tables.
+  const [w0, wa] = [-0.9, 0.4];
+  const m = new Cosmology({ ...base, H0: 70, Om: 0, OL: 1, w0, wa });
+  const e = (z: number) => Math.sqrt((1 + z) ** (3 * (1 + w0 + wa)) * Math.exp((-3 * wa * z) / (1 + z)));
+  test.each(zs.filter((z) => z <= 300))("z = %d", (z) => {
+    expectRelative(m.expansionRate(z), e(z), tol, "E");
+    expectRelative(m.comovingDistanceMpc(z), m.hubbleDistanceMpc * tanhSinh((x) => 1 / e(x), 0, z, 1e-14), 1e-11, "D_C");
+    expectRelative(m.lookbackTimeGyr(z), m.hubbleTimeGyr * tanhSinh((x) => 1 / ((1 + x) * e(x)), 0, z, 1e-14), 1e-11, "t_L");
   });
 });

@@ -37,6 +37,29 @@ describe("model parameters outside their domain", () => {
     expect(() => new Cosmology(p as never)).toThrow(message);
   });
 
+  // Each message whole (anchored), so that a wrong value, unit, hint or bound in it fails.
+  test.each([
+    // change                         whole message
+    [{ H0: 0.7 },                     "H0 = 0.7 km/s/Mpc is outside 10 … 1000 km/s/Mpc (H0 is in km/s/Mpc: h = 0.7 is H0=70)"],
+    [{ H0: 9.99 },                    "H0 = 9.99 km/s/Mpc is outside 10 … 1000 km/s/Mpc (H0 is in km/s/Mpc: h = 9.99 is H0=999)"],
+    [{ H0: 1000.5 },                  "H0 = 1000.5 km/s/Mpc is outside 10 … 1000 km/s/Mpc"],
+    [{ Om: 30 },                      "Om = 30: a density parameter is a fraction (30 → 0.30), |Om| ≤ 5"],
+    [{ OL: -70 },                     "OL = -70: a density parameter is a fraction (-70 → -0.70), |OL| ≤ 5"],
+    [{ Ok: Number.NaN },              "Ok must be a finite number; got NaN"],
+    [{ Ob: -0.01 },                   "Ob must be between 0 and Om (Om = 0.3); got -0.01"],
+    [{ Neff: -0.5 },                  "Neff must be ≥ 0; got -0.5"],
+    [{ mnu: [0.1, -0.2] },            "mnu must be ≥ 0 eV; got -0.2"],
+  ])("%j: the whole message", (change, message) => {
+    expect(() => new Cosmology({ ...ok, ...change } as never)).toThrow(new RangeError(message));
+  });
+
+  test.each([
+    // parameters at the edge of their domain are models (common practice: the bounds are inclusive)
+    { H0: 10 }, { H0: 1000 }, { Ob: 0.3 }, { Ob: 0 }, { Neff: 0 }, { mnu: [0, 0, 0] }, { Tcmb: 0, mnu: [0] }, { Om: 5, OL: -4 },
+  ])("%j is accepted", (change) => {
+    expect(() => new Cosmology({ ...ok, ...change } as never)).not.toThrow();
+  });
+
   test("the closed-Λ bounce redshift in the message is where E² = 0 (Om = 0, OL = 2: (1+z)² = 2)", () => {
     // E² = −(1+z)² + 2 (Ok = −1) vanishes at z = √2 − 1 (closed form)
     expect(() => new Cosmology({ ...ok, Tcmb: 0, Om: 0, OL: 2 })).toThrow(`z = ${Number((Math.SQRT2 - 1).toPrecision(4))}`);
