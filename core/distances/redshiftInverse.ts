@@ -288,10 +288,14 @@ export class RedshiftInverse {
         `${w.asked()} exceeds its maximum in this model (${w.limit(inv.peakValue * dh)} at z = ${formatRedshift(Math.expm1(inv.peakU))})`,
       );
     }
+    // the last rising node may lie just past the maximum (its value still above the node before):
+    // the lower branch ends at peakU, so a bracket never reaches past it
     const last = inv.count - 1;
+    const peakU = inv.peakU;
     if (target > values[last]) {
-      if (Number.isFinite(inv.peakU)) return solveBracketed(g, dg, target, last * h, inv.peakU);
-      return this.invertBeyond(g, target, w);
+      if (!Number.isFinite(peakU)) return this.invertBeyond(g, target, w);
+      const below = last * h <= peakU ? last : last - 1; // values[last − 1] ≤ values[last] < target
+      return solveBracketed(g, dg, target, below * h, peakU);
     }
     let lo = 0;
     let hi = last;
@@ -300,8 +304,9 @@ export class RedshiftInverse {
       if (values[mid] <= target) lo = mid;
       else hi = mid;
     }
-    const start = (lo + (target - values[lo]) / (values[hi] - values[lo])) * h;
-    return solveBracketed(g, dg, target, lo * h, hi * h, start);
+    const upper = peakU < hi * h ? peakU : hi * h; // NaN (maximum not known yet) compares false
+    const start = Math.min((lo + (target - values[lo]) / (values[hi] - values[lo])) * h, upper);
+    return solveBracketed(g, dg, target, lo * h, upper, start);
   }
 
   /**
