@@ -39,6 +39,19 @@ describe("Milne (empty, Om = OL = 0, Ok = 1)", () => {
   });
 });
 
+describe("a dark-energy equation of state without dark energy (OL = 0) changes nothing", () => {
+  // Milne again, with w0 = 100: (1+z)^{3(1+w0)} overflows, but OL = 0 multiplies nothing (Hogg 1999 eq. 16, Ωk = 1)
+  const m = new Cosmology({ ...base, H0: 70, Om: 0, OL: 0, w0: 100 });
+  test.each(zs)("z = %d", (z) => {
+    expectRelative(m.comovingDistanceMpc(z), m.hubbleDistanceMpc * Math.log1p(z), tol, "D_C");
+    expectRelative(m.ageGyr(z), m.hubbleTimeGyr / (1 + z), tol, "age");
+  });
+  test("without radiation there is no matter–radiation equality (z_eq = ∞), also without matter", () => {
+    expect(m.equalityRedshift).toBe(Number.POSITIVE_INFINITY);
+    expect(new Cosmology({ ...base, H0: 70, Om: 1 }).equalityRedshift).toBe(Number.POSITIVE_INFINITY);
+  });
+});
+
 describe("de Sitter (Om = 0, OL = 1)", () => {
   const m = new Cosmology({ ...base, H0: 70, Om: 0, OL: 1 });
   // E = 1: D_C = D_H z, t_L = t_H ln(1+z); no beginning, so the age is infinite (Hogg 1999 §5)

@@ -117,6 +117,11 @@ describe.each(Object.entries(testModels))("identities: %s", (_name, params) => {
       expectRelative(m.densityParameter("radiation", z) || 1, (slow.or * a ** 4) / e2 || 1, 1e-9, `radiation z=${z}`);
       expect(Math.abs(m.densityParameter("curvature", z) - (slow.ok * a * a) / e2), `curvature z=${z}`).toBeLessThan(1e-12);
       expect(Math.abs(m.densityParameter("darkenergy", z) - de / e2), `dark energy z=${z}`).toBeLessThan(1e-12);
+      // photons alone (1+z)⁴, and all neutrinos: the massless species (1+z)⁴ plus the massive ones
+      const masslessNu = (3 - slow.y0.length) * slow.onuSpecies * a ** 4;
+      expectRelative(m.densityParameter("photons", z) || 1, (slow.ogamma * a ** 4) / e2 || 1, 1e-9, `photons z=${z}`);
+      expectRelative(m.densityParameter("neutrinos", z) || 1, (masslessNu + massiveNu) / e2 || 1, 1e-9, `neutrinos z=${z}`);
+      expectRelative(m.densityParameter("cold", z), (slow.ocold * a ** 3) / e2, 1e-9, `cold z=${z}`);
     }
     expectRelative(m.densityParameter("matter", 0), params.Om, 1e-15, "Om");
   });

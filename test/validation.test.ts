@@ -60,6 +60,21 @@ describe("model parameters outside their domain", () => {
     expect(() => new Cosmology({ ...ok, ...change } as never)).not.toThrow();
   });
 
+  test("a bounce beyond the tables (z > 1e8) is refused as the model is made, naming where", () => {
+    // E² ⊃ Or (1+z)⁴ − 1e-9 (1+z)^4.5 (w = 0.5): the negative term wins once (1+z)^½ > Or/1e-9 ≈ 9e4,
+    // near z ≈ 7.3e9, past the tables; the check beyond them bisects to where E² = 0
+    const call = () => new Cosmology({ ...ok, Om: 0.3, OL: -1e-9, w0: 0.5 });
+    expect(call).toThrow(/^no big bang: H²\(z\) ≤ 0 at z = 7\d{9} \(the model bounces\)/);
+  });
+
+  test("a negative term that wins only as z → ∞ is refused too ('at very high z')", () => {
+    // −1e-6 (1+z)^4.02 against Or (1+z)⁴ ≈ 9e-5 (1+z)⁴: the ratio reaches 1 only at (1+z)^0.02 ≈ 90,
+    // z ≈ 1e98, beyond every redshift checked; the leading term of E² is negative
+    expect(() => new Cosmology({ ...ok, Om: 0.3, OL: -1e-6, w0: 0.34 })).toThrow(
+      "no big bang: H²(z) ≤ 0 at very high z (the model bounces); check Om, OL/Ok, w0, wa",
+    );
+  });
+
   test("the closed-Λ bounce redshift in the message is where E² = 0 (Om = 0, OL = 2: (1+z)² = 2)", () => {
     // E² = −(1+z)² + 2 (Ok = −1) vanishes at z = √2 − 1 (closed form)
     expect(() => new Cosmology({ ...ok, Tcmb: 0, Om: 0, OL: 2 })).toThrow(`z = ${Number((Math.SQRT2 - 1).toPrecision(4))}`);
@@ -74,6 +89,10 @@ describe("arguments outside their domain", () => {
     [() => m.comovingDistanceMpc(Number.NaN),               TypeError,  /z must be a number/],
     [() => m.ageGyr(Number.POSITIVE_INFINITY),              RangeError, /z must be finite/],
     [() => m.angularDiameterDistanceBetweenMpc(2, 1),       RangeError, /z2 = 1 is below z1 = 2/],
+    [() => m.angularDiameterDistanceBetweenMpc(-1, 2),      RangeError, /^z1 = -1 is negative/],
+    [() => m.angularDiameterDistanceBetweenMpc(1, Number.NaN), TypeError, /^z2 must be a number/],
+    [() => m.comovingVolumeShellMpc3(-1, 2),                RangeError, /^z1 = -1 is negative/],
+    [() => m.comovingVolumeShellMpc3(1, Number.NaN),        TypeError,  /^z2 must be a number/],
     [() => m.comovingVolumeShellMpc3(0, 1, 20),             RangeError, /area = 20 sr/],
     [() => m.properSizeMpc(4, 1),                           RangeError, /angle = 4 rad/],
     [() => m.angleRad(1e6, 1),                              RangeError, /more than 180°/],
