@@ -103,3 +103,47 @@ describe("unit conversion", () => {
     expect(() => parseUnit("qqqqqq")).toThrow(/^unknown unit "qqqqqq" in "qqqqqq"$/);
   });
 });
+
+describe("what a wrong unit is told, whole", () => {
+  // our own messages: each names the text as typed and what is wrong with it, in words for the
+  // common dimensions and as SI base units (FITS spelling) for the others
+  test.each([
+    // from             to             message
+    ["Mpc",             "Gyr",         'cannot convert "Mpc" (length) to "Gyr" (time)'],
+    ["W",               "erg/s/cm2",   'cannot convert "W" (power) to "erg/s/cm2" (flux (power per area))'],
+    ["kg m2 s-3 K",     "rad",         'cannot convert "kg m2 s-3 K" (m2 kg s-3 K) to "rad" (angle)'],
+    ["m s-2",           "m",           'cannot convert "m s-2" (m s-2) to "m" (length)'],
+    ["J/K",             "erg",         'cannot convert "J/K" (m2 kg s-2 K-1) to "erg" (energy, or spectral luminosity (W/Hz))'],
+  ])("%s → %s", (from, to, message) => {
+    expect(() => conversionFactor(from, to)).toThrow(new TypeError(message));
+  });
+
+  test.each([
+    // text        message
+    ["m**(2",      'unit "m**(2": missing ) after the power'],
+    ["m)",         'unit "m)": unexpected ")"'],
+    ["m/",         'unit "m/": a unit is missing'],
+    ["/s",         'unit "/s": unexpected "/"'],
+    ["m^(2/",      'unit "m^(2/": a whole-number power is expected'],
+    ["",           "empty unit"],
+  ])("%j", (text, message) => {
+    expect(() => parseUnit(text)).toThrow(message);
+  });
+
+  test("a unit that is not text is a TypeError", () => {
+    expect(() => parseUnit(3 as never)).toThrow(new TypeError("a unit must be text"));
+  });
+
+  test.each([
+    // text                  SI factor     dimensions [m, kg, s, K, rad]   source
+    ["m**(-2)",              1,            [-2, 0, 0, 0, 0],  "FITS 4.0 §4.3 (powers in parentheses)"],
+    ["m**(1/2)",             1,            [0.5, 0, 0, 0, 0], "FITS 4.0 §4.3 (a fractional power)"],
+    ["m/(s K)",              1,            [1, 0, -1, -1, 0], "FITS 4.0 §4.3 (a parenthesised divisor)"],
+    ["m.s-1",                1,            [1, 0, -1, 0, 0],  "FITS 4.0 §4.3 (product with '.')"],
+    ["erg s-1 cm-2 Hz-1",    1e-3,         [0, 1, -2, 0, 0],  "1 erg = 1e-7 J, 1 cm² = 1e-4 m² (SI brochure)"],
+  ])("%s parses to its SI factor and dimensions", (text, factor, dimensions) => {
+    const unit = parseUnit(text);
+    expectRelative(unit.factor, factor, 1e-15, text);
+    expect(unit.dimensions.map((x) => x + 0)).toEqual(dimensions); // + 0: a power of −0 is 0
+  });
+});
