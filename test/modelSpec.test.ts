@@ -1,7 +1,7 @@
 import { describe, expect, test } from "vitest";
 import { Cosmology } from "../core/distances/Cosmology.js";
 import type { ModelParameters } from "../core/model/ModelParameters.js";
-import { formatModelSpec, parseModelSpec } from "../core/model/modelSpec.js";
+import { formatModelSpec, parseModelSpec, quotedText, withChanges, type NamedModels } from "../core/model/modelSpec.js";
 import { presets } from "../core/model/presets.js";
 import { seededRandom } from "./helpers.js";
 
@@ -83,5 +83,53 @@ describe("model spec text", () => {
       expect(formatModelSpec(p.parameters)).toBe(p.name);
       expect(parseModelSpec(p.name)).toEqual(p.parameters);
     }
+  });
+});
+
+describe("model spec text: the messages and the OL/Ok exchange", () => {
+  /** A workbook's model with OL given, as the pane stores it (invented). */
+  const team: NamedModels = {
+    find: (name) => (name === "TEAM" ? { H0: 70, Om: 0.3, OL: 0.7, w0: -1, wa: 0, Tcmb: 0, Neff: 3.046, mnu: [] } : undefined),
+    names: ["TEAM"],
+  };
+  const many: NamedModels = { find: () => undefined, names: Array.from({ length: 20 }, (_, i) => `M${i}`) };
+
+  test.each([
+    // spec               named   whole message (our own)
+    [3 as never,          undefined, "model spec must be text"],
+    ["H0=70=3",           undefined, "\"H0=70=3\" holds several keys: separate keys with ';', e.g. \"H0=70; Om=0.3; OL=0.7\""],
+    ["=70",               undefined, "unknown key \"\": use H0, Om, OL, Ok, Ob, w0, wa, Tcmb, Neff, mnu"],
+    ["NOPE",              many,      "unknown preset \"NOPE\": use one of P18-BAO, P18-CMB, P15-EXT, W9-ALL, W7-BAO, DR2-CMB, DR2-CMB-PP, DR2-CMB-U3, DR2-CMB-DY5, CONCORDANCE, EDS, M0 … and 19 more"],
+    ["H0=70; Om=0.3; mnu=1,2,3,4", undefined, "mnu: at most three masses, got 4"],
+  ])("%j", (spec, named, message) => {
+    expect(() => parseModelSpec(spec, named)).toThrow(new TypeError(message));
+  });
+
+  test("a model named in the workbook with OL, given Ok, drops OL (and the other way round)", () => {
+    const p = parseModelSpec("TEAM; Ok=0.1", team);
+    expect([p.Ok, p.OL]).toEqual([0.1, undefined]);
+    expect(() => new Cosmology(p)).not.toThrow();
+    const back = withChanges(p, [[" ol ", " 0.6 "]]); // keys and values as typed, spaces and case aside
+    expect([back.OL, back.Ok]).toEqual([0.6, undefined]);
+    const again = withChanges(back, [["Ok", 0]]);
+    expect([again.Ok, again.OL]).toEqual([0, undefined]);
+  });
+
+  test("spaces inside a key or a value are ignored, as between them", () => {
+    expect(parseModelSpec("H 0 = 7 0 ; O m = 0 . 3").H0).toBe(70);
+    expect(withChanges(parseModelSpec("P18-BAO"), [["H0", " 7 3 "]]).H0).toBe(73);
+  });
+
+  test("masses: none written as 0, several kept in decreasing order", () => {
+    expect(formatModelSpec(parseModelSpec("P18-BAO; mnu=0"))).toBe("P18-BAO; mnu=0");
+    expect(formatModelSpec(parseModelSpec("P18-BAO; mnu=0.01,0.06"))).toBe("P18-BAO; mnu=0.06,0.01");
+    expect(formatModelSpec(parseModelSpec("P18-BAO; mnu=0.06"))).toBe("P18-BAO");
+    // without a preset, H0 and Om are always written (they have no default)
+    expect(formatModelSpec(parseModelSpec("H0=67.66; Om=0.3111"))).toBe("H0=67.66; Om=0.3111");
+  });
+
+  test("quoted text from a workbook is cut at 40 characters", () => {
+    expect(quotedText("x".repeat(40))).toBe("x".repeat(40));
+    expect(quotedText("x".repeat(41))).toBe(`${"x".repeat(39)}…`);
   });
 });
