@@ -1,7 +1,7 @@
 /** Models with closed-form distances and ages (all exact results of the Friedmann equation). */
 import { describe, expect, test } from "vitest";
 import { Cosmology } from "../core/distances/Cosmology.js";
-import { expectRelative } from "./helpers.js";
+import { expectRelative, freshModel } from "./helpers.js";
 import { tanhSinh } from "./reference/slowCosmology.js";
 
 const base = { w0: -1, wa: 0, Tcmb: 0, Neff: 3.046, mnu: [] as number[] };
@@ -9,7 +9,7 @@ const zs = [1e-5, 1e-3, 0.05, 0.3, 1, 2.5, 7, 30, 300, 1e4];
 const tol = 1e-12;
 
 describe("Einstein–de Sitter (Om = 1)", () => {
-  const m = new Cosmology({ ...base, H0: 70, Om: 1 });
+  const m = freshModel(() => new Cosmology({ ...base, H0: 70, Om: 1 }));
   const dh = m.hubbleDistanceMpc;
   const th = m.hubbleTimeGyr;
   // D_C = 2 D_H (1 − (1+z)^−½), t = (2/3) t_H (1+z)^−3/2 (Hogg 1999 §5 and eq. 30 for Ωm = 1)
@@ -27,7 +27,7 @@ describe("Einstein–de Sitter (Om = 1)", () => {
 });
 
 describe("Milne (empty, Om = OL = 0, Ok = 1)", () => {
-  const m = new Cosmology({ ...base, H0: 70, Om: 0, OL: 0 });
+  const m = freshModel(() => new Cosmology({ ...base, H0: 70, Om: 0, OL: 0 }));
   const dh = m.hubbleDistanceMpc;
   const th = m.hubbleTimeGyr;
   // a ∝ t: D_C = D_H ln(1+z), D_L = D_H z (1 + z/2), t = t_H/(1+z) (Hogg 1999 eq. 16 with Ωk = 1)
@@ -41,7 +41,7 @@ describe("Milne (empty, Om = OL = 0, Ok = 1)", () => {
 
 describe("a dark-energy equation of state without dark energy (OL = 0) changes nothing", () => {
   // Milne again, with w0 = 100: (1+z)^{3(1+w0)} overflows, but OL = 0 multiplies nothing (Hogg 1999 eq. 16, Ωk = 1)
-  const m = new Cosmology({ ...base, H0: 70, Om: 0, OL: 0, w0: 100 });
+  const m = freshModel(() => new Cosmology({ ...base, H0: 70, Om: 0, OL: 0, w0: 100 }));
   test.each(zs)("z = %d", (z) => {
     expectRelative(m.comovingDistanceMpc(z), m.hubbleDistanceMpc * Math.log1p(z), tol, "D_C");
     expectRelative(m.ageGyr(z), m.hubbleTimeGyr / (1 + z), tol, "age");
@@ -53,7 +53,7 @@ describe("a dark-energy equation of state without dark energy (OL = 0) changes n
 });
 
 describe("de Sitter (Om = 0, OL = 1)", () => {
-  const m = new Cosmology({ ...base, H0: 70, Om: 0, OL: 1 });
+  const m = freshModel(() => new Cosmology({ ...base, H0: 70, Om: 0, OL: 1 }));
   // E = 1: D_C = D_H z, t_L = t_H ln(1+z); no beginning, so the age is infinite (Hogg 1999 §5)
   test.each(zs)("z = %d", (z) => {
     expectRelative(m.comovingDistanceMpc(z), m.hubbleDistanceMpc * z, tol, "D_C");
@@ -85,7 +85,7 @@ describe("Mattig relation (Λ = 0, no radiation)", () => {
 describe("flat ΛCDM age", () => {
   // t(z) = 2 t_H / (3√OL) asinh(√(OL/Om) (1+z)^−3/2) (e.g. Peebles 1993, Principles of Physical Cosmology, eq. 13.20)
   const om = 0.3;
-  const m = new Cosmology({ ...base, H0: 70, Om: om });
+  const m = freshModel(() => new Cosmology({ ...base, H0: 70, Om: om }));
   const ol = 1 - om;
   test.each([0, ...zs])("z = %d", (z) => {
     const t = ((2 * m.hubbleTimeGyr) / (3 * Math.sqrt(ol))) * Math.asinh(Math.sqrt(ol / om) * (1 + z) ** -1.5);
@@ -96,7 +96,7 @@ describe("flat ΛCDM age", () => {
 describe("flat matter + radiation age", () => {
   // ∫ a da/√(Om a + Or) = 2√(Om a + Or)(Om a − 2 Or)/(3 Om²) + 4 Or^{3/2}/(3 Om²) (elementary integral)
   const or = new Cosmology({ ...base, H0: 70, Om: 0.3, Tcmb: 2.7255 }).Or;
-  const m = new Cosmology({ ...base, H0: 70, Om: 1 - or, OL: 0, Tcmb: 2.7255 });
+  const m = freshModel(() => new Cosmology({ ...base, H0: 70, Om: 1 - or, OL: 0, Tcmb: 2.7255 }));
   const om = m.Om;
   test.each([0, ...zs])("z = %d", (z) => {
     const a = 1 / (1 + z);
@@ -133,7 +133,7 @@ describe("dark energy alone with w0–wa (CPL: w = w0 + wa (1 − a))", () => {
   // so E(z) is closed; D_C = D_H ∫ dz/E is checked against the independent tanh-sinh quadrature of
   // that E (test/reference/slowCosmology.ts), not against the engine's own tables.
   const [w0, wa] = [-0.9, 0.4];
-  const m = new Cosmology({ ...base, H0: 70, Om: 0, OL: 1, w0, wa });
+  const m = freshModel(() => new Cosmology({ ...base, H0: 70, Om: 0, OL: 1, w0, wa }));
   const e = (z: number) => Math.sqrt((1 + z) ** (3 * (1 + w0 + wa)) * Math.exp((-3 * wa * z) / (1 + z)));
   test.each(zs.filter((z) => z <= 300))("z = %d", (z) => {
     expectRelative(m.expansionRate(z), e(z), tol, "E");

@@ -1,5 +1,5 @@
 /** Shared test helpers: relative-error checks with a readable failure message. */
-import { expect } from "vitest";
+import { beforeEach, expect } from "vitest";
 
 /** |actual/expected − 1|, or |actual| when expected is 0. */
 export function relativeError(actual: number, expected: number): number {
@@ -44,4 +44,24 @@ export function normal(random: () => number): () => number {
 export function standardDeviation(values: number[]): number {
   const mean = values.reduce((s, v) => s + v, 0) / values.length;
   return Math.sqrt(values.reduce((s, v) => s + (v - mean) ** 2, 0) / (values.length - 1));
+}
+
+/**
+ * A model rebuilt before every test and used like the model itself. Mutation testing runs each test
+ * only against the mutants that test reached (StrykerJS per-test coverage): a model built once while
+ * the file is collected would hide the mutants of model building from every test that could kill them.
+ * @param make builds the model
+ * @returns a stand-in that forwards to the model of the running test
+ */
+export function freshModel<T extends object>(make: () => T): T {
+  let current = make();
+  beforeEach(() => {
+    current = make();
+  });
+  return new Proxy({} as T, {
+    get: (_target, key) => {
+      const value = Reflect.get(current, key, current);
+      return typeof value === "function" ? value.bind(current) : value;
+    },
+  });
 }

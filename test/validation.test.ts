@@ -4,6 +4,7 @@ import { Cosmology } from "../core/distances/Cosmology.js";
 import { absoluteMagnitude, fluxWm2, luminosityW } from "../core/observables/photometry.js";
 import { NoSolutionError } from "../core/checks/NoSolutionError.js";
 import { maxVolumeMpc3 } from "../core/observables/fluxLimit.js";
+import { freshModel } from "./helpers.js";
 
 const ok = { H0: 70, Om: 0.3, w0: -1, wa: 0, Tcmb: 2.7255, Neff: 3.046, mnu: [] as number[] };
 
@@ -82,7 +83,7 @@ describe("model parameters outside their domain", () => {
 });
 
 describe("arguments outside their domain", () => {
-  const m = new Cosmology(ok);
+  const m = freshModel(() => new Cosmology(ok));
   test.each([
     // call                                                  error       message
     [() => m.luminosityDistanceMpc(-0.5),                   RangeError, /blueshifted source needs a redshift-independent distance/],
@@ -131,7 +132,7 @@ describe("the inverse: a value no redshift has is refused with the reason", () =
 });
 
 describe("V_max: bounds that cannot be a sample", () => {
-  const m = Cosmology.fromSpec("EDS");
+  const m = freshModel(() => Cosmology.fromSpec("EDS"));
   test.each([
     // z_max | z_lo | z_hi | area | z_min | message
     [1,       0.5,   0.2,   0.1,   0,      "z_hi = 0.2 is below z_lo = 0.5"],
