@@ -21,9 +21,9 @@ import {
 } from "../core/observables/photometry.js";
 import { surfaceLuminosityLsunPc2, surfaceMagnitude } from "../core/observables/surfaceBrightness.js";
 import { hubbleDiagramChi2 } from "../core/observables/hubbleDiagram.js";
-import { expectRelative } from "./helpers.js";
+import { expectRelative, freshModel } from "./helpers.js";
 
-const eds = Cosmology.fromSpec("EDS");
+const eds = freshModel(() => Cosmology.fromSpec("EDS"));
 const nan = Number.NaN;
 const inf = Number.POSITIVE_INFINITY;
 

@@ -8,13 +8,13 @@ import { Cosmology, fluxWm2, limitingRedshift, limitingRedshiftMag, maxVolumeMpc
 import { CellError } from "../functions/cellError.js";
 import { definitions } from "../functions/definitions.js";
 import { evaluate, type Cell } from "../functions/evaluate.js";
-import { expectRelative } from "./helpers.js";
+import { expectRelative, freshModel } from "./helpers.js";
 
 const active = { spec: "P18-BAO", stored: false };
 const run = (name: string, ...args: unknown[]): Cell[][] => evaluate(definitions[name], args, active);
 const one = (name: string, ...args: unknown[]): Cell => run(name, ...args)[0][0];
-const p18 = Cosmology.fromSpec("P18-BAO");
-const closed = Cosmology.fromSpec("H0=70; Om=0.4; OL=0.85");
+const p18 = freshModel(() => Cosmology.fromSpec("P18-BAO"));
+const closed = freshModel(() => Cosmology.fromSpec("H0=70; Om=0.4; OL=0.85"));
 
 /** S_ν = L_ν (1+z)^(1+α) / (4π D_L²) (Hogg 1999 eqs. 22–23 with a power law), written out again here. */
 const fluxAt = (m: Cosmology, lum: number, z: number, alpha: number) =>

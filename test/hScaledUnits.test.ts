@@ -8,11 +8,11 @@ import { conversionFactor, frequencyHz, parseUnit } from "../core/units/units.js
 import { CellError } from "../functions/cellError.js";
 import { definitions } from "../functions/definitions.js";
 import { evaluate, type Cell } from "../functions/evaluate.js";
-import { expectRelative } from "./helpers.js";
+import { expectRelative, freshModel } from "./helpers.js";
 
 const active = { spec: "P18-BAO", stored: false };
 const one = (name: string, ...args: unknown[]): Cell => evaluate(definitions[name], args, active)[0][0];
-const p18 = Cosmology.fromSpec("P18-BAO");
+const p18 = freshModel(() => Cosmology.fromSpec("P18-BAO"));
 
 describe("h-scaled units", () => {
   test.each([

@@ -6,13 +6,13 @@
 import { describe, expect, test } from "vitest";
 import { Cosmology } from "../core/distances/Cosmology.js";
 import { NoSolutionError } from "../core/checks/NoSolutionError.js";
-import { expectRelative } from "./helpers.js";
+import { expectRelative, freshModel } from "./helpers.js";
 
 const base = { w0: -1, wa: 0, Tcmb: 0, Neff: 3.046, mnu: [] as number[] };
 /** Einstein–de Sitter, H0 = 70: D_C = 2 D_H (1 − (1+z)^−½), D_A = D_C/(1+z), t = (2/3) t_H (1+z)^−3/2 (Hogg 1999 §5). */
-const eds = new Cosmology({ ...base, H0: 70, Om: 1 });
+const eds = freshModel(() => new Cosmology({ ...base, H0: 70, Om: 1 }));
 /** Milne (empty), H0 = 70: D_C = D_H ln(1+z) (Hogg 1999 eq. 16 with Ωk = 1). */
-const milne = new Cosmology({ ...base, H0: 70, Om: 0, OL: 0 });
+const milne = freshModel(() => new Cosmology({ ...base, H0: 70, Om: 0, OL: 0 }));
 const noSolution = (call: () => unknown, message: string) => {
   expect(call).toThrow(NoSolutionError);
   expect(call).toThrow(message);

@@ -7,11 +7,11 @@ import { Cosmology, megaparsecM } from "../core/index.js";
 import { CellError } from "../functions/cellError.js";
 import { definitions } from "../functions/definitions.js";
 import { evaluate, type Cell } from "../functions/evaluate.js";
-import { expectRelative } from "./helpers.js";
+import { expectRelative, freshModel } from "./helpers.js";
 
 const active = { spec: "P18-BAO", stored: false };
 const one = (name: string, ...args: unknown[]): Cell => evaluate(definitions[name], args, active)[0][0];
-const p18 = Cosmology.fromSpec("P18-BAO");
+const p18 = freshModel(() => Cosmology.fromSpec("P18-BAO"));
 const c = 299_792_458; // m/s, exact (SI 2019)
 const jansky = 1e-26; // W m⁻² Hz⁻¹ (IAU)
 
