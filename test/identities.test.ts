@@ -211,3 +211,27 @@ describe("angular-diameter distance has a maximum", () => {
     expect(() => m.redshiftAt("angularDiameterDistance", peak * 1.001)).toThrow(/exceeds its maximum/);
   });
 });
+
+describe("neutrino edge cases against the slow path", () => {
+  // the slow path (test/reference/slowCosmology.ts) integrates the Fermi–Dirac factor by tanh-sinh
+  // quadrature at every point, with no table: it shares no code with the engine's neutrino handling
+  const lcdm = { w0: -1, wa: 0, Tcmb: 2.7255, Neff: 3.046 };
+  test.each([
+    // model                                                                  why
+    [{ ...lcdm, H0: 70, Om: 0.35, mnu: [0.6] },                               "a heavy species: ln y above the Fermi–Dirac table (y > e⁷) at low z"],
+    [{ ...lcdm, H0: 70, Om: 0.3, mnu: [0.06] },                               "a light species: ln y below the table (y < e⁻¹⁰) beyond z ≈ 8e6"],
+    [{ ...lcdm, H0: 70, Om: 0.3, Neff: 10, mnu: [0.1, 0.1, 0.1] },            "many relativistic species, all three massive"],
+  ])("%j: distances and look-back within 1e-9 from z = 0.1 to 1e8 (%s)", (params) => {
+    const m = new Cosmology(params);
+    const slow = new SlowCosmology(params);
+    for (const z of [0.1, 1, 10, 1e3, 1e5, 1e7, 5e7, 1e8]) {
+      expectRelative(m.comovingDistanceMpc(z), slow.comovingDistanceMpc(z), 1e-9, `D_C z=${z}`);
+      expectRelative(m.expansionRate(z), slow.E(z), 1e-10, `E z=${z}`);
+    }
+  });
+
+  test("without radiation, massless species listed as masses of 0 change nothing (EdS: D_C = 2 D_H (1 − (1+z)^−½))", () => {
+    const m = new Cosmology({ ...lcdmParameters, H0: 70, Om: 1, mnu: [0, 0] });
+    for (const z of [0.5, 3, 1e4, 1e8]) expectRelative(m.comovingDistanceMpc(z), 2 * m.hubbleDistanceMpc * -Math.expm1(-0.5 * Math.log1p(z)), 1e-12, `z=${z}`);
+  });
+});
