@@ -68,8 +68,11 @@ describe("quintic Hermite table", () => {
     expect(growing.node(n)).toBe(Math.sin(n * h)); // the last node sets every panel
     expect(asked).toEqual([2, 20, n - 1]);
     for (let x = 0; x <= n * h; x += 0.0371) expect(growing.value(x)).toBe(complete.value(x));
-    expect(() => growing.setPanels(3, 5, f, df, d2f)).toThrow(RangeError); // panels are set once, in order
-    expect(() => new QuinticTable(0, h, n).value(0.5)).toThrow(RangeError); // no panel and no way to grow
+    expect(() => growing.setPanels(3, 5, f, df, d2f)).toThrow(new RangeError("panels 3 … 5 out of order")); // set once, in order
+    const empty = new QuinticTable(0, h, n);
+    expect(() => empty.setPanels(0, 0, f, df, d2f)).toThrow(new RangeError("panels 0 … 0 out of order")); // at least one panel
+    expect(() => empty.setPanels(0, n + 1, f, df, d2f)).toThrow(new RangeError(`panels 0 … ${n + 1} out of order`)); // not past the grid
+    expect(() => empty.value(0.5)).toThrow(new RangeError("table panel not set")); // no panel and no way to grow
   });
 });
 
