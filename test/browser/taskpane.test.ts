@@ -93,7 +93,7 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       expect(await page.locator("#not-applied").textContent()).toBe("Not applied — the workbook still uses W9-ALL. Changed here: Start from, H0, Om, Tcmb, Neff, mnu, Ob.");
       await page.screenshot({ path: `${shots}cosmology-${themeName}.png`, fullPage: true });
       await page.locator("#apply").click();
-      await expect.poll(() => page.locator("#apply-status").textContent()).toBe("Applied P18-BAO; H0=73; 3 formulas recalculated.");
+      await expect.poll(() => page.locator("#apply-status").textContent()).toBe("Applied P18-BAO; H0=73; 4 formulas recalculated.");
       expect(await page.locator("#not-applied").isHidden()).toBe(true);
       expect(await fake(page, "saved")).toEqual({ "zcell.activeModel": "P18-BAO; H0=73" });
       expect(await fake(page, "calculations")).toEqual(["Full"]);
@@ -115,7 +115,7 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await expect.poll(() => page.locator("#model-name-status").textContent()).toBe('"P18-BAO" is a built-in preset: choose another name');
       await page.fill("#model-name", "team-fiducial");
       await page.locator("#save-model").click();
-      await expect.poll(() => page.locator("#model-name-status").textContent()).toMatch(/^Saved TEAM-FIDUCIAL = P18-BAO; H0=70 in this workbook; 3 formulas recalculated/);
+      await expect.poll(() => page.locator("#model-name-status").textContent()).toMatch(/^Saved TEAM-FIDUCIAL = P18-BAO; H0=70 in this workbook; 4 formulas recalculated/);
       expect(await fake(page, "saved")).toEqual({ "zcell.workbookModels": { "TEAM-FIDUCIAL": "P18-BAO; H0=70" } });
       expect(await page.locator("#workbook-models").textContent()).toMatch(/TEAM-FIDUCIAL: P18-BAO; H0=70/);
       await page.screenshot({ path: `${shots}workbook-models-${themeName}.png`, fullPage: true });
