@@ -201,8 +201,10 @@ function modelConventions(m: Cosmology): string[] {
   return out;
 }
 
-/** The error values ZC functions give, as Excel shows them. */
-const excelErrorKinds: Record<string, ErrorKind> = { "#VALUE!": "value", "#NUM!": "num", "#N/A": "na" };
+/** The kind of an error value as Excel shows it in a cell ("#NUM!" → "num", CellError's own spelling); undefined for any other value. */
+function shownErrorKind(value: unknown): ErrorKind | undefined {
+  return (["value", "num", "na"] as const).find((kind) => new CellError(kind, "").excelText === value);
+}
 
 /**
  * Explains every ZC call in a formula.
@@ -306,7 +308,7 @@ async function explainCall(
   } else {
     result = `${showValue(cellValue)} (as Excel shows it; an argument is computed by Excel)`;
     isError = typeof cellValue === "string" && cellValue.startsWith("#");
-    const kind = excelErrorKinds[String(cellValue)];
+    const kind = shownErrorKind(cellValue);
     if (kind) fault = adviseOnError(def, kind, "");
   }
   return { name: call.name, summary: info.summary, equation: info.equation, args, model, conventions, method: info.method, methodPlain: plainMethod(info.method), result, exact, isError, fault };

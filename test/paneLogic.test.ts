@@ -138,6 +138,22 @@ describe("an error explained: the argument at fault and how to fix it", () => {
     expect(call.fault).toEqual({ fix: "A value lies outside its physical domain, or the result does: the message says which." });
   });
 
+  test("a cell's shown value is a stranger's text: only Excel's own error values get advice", async () => {
+    // hostile values a workbook can hold in a cell (object-property names, look-alikes, a huge text)
+    for (const shown of ["constructor", "__proto__", "toString", "#num!", "#NUM! ", "#N/A".repeat(10_000)]) {
+      const [call] = await explainFormula("=ZC.DIST_LUM(SUM(A1:A3))", async () => [[""]], active, shown);
+      expect(call.fault, JSON.stringify(shown).slice(0, 20)).toBeUndefined();
+    }
+  });
+
+  test("a hostile model text in the formula is quoted, cut, and still named as the argument at fault", async () => {
+    const hostile = `${"(((((a+)+)+)+".repeat(5_000)}; H0=model:`;
+    const [call] = await explainFormula(`=ZC.DIST_LUM(1,"${hostile}")`, async () => [[""]], active);
+    expect(call.isError).toBe(true);
+    expect(call.fault?.argument).toBe("model");
+    expect(call.result.length).toBeLessThan(400); // the message quotes at most 40 characters of it
+  });
+
   test("a value that is not an error has no advice", async () => {
     const [call] = await explainFormula("=ZC.DIST_LUM(1)", async () => [[""]], active);
     expect(call.fault).toBeUndefined();
