@@ -64,17 +64,17 @@ await Promise.resolve(); // let the bundle's own start-up microtasks run, as a p
 let result;
 /** First formulas timed by cold:<NAME> (omitted optional arguments are null, as Excel passes them). */
 const coldCalls = {
-  DIST_LUM: [[[1]], null, null],
-  AGE: [[[1]], null, null],
-  LOOKBACK: [[[1]], null, null],
-  REDSHIFT: [[[6791]], [["DIST_LUM"]], null, null],
-  DIST_LUM_FAR: [[[1000]], null, null],
+  DIST_LUM: ["DIST_LUM", [[1]], null, null],
+  AGE: ["AGE", [[1]], null, null],
+  LOOKBACK: ["LOOKBACK", [[1]], null, null],
+  REDSHIFT: ["REDSHIFT", [[6791]], [["DIST_LUM"]], null, null],
+  DIST_LUM_FAR: ["DIST_LUM", [[1000]], null, null],
 };
 if (figure === "cold" || figure.startsWith("cold:")) {
-  const name = figure === "cold" ? "DIST_LUM" : figure.slice("cold:".length);
-  const fn = registered.get(name === "DIST_LUM_FAR" ? "DIST_LUM" : name);
+  const [id, ...args] = coldCalls[figure === "cold" ? "DIST_LUM" : figure.slice("cold:".length)];
+  const fn = registered.get(id);
   const t0 = now();
-  const out = await settle(fn(...coldCalls[name]));
+  const out = await settle(fn(...args));
   result = { ms: now() - t0, loadMs: loaded - loadStart, check: out[0][0] };
 } else if (figure === "single") {
   const fn = registered.get("DIST_LUM");

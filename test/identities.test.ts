@@ -1,5 +1,5 @@
 /** Identities, limits and symmetries that hold for every model, checked on every test model. */
-import { beforeEach, describe, expect, test } from "vitest";
+import { describe, expect, test } from "vitest";
 import { speedOfLightKmPerS, megaparsecKm, secondsPerGyr } from "../core/units/constants.js";
 import { Cosmology, type InvertibleQuantity } from "../core/distances/Cosmology.js";
 import { NoSolutionError } from "../core/checks/NoSolutionError.js";
@@ -28,12 +28,9 @@ const forward: Record<InvertibleQuantity, (m: Cosmology, z: number) => number> =
 };
 
 describe.each(Object.entries(testModels))("identities: %s", (_name, params) => {
-  // a fresh model for every test, built inside it: mutation testing (perTest coverage) then runs each
-  // test against the mutants of model building and table growth it exercises
-  let m = new Cosmology(params);
-  beforeEach(() => {
-    m = new Cosmology(params);
-  });
+  // a fresh model for every test (see freshModel): mutation testing then runs each test against the
+  // mutants of model building and table growth it exercises
+  const m = freshModel(() => new Cosmology(params));
 
   test("inverse redshifts round-trip to |Δz| ≤ 1e-9 (1+z) above the double-precision floor, 1e-8 ≤ z ≤ 1e8", () => {
     for (const [q, f] of Object.entries(forward) as [InvertibleQuantity, (m: Cosmology, z: number) => number][]) {
