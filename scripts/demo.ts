@@ -226,8 +226,9 @@ structure.getCell("B2").alignment = { horizontal: "right" };
 
 // Populations: an INVENTED sample (log10 L, V_max, distance moduli made up for the tour) for the binned
 // luminosity function and the χ² of a Hubble diagram. LUMINOSITY_FUNCTION returns a table; as on the
-// what-if sheet the file holds one formula per cell, INDEX(ZC.LUMINOSITY_FUNCTION(…), row, column),
-// which needs no dynamic-array support and keeps its cached value in another reader (an array formula
+// what-if sheet the file holds one formula per cell, INDEX(ZC.LUMINOSITY_FUNCTION(…), row, column):
+// INDEX with a non-zero row and column returns one value, no array formula needed (Microsoft support,
+// "INDEX function", array form; ../shared/excel-host-notes.md), and the cell keeps its cached value in another reader (an array formula
 // over the range showed #NAME? in LibreOffice, scripts/renderDemo.mjs); typed by hand in Excel with
 // dynamic arrays, the one formula spills the same table.
 const populations = workbook.addWorksheet("Populations (invented)");
