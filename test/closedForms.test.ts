@@ -1,11 +1,13 @@
 /** Models with closed-form distances and ages (all exact results of the Friedmann equation). */
 import { describe, expect, test } from "vitest";
 import { Cosmology } from "../core/distances/Cosmology.js";
+import { comovingDistanceSlopeMpc, luminosityDistanceSlopeMpc } from "../core/distances/distanceSlopes.js";
 import { expectRelative, freshModel } from "./helpers.js";
 import { tanhSinh } from "./reference/slowCosmology.js";
 
 const base = { w0: -1, wa: 0, Tcmb: 0, Neff: 3.046, mnu: [] as number[] };
-const zs = [1e-5, 1e-3, 0.05, 0.3, 1, 2.5, 7, 30, 300, 1e4];
+// below the tables' direct integrals (1e-5), inside them, and beyond their end at z = 1e8
+const zs = [1e-5, 1e-3, 0.05, 0.3, 1, 2.5, 7, 30, 300, 1e4, 1e7, 1e9, 1e12];
 const tol = 1e-12;
 
 describe("Einstein–de Sitter (Om = 1)", () => {
@@ -20,6 +22,10 @@ describe("Einstein–de Sitter (Om = 1)", () => {
     expectRelative(m.ageGyr(z), (2 / 3) * th * (1 + z) ** -1.5, tol, "age");
     expectRelative(m.lookbackTimeGyr(z), (2 / 3) * th * -Math.expm1(-1.5 * Math.log1p(z)), tol, "look-back");
     expectRelative(m.comovingVolumeMpc3(z), ((4 * Math.PI) / 3) * dc ** 3, 3 * tol, "volume");
+    expectRelative(m.comovingVolumeShellMpc3(0, z), ((4 * Math.PI) / 3) * dc ** 3, 3 * tol, "shell from 0, whole sky by default");
+    // dD_C/dz = D_H / E = D_H (1+z)^−3/2; dD_L/dz = D_H (2 − (1+z)^−½) (the derivatives of the above)
+    expectRelative(comovingDistanceSlopeMpc(m, z), dh * (1 + z) ** -1.5, tol, "dD_C/dz");
+    expectRelative(luminosityDistanceSlopeMpc(m, z), dh * (2 - (1 + z) ** -0.5), tol, "dD_L/dz");
   });
   test("age today is two thirds of the Hubble time (Hogg 1999 §6)", () => {
     expectRelative(m.ageTodayGyr, (2 / 3) * th, tol, "age0");
@@ -36,6 +42,7 @@ describe("Milne (empty, Om = OL = 0, Ok = 1)", () => {
     expectRelative(m.luminosityDistanceMpc(z), dh * z * (1 + z / 2), tol, "D_L");
     expectRelative(m.ageGyr(z), th / (1 + z), tol, "age");
     expectRelative(m.lookbackTimeGyr(z), (th * z) / (1 + z), tol, "look-back");
+    expectRelative(comovingDistanceSlopeMpc(m, z), dh / (1 + z), tol, "dD_C/dz = D_H/(1+z)");
   });
 });
 
@@ -94,14 +101,16 @@ describe("flat ΛCDM age", () => {
 });
 
 describe("flat matter + radiation age", () => {
-  // ∫ a da/√(Om a + Or) = 2√(Om a + Or)(Om a − 2 Or)/(3 Om²) + 4 Or^{3/2}/(3 Om²) (elementary integral)
+  // ∫ a da/√(Om a + Or) = 2√(Om a + Or)(Om a − 2 Or)/(3 Om²) + 4 Or^{3/2}/(3 Om²) (elementary integral);
+  // with s = √(Om a + Or), r = √Or the numerator is 2(s − r)²(s + 2r) and s − r = Om a/(s + r), so
+  // t = t_H · 2a²(s + 2r) / (3(s + r)²): the same value without the cancellation at high z
   const or = new Cosmology({ ...base, H0: 70, Om: 0.3, Tcmb: 2.7255 }).Or;
   const m = freshModel(() => new Cosmology({ ...base, H0: 70, Om: 1 - or, OL: 0, Tcmb: 2.7255 }));
   const om = m.Om;
   test.each([0, ...zs])("z = %d", (z) => {
     const a = 1 / (1 + z);
-    const w = om * a + or;
-    const t = (m.hubbleTimeGyr * (2 * Math.sqrt(w) * (om * a - 2 * or) + 4 * or ** 1.5)) / (3 * om * om);
+    const [s, r] = [Math.sqrt(om * a + or), Math.sqrt(or)];
+    const t = (m.hubbleTimeGyr * 2 * a * a * (s + 2 * r)) / (3 * (s + r) ** 2);
     expectRelative(m.ageGyr(z), t, tol, "age");
   });
 });

@@ -36,6 +36,31 @@ describe("limiting redshift", () => {
     expectRelative(fluxAt(m, lum, z, alpha), limit, 1e-10, `z_max = ${z}`);
   });
 
+  test.each([
+    // model     L [W or W/Hz]  limit      alpha  | most distance evaluations (measured 5–10)
+    ["P18-BAO",  1e38,          1e-16,     -1,      12],
+    ["P18-BAO",  1e36,          1e-13,     -1,      12],
+    ["P18-BAO",  1e25,          1e-29,     -0.7,    12],
+    ["P18-BAO",  1e24,          1e-30,     0.5,     12],
+    ["closed",   1e38,          1e-17,     -1,      12],
+    ["P18-BAO",  1e30,          1e-16,     -1,      12],
+    ["P18-BAO",  1e22,          1e-29,     5,       12],
+  ] as const)("%s, L = %d against %d (α = %d): the scan starts near z_max and Newton ends it in at most %d distances", (name, lum, limit, alpha, most) => {
+    // a cell's cost: scanning up from z = 1e-9 alone takes 30 doublings, bisection about 50 halvings
+    let calls = 0;
+    const m = name === "closed" ? closed : p18;
+    const counting = new Proxy(m, {
+      get(target, key) {
+        const value = Reflect.get(target, key, target);
+        if (key === "luminosityDistanceMpc") return (z: number) => (calls++, target.luminosityDistanceMpc(z));
+        return typeof value === "function" ? value.bind(target) : value;
+      },
+    });
+    const z = limitingRedshift(counting, lum, limit, alpha);
+    expect(z).toBe(limitingRedshift(m, lum, limit, alpha));
+    expect(calls).toBeLessThanOrEqual(most);
+  });
+
   test("bolometric: matches FLUX of the core at z_max", () => {
     const z = limitingRedshift(p18, 3e37, 2e-17);
     expectRelative(fluxWm2(p18, 3e37, z), 2e-17, 1e-10, "FLUX at z_max");
@@ -102,6 +127,11 @@ describe("V_max", () => {
     expect(maxVolumeMpc3(p18, 0.05, 0.1, 1, area)).toBe(0);
     expect(maxVolumeMpc3(p18, 0.5, 0.1, 1, area)).toBe(p18.comovingVolumeShellMpc3(0.1, 0.5, area));
     expect(maxVolumeMpc3(p18, 3, 0.1, 1, area)).toBe(p18.comovingVolumeShellMpc3(0.1, 1, area));
+  });
+
+  test("an empty sample range (z_lo = z_hi) has no volume; z_hi below z_lo is refused, naming both", () => {
+    expect(maxVolumeMpc3(p18, 2, 0.5, 0.5, 0.1)).toBe(0);
+    expect(() => maxVolumeMpc3(p18, 2, 0.5, 0.4, 0.1)).toThrow(/^z_hi = 0.4 is below z_lo = 0.5$/);
   });
 
   test("a 1/V_max sum over an invented catalogue: ranges equal the same sum cell by cell", () => {

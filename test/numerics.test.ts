@@ -2,6 +2,7 @@ import { describe, expect, test } from "vitest";
 import { fermiDiracDensityFactor, fermiDiracDensityFactorLogSlope } from "../core/model/fermiDirac.js";
 import { integrate, kronrod15 } from "../core/numerics/quadrature.js";
 import { QuinticTable } from "../core/numerics/QuinticTable.js";
+import { solveBracketed } from "../core/numerics/solveBracketed.js";
 import { expectRelative } from "./helpers.js";
 import { slowFermiDirac, tanhSinh } from "./reference/slowCosmology.js";
 
@@ -124,5 +125,96 @@ describe("Fermi–Dirac density factor F(y)", () => {
 
   test("tanh-sinh reference itself integrates a known integral (∫₀¹ ln x = −1)", () => {
     expectRelative(tanhSinh(Math.log, 0, 1), -1, 1e-14, "ln");
+  });
+});
+
+/** Wraps f so that its calls are counted in `calls.n`. */
+function counted(f: (x: number) => number): { f: (x: number) => number; calls: { n: number } } {
+  const calls = { n: 0 };
+  return {
+    f: (x) => {
+      calls.n++;
+      return f(x);
+    },
+    calls,
+  };
+}
+
+describe("adaptive quadrature: when it stops", () => {
+  test("an empty interval is 0 without evaluating the integrand (which may be infinite there)", () => {
+    const { f, calls } = counted((x) => 1 / x);
+    expect(integrate(f, 0, 0)).toBe(0);
+    expect(calls.n).toBe(0);
+  });
+
+  test("an integrand the first 8 panels integrate exactly stops there: 8 × 15 evaluations", () => {
+    // K15 and G7 are both exact for degree ≤ 13 (Piessens et al. 1983 §2.2.1), so the error estimate is 0
+    for (const g of [() => 0, (x: number) => x * x]) {
+      const { f, calls } = counted(g);
+      integrate(f, 0, 1);
+      expect(calls.n).toBe(8 * 15);
+    }
+  });
+
+  test("an integrand it cannot converge on stops after 2000 bisections, with the sum of its panels", () => {
+    // a deterministic noise in [0, 1) (the fractional part of a scaled sine, common practice for a
+    // hash): no panel's estimate ever settles; its mean over [0, 1] is about 1/2
+    const { f, calls } = counted((x) => {
+      const s = Math.sin(x * 12_989.8) * 43_758.5453;
+      return s - Math.floor(s);
+    });
+    const value = integrate(f, 0, 1);
+    expect(calls.n).toBe(15 * (8 + 2 * 2000));
+    expect(Math.abs(value - 0.5)).toBeLessThan(0.01);
+  });
+
+  test("refinement ends when the worst panel is too narrow to halve: a jump asked to 0 error", () => {
+    // ∫₀¹ [x ≥ 1/3] dx = 2/3 (common practice); no panel across the jump ever has a zero error estimate,
+    // so with both tolerances 0 the panel at 1/3 is halved until its midpoint rounds to an end:
+    // about 53 halvings (the bits of a double), far fewer than the 2000 allowed
+    const { f, calls } = counted((x) => (x < 1 / 3 ? 0 : 1));
+    expectRelative(integrate(f, 0, 1, 0, 0), 2 / 3, 1e-15, "∫ of a step");
+    expect(calls.n).toBeLessThanOrEqual(15 * (8 + 2 * 60));
+  });
+});
+
+describe("safeguarded Newton solver", () => {
+  test.each([
+    // g(x)          | target | most evaluations | bracket    | root (closed form)
+    ["x²",             2,       8,                 [0, 2],      Math.SQRT2],
+    ["eˣ",             10,      8,                 [0, 5],      Math.LN10],
+    ["tanh x",         0.5,     8,                 [-20, 20],   Math.atanh(0.5)],
+    ["x³",             1e-3,    12,                [0, 1],      0.1],
+    ["atan x",         1.2,     14,                [-10, 100],  Math.tan(1.2)],   // Newton leaves the bracket: bisection takes over
+  ] as const)("%s = %s from the bracket's midpoint: the root to 2 ulps in at most %s evaluations", (name, target, most, [lo, hi], root) => {
+    const pairs: Record<string, [(x: number) => number, (x: number) => number]> = {
+      "x²": [(x) => x * x, (x) => 2 * x],
+      "eˣ": [Math.exp, Math.exp],
+      "tanh x": [Math.tanh, (x) => 1 - Math.tanh(x) ** 2],
+      "x³": [(x) => x ** 3, (x) => 3 * x * x],
+      "atan x": [Math.atan, (x) => 1 / (1 + x * x)],
+    };
+    const [g, dg] = pairs[name];
+    const { f, calls } = counted(g);
+    const x = solveBracketed(f, dg, target, lo, hi);
+    expect(Math.abs(x - root)).toBeLessThanOrEqual(2 * Number.EPSILON * root);
+    expect(calls.n).toBeLessThanOrEqual(most);
+    // bisection alone would need about 50 halvings of the bracket to reach 2 ulps
+  });
+
+  test("only interior points are evaluated, so g may be infinite at the ends", () => {
+    // logit(x) = ln(x/(1−x)) is −∞ at 0 and +∞ at 1; logit(0.8) = ln 4
+    const { f, calls } = counted((x) => {
+      expect(x > 0 && x < 1).toBe(true);
+      return Math.log(x / (1 - x));
+    });
+    const x = solveBracketed(f, (u) => 1 / (u * (1 - u)), Math.log(4), 0, 1);
+    expect(Math.abs(x - 0.8)).toBeLessThanOrEqual(2 * Number.EPSILON);
+    expect(calls.n).toBeLessThanOrEqual(10);
+  });
+
+  test("a start given near one end still converges inside the bracket", () => {
+    const x = solveBracketed((u) => u * u, (u) => 2 * u, 2, 0, 2, 1e-9);
+    expect(Math.abs(x - Math.SQRT2)).toBeLessThanOrEqual(2 * Number.EPSILON * Math.SQRT2);
   });
 });

@@ -5,6 +5,7 @@
  * published formulas named beside each.
  */
 import { describe, expect, test } from "vitest";
+import { Cosmology, growthFactor, growthRate } from "../core/index.js";
 import { sheetCalls } from "./sheetCalls.js";
 import { expectRelative } from "./helpers.js";
 
@@ -163,6 +164,21 @@ describe("linear growth", () => {
     const h = 1e-3;
     const dlnD = (Math.log(num("GROWTH", z + h, model)) - Math.log(num("GROWTH", z - h, model))) / (2 * h);
     expectRelative(num("GROWTH_RATE", z, model), -(1 + z) * dlnD, 1e-6, "f");
+  });
+
+  test("matter and radiation alone: the Mészáros growing mode D ∝ a + (2/3) a_eq, f = a / (a + (2/3) a_eq) (rel ≤ 2e-7, 1e-8)", () => {
+    // Mészáros 1974 (A&A 37, 225): sub-horizon growth with radiation that does not cluster, δ ∝ 1 + 3y/2 with
+    // y = a/a_eq, exact for E² = Ωm a⁻³ + Ωr a⁻⁴. The model is flat with Ωm = 1 − Ωr (massless neutrinos).
+    const probe = Cosmology.fromSpec("H0=70; Om=0.5; OL=0; Tcmb=2.7255; Neff=3.046");
+    const m = Cosmology.fromSpec(`H0=70; Om=${1 - probe.Or}; OL=0; Tcmb=2.7255; Neff=3.046`);
+    expect(Math.abs(m.Ok)).toBeLessThan(1e-15);
+    const aEq = probe.Or / (1 - probe.Or); // a_eq = Ωr/Ωm
+    expect(growthFactor(m, 0)).toBe(1); // D(z)/D(0) by definition
+    for (const z of [0.5, 10, 1000, 3000, 3e4, 99_999]) {
+      const a = 1 / (1 + z);
+      expectRelative(growthFactor(m, z), (a + (2 / 3) * aEq) / (1 + (2 / 3) * aEq), 2e-7, `D at z = ${z}`);
+      expectRelative(growthRate(m, z), a / (a + (2 / 3) * aEq), 1e-8, `f at z = ${z}`);
+    }
   });
 
   test("f today in flat ΛCDM is close to Ωm^0.55 (Linder 2005, PRD 72, 043529, a fit: to about 1%)", () => {

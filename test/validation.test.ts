@@ -84,6 +84,21 @@ describe("model parameters outside their domain", () => {
 
 describe("arguments outside their domain", () => {
   const m = freshModel(() => new Cosmology(ok));
+  test("the edges of each domain are accepted: z2 = z1, area 0 and 4π, angle 0 and π, size 0", () => {
+    expect(m.angularDiameterDistanceBetweenMpc(1, 1)).toBe(0);
+    expect(m.comovingVolumeShellMpc3(1, 1)).toBe(0);
+    expect(m.comovingVolumeShellMpc3(0, 1, 0)).toBe(0);
+    expect(m.comovingVolumeShellMpc3(0, 1, 4 * Math.PI)).toBe(m.comovingVolumeMpc3(1));
+    expect(m.properSizeMpc(0, 1)).toBe(0);
+    expect(m.properSizeMpc(Math.PI, 1)).toBe(Math.PI * m.angularDiameterDistanceMpc(1));
+    expect(m.angleRad(0, 1)).toBe(0);
+    expect(m.angleRad(0, 0)).toBe(0); // no size subtends no angle, even at D_A = 0
+    // θ = π exactly is the largest angle a size can subtend (small-angle relation θ = ℓ/D_A)
+    const da = m.angularDiameterDistanceMpc(1);
+    expect(m.angleRad(Math.PI * da, 1)).toBe(Math.PI);
+    expect(() => m.angleRad(1, 0)).toThrow(/^size 1 Mpc at z = 0 would subtend more than 180° \(D_A = 0.000 Mpc\)$/);
+  });
+
   test.each([
     // call                                                  error       message
     [() => m.luminosityDistanceMpc(-0.5),                   RangeError, /blueshifted source needs a redshift-independent distance/],
@@ -95,6 +110,9 @@ describe("arguments outside their domain", () => {
     [() => m.comovingVolumeShellMpc3(-1, 2),                RangeError, /^z1 = -1 is negative/],
     [() => m.comovingVolumeShellMpc3(1, Number.NaN),        TypeError,  /^z2 must be a number/],
     [() => m.comovingVolumeShellMpc3(0, 1, 20),             RangeError, /area = 20 sr/],
+    [() => m.comovingVolumeShellMpc3(2, 1),                 RangeError, /^z2 = 1 is below z1 = 2$/],
+    [() => m.angleRad(-1, 1),                               RangeError, /^size = -1 must be ≥ 0 and finite$/],
+    [() => m.angleRad(Number.POSITIVE_INFINITY, 1),         RangeError, /^size = Infinity must be ≥ 0 and finite$/],
     [() => m.properSizeMpc(4, 1),                           RangeError, /angle = 4 rad/],
     [() => m.angleRad(1e6, 1),                              RangeError, /more than 180°/],
     [() => luminosityW(m, -1, 1),                           RangeError, /flux = -1 W\/m2/],

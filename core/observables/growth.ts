@@ -81,17 +81,15 @@ function tableOf(model: Cosmology): GrowthTable {
   return table;
 }
 
-/** Cubic Hermite value of f (slope g) at ln a, and its slope. */
-function hermite(f: Float64Array, g: Float64Array, lnA: number): [number, number] {
+/** Cubic Hermite value of f (slope g = df/dln a) at ln a. */
+function hermite(f: Float64Array, g: Float64Array, lnA: number): number {
   const t = (lnA - lnAStart) / step;
   const i = Math.min(steps - 1, Math.max(0, Math.floor(t)));
   const s = t - i;
   const [f0, f1, g0, g1] = [f[i], f[i + 1], g[i] * step, g[i + 1] * step];
   const s2 = s * s;
   const s3 = s2 * s;
-  const value = (2 * s3 - 3 * s2 + 1) * f0 + (s3 - 2 * s2 + s) * g0 + (-2 * s3 + 3 * s2) * f1 + (s3 - s2) * g1;
-  const slope = ((6 * s2 - 6 * s) * f0 + (3 * s2 - 4 * s + 1) * g0 + (-6 * s2 + 6 * s) * f1 + (3 * s2 - 2 * s) * g1) / step;
-  return [value, slope];
+  return (2 * s3 - 3 * s2 + 1) * f0 + (s3 - 2 * s2 + s) * g0 + (-2 * s3 + 3 * s2) * f1 + (s3 - s2) * g1;
 }
 
 function lnAOf(z: number): number {
@@ -110,7 +108,7 @@ function lnAOf(z: number): number {
  */
 export function growthFactor(model: Cosmology, z: number): number {
   const t = tableOf(model);
-  return hermite(t.d, t.d1, lnAOf(z))[0];
+  return hermite(t.d, t.d1, lnAOf(z));
 }
 
 /**
@@ -123,5 +121,5 @@ export function growthFactor(model: Cosmology, z: number): number {
 export function growthRate(model: Cosmology, z: number): number {
   const t = tableOf(model);
   const lnA = lnAOf(z);
-  return hermite(t.d1, t.d2, lnA)[0] / hermite(t.d, t.d1, lnA)[0];
+  return hermite(t.d1, t.d2, lnA) / hermite(t.d, t.d1, lnA);
 }
