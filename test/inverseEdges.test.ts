@@ -81,3 +81,45 @@ describe("ages", () => {
     noSolution(() => eds.redshiftAt("age", 10), "age 10 Gyr exceeds the age of the universe today in this model (9.31231 Gyr)");
   });
 });
+
+describe("what an inverse costs: look-ups and exact distances", () => {
+  /** Counts the model's table look-ups and exact χ evaluations (the work behind one cell of REDSHIFT). */
+  function counting(m: Cosmology): { table: number; exact: number } {
+    const counts = { table: 0, exact: 0 };
+    const model = m as unknown as Record<string, unknown> & { chiAtU(u: number): number };
+    for (const table of [m.chi, m.tau, m.lnAge]) {
+      if (!table) continue;
+      const value = table.value.bind(table);
+      table.value = (x: number) => (counts.table++, value(x));
+    }
+    const chiAtU = model.chiAtU.bind(m);
+    model.chiAtU = (u: number) => (counts.exact++, chiAtU(u));
+    return counts;
+  }
+
+  test.each([
+    // quantity                    value  | first call: look-ups, exact | again (nodes kept): look-ups, exact   (measured)
+    ["comovingDistance",           3000,    4,   0,                       4,   0],
+    ["comovingDistance",           10,      4,   0,                       4,   0],
+    ["lookbackTime",               5,       5,   0,                       5,   0],
+    ["lookbackTime",               12,      5,   0,                       5,   0],     // above half the age: by the age table
+    ["age",                        1,       3,   0,                       3,   0],
+    ["comovingVolume",             1e11,    4,   0,                       4,   0],
+    ["luminosityDistance",         6000,    36,  40,                      7,   7],     // node values up to z ≈ 0.9 first
+    ["distanceModulus",            44,      37,  41,                      7,   7],
+    ["angularDiameterDistance",    1500,    30,  34,                      11,  11],
+  ] as const)("%s %d: Newton from the interpolated node costs a few look-ups", (quantity, value, firstTable, firstExact, table, exact) => {
+    // P18-BAO; a worse start or bracket costs more: bisection alone would take about 50 steps
+    const m = Cosmology.fromSpec("P18-BAO");
+    void m.ageTodayGyr;
+    const counts = counting(m);
+    const z = m.redshiftAt(quantity, value);
+    expect(counts.table).toBeLessThanOrEqual(firstTable);
+    expect(counts.exact).toBeLessThanOrEqual(firstExact);
+    Object.assign(counts, { table: 0, exact: 0 });
+    const again = m.redshiftAt(quantity, value * 0.999);
+    expect(Math.abs(again - z)).toBeGreaterThan(0);
+    expect(counts.table).toBeLessThanOrEqual(table);
+    expect(counts.exact).toBeLessThanOrEqual(exact);
+  });
+});
