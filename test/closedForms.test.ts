@@ -43,6 +43,15 @@ describe("Milne (empty, Om = OL = 0, Ok = 1)", () => {
     expectRelative(m.ageGyr(z), th / (1 + z), tol, "age");
     expectRelative(m.lookbackTimeGyr(z), (th * z) / (1 + z), tol, "look-back");
     expectRelative(comovingDistanceSlopeMpc(m, z), dh / (1 + z), tol, "dD_C/dz = D_H/(1+z)");
+    // V = 4π D_H³ ∫₀^χ sinh² x dx = π D_H³ (sinh 2χ − 2χ), χ = ln(1+z) (Hogg 1999 eq. 29 with Ωk = 1);
+    // sinh y − y summed as its Taylor series Σ y^(2k+1)/(2k+1)! below y = 1, where the difference cancels
+    const y = 2 * Math.log1p(z);
+    let sinhMinusY = Math.sinh(y) - y;
+    if (y < 1) {
+      sinhMinusY = 0;
+      for (let k = 1, term = y; k < 20; k++) sinhMinusY += (term *= (y * y) / ((2 * k) * (2 * k + 1)));
+    }
+    expectRelative(m.comovingVolumeMpc3(z), Math.PI * dh ** 3 * sinhMinusY, 3 * tol, "volume");
   });
 });
 

@@ -160,10 +160,9 @@ export function formatModelSpec(p: ModelParameters): string {
       if (!sameMasses(p.mnu, base.mnu ?? [])) out.push(`mnu=${p.mnu.length ? p.mnu.join(",") : "0"}`);
       continue;
     }
+    // H0 and Om have no default, so without a preset they are always written
     const value = p[key];
-    if (value === undefined) continue;
-    if (!preset && (key === "H0" || key === "Om")) out.push(`${key}=${value}`);
-    else if (value !== base[key]) out.push(`${key}=${value}`);
+    if (value !== undefined && value !== base[key]) out.push(`${key}=${value}`);
   }
   return out.join("; ");
 }
