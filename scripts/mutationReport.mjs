@@ -1,14 +1,26 @@
-// Summarises a StrykerJS JSON report (npm run mutation writes test-artifacts/mutation/report.json):
+// Summarises StrykerJS JSON reports (npm run mutation writes test-artifacts/mutation/report.json):
 // the mutation score by folder and file, and the mutants still alive, written to
 // test/mutation/SURVIVORS.md for the next person. A survivor listed in test/mutation/EQUIVALENT.md
 // (a line "- `file:line` Mutator: reason") is shown as equivalent there, with its reason.
-// Usage: node scripts/mutationReport.mjs [report.json]
+// Usage: node scripts/mutationReport.mjs [report.json [later.json …]]
+// A later report (a run over a few files or lines, e.g. --mutate "core/units/units.ts:190-200") gives
+// the status of the mutants it tested; the first report gives the rest.
 import { existsSync, readFileSync, writeFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 
 const root = fileURLToPath(new URL("..", import.meta.url));
-const reportPath = process.argv[2] ?? `${root}test-artifacts/mutation/report.json`;
-const report = JSON.parse(readFileSync(reportPath, "utf8"));
+const [first = `${root}test-artifacts/mutation/report.json`, ...later] = process.argv.slice(2);
+const report = JSON.parse(readFileSync(first, "utf8"));
+const mutantKey = (file, m) => `${file}:${m.location.start.line}:${m.location.start.column}:${m.mutatorName}:${m.replacement}`;
+for (const path of later) {
+  const status = new Map();
+  for (const [file, { mutants }] of Object.entries(JSON.parse(readFileSync(path, "utf8")).files)) {
+    for (const m of mutants) status.set(mutantKey(file, m), m.status);
+  }
+  for (const [file, { mutants }] of Object.entries(report.files)) {
+    for (const m of mutants) m.status = status.get(mutantKey(file, m)) ?? m.status;
+  }
+}
 const equivalentFile = `${root}test/mutation/EQUIVALENT.md`;
 const equivalent = new Map();
 if (existsSync(equivalentFile)) {
@@ -37,7 +49,13 @@ for (const [file, { source, mutants }] of Object.entries(report.files)) {
     const where = `${file}:${m.location.start.line}`;
     const reason = equivalent.get(`${where} ${m.mutatorName}`);
     if (reason) for (const key of ["all", `${folder}/`, file]) tally.get(key).equivalent++;
-    alive.push({ where, mutator: m.mutatorName, status: m.status, original: lines[m.location.start.line - 1].trim(), replacement: m.replacement ?? "", reason });
+    const line = lines[m.location.start.line - 1];
+    // the line as mutated, where the mutant lies on one line (columns count from 1)
+    const mutated =
+      m.location.end.line === m.location.start.line
+        ? line.slice(0, m.location.start.column - 1) + (m.replacement ?? "") + line.slice(m.location.end.column - 1)
+        : m.replacement ?? "";
+    alive.push({ where, mutator: m.mutatorName, status: m.status, original: line.trim(), replacement: mutated.trim(), reason });
   }
 }
 const score = (t) => (100 * t.killed) / t.total;
@@ -55,7 +73,7 @@ const text = [
   "",
   "## Alive",
   "",
-  ...alive.map((a) => `- \`${a.where}\` ${a.mutator} (${a.status})${a.reason ? ` — equivalent: ${a.reason}` : ""}: \`${a.original.slice(0, 120)}\` → \`${a.replacement.replace(/\s+/g, " ").slice(0, 120)}\``),
+  ...alive.map((a) => `- \`${a.where}\` ${a.mutator} (${a.status})${a.reason ? ` — equivalent: ${a.reason}` : ""}: \`${a.original.slice(0, 160)}\` → \`${a.replacement.replace(/\s+/g, " ").slice(0, 160)}\``),
   "",
 ].join("\n");
 writeFileSync(`${root}test/mutation/SURVIVORS.md`, text);

@@ -53,6 +53,11 @@ describe("photometry names the argument at fault", () => {
     [() => bolometricAbsoluteMagnitude(0),                        RangeError, "luminosity 0 has no magnitude"],
     [() => bolometricLuminosityW(nan),                            TypeError,  "M_bol must be a number"],
     [() => spectralSurfaceBrightnessDimmingMag(1, nan),           TypeError,  "alpha must be a number"],
+    // a value of another type (a text "1" from a careless caller) is not a number, not merely out of range
+    [() => kCorrectionPowerLawMag(1, "1" as never),               TypeError,  "alpha must be a number"],
+    [() => fluxWm2(eds, "1" as never, 1),                         TypeError,  "luminosity must be a number"],
+    [() => fluxWm2(eds, 1, "1" as never),                         TypeError,  "z must be a number"],
+    [() => fluxWm2(eds, inf, 1),                                  RangeError, "luminosity = Infinity W must be ≥ 0 and finite"],
   ])("%#: %s", (call, kind, message) => {
     expect(call).toThrow(kind);
     expect(call).toThrow(message);
@@ -150,6 +155,10 @@ describe("lensing, halos, the luminosity function, the CMB frame and rescaling n
 
   test.each(["H0=70; Om=0.3; w0=-0.9", "H0=70; Om=0.3; w0=-1; wa=0.2"])("Δ_vir in flat %s (dark energy other than Λ) is a NoSolutionError: Bryan & Norman 1998 fit Λ only", (spec) => {
     expect(() => haloOverdensity(Cosmology.fromSpec(spec), 0, "vir")).toThrow(NoSolutionError);
+  });
+
+  test("a value on the first edge counts in the first bin", () => {
+    expect(binnedLuminosityFunction([42], [1e6], [42, 43])[0].count).toBe(1);
   });
 
   test("a value outside every bin is ignored, below the first edge as above the last", () => {

@@ -124,6 +124,7 @@ describe("model spec text: the messages and the OL/Ok exchange", () => {
     expect(formatModelSpec(parseModelSpec("P18-BAO; mnu=0"))).toBe("P18-BAO; mnu=0");
     expect(formatModelSpec(parseModelSpec("P18-BAO; mnu=0.01,0.06"))).toBe("P18-BAO; mnu=0.06,0.01");
     expect(formatModelSpec(parseModelSpec("P18-BAO; mnu=0.06"))).toBe("P18-BAO");
+    expect(formatModelSpec(parseModelSpec("P18-BAO; mnu=0.05"))).toBe("P18-BAO; mnu=0.05"); // as many masses, another value
     // without a preset, H0 and Om are always written (they have no default)
     expect(formatModelSpec(parseModelSpec("H0=67.66; Om=0.3111"))).toBe("H0=67.66; Om=0.3111");
   });
@@ -131,5 +132,26 @@ describe("model spec text: the messages and the OL/Ok exchange", () => {
   test("quoted text from a workbook is cut at 40 characters", () => {
     expect(quotedText("x".repeat(40))).toBe("x".repeat(40));
     expect(quotedText("x".repeat(41))).toBe(`${"x".repeat(39)}…`);
+  });
+});
+
+describe("model spec text: more whole messages", () => {
+  test("a mass that is not a number is named as mnu", () => {
+    expect(() => parseModelSpec("H0=70; Om=0.3; mnu=0.06,abc")).toThrow(new TypeError(`mnu: "abc" is not a number (use '.' as the decimal point)`));
+  });
+
+  test("an unknown preset lists the presets, with no count of more when all fit", () => {
+    const names = presets.map((p) => p.name);
+    expect(names.length).toBeLessThanOrEqual(12);
+    expect(() => parseModelSpec("NOPE")).toThrow(new TypeError(`unknown preset "NOPE": use one of ${names.join(", ")}`));
+  });
+
+  test("OL given on a named model that holds Ok replaces its Ok (and Ok its OL)", () => {
+    const named: NamedModels = {
+      find: (name) => (name.toLowerCase() === "curved" ? { H0: 70, Om: 0.3, Ok: 0.1, w0: -1, wa: 0, Tcmb: 0, Neff: 3.046, mnu: [] } : undefined),
+      names: ["curved"],
+    };
+    const p = parseModelSpec("curved; OL=0.6", named);
+    expect([p.OL, "Ok" in p]).toEqual([0.6, false]);
   });
 });

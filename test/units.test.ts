@@ -1,6 +1,6 @@
 import { describe, expect, test } from "vitest";
 import { caseSlip, nearestUnits } from "../core/units/unitSuggestions.js";
-import { conversionFactor, convertUnit, parseUnit } from "../core/units/units.js";
+import { conversionFactor, convertUnit, frequencyHz, parseUnit } from "../core/units/units.js";
 import { expectRelative } from "./helpers.js";
 
 describe("unit conversion", () => {
@@ -145,5 +145,52 @@ describe("what a wrong unit is told, whole", () => {
     const unit = parseUnit(text);
     expectRelative(unit.factor, factor, 1e-15, text);
     expect(unit.dimensions.map((x) => x + 0)).toEqual(dimensions); // + 0: a power of −0 is 0
+  });
+});
+
+describe("the FITS unit syntax, piece by piece (FITS Standard 4.0 §4.3)", () => {
+  test.each([
+    // text          SI factor  dimensions [m, kg, s, K, rad]
+    ["m*s-1",        1,         [1, 0, -1, 0, 0]],   // product written with '*'
+    ["km s-1",       1000,      [1, 0, -1, 0, 0]],   // product written with a space
+    ["(m )/s",       1,         [1, 0, -1, 0, 0]],   // a space before ')' is no product
+    ["10^3 m",       1000,      [1, 0, 0, 0, 0]],    // scale factor written with '^'
+    ["10**3 m",      1000,      [1, 0, 0, 0, 0]],
+  ])("%s parses to its SI factor and dimensions", (text, factor, dimensions) => {
+    const unit = parseUnit(text);
+    expectRelative(unit.factor, factor, 1e-15, text);
+    expect(unit.dimensions.map((x) => x + 0)).toEqual(dimensions);
+  });
+
+  test.each([
+    // text     whole message (our own)
+    ["m2s",     'unit "m2s": unexpected "s"'],                       // no space, no '.': not a product
+    ["m^x2",    'unit "m^x2": a whole-number power is expected'],
+  ])("%j is refused: %s", (text, message) => {
+    expect(() => parseUnit(text)).toThrow(new TypeError(message));
+  });
+
+  test("an h-scaled unit without a model is named, trimmed, whichever side it is on", () => {
+    const message = '"Mpc/h" is in units of h = H0/100: give a model';
+    expect(() => conversionFactor("Mpc", "Mpc/h")).toThrow(new TypeError(message));
+    expect(() => conversionFactor(" Mpc/h ", "Mpc")).toThrow(new TypeError(message));
+  });
+
+  test("a message quotes the unit trimmed", () => {
+    expect(() => conversionFactor(" Mpc ", "Gyr")).toThrow(new TypeError('cannot convert "Mpc" (length) to "Gyr" (time)'));
+  });
+
+  test("a dimension with no common name is spelled in SI base units, the angle as rad", () => {
+    expect(() => conversionFactor("m rad2", "m")).toThrow(new TypeError('cannot convert "m rad2" (m rad2) to "m" (length)'));
+  });
+
+  test("a band value must be > 0 and finite, quoted in the unit as typed (trimmed)", () => {
+    expect(() => frequencyHz(Number.POSITIVE_INFINITY, "GHz", "band")).toThrow(new RangeError("band = Infinity GHz must be > 0"));
+    expect(() => frequencyHz(-1, " GHz ", "rest")).toThrow(new RangeError("rest = -1 GHz must be > 0"));
+  });
+
+  test("at most two suggestions, in the order of the common list", () => {
+    // "Xpc" is one edit from Mpc, kpc, Gpc and pc
+    expect(nearestUnits("Xpc")).toEqual(["Mpc", "kpc"]);
   });
 });
