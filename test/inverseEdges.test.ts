@@ -111,7 +111,6 @@ describe("what an inverse costs: look-ups and exact distances", () => {
   ] as const)("%s %d: Newton from the interpolated node costs a few look-ups", (quantity, value, firstTable, firstExact, table, exact) => {
     // P18-BAO; a worse start or bracket costs more: bisection alone would take about 50 steps
     const m = Cosmology.fromSpec("P18-BAO");
-    void m.ageTodayGyr;
     const counts = counting(m);
     const z = m.redshiftAt(quantity, value);
     expect(counts.table).toBeLessThanOrEqual(firstTable);
