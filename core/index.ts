@@ -74,4 +74,4 @@ export {
   restFrameSpectralLuminosityErrorWHz,
   spectralLuminosityErrorWHz,
 } from "./observables/uncertainties.js";
-export { conversionFactor, convertUnit, frequencyHz, parseUnit, scaledConversion, type Unit } from "./units/units.js";
+export { conversionFactor, convertUnit, frequencyHz, parseUnit, scaledConversion, unitKind, type Unit } from "./units/units.js";

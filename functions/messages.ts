@@ -28,6 +28,9 @@ export const messages = {
   columnLengths: (a: string, na: number, b: string, nb: number) => `${a} has ${na} cells and ${b} has ${nb}: give columns of the same length`,
   inRow: (arg: string, row: number, detail: string) => `${arg} in row ${row} of the range: ${detail}`,
   unitArgument: (arg: string, detail: string) => `${arg}: ${detail}`,
+  /** The functions that take the other kind of a flux or luminosity (spectral for a bolometric function, and the reverse), if any. */
+  otherKindFunctions: (fn: string): string | undefined => (Object.hasOwn(otherKindFunctions, fn) ? otherKindFunctions[fn] : undefined),
+  otherKind: (detail: string, kind: string, use: string) => `${detail}: for ${kind} use ${use}`,
   choice: (arg: string, value: string, choices: readonly string[]) =>
     `${arg}: "${value}" is not one of ${choices.join(", ")}`,
   notFiniteResult: (fn: string) => `${fn}: the result is not a finite number for these arguments`,
@@ -45,6 +48,18 @@ export const messages = {
   activeModelFallback: (detail: string) =>
     `the workbook's stored cosmology could not be read (${detail}); using P18-CMB (the default) until one is applied`,
 } as const;
+
+/** Functions of the other kind, bolometric or spectral, by function (the same quantity per unit frequency, or integrated). */
+const otherKindFunctions: Readonly<Record<string, string>> = {
+  LUMINOSITY: "ZC.LUMINOSITY_NU or ZC.LUMINOSITY_REST",
+  LUMINOSITY_ERR: "ZC.LUMINOSITY_NU_ERR or ZC.LUMINOSITY_REST_ERR",
+  REDSHIFT_LIMIT: "ZC.REDSHIFT_LIMIT_NU",
+  LUMINOSITY_NU: "ZC.LUMINOSITY",
+  LUMINOSITY_REST: "ZC.LUMINOSITY",
+  LUMINOSITY_NU_ERR: "ZC.LUMINOSITY_ERR",
+  LUMINOSITY_REST_ERR: "ZC.LUMINOSITY_ERR",
+  REDSHIFT_LIMIT_NU: "ZC.REDSHIFT_LIMIT",
+};
 
 /** A number as the sheet shows it in a message: at most 6 significant digits. */
 export function formatValue(x: number): string {

@@ -149,8 +149,8 @@ describe("units and defaults", () => {
   });
 
   test("an incompatible unit is #VALUE! naming the argument and both dimensions", () => {
-    expectError(one("DIST_LUM", 1, "", "Gyr"), "value", /unit: cannot convert "Mpc" \(length\) to "Gyr" \(time\)/);
-    expectError(one("SIZE", 1, 1, "", "kpc"), "value", /angle_unit: cannot convert "kpc" \(length\) to "rad" \(angle\)/);
+    expectError(one("DIST_LUM", 1, "", "Gyr"), "value", /unit: cannot convert "Mpc" \(a length\) to "Gyr" \(a time\)/);
+    expectError(one("SIZE", 1, 1, "", "kpc"), "value", /angle_unit: cannot convert "kpc" \(a length\) to "arcsec" \(an angle\)/);
   });
 });
 
