@@ -4,9 +4,10 @@
  * their reference unit with the domain checked in the unit the user gave, text numbers too; texts;
  * models resolved; errors and blanks as they will show). `evaluate.ts` then only computes.
  */
-import { Cosmology, parseUnit } from "../core/index.js";
+import { Cosmology, MissingParameterError, parseUnit } from "../core/index.js";
 import type { ActiveModelSetting } from "./activeModel.js";
 import { CellError, classify, isIncomingError } from "./cellError.js";
+import { modelPairs } from "./definitions/argumentKinds.js";
 import type { Args, ArgSpec, ColumnCell, FunctionDef } from "./FunctionDef.js";
 import { messages } from "./messages.js";
 import { isBlank, isModelText, keyValueBlockSpec } from "./modelArgument.js";
@@ -307,7 +308,8 @@ function modelProblem(e: unknown, text: string, fn: string): CellError {
     return new CellError("value", messages.unitInModelSlot(text));
   } catch {
     const err = classify(e, fn);
-    return new CellError(err.kind, messages.model(err.message));
+    const detail = e instanceof MissingParameterError ? messages.missingParameter(err.message, e.given, modelPairs) : err.message;
+    return new CellError(err.kind, messages.model(detail));
   }
 }
 
