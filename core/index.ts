@@ -37,7 +37,7 @@ export { ExpansionRate, type DensityComponent } from "./model/ExpansionRate.js";
 export { fermiDiracDensityFactor } from "./model/fermiDirac.js";
 export { limitingRedshift, limitingRedshiftMag, maxVolumeMpc3 } from "./observables/fluxLimit.js";
 export { type ModelParameters, parameterKeys, type ParameterKey } from "./model/ModelParameters.js";
-export { formatModelSpec, parseModelSpec, quotedText, withChanges, type NamedModels } from "./model/modelSpec.js";
+export { formatModelSpec, MissingParameterError, parseModelSpec, quotedText, withChanges, type NamedModels } from "./model/modelSpec.js";
 export { NoSolutionError } from "./checks/NoSolutionError.js";
 export {
   abFluxDensityJy,
@@ -54,7 +54,7 @@ export {
   spectralSurfaceBrightnessDimmingMag,
   surfaceBrightnessDimmingMag,
 } from "./observables/photometry.js";
-export { findPreset, presets, type Preset } from "./model/presets.js";
+export { defaultPresetName, findPreset, presets, type Preset } from "./model/presets.js";
 export { rescaledValue, rescaleQuantities, type RescaleQuantity } from "./distances/rescale.js";
 export { hubbleDistanceAtMpc, soundHorizonDragMpc, volumeAveragedDistanceMpc } from "./distances/baoScales.js";
 export { criticalSurfaceDensityMsunPc2 } from "./observables/lensing.js";
@@ -74,4 +74,4 @@ export {
   restFrameSpectralLuminosityErrorWHz,
   spectralLuminosityErrorWHz,
 } from "./observables/uncertainties.js";
-export { conversionFactor, convertUnit, frequencyHz, parseUnit, scaledConversion, type Unit } from "./units/units.js";
+export { conversionFactor, convertUnit, frequencyHz, parseUnit, scaledConversion, unitKind, type Unit } from "./units/units.js";

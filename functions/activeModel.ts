@@ -3,7 +3,7 @@
  * travels with the file), P18-CMB until someone applies another. Functions wait until Office has
  * loaded the settings before they compute with it.
  */
-import { parseModelSpec } from "../core/index.js";
+import { defaultPresetName, parseModelSpec } from "../core/index.js";
 import { messages } from "./messages.js";
 import { modelFor } from "./modelCache.js";
 import { maxSpecLength, noWorkbookModels, readWorkbookModels, resolvedSpec, workbookModelsSettingKey, type WorkbookModels } from "./workbookModels.js";
@@ -11,7 +11,7 @@ import { maxSpecLength, noWorkbookModels, readWorkbookModels, resolvedSpec, work
 /** Settings key under which the active model's spec text is stored. */
 export const activeModelSettingKey = "zcell.activeModel";
 /** The model used until a workbook stores another. */
-export const defaultModelSpec = "P18-CMB";
+export const defaultModelSpec: string = defaultPresetName;
 
 let ready: Promise<void> | undefined;
 let isReady = false;

@@ -2,7 +2,7 @@
  * Every message the worksheet functions show (Excel shows it with the error value). Core errors keep
  * their own words; these add what only the adapter knows: which argument, which cell, which shape.
  */
-import { quotedText } from "../core/index.js";
+import { defaultPresetName, quotedText } from "../core/index.js";
 
 export const messages = {
   /** The message as the sheet shows it: the ZC function first. */
@@ -28,10 +28,18 @@ export const messages = {
   columnLengths: (a: string, na: number, b: string, nb: number) => `${a} has ${na} cells and ${b} has ${nb}: give columns of the same length`,
   inRow: (arg: string, row: number, detail: string) => `${arg} in row ${row} of the range: ${detail}`,
   unitArgument: (arg: string, detail: string) => `${arg}: ${detail}`,
+  /** The functions that take the other kind of a flux or luminosity (spectral for a bolometric function, and the reverse), if any. */
+  otherKindFunctions: (fn: string): string | undefined => (Object.hasOwn(otherKindFunctions, fn) ? otherKindFunctions[fn] : undefined),
+  otherKind: (detail: string, kind: string, use: string) => `${detail}: for ${kind} use ${use}`,
   choice: (arg: string, value: string, choices: readonly string[]) =>
     `${arg}: "${value}" is not one of ${choices.join(", ")}`,
   notFiniteResult: (fn: string) => `${fn}: the result is not a finite number for these arguments`,
   model: (detail: string) => `model: ${detail}`,
+  /** A spec without H0 or Om: the same changes on the workbook's model, as a ZC.MODEL call (when it can take them all). */
+  missingParameter: (detail: string, given: readonly (readonly [string, string])[], most: number) =>
+    given.length === 0 || given.length > most
+      ? detail
+      : `${detail}; to change the workbook's model instead, use ZC.MODEL(, ${given.map(([key, value]) => `"${key}", ${formulaValue(value)}`).join(", ")})`,
   unitInModelSlot: (text: string) =>
     `model: "${quotedText(text)}" is a unit, not a model: units come after the model; leave the model blank for the workbook's model (two commas: …, , "${quotedText(text)}")`,
   modelInUnitSlot: (arg: string, text: string) =>
@@ -43,8 +51,20 @@ export const messages = {
   noEquality: "z_eq: this model has no radiation (Tcmb = 0), so no matter–radiation equality",
   internal: (fn: string, detail: string) => `${fn}: unexpected problem (${detail}); please report it`,
   activeModelFallback: (detail: string) =>
-    `the workbook's stored cosmology could not be read (${detail}); using P18-CMB (the default) until one is applied`,
+    `the workbook's stored cosmology could not be read (${detail}); using ${defaultPresetName} (the default) until one is applied`,
 } as const;
+
+/** Functions of the other kind, bolometric or spectral, by function (the same quantity per unit frequency, or integrated). */
+const otherKindFunctions: Readonly<Record<string, string>> = {
+  LUMINOSITY: "ZC.LUMINOSITY_NU or ZC.LUMINOSITY_REST",
+  LUMINOSITY_ERR: "ZC.LUMINOSITY_NU_ERR or ZC.LUMINOSITY_REST_ERR",
+  REDSHIFT_LIMIT: "ZC.REDSHIFT_LIMIT_NU",
+  LUMINOSITY_NU: "ZC.LUMINOSITY",
+  LUMINOSITY_REST: "ZC.LUMINOSITY",
+  LUMINOSITY_NU_ERR: "ZC.LUMINOSITY_ERR",
+  LUMINOSITY_REST_ERR: "ZC.LUMINOSITY_ERR",
+  REDSHIFT_LIMIT_NU: "ZC.REDSHIFT_LIMIT",
+};
 
 /** A number as the sheet shows it in a message: at most 6 significant digits. */
 export function formatValue(x: number): string {
@@ -53,6 +73,11 @@ export function formatValue(x: number): string {
 
 function withUnit(x: number, unit: string): string {
   return unit ? `${formatValue(x)} ${unit}` : formatValue(x);
+}
+
+/** A spec's value text (already read as a number, or a list of masses) as a formula argument: a list as text, a number as it is. */
+function formulaValue(text: string): string {
+  return text.includes(",") ? `"${text}"` : text;
 }
 
 function describeValue(value: unknown): string {

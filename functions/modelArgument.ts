@@ -4,7 +4,7 @@
  * (H0 | 70, Om | 0.3, ...) is one model, with or without a header row; any other range of text cells
  * broadcasts, one model a cell.
  */
-import { parameterKeys } from "../core/index.js";
+import { parameterKeys, parseModelSpec } from "../core/index.js";
 import { CellError } from "./cellError.js";
 import { messages } from "./messages.js";
 
@@ -15,6 +15,16 @@ const isKey = (key: unknown) => typeof key === "string" && blockKeys.has(key.tri
 /** True for a cell that Excel passes for an empty cell. */
 export function isBlank(value: unknown): boolean {
   return value === null || value === undefined || value === "";
+}
+
+/** Text that reads as a model: a preset or a spec (workbook model names are not consulted). */
+export function isModelText(text: string): boolean {
+  try {
+    parseModelSpec(text);
+    return true;
+  } catch {
+    return false;
+  }
 }
 
 /**

@@ -4,13 +4,15 @@
  * their reference unit with the domain checked in the unit the user gave, text numbers too; texts;
  * models resolved; errors and blanks as they will show). `evaluate.ts` then only computes.
  */
-import { Cosmology, parseModelSpec, parseUnit, scaledConversion } from "../core/index.js";
+import { Cosmology, MissingParameterError, parseUnit } from "../core/index.js";
 import type { ActiveModelSetting } from "./activeModel.js";
 import { CellError, classify, isIncomingError } from "./cellError.js";
+import { modelPairs } from "./definitions/argumentKinds.js";
 import type { Args, ArgSpec, ColumnCell, FunctionDef } from "./FunctionDef.js";
 import { messages } from "./messages.js";
-import { isBlank, keyValueBlockSpec } from "./modelArgument.js";
+import { isBlank, isModelText, keyValueBlockSpec } from "./modelArgument.js";
 import { modelFor } from "./modelCache.js";
+import { unitConversion, type Conversion } from "./unitArgument.js";
 import { resolvedSpec } from "./workbookModels.js";
 
 /** Cells one call may return (4 × 1,048,576: four whole columns, our choice). */
@@ -66,11 +68,6 @@ export interface CallArguments {
 /** What a blank input gives: a blank result. */
 export const blank = "";
 
-/**
- * How a number argument is converted into its reference unit: the factor, the power of h = H0/100 of
- * the cell's model still to apply (h-scaled units such as Mpc/h; 0 otherwise) and the unit the user gave.
- */
-type Conversion = { factor: number; hPower: number; unit: string };
 /** Text that Excel's own functions would read as a number (CSV and archive pastes). */
 const numberText = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 
@@ -83,32 +80,6 @@ function toMatrix(raw: unknown): unknown[][] | undefined {
     return raw[0].length === 0 ? undefined : (raw as unknown[][]);
   }
   return [[raw]];
-}
-
-/** Unit conversions already worked out, by argument and unit text (a sheet uses a handful of units). */
-const conversionCache = new Map<Extract<ArgSpec, { kind: "unit" }>, Map<string, Conversion>>();
-
-function unitConversion(spec: Extract<ArgSpec, { kind: "unit" }>, raw: unknown): Conversion {
-  const given = Array.isArray(raw) ? toMatrix(raw)?.[0]?.[0] : raw;
-  const text = isBlank(given) ? spec.default : given;
-  if (typeof text !== "string") throw new CellError("value", messages.notText(spec.name, text));
-  let known = conversionCache.get(spec);
-  const cached = known?.get(text);
-  if (cached) return cached;
-  let conversion: Conversion;
-  try {
-    const { factor, hPower } = spec.applies === "result" ? scaledConversion(spec.unit, text) : scaledConversion(text, spec.unit);
-    conversion = { factor, hPower, unit: text.trim() };
-  } catch (e) {
-    throw new CellError("value", isModelText(text) ? messages.modelInUnitSlot(spec.name, text) : messages.unitArgument(spec.name, (e as Error).message));
-  }
-  if ((spec.unit === "Jy" || spec.unit === "W/m2/Hz") && /(^|[^A-Za-z])MJy(?![A-Za-z])/.test(text)) {
-    // a source's flux density in megajansky is almost surely mJy typed in the wrong case (10⁹ apart)
-    throw new CellError("value", messages.megajansky(spec.name, text));
-  }
-  if (!known) conversionCache.set(spec, (known = new Map()));
-  if (known.size < 64) known.set(text, conversion);
-  return conversion;
 }
 
 /** Marks an argument that is a range of more than one cell. */
@@ -280,7 +251,7 @@ function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): Fixed
     const spec = def.args[i] as Extract<ArgSpec, { kind: "unit" }>;
     let conversion: Conversion;
     try {
-      conversion = unitConversion(spec, raw[i]);
+      conversion = unitConversion(def.name, spec, Array.isArray(raw[i]) ? toMatrix(raw[i])?.[0]?.[0] : raw[i]);
     } catch (e) {
       throw unitInModelSlot(def, raw) ?? e;
     }
@@ -330,16 +301,6 @@ function unitInModelSlot(def: FunctionDef, raw: readonly unknown[]): CellError |
   return new CellError("value", messages.unitInModelSlot(given.trim()));
 }
 
-/** Text that reads as a model: a preset or a spec (workbook model names are not consulted). */
-function isModelText(text: string): boolean {
-  try {
-    parseModelSpec(text);
-    return true;
-  } catch {
-    return false;
-  }
-}
-
 /** Why a model argument's text gives no model: a unit typed where the model belongs, or the spec's own problem. */
 function modelProblem(e: unknown, text: string, fn: string): CellError {
   try {
@@ -347,7 +308,8 @@ function modelProblem(e: unknown, text: string, fn: string): CellError {
     return new CellError("value", messages.unitInModelSlot(text));
   } catch {
     const err = classify(e, fn);
-    return new CellError(err.kind, messages.model(err.message));
+    const detail = e instanceof MissingParameterError ? messages.missingParameter(err.message, e.given, modelPairs) : err.message;
+    return new CellError(err.kind, messages.model(detail));
   }
 }
 

@@ -98,5 +98,5 @@ Desktop Excel: Insert → Add-ins → My Add-ins → Upload My Add-in → ${join
 console.log(`
 Excel on the web (on this machine: the server listens on 127.0.0.1 only): open a workbook at
 office.com → Home → Add-ins → More Add-ins → Upload My Add-in, and upload ${join(dist, "manifest.xml")}.
-Then type =ZC.DIST_LUM(1) in a cell. Results use the workbook's cosmology (P18-BAO until you
+Then type =ZC.DIST_LUM(1) in a cell. Results use the workbook's cosmology (P18-CMB until you
 choose another in the zcell pane).`);

@@ -179,8 +179,8 @@ describe("units and arguments that refuse a likely mistake", () => {
 
   test.each([
     // spec           | message fragment
-    ["H0=70; Om=30",  "Om = 30: a density parameter is a fraction (30 → 0.30)"],
-    ["P18-CMB; OL=70", "OL = 70: a density parameter is a fraction (70 → 0.70)"],
+    ["H0=70; Om=30",  "Om = 30: a density parameter is a fraction (30 → 0.3)"],
+    ["P18-CMB; OL=70", "OL = 70: a density parameter is a fraction (70 → 0.7)"],
     ["P18-CMB; Ob=5.5", "Ob = 5.5: a density parameter is a fraction"],
   ])("a density parameter typed as a percentage (%s) is #NUM!", (spec, message) => {
     const cell = failure("AGE", 0, spec);

@@ -149,8 +149,8 @@ describe("units and defaults", () => {
   });
 
   test("an incompatible unit is #VALUE! naming the argument and both dimensions", () => {
-    expectError(one("DIST_LUM", 1, "", "Gyr"), "value", /unit: cannot convert "Mpc" \(length\) to "Gyr" \(time\)/);
-    expectError(one("SIZE", 1, 1, "", "kpc"), "value", /angle_unit: cannot convert "kpc" \(length\) to "rad" \(angle\)/);
+    expectError(one("DIST_LUM", 1, "", "Gyr"), "value", /unit: cannot convert "Mpc" \(a length\) to "Gyr" \(a time\)/);
+    expectError(one("SIZE", 1, 1, "", "kpc"), "value", /angle_unit: cannot convert "kpc" \(a length\) to "arcsec" \(an angle\)/);
   });
 });
 
@@ -180,7 +180,7 @@ describe("inverse and text functions", () => {
   test("PRESETS lists every preset with its source; DESCRIBE and VERSION state the assumptions", () => {
     const table = run("PRESETS");
     expect(table.slice(1).map((r) => r[0])).toEqual(presets.map((p) => p.name));
-    expect(String(table[1][1])).toBe("H0 67.66, Ωm 0.3111 (incl. one 0.06 eV ν), flat — Planck 2018 VI, A&A 641, A6, Table 2, CMB+lensing+BAO");
+    expect(String(table[1][1])).toBe("H0 67.36, Ωm 0.3153 (incl. one 0.06 eV ν), flat — Planck 2018 VI, A&A 641, A6, Table 2, CMB+lensing"); // P18-CMB, the default, first
     expect(one("DESCRIBE")).toMatch(/^P18-BAO: flat: matter \+ Λ \+ radiation; H0 = 67.66 km\/s\/Mpc; Om = 0.3111 \(matter incl. massive ν\)/);
     expect(one("VERSION")).toMatch(/^zcell \d+\.\d+\.\d+; distances per Hogg \(1999\); Om includes massive neutrinos/);
   });

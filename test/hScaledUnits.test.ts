@@ -97,7 +97,7 @@ describe("band units: frequencies, wavelengths and photon energies", () => {
   });
 
   test("other kinds of unit and values ≤ 0 are refused with the argument's name", () => {
-    expect(() => frequencyHz(1, "Jy", "observed")).toThrow(/observed: "Jy" is flux density/);
+    expect(() => frequencyHz(1, "Jy", "observed")).toThrow(/observed: "Jy" is a flux density/);
     expect(() => frequencyHz(0, "GHz", "rest")).toThrow(/rest = 0 GHz must be > 0/);
     expect(parseUnit("angstrom").factor).toBe(1e-10);
   });

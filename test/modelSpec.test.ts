@@ -1,7 +1,7 @@
 import { describe, expect, test } from "vitest";
 import { Cosmology } from "../core/distances/Cosmology.js";
 import type { ModelParameters } from "../core/model/ModelParameters.js";
-import { formatModelSpec, parseModelSpec, quotedText, withChanges, type NamedModels } from "../core/model/modelSpec.js";
+import { formatModelSpec, MissingParameterError, parseModelSpec, quotedText, withChanges, type NamedModels } from "../core/model/modelSpec.js";
 import { presets } from "../core/model/presets.js";
 import { seededRandom } from "./helpers.js";
 
@@ -99,7 +99,7 @@ describe("model spec text: the messages and the OL/Ok exchange", () => {
     [3 as never,          undefined, "model spec must be text"],
     ["H0=70=3",           undefined, "\"H0=70=3\" holds several keys: separate keys with ';', e.g. \"H0=70; Om=0.3; OL=0.7\""],
     ["=70",               undefined, "unknown key \"\": use H0, Om, OL, Ok, Ob, w0, wa, Tcmb, Neff, mnu"],
-    ["NOPE",              many,      "unknown preset \"NOPE\": use one of P18-BAO, P18-CMB, P15-EXT, W9-ALL, W7-BAO, DR2-CMB, DR2-CMB-PP, DR2-CMB-U3, DR2-CMB-DY5, CONCORDANCE, EDS, M0 … and 19 more"],
+    ["NOPE",              many,      "unknown preset \"NOPE\": use one of P18-CMB, P18-BAO, P15-EXT, W9-ALL, W7-BAO, DR2-CMB, DR2-CMB-PP, DR2-CMB-U3, DR2-CMB-DY5, CONCORDANCE, EDS, M0 … and 19 more"],
     ["H0=70; Om=0.3; mnu=1,2,3,4", undefined, "mnu: at most three masses, got 4"],
   ])("%j", (spec, named, message) => {
     expect(() => parseModelSpec(spec, named)).toThrow(new TypeError(message));
@@ -153,5 +153,49 @@ describe("model spec text: more whole messages", () => {
     };
     const p = parseModelSpec("curved; OL=0.6", named);
     expect([p.OL, "Ok" in p]).toEqual([0.6, false]);
+  });
+});
+
+describe("model spec text: slips that read as another number, or as nothing", () => {
+  test.each([
+    // spec                                whole message (our own)
+    ["H0=70; Om=31.5%",                    'Om: "31.5%" is a percentage: write the fraction, Om=0.315'],
+    ["P18-CMB; OL=68.5%",                  'OL: "68.5%" is a percentage: write the fraction, OL=0.685'],
+    ["P18-CMB; Ok=-.5%",                   'Ok: "-.5%" is a percentage: write the fraction, Ok=-0.005'],
+    ["P18-CMB; w0=90%",                    'w0: "90%" is a percentage: write w0 as a plain number'],
+    ["Om=31.5%",                           'Om: "31.5%" is a percentage: write the fraction, Om=0.315'],   // the value before the missing H0
+    ["H0=70; Om=31,5%",                    `Om: "31,5%" is not a number (use '.' as the decimal point)`],
+    ["P18-CMB, H0=73",                     `"P18-CMB,H0=73": separate the parts with ';', e.g. "P18-CMB; H0=73"`],
+    ["H0=70, Om=0.3; OL=0.7",              `"H0=70,Om=0.3": separate the parts with ';', e.g. "H0=70; Om=0.3"`],
+    ["P18-CMB; H0=70, mnu=0.06,0.01",      `"H0=70,mnu=0.06,0.01": separate the parts with ';', e.g. "H0=70; mnu=0.06,0.01"`],
+    ["H0=70; Om=0,3",                      `Om: "0,3" is not a number (use '.' as the decimal point)`],       // a decimal comma is not a separator
+    ["H0=73",                              'Om is required (or start from a preset, e.g. "P18-CMB; H0=73")'],
+    ["Om=0.3; w0=-0.9",                    'H0 is required (or start from a preset, e.g. "P18-CMB; Om=0.3; w0=-0.9")'],
+  ])("%j: %s", (spec, message) => {
+    let thrown: unknown;
+    try {
+      parseModelSpec(spec);
+    } catch (e) {
+      thrown = e;
+    }
+    expect(thrown).toBeInstanceOf(TypeError);
+    expect((thrown as Error).message).toBe(message);
+  });
+
+  test("a spec without H0 or Om says which is missing and keeps what it gave, as typed, for the message of a worksheet", () => {
+    let e: unknown;
+    try {
+      parseModelSpec("h0 = 73 ; mnu=0.06,0.01");
+    } catch (thrown) {
+      e = thrown;
+    }
+    expect(e).toBeInstanceOf(MissingParameterError);
+    expect((e as MissingParameterError).missing).toBe("Om");
+    expect((e as MissingParameterError).given).toEqual([["H0", "73"], ["mnu", "0.06,0.01"]]);
+  });
+
+  test("an mnu list keeps its commas, alone or after other keys", () => {
+    expect(parseModelSpec("P18-CMB; mnu=0.06,0.01").mnu).toEqual([0.06, 0.01]);
+    expect(formatModelSpec(parseModelSpec("H0=70; Om=0.3; Tcmb=2.7255; mnu=0.05,0.01,0"))).toBe("H0=70; Om=0.3; Tcmb=2.7255; mnu=0.05,0.01");
   });
 });

@@ -16,6 +16,7 @@ import { evaluate, type Cell } from "../functions/evaluate.js";
 import { modelNameProblem, readWorkbookModels } from "../functions/workbookModels.js";
 import { expectRelative } from "./helpers.js";
 import { SlowCosmology } from "./reference/slowCosmology.js";
+import { sheetCalls } from "./sheetCalls.js";
 import { testBuildDir } from "./testBuild.js";
 
 const active: ActiveModelSetting = { spec: "P18-BAO", stored: false };
@@ -68,8 +69,10 @@ describe("input a catalogue user pastes", () => {
     expect(run("DIST_LUM", 1, [["P18-BAO", "W9-ALL"]])[0]).toHaveLength(2);
   });
 
-  test("keys separated by commas are told to use ';'", () => {
-    expect(errorOf(one("DIST_LUM", 1, "H0=70, Om=0.3, OL=0.7")).message).toMatch(/holds several keys: separate keys with ';'/);
+  test("parts separated by commas are told to use ';', with the spec rewritten", () => {
+    expect(errorOf(one("DIST_LUM", 1, "H0=70, Om=0.3, OL=0.7")).message).toBe(
+      `ZC.DIST_LUM: model: "H0=70,Om=0.3,OL=0.7": separate the parts with ';', e.g. "H0=70; Om=0.3; OL=0.7"`,
+    );
   });
 
   test.each([
@@ -89,6 +92,54 @@ describe("input a catalogue user pastes", () => {
       message: "ZC.DIST_LUM: model: H0 = 0.7 km/s/Mpc is outside 10 … 1000 km/s/Mpc (H0 is in km/s/Mpc: h = 0.7 is H0=70)",
     });
     expect(errorOf(one("DIST_LUM", 1, "H0=7000; Om=0.3")).message).toMatch(/H0 = 7000 km\/s\/Mpc is outside 10 … 1000 km\/s\/Mpc$/);
+  });
+});
+
+describe("inputs that gave a quiet wrong number or a wrong hint: the whole message each gives now", () => {
+  test.each([
+    // call                                                         kind     whole message (our own)
+    [["DIST_LUM", 1, "P18-CMB, H0=73"],                              "value", `ZC.DIST_LUM: model: "P18-CMB,H0=73": separate the parts with ';', e.g. "P18-CMB; H0=73"`],
+    [["DIST_LUM", 1, "H0=70, mnu=0.06,0.01; Om=0.3"],                "value", `ZC.DIST_LUM: model: "H0=70,mnu=0.06,0.01": separate the parts with ';', e.g. "H0=70; mnu=0.06,0.01"`],
+    [["DIST_LUM", 1, "H0=73"],                                       "value", `ZC.DIST_LUM: model: Om is required (or start from a preset, e.g. "P18-CMB; H0=73"); to change the workbook's model instead, use ZC.MODEL(, "H0", 73)`],
+    [["DIST_LUM", 1, [["H0", 73], ["w0", -0.9]]],                    "value", `ZC.DIST_LUM: model: Om is required (or start from a preset, e.g. "P18-CMB; H0=73; w0=-0.9"); to change the workbook's model instead, use ZC.MODEL(, "H0", 73, "w0", -0.9)`],
+    [["DIST_LUM", 1, "Om=0.3; mnu=0.06,0.01"],                       "value", `ZC.DIST_LUM: model: H0 is required (or start from a preset, e.g. "P18-CMB; Om=0.3; mnu=0.06,0.01"); to change the workbook's model instead, use ZC.MODEL(, "Om", 0.3, "mnu", "0.06,0.01")`],
+    [["DIST_LUM", 1, "Om=31.5%"],                                    "value", `ZC.DIST_LUM: model: Om: "31.5%" is a percentage: write the fraction, Om=0.315`],
+    [["DIST_LUM", 1, "P18-CMB; H0=73%"],                             "value", `ZC.DIST_LUM: model: H0: "73%" is a percentage: write H0 as a plain number`],
+    [["MODEL", "P18-CMB", "Ob", "4.9%"],                             "value", `ZC.MODEL: Ob: "4.9%" is a percentage: write the fraction, Ob=0.049`],
+    [["DIST_LUM", 1, "P18-CMB; Om=31.5"],                            "num",   "ZC.DIST_LUM: model: Om = 31.5: a density parameter is a fraction (31.5 → 0.315), |Om| ≤ 5"],
+    [["DIST_LUM", 1, "H0=70; Om=3"],                                 "num",   "ZC.DIST_LUM: model: Om = 3 makes OL = -2 to stay flat: give OL explicitly if you mean it; 0.3?"],
+    [["MODEL", "P18-CMB", "Om", 3],                                  "num",   "ZC.MODEL: Om = 3 makes OL = -2 to stay flat: give OL explicitly if you mean it; 0.3?"],
+    [["DIST_LUM", 1, "H0=70; Om=0.3; Ok=0.8"],                       "num",   "ZC.DIST_LUM: model: Om = 0.3 and Ok = 0.8 make OL = -0.1 (1 − Om − Ok − Or): give OL explicitly if you mean it"],
+    [["LUMINOSITY", 1e-16, 1, null, "mJy"],                          "value", 'ZC.LUMINOSITY: flux_unit: cannot convert "mJy" (a flux density) to "erg/s/cm2" (a flux): for a flux density use ZC.LUMINOSITY_NU or ZC.LUMINOSITY_REST'],
+    [["LUMINOSITY_ERR", 1, 0.1, 1, 0.01, null, "uJy"],               "value", 'ZC.LUMINOSITY_ERR: flux_unit: cannot convert "uJy" (a flux density) to "erg/s/cm2" (a flux): for a flux density use ZC.LUMINOSITY_NU_ERR or ZC.LUMINOSITY_REST_ERR'],
+    [["REDSHIFT_LIMIT", 1e24, 1e-16, null, "W/Hz"],                  "value", 'ZC.REDSHIFT_LIMIT: lum_unit: cannot convert "W/Hz" (a spectral luminosity) to "erg/s" (a luminosity or power): for a spectral luminosity use ZC.REDSHIFT_LIMIT_NU'],
+    [["LUMINOSITY_NU", 1e-16, 1, -0.7, null, "erg/s/cm2"],           "value", 'ZC.LUMINOSITY_NU: in_unit: cannot convert "erg/s/cm2" (a flux) to "Jy" (a flux density): for a flux use ZC.LUMINOSITY'],
+    [["LUMINOSITY", 1e-16, 1, null, null, "W/Hz"],                   "value", 'ZC.LUMINOSITY: lum_unit: cannot convert "erg/s" (a luminosity or power) to "W/Hz" (a spectral luminosity)'],
+    [["FLUX", 1e40, 1, null, "W/Hz"],                                "value", 'ZC.FLUX: lum_unit: cannot convert "W/Hz" (a spectral luminosity) to "erg/s" (a luminosity or power)'],
+    [["CONVERT", 1, "W/Hz/sr", "W"],                                 "value", 'ZC.CONVERT: cannot convert "W/Hz/sr" (a spectral luminosity per solid angle) to "W" (a luminosity or power)'],
+    [["PROPER_SCALE", 1, null, "kpc per arcsec"],                    "value", 'ZC.PROPER_SCALE: unit: unknown unit "per" in "kpc per arcsec": did you mean kpc/arcsec?'],
+  ])("%j gives #%s with the message %j", (call, kind, message) => {
+    const [name, ...args] = call as [string, ...unknown[]];
+    expect(errorOf(sheetCalls("P18-CMB").one(name, ...args))).toEqual({ kind, message });
+  });
+
+  test("the ZC.MODEL call the message points to is the workbook's model with those changes", () => {
+    expect(sheetCalls("P18-CMB").one("MODEL", null, "H0", 73)).toBe("P18-CMB; H0=73");
+    expect(sheetCalls("W9-ALL").one("MODEL", null, "H0", 73, "w0", -0.9)).toBe("W9-ALL; H0=73; w0=-0.9");
+  });
+
+  test("a negative OL given explicitly is the model it states (independent slow path)", () => {
+    // E(z) = √(3(1+z)³ − 2): Om = 3, OL = −2, flat, no radiation; D_L from the tanh-sinh quadrature of the slow path
+    const slow = new SlowCosmology({ H0: 70, Om: 3, OL: -2, w0: -1, wa: 0, Tcmb: 0, Neff: 3.046, mnu: [] });
+    expectRelative(one("DIST_LUM", 1, "H0=70; Om=3; OL=-2") as number, slow.luminosityDistanceMpc(1), 1e-10, "D_L(1)");
+    // what "H0=70; Om=3" gave before it was refused: the same model, OL = −2 inferred
+    expectRelative(slow.luminosityDistanceMpc(1), 3543.2058748719382, 1e-9, "D_L(1) of Om = 3, OL = −2 (zcell 0.2.0, CHANGELOG)");
+  });
+
+  test("OL = −Or from radiation alone (Om = 1, flat) is kept: EDS with a CMB is a model", () => {
+    const d = one("DIST_LUM", 1, "EDS; Tcmb=2.7255") as number;
+    const slow = new SlowCosmology({ H0: 70, Om: 1, w0: -1, wa: 0, Tcmb: 2.7255, Neff: 3.046, mnu: [] });
+    expectRelative(d, slow.luminosityDistanceMpc(1), 1e-10, "D_L(1), OL = −Or");
   });
 });
 

@@ -1,6 +1,6 @@
 import { describe, expect, test } from "vitest";
-import { caseSlip, nearestUnits } from "../core/units/unitSuggestions.js";
-import { conversionFactor, convertUnit, frequencyHz, parseUnit } from "../core/units/units.js";
+import { caseSlip, nearestUnits, slashForPer } from "../core/units/unitSuggestions.js";
+import { conversionFactor, convertUnit, frequencyHz, parseUnit, unitKind } from "../core/units/units.js";
 import { expectRelative } from "./helpers.js";
 
 describe("unit conversion", () => {
@@ -41,8 +41,8 @@ describe("unit conversion", () => {
 
   test.each([
     // from     to       message                                                  (common practice)
-    ["Mpc",     "Gyr",   /cannot convert "Mpc" \(length\) to "Gyr" \(time\)/],
-    ["kpc",     "kpc/arcsec", /\(length\) to "kpc\/arcsec" \(length per angle\)/],
+    ["Mpc",     "Gyr",   /cannot convert "Mpc" \(a length\) to "Gyr" \(a time\)/],
+    ["kpc",     "kpc/arcsec", /\(a length\) to "kpc\/arcsec" \(a length per angle\)/],
     ["parsec",  "m",     /unknown unit "parsec"/],
     ["mag",     "Jy",    /magnitudes are logarithmic/],
     ["Mpc**",   "m",     /whole-number power/],
@@ -105,15 +105,25 @@ describe("unit conversion", () => {
 });
 
 describe("what a wrong unit is told, whole", () => {
-  // our own messages: each names the text as typed and what is wrong with it, in words for the
-  // common dimensions and as SI base units (FITS spelling) for the others
+  // our own messages: each names the text as typed and what is wrong with it, the kind of each unit
+  // in the words of the trade (common practice), and the base dimensions in words for the others
   test.each([
     // from             to             message
-    ["Mpc",             "Gyr",         'cannot convert "Mpc" (length) to "Gyr" (time)'],
-    ["W",               "erg/s/cm2",   'cannot convert "W" (power) to "erg/s/cm2" (flux (power per area))'],
-    ["kg m2 s-3 K",     "rad",         'cannot convert "kg m2 s-3 K" (m2 kg s-3 K) to "rad" (angle)'],
-    ["m s-2",           "m",           'cannot convert "m s-2" (m s-2) to "m" (length)'],
-    ["J/K",             "erg",         'cannot convert "J/K" (m2 kg s-2 K-1) to "erg" (energy, or spectral luminosity (W/Hz))'],
+    ["Mpc",             "Gyr",         'cannot convert "Mpc" (a length) to "Gyr" (a time)'],
+    ["W",               "erg/s/cm2",   'cannot convert "W" (a luminosity or power) to "erg/s/cm2" (a flux)'],
+    ["W/Hz/sr",         "W",           'cannot convert "W/Hz/sr" (a spectral luminosity per solid angle) to "W" (a luminosity or power)'],
+    ["mJy",             "erg/s/cm2",   'cannot convert "mJy" (a flux density) to "erg/s/cm2" (a flux)'],
+    ["erg/s/cm2/arcsec2", "Jy",        'cannot convert "erg/s/cm2/arcsec2" (a flux per solid angle) to "Jy" (a flux density)'],
+    ["h3 Mpc-3",        "Mpc3",        'cannot convert "h3 Mpc-3" (a number density) to "Mpc3" (a volume)'],
+    ["Msun/pc2",        "kg/m3",       'cannot convert "Msun/pc2" (a surface density) to "kg/m3" (a density)'],
+    ["keV",             "GHz",         'cannot convert "keV" (an energy) to "GHz" (a frequency)'],
+    ["km/s",            "deg2",        'cannot convert "km/s" (a speed) to "deg2" (a solid angle)'],
+    ["kg m2 s-3 K",     "rad",         'cannot convert "kg m2 s-3 K" (a quantity of dimension length²·mass·temperature/time³) to "rad" (an angle)'],
+    ["m s-2",           "m",           'cannot convert "m s-2" (an acceleration) to "m" (a length)'],
+    ["J/K",             "erg",         'cannot convert "J/K" (a quantity of dimension length²·mass/(time²·temperature)) to "erg" (an energy)'],
+    ["arcsec-1",        "m",           'cannot convert "arcsec-1" (a quantity of dimension 1/angle) to "m" (a length)'],
+    ["m**(1/2)",        "m",           'cannot convert "m**(1/2)" (a quantity of dimension length^0.5) to "m" (a length)'],
+    ["Hz",              "Mpc/arcsec",  'cannot convert "Hz" (a frequency) to "Mpc/arcsec" (a length per angle)'],
   ])("%s → %s", (from, to, message) => {
     expect(() => conversionFactor(from, to)).toThrow(new TypeError(message));
   });
@@ -177,11 +187,31 @@ describe("the FITS unit syntax, piece by piece (FITS Standard 4.0 §4.3)", () =>
   });
 
   test("a message quotes the unit trimmed", () => {
-    expect(() => conversionFactor(" Mpc ", "Gyr")).toThrow(new TypeError('cannot convert "Mpc" (length) to "Gyr" (time)'));
+    expect(() => conversionFactor(" Mpc ", "Gyr")).toThrow(new TypeError('cannot convert "Mpc" (a length) to "Gyr" (a time)'));
   });
 
-  test("a dimension with no common name is spelled in SI base units, the angle as rad", () => {
-    expect(() => conversionFactor("m rad2", "m")).toThrow(new TypeError('cannot convert "m rad2" (m rad2) to "m" (length)'));
+  test("a dimension with no common name is spelled in words of its base dimensions, the angle too", () => {
+    expect(() => conversionFactor("m rad2", "m")).toThrow(new TypeError('cannot convert "m rad2" (a quantity of dimension length·angle²) to "m" (a length)'));
+  });
+
+  test.each([
+    // typed                  whole message: the word "per" read as "/" when that is a unit (FITS has no "per")
+    ["kpc per arcsec",        'unknown unit "per" in "kpc per arcsec": did you mean kpc/arcsec?'],
+    ["erg per s per cm2",     'unknown unit "per" in "erg per s per cm2": did you mean erg/s/cm2?'],
+    ["km/s PER Mpc",          'unknown unit "PER" in "km/s PER Mpc": did you mean km/s/Mpc?'],
+    ["kpc per parsec",        'unknown unit "per" in "kpc per parsec"'],      // with "/" still no unit: nothing offered
+  ])("%j is refused: %s", (text, message) => {
+    expect(() => parseUnit(text)).toThrow(new TypeError(message));
+  });
+
+  test("the words of a unit's kind", () => {
+    expect(unitKind("W/Hz/sr")).toBe("a spectral luminosity per solid angle");
+    expect(unitKind("erg/s/Hz")).toBe("a spectral luminosity");
+    expect(unitKind("J")).toBe("an energy");
+    expect(unitKind("m/km")).toBe("a pure number");
+    expect(slashForPer("Mpc")).toBeUndefined();
+    expect(slashForPer(" kpc per arcsec ")).toBe("kpc/arcsec");
+    expect(slashForPer("kpc  Per  arcsec")).toBe("kpc/arcsec");
   });
 
   test("a band value must be > 0 and finite, quoted in the unit as typed (trimmed)", () => {

@@ -1,4 +1,5 @@
 /** Every invalid parameter and argument is rejected with a message that names it. */
+import fc from "fast-check";
 import { describe, expect, test } from "vitest";
 import { Cosmology } from "../core/distances/Cosmology.js";
 import { absoluteMagnitude, fluxWm2, luminosityW } from "../core/observables/photometry.js";
@@ -44,8 +45,8 @@ describe("model parameters outside their domain", () => {
     [{ H0: 0.7 },                     "H0 = 0.7 km/s/Mpc is outside 10 … 1000 km/s/Mpc (H0 is in km/s/Mpc: h = 0.7 is H0=70)"],
     [{ H0: 9.99 },                    "H0 = 9.99 km/s/Mpc is outside 10 … 1000 km/s/Mpc (H0 is in km/s/Mpc: h = 9.99 is H0=999)"],
     [{ H0: 1000.5 },                  "H0 = 1000.5 km/s/Mpc is outside 10 … 1000 km/s/Mpc"],
-    [{ Om: 30 },                      "Om = 30: a density parameter is a fraction (30 → 0.30), |Om| ≤ 5"],
-    [{ OL: -70 },                     "OL = -70: a density parameter is a fraction (-70 → -0.70), |OL| ≤ 5"],
+    [{ Om: 30 },                      "Om = 30: a density parameter is a fraction (30 → 0.3), |Om| ≤ 5"],
+    [{ OL: -70 },                     "OL = -70: a density parameter is a fraction (-70 → -0.7), |OL| ≤ 5"],
     [{ Ok: Number.NaN },              "Ok must be a finite number; got NaN"],
     [{ H0: 0 },                       "H0 must be a positive number km/s/Mpc; got 0"],
     [{ H0: Number.NaN },              "H0 must be a positive number km/s/Mpc; got NaN"],
@@ -86,6 +87,58 @@ describe("model parameters outside their domain", () => {
   test("the closed-Λ bounce redshift in the message is where E² = 0 (Om = 0, OL = 2: (1+z)² = 2)", () => {
     // E² = −(1+z)² + 2 (Ok = −1) vanishes at z = √2 − 1 (closed form)
     expect(() => new Cosmology({ ...ok, Tcmb: 0, Om: 0, OL: 2 })).toThrow(`z = ${Number((Math.SQRT2 - 1).toPrecision(4))}`);
+  });
+});
+
+describe("an OL the model works out (OL not given) is never negative by the numbers typed", () => {
+  // Our rule: without OL, OL = 1 − Om − Ok − Or (Ok = 0 when flat); Om + Ok > 1 is refused as a slip.
+  // Or = 8.538e-5 here (H0 = 70, Tcmb = 2.7255 K, Neff = 3.046, massless ν), so OL is 1 − Om − Ok − 8.538e-5.
+  test.each([
+    // change                     whole message (our own)
+    [{ Om: 3 },                   "Om = 3 makes OL = -2 to stay flat: give OL explicitly if you mean it; 0.3?"],
+    [{ Om: 1.2 },                 "Om = 1.2 makes OL = -0.2001 to stay flat: give OL explicitly if you mean it; 0.12?"],
+    [{ Om: 1.2, Tcmb: 0 },        "Om = 1.2 makes OL = -0.2 to stay flat: give OL explicitly if you mean it; 0.12?"],
+    [{ Om: 0.3, Ok: 0.8 },        "Om = 0.3 and Ok = 0.8 make OL = -0.1001 (1 − Om − Ok − Or): give OL explicitly if you mean it"],
+    [{ Om: 3, Ok: -1.5 },         "Om = 3 and Ok = -1.5 make OL = -0.5001 (1 − Om − Ok − Or): give OL explicitly if you mean it; Om = 0.3?"],
+    [{ Om: 1.2, mnu: [0.06] },    "Om = 1.2 makes OL = -0.2001 to stay flat: give OL explicitly if you mean it; 0.12?"],
+  ])("%j: the whole message", (change, message) => {
+    expect(() => new Cosmology({ ...ok, ...change })).toThrow(new RangeError(message));
+  });
+
+  test.each([
+    // the same numbers, or radiation alone below zero, are models
+    { Om: 3, OL: -2 }, { Om: 1.2, OL: -0.2 }, { Om: 0.3, OL: -0.1 }, { Om: 1 }, { Om: 0.7, Ok: 0.3 }, { Om: 1, mnu: [0.06] },
+  ])("%j is a model", (change) => {
+    const m = new Cosmology({ ...ok, ...change });
+    if (!("OL" in change)) expect(m.OL).toBeCloseTo(-m.Or, 15); // OL = −Or: radiation alone
+  });
+
+  test("refused exactly when Om + Ok > 1 without OL; never when that same OL is given (500 random models)", () => {
+    const ourMessage = /^Om = .* makes? OL = .*: give OL explicitly if you mean it/;
+    const why = (make: () => unknown): string | undefined => {
+      try {
+        make();
+        return undefined;
+      } catch (e) {
+        return (e as Error).message;
+      }
+    };
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0, max: 5, noNaN: true }),
+        fc.option(fc.double({ min: -2, max: 2, noNaN: true }), { nil: undefined }),
+        fc.constantFrom(0, 2.7255),
+        (Om, Ok, Tcmb) => {
+          const p = { ...ok, Om, Tcmb, ...(Ok === undefined ? {} : { Ok }) };
+          const inferred = why(() => new Cosmology(p));
+          expect(ourMessage.test(inferred ?? ""), `${JSON.stringify(p)}: ${inferred}`).toBe(Om + (Ok ?? 0) > 1);
+          const stated = new Cosmology({ ...ok, Om: 0.3, Tcmb }).Or; // Or depends on H0 and Tcmb only
+          const given = { ...ok, Om, Tcmb, OL: 1 - Om - (Ok ?? 0) - stated };
+          expect(why(() => new Cosmology(given)) ?? "").not.toMatch(ourMessage);
+        },
+      ),
+      { numRuns: 500, seed: 20261203 },
+    );
   });
 });
 

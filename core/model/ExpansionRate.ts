@@ -39,7 +39,24 @@ const largestDensityParameter = 5;
 
 function requireFraction(key: string, value: number | undefined): void {
   if (value === undefined || !Number.isFinite(value) || !(Math.abs(value) > largestDensityParameter)) return;
-  throw new RangeError(`${key} = ${value}: a density parameter is a fraction (${value} → ${Number((value / 100).toPrecision(6)).toFixed(2)}), |${key}| ≤ ${largestDensityParameter}`);
+  throw new RangeError(`${key} = ${value}: a density parameter is a fraction (${value} → ${Number((value / 100).toPrecision(6))}), |${key}| ≤ ${largestDensityParameter}`);
+}
+
+/**
+ * Refuses a negative OL that the model infers rather than states: with OL not given, OL = 1 − Om − Ok − Or
+ * (Ok = 0 when flat), so Om + Ok > 1 gives OL < −Or, almost always a slip (Om=3 for 0.3). A model that
+ * means it gives OL. OL = −Or from radiation alone (Om = 1, flat, Tcmb > 0) is kept: it is not typed.
+ * Our rule; massive neutrinos are inside Om, so they add nothing here.
+ * @param p the parameters as stated
+ * @param inferredOL the OL the model would take
+ */
+function refuseInferredNegativeDarkEnergy(p: ModelParameters, inferredOL: number): void {
+  if (p.OL !== undefined || !(p.Om + (p.Ok ?? 0) > 1)) return;
+  const OL = Number(inferredOL.toPrecision(4));
+  const tenth = Number((p.Om / 10).toPrecision(6));
+  if (p.Ok === undefined) throw new RangeError(`Om = ${p.Om} makes OL = ${OL} to stay flat: give OL explicitly if you mean it; ${tenth}?`);
+  const hint = p.Om > 1 ? `; Om = ${tenth}?` : "";
+  throw new RangeError(`Om = ${p.Om} and Ok = ${p.Ok} make OL = ${OL} (1 − Om − Ok − Or): give OL explicitly if you mean it${hint}`);
 }
 
 function checkParameters(p: ModelParameters): void {
@@ -136,6 +153,7 @@ export class ExpansionRate {
       this.OL = 1 - p.Om - this.Or;
       this.Ok = 0;
     }
+    refuseInferredNegativeDarkEnergy(p, this.OL);
     this.darkEnergyKind = p.wa !== 0 ? 2 : p.w0 !== -1 ? 1 : 0;
     this.darkEnergyPower = 3 * (1 + p.w0 + p.wa);
     this.equalityRedshift =

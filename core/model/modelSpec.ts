@@ -1,8 +1,8 @@
 /**
  * Model spec text: zcell's own one-line syntax for a cosmological model, as typed in a cell.
  *
- *   PRESET                      e.g. P18-BAO
- *   PRESET; key=value; ...      e.g. P18-BAO; H0=73
+ *   PRESET                      e.g. P18-CMB
+ *   PRESET; key=value; ...      e.g. P18-CMB; H0=73
  *   key=value; ...              e.g. H0=70; Om=0.3; OL=0.7
  *
  * Keys (case-insensitive, spaces ignored, '.' is the decimal point): H0, Om, OL or Ok (not both),
@@ -11,13 +11,36 @@
  * wa = 0; a model with neither OL nor Ok is flat.
  */
 import { parameterKeys, specDefaults, type ModelParameters, type ParameterKey } from "./ModelParameters.js";
-import { findPreset, presets } from "./presets.js";
+import { defaultPresetName, findPreset, presets } from "./presets.js";
 
 const numberPattern = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+const percentPattern = /^[+-]?(?:\d+\.?\d*|\.\d+)%$/;
+/** Keys whose value is a fraction of the critical density (a percentage of it is a slip). */
+const densityKeys: ReadonlySet<string> = new Set(["Om", "OL", "Ok", "Ob"]);
 
 function parseNumber(key: string, text: string): number {
+  if (percentPattern.test(text)) {
+    const fraction = Number((Number(text.slice(0, -1)) / 100).toPrecision(6));
+    const fix = densityKeys.has(key) ? `write the fraction, ${key}=${fraction}` : `write ${key} as a plain number`;
+    throw new TypeError(`${key}: "${quotedText(text)}" is a percentage: ${fix}`);
+  }
   if (!numberPattern.test(text)) throw new TypeError(`${key}: "${quotedText(text)}" is not a number (use '.' as the decimal point)`);
   return Number(text);
+}
+
+/**
+ * A spec part written with commas where ';' belongs ("P18-CMB,H0=73", "H0=70,Om=0.3"), rewritten
+ * with ';'; a comma followed by no key (the masses of an mnu list, a decimal comma) stays.
+ */
+function withSemicolons(part: string): string | undefined {
+  if (!part.includes("=")) return undefined;
+  const pieces: string[] = [];
+  for (const piece of part.split(",")) {
+    const last = pieces.length - 1;
+    if (last >= 0 && !piece.includes("=") && pieces[last].includes("=")) pieces[last] += `,${piece}`;
+    else pieces.push(piece);
+  }
+  return pieces.length > 1 ? pieces.join("; ") : undefined;
 }
 
 function parseMasses(text: string): number[] {
@@ -43,6 +66,24 @@ export interface NamedModels {
 const namesListedAtMost = 12;
 
 /**
+ * A spec that names no preset and lacks H0 or Om. `given` holds the keys it gave, as typed, so that
+ * a message can show them on a preset or on the workbook's model.
+ */
+export class MissingParameterError extends TypeError {
+  /**
+   * @param missing the key that is missing ("H0" or "Om")
+   * @param given the keys and value texts the spec gave, in its order
+   */
+  constructor(
+    readonly missing: "H0" | "Om",
+    readonly given: readonly (readonly [ParameterKey, string])[],
+  ) {
+    const example = [defaultPresetName, ...given.map(([key, value]) => `${key}=${quotedText(value)}`)].join("; ");
+    super(`${missing} is required (or start from a preset, e.g. "${example}")`);
+  }
+}
+
+/**
  * Text from a workbook as a message quotes it: at most 40 characters (a stored spec or name may be huge).
  * @param text any text, e.g. a spec part or a model name
  * @returns the text, cut to 39 characters and "…" when longer than 40
@@ -55,10 +96,11 @@ export function quotedText(text: string): string {
 /**
  * Parses model spec text into parameters (syntax only; physical checks happen when the model is built).
  *
- * @param text spec text, e.g. "P18-BAO; H0=73"
+ * @param text spec text, e.g. "P18-CMB; H0=73"
  * @param named further models a spec may start from, after the built-in presets
  * @returns the model parameters
- * @throws TypeError naming the offending key or token
+ * @throws TypeError naming the offending key or token (MissingParameterError for a spec with neither
+ *   a preset nor H0 and Om)
  * @example parseModelSpec("H0=70; Om=0.3").OL // undefined (flat)
  */
 export function parseModelSpec(text: string, named?: NamedModels): ModelParameters {
@@ -71,6 +113,8 @@ export function parseModelSpec(text: string, named?: NamedModels): ModelParamete
   let base: ModelParameters | undefined;
   const given = new Map<ParameterKey, string>();
   parts.forEach((part, index) => {
+    const rewritten = withSemicolons(part);
+    if (rewritten !== undefined) throw new TypeError(`"${quotedText(part)}": separate the parts with ';', e.g. "${quotedText(rewritten)}"`);
     const eq = part.indexOf("=");
     if (eq < 0) {
       if (index > 0) throw new TypeError(`"${quotedText(part)}" is not key=value (a preset name may only come first)`);
@@ -93,17 +137,17 @@ export function parseModelSpec(text: string, named?: NamedModels): ModelParamete
     given.set(key, part.slice(eq + 1));
   });
   if (given.has("OL") && given.has("Ok")) throw new TypeError("give OL or Ok, not both");
-  if (!base) {
-    for (const key of ["H0", "Om"] as const) {
-      if (!given.has(key)) throw new TypeError(`${key} is required (or start from a preset, e.g. "P18-BAO; ...")`);
-    }
-  }
   const p: ModelParameters = base
     ? { ...base, mnu: [...base.mnu] }
     : { ...specDefaults, mnu: [], H0: Number.NaN, Om: Number.NaN };
   for (const [key, value] of given) {
     if (key === "mnu") p.mnu = parseMasses(value);
     else p[key] = parseNumber(key, value);
+  }
+  if (!base) {
+    for (const key of ["H0", "Om"] as const) {
+      if (!given.has(key)) throw new MissingParameterError(key, [...given]);
+    }
   }
   if (given.has("OL")) delete p.Ok;
   if (given.has("Ok")) delete p.OL;
@@ -118,7 +162,7 @@ export function parseModelSpec(text: string, named?: NamedModels): ModelParamete
  * @param changes key and value pairs, e.g. [["H0", 73]]
  * @returns the changed parameters
  * @throws TypeError naming an unknown key, a key given twice or a value that is not a number
- * @example formatModelSpec(withChanges(parseModelSpec("P18-BAO"), [["H0", 73]])) // "P18-BAO; H0=73"
+ * @example formatModelSpec(withChanges(parseModelSpec("P18-CMB"), [["H0", 73]])) // "P18-CMB; H0=73"
  */
 export function withChanges(p: ModelParameters, changes: readonly (readonly [string, number | string])[]): ModelParameters {
   const out: ModelParameters = { ...p, mnu: [...p.mnu] };
@@ -148,7 +192,7 @@ function sameMasses(a: readonly number[], b: readonly number[]): boolean {
  * round-trip form.
  *
  * @param p model parameters
- * @returns spec text, e.g. "P18-BAO; H0=73"
+ * @returns spec text, e.g. "P18-CMB; H0=73"
  * @example formatModelSpec(parseModelSpec("om = 0.30 ; H0=70.0")) // "H0=70; Om=0.3"
  */
 export function formatModelSpec(p: ModelParameters): string {

@@ -25,22 +25,25 @@ function preset(name: string, description: string, p: Omit<ModelParameters, "pre
 
 const planckNeff = 3.046;
 
+/** The model of a workbook that has applied none, and of a spec's suggestions: Planck 2018 CMB + lensing. */
+export const defaultPresetName = "P18-CMB";
+
 /**
- * The presets by name. The names say the data combination: P18-BAO (Planck 2018 CMB with lensing and
- * BAO), P18-CMB (Planck 2018 CMB with lensing, the values papers quote as "Planck 2018": the add-in's
- * default), P15-EXT (Planck 2015 with external data),
+ * The presets by name, the default first. The names say the data combination: P18-CMB (Planck 2018
+ * CMB with lensing, the values papers quote as "Planck 2018": the add-in's default), P18-BAO (Planck
+ * 2018 CMB with lensing and BAO), P15-EXT (Planck 2015 with external data),
  * W9-ALL (WMAP nine-year with every external set), W7-BAO (WMAP seven-year with BAO and H0).
  */
 export const presets: readonly Preset[] = [
   preset(
-    "P18-BAO",
-    "H0 67.66, Ωm 0.3111 (incl. one 0.06 eV ν), flat — Planck 2018 VI, A&A 641, A6, Table 2, CMB+lensing+BAO",
-    { H0: 67.66, Om: 0.3111, Ob: 0.02242 / 0.6766 ** 2, w0: -1, wa: 0, Tcmb: 2.7255, Neff: planckNeff, mnu: [0.06] },
-  ),
-  preset(
     "P18-CMB",
     "H0 67.36, Ωm 0.3153 (incl. one 0.06 eV ν), flat — Planck 2018 VI, A&A 641, A6, Table 2, CMB+lensing",
     { H0: 67.36, Om: 0.3153, Ob: 0.02237 / 0.6736 ** 2, w0: -1, wa: 0, Tcmb: 2.7255, Neff: planckNeff, mnu: [0.06] },
+  ),
+  preset(
+    "P18-BAO",
+    "H0 67.66, Ωm 0.3111 (incl. one 0.06 eV ν), flat — Planck 2018 VI, A&A 641, A6, Table 2, CMB+lensing+BAO",
+    { H0: 67.66, Om: 0.3111, Ob: 0.02242 / 0.6766 ** 2, w0: -1, wa: 0, Tcmb: 2.7255, Neff: planckNeff, mnu: [0.06] },
   ),
   preset(
     "P15-EXT",

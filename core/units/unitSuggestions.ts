@@ -2,7 +2,8 @@
  * What a mistyped unit was probably meant to be. Units are case-sensitive (FITS Standard 4.0, §4.3:
  * "mpc" is a milliparsec), so a spelling of a common astronomical unit in the wrong case that still
  * parses would silently scale a result by huge factors: those few are refused outright (`caseSlip`).
- * Any other unit that does not parse gets the nearest spellings astronomers use (`nearestUnits`).
+ * Any other unit that does not parse gets the nearest spellings astronomers use (`nearestUnits`), or
+ * the same with "/" where the word "per" was typed (`slashForPer`).
  */
 
 /** Symbols that parse but are almost surely a trade unit in the wrong case: symbol → what was meant. */
@@ -69,4 +70,15 @@ export function nearestUnits(text: string): string[] {
   const out: string[] = [];
   for (const u of found) for (const v of [u, sameUnit[u]]) if (v !== undefined && !out.includes(v)) out.push(v);
   return out.slice(0, 2);
+}
+
+/**
+ * A unit with the word "per" typed for "/" ("kpc per arcsec"), written with "/"; FITS has no "per".
+ * @param text the unit as typed
+ * @returns the text with each "per" (a word of its own) as "/", or undefined when it has none
+ * @example slashForPer("kpc per arcsec") // "kpc/arcsec"
+ */
+export function slashForPer(text: string): string | undefined {
+  const slashed = text.replace(/\s*\bper\b\s*/gi, "/");
+  return slashed === text ? undefined : slashed.trim();
 }

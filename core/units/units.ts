@@ -25,10 +25,8 @@ import {
   solarMassKg,
   speedOfLightMPerS,
 } from "./constants.js";
-import { caseSlip, nearestUnits } from "./unitSuggestions.js";
-
-/** Exponents of the base dimensions, in the order m, kg, s, K, rad. */
-type Dimensions = readonly [number, number, number, number, number];
+import { dimensionsOf, dimensionWords, sameDimensions, type Dimensions } from "./dimensionWords.js";
+import { caseSlip, nearestUnits, slashForPer } from "./unitSuggestions.js";
 
 /** A parsed unit: value in SI base units = value in this unit × factor. */
 export interface Unit {
@@ -45,7 +43,7 @@ export interface Unit {
 type Definition = { factor: number; dimensions: Dimensions; prefixable: boolean };
 
 const none: Dimensions = [0, 0, 0, 0, 0];
-const d = (m: number, kg: number, s: number, K = 0, rad = 0): Dimensions => [m, kg, s, K, rad];
+const d = dimensionsOf;
 
 const degree = Math.PI / 180;
 const definitions: Record<string, Definition> = {
@@ -96,39 +94,6 @@ const prefixes: Record<string, number> = {
   Y: 1e24, Z: 1e21, E: 1e18, P: 1e15, T: 1e12, G: 1e9, M: 1e6, k: 1e3, h: 1e2, da: 1e1,
   d: 1e-1, c: 1e-2, m: 1e-3, u: 1e-6, n: 1e-9, p: 1e-12, f: 1e-15, a: 1e-18, z: 1e-21, y: 1e-24,
 };
-
-/** Names of common dimensions, for messages. */
-const dimensionNames: [Dimensions, string][] = [
-  [d(1, 0, 0), "length"],
-  [d(0, 0, 1), "time"],
-  [d(0, 1, 0), "mass"],
-  [d(0, 0, 0, 1), "temperature"],
-  [d(0, 0, 0, 0, 1), "angle"],
-  [d(0, 0, 0, 0, 2), "solid angle"],
-  [d(3, 0, 0), "volume"],
-  [d(2, 1, -3), "power"],
-  [d(2, 1, -2), "energy, or spectral luminosity (W/Hz)"],
-  [d(0, 1, -3), "flux (power per area)"],
-  [d(0, 1, -2), "flux density (power per area per frequency)"],
-  [d(0, 0, -1), "frequency"],
-  [d(1, 0, -1), "speed"],
-  [d(-3, 1, 0), "density"],
-  [d(1, 0, 0, 0, -1), "length per angle"],
-  [d(3, 0, 0, 0, -2), "volume per solid angle"],
-  [d(0, 0, 0), "dimensionless"],
-];
-
-function sameDimensions(a: Dimensions, b: Dimensions): boolean {
-  return a.every((x, i) => Math.abs(x - b[i]) < 1e-12);
-}
-
-/** A dimension in words (or as base units when it has no common name). */
-function describeDimensions(dims: Dimensions): string {
-  const named = dimensionNames.find(([x]) => sameDimensions(x, dims));
-  if (named) return named[1];
-  const base = ["m", "kg", "s", "K", "rad"];
-  return dims.map((e, i) => (e === 0 ? "" : e === 1 ? base[i] : `${base[i]}${e}`)).filter(Boolean).join(" ");
-}
 
 function resolveSymbol(symbol: string, whole: string): { factor: number; dimensions: Dimensions } {
   const slip = caseSlip(symbol);
@@ -260,6 +225,20 @@ class UnitParser {
 
 const cache = new Map<string, Unit>();
 
+/** What a unit that does not parse was meant to be: the same with "/" for the word "per" when that parses, else the nearest spellings. */
+function suggestions(text: string): string[] {
+  const slashed = slashForPer(text);
+  if (slashed !== undefined) {
+    try {
+      parseUnit(slashed);
+      return [slashed];
+    } catch {
+      // not a unit either way: the nearest spellings
+    }
+  }
+  return nearestUnits(text);
+}
+
 /**
  * Parses a FITS-style unit string.
  *
@@ -279,7 +258,7 @@ export function parseUnit(text: string): Unit {
   try {
     parsed = parser.parse();
   } catch (e) {
-    const near = e instanceof TypeError && !/did you mean|magnitudes/.test(e.message) ? nearestUnits(trimmed) : [];
+    const near = e instanceof TypeError && !/did you mean|magnitudes/.test(e.message) ? suggestions(trimmed) : [];
     if (near.length === 0) throw e;
     throw new TypeError(`${(e as Error).message}: did you mean ${near.join(" or ")}?`);
   }
@@ -302,6 +281,18 @@ export function parseUnit(text: string): Unit {
 }
 
 /**
+ * What a unit measures, in words.
+ * @param text unit text, e.g. "mJy"
+ * @returns the kind with its article, e.g. "a flux density"
+ * @throws TypeError when the text is not a unit
+ * @example unitKind("W/Hz/sr") // "a spectral luminosity per solid angle"
+ */
+export function unitKind(text: string): string {
+  const unit = parseUnit(text);
+  return dimensionWords(unit.dimensions, unit.text);
+}
+
+/**
  * How a value in one unit becomes a value in another: value_to = value_from × factor × h^hPower, with
  * h = H0/100 of the model when a unit is h-scaled (hPower 0 otherwise).
  *
@@ -316,7 +307,7 @@ export function scaledConversion(from: string, to: string): { factor: number; hP
   const b = parseUnit(to);
   if (!sameDimensions(a.dimensions, b.dimensions)) {
     throw new TypeError(
-      `cannot convert "${a.text}" (${describeDimensions(a.dimensions)}) to "${b.text}" (${describeDimensions(b.dimensions)})`,
+      `cannot convert "${a.text}" (${dimensionWords(a.dimensions, a.text)}) to "${b.text}" (${dimensionWords(b.dimensions, b.text)})`,
     );
   }
   return { factor: a.factor / b.factor, hPower: a.hPower - b.hPower };
@@ -376,5 +367,5 @@ export function frequencyHz(value: number, unit: string, name: string): number {
   if (sameDimensions(u.dimensions, d(0, 0, -1))) return x;
   if (sameDimensions(u.dimensions, d(1, 0, 0))) return speedOfLightMPerS / x;
   if (sameDimensions(u.dimensions, d(2, 1, -2))) return x / planckConstantJs;
-  throw new TypeError(`${name}: "${u.text}" is ${describeDimensions(u.dimensions)}; use a frequency (GHz), a wavelength (Angstrom, um) or an energy (eV)`);
+  throw new TypeError(`${name}: "${u.text}" is ${dimensionWords(u.dimensions, u.text)}; use a frequency (GHz), a wavelength (Angstrom, um) or an energy (eV)`);
 }

@@ -43,8 +43,8 @@ export function LUMINOSITY_ERR(flux: any[][], flux_err: any[][], z: any[][], z_e
  * 1σ error of a spectral luminosity L_ν (as ZC.LUMINOSITY_NU) from independent errors of flux density, z and spectral index (first order).
  * @customfunction LUMINOSITY_NU_ERR LUMINOSITY_NU_ERR
  * @helpurl https://localhost:3000/help.html#function-reference
- * @param flux_density Observed flux density, ≥ 0, in Jy by default (value or range).
- * @param flux_density_err 1σ error of the flux density, ≥ 0, in its unit (value or range).
+ * @param flux_density Observed flux density, ≥ 0 (value or range), in Jy unless in_unit says otherwise (catalogues in mJy: give "mJy").
+ * @param flux_density_err 1σ error of the flux density, ≥ 0 (value or range), in Jy unless in_unit says otherwise (catalogues in mJy: give "mJy").
  * @param z Redshift, > 0 (value or range).
  * @param z_err 1σ error of z, ≥ 0 (value or range).
  * @param alpha Spectral index: S_ν ∝ ν^alpha; synchrotron ≈ −0.7; other conventions via ZC.SPECTRAL_INDEX (value or range).
@@ -95,8 +95,8 @@ export function SIZE_ERR(angle: any[][], angle_err: any[][], z: any[][], z_err: 
  * 1σ error of a rest-frame spectral luminosity at another frequency (as ZC.LUMINOSITY_REST) from independent errors of flux density, z and spectral index (first order); the α term is ln(rest / ((1+z) observed)) σ_α.
  * @customfunction LUMINOSITY_REST_ERR LUMINOSITY_REST_ERR
  * @helpurl https://localhost:3000/help.html#function-reference
- * @param flux_density Flux density observed at `observed`, ≥ 0, in Jy by default (value or range).
- * @param flux_density_err 1σ error of the flux density, ≥ 0, in its unit (value or range).
+ * @param flux_density Flux density observed at `observed`, ≥ 0 (value or range), in Jy unless in_unit says otherwise (catalogues in mJy: give "mJy").
+ * @param flux_density_err 1σ error of the flux density, ≥ 0 (value or range), in Jy unless in_unit says otherwise (catalogues in mJy: give "mJy").
  * @param z Redshift, > 0 (value or range).
  * @param z_err 1σ error of z, ≥ 0 (value or range).
  * @param alpha Spectral index: S_ν ∝ ν^alpha; synchrotron ≈ −0.7; other conventions via ZC.SPECTRAL_INDEX (value or range).

@@ -28,7 +28,7 @@ export function REDSHIFT_LIMIT(lum: any[][], flux_limit: any[][], model?: any[][
  * @customfunction REDSHIFT_LIMIT_NU REDSHIFT_LIMIT_NU
  * @helpurl https://localhost:3000/help.html#function-reference
  * @param lum_nu Spectral luminosity L_ν at the observed frequency (as ZC.LUMINOSITY_NU gives it), > 0, in W/Hz by default (value or range).
- * @param flux_density_limit Survey's flux-density limit, > 0, in Jy by default (value or range).
+ * @param flux_density_limit Survey's flux-density limit, > 0 (value or range), in Jy unless flux_unit says otherwise (catalogues in mJy: give "mJy").
  * @param alpha Spectral index: S_ν ∝ ν^alpha; synchrotron ≈ −0.7; other conventions via ZC.SPECTRAL_INDEX (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [lum_unit] Unit of lum_nu, default "W/Hz" (e.g. "erg/s/Hz").

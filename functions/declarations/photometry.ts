@@ -43,7 +43,7 @@ export function FLUX(lum: any[][], z: any[][], model?: any[][], lum_unit?: strin
  * Rest-frame spectral luminosity for a power law S_ν ∝ ν^alpha: 4π D_L² S_ν (1+z)^−(1+alpha), in W/Hz (flux density in Jy).
  * @customfunction LUMINOSITY_NU LUMINOSITY_NU
  * @helpurl https://localhost:3000/help.html#function-reference
- * @param flux_density Observed flux density, ≥ 0, in Jy by default (value or range).
+ * @param flux_density Observed flux density, ≥ 0 (value or range), in Jy unless in_unit says otherwise (catalogues in mJy: give "mJy").
  * @param z Redshift, > 0 (value or range).
  * @param alpha Spectral index: S_ν ∝ ν^alpha; synchrotron ≈ −0.7; other conventions via ZC.SPECTRAL_INDEX (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
@@ -99,7 +99,7 @@ export function MAG_APP(M: any[][], z: any[][], kcorr?: any[][], model?: any[][]
  * AB magnitude of a flux density: −2.5 log10(f_ν / 3630.78 Jy).
  * @customfunction MAG_AB MAG_AB
  * @helpurl https://localhost:3000/help.html#function-reference
- * @param flux_density Flux density, > 0, in Jy by default (value or range).
+ * @param flux_density Flux density, > 0 (value or range), in Jy unless unit says otherwise (catalogues in mJy: give "mJy").
  * @param [unit] Unit of flux density, default "Jy" (e.g. "uJy", "erg/s/cm2/Hz").
  * @returns AB magnitude (mag).
  */
@@ -123,7 +123,7 @@ export function FLUX_AB(m_ab: any[][], unit?: string): any[][] {
  * Rest-frame spectral luminosity at another frequency or wavelength, from a flux density observed at one, for a power law S_ν ∝ ν^α: L_ν(rest) = 4πD_L² S_ν (1+z)^−(1+α) (rest/observed)^α.
  * @customfunction LUMINOSITY_REST LUMINOSITY_REST
  * @helpurl https://localhost:3000/help.html#function-reference
- * @param flux_density Flux density observed at `observed`, ≥ 0, in Jy by default (value or range).
+ * @param flux_density Flux density observed at `observed`, ≥ 0 (value or range), in Jy unless in_unit says otherwise (catalogues in mJy: give "mJy").
  * @param z Redshift, > 0 (value or range).
  * @param alpha Spectral index: S_ν ∝ ν^alpha; synchrotron ≈ −0.7; other conventions via ZC.SPECTRAL_INDEX (value or range).
  * @param observed Observed frequency, wavelength or energy, > 0, in band_unit (value or range).

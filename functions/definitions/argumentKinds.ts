@@ -14,6 +14,8 @@ export const amount = (name: string) => num(name, { min: 0 });
 /** A magnitude (catalogue flags of |m| ≥ 50 give #N/A). */
 export const mag = (name: string, extra: NumberOptions = {}) => num(name, { magnitude: true, ...extra });
 export const model: ArgSpec = { kind: "model", name: "model" };
+/** Key/value pairs ZC.MODEL takes after its base model. */
+export const modelPairs = 6;
 /** A unit argument: `reference` is what compute uses, `shown` the default a person sees. */
 export const unit = (name: string, reference: string, shown = reference, applies: string | string[] = "result"): ArgSpec => ({
   kind: "unit",

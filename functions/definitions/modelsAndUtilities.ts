@@ -16,7 +16,7 @@ import {
 import { messages } from "../messages.js";
 import { describeModel, versionText } from "../describeModel.js";
 import type { ArgSpec, Cell, FunctionDef } from "../FunctionDef.js";
-import { num, model, m, n, z } from "./argumentKinds.js";
+import { modelPairs, num, model, m, n, z } from "./argumentKinds.js";
 
 /** ZC.PARAM names → value. */
 const parameters: Record<string, (model: Cosmology) => number> = {
@@ -44,8 +44,6 @@ const parameters: Record<string, (model: Cosmology) => number> = {
   },
 };
 
-/** Key/value pairs ZC.MODEL takes after its base model. */
-const modelPairs = 6;
 
 
 /** Models and utilities functions, in the order of their declarations. */

@@ -2,16 +2,20 @@
 
 Reads JSON from stdin: {"cases": [{"id", "H0", "Om0", "Ode0" | null (flat), "w0", "wa", "Tcmb0",
 "Neff", "m_nu": [3 masses in eV], "z": [...]}]}, writes {"results": {id: {quantity: [...]}}}.
+A case {"id", "realization": name, "z"} uses astropy's own parameter set of that name (e.g. "Planck18").
 Om0 is astropy's convention (cold matter + baryons, massive neutrinos excluded); the caller converts.
 """
 import json
 import sys
 
+import astropy.cosmology
 import astropy.units as u
 from astropy.cosmology import Flatw0waCDM, w0waCDM
 
 
 def build(case):
+    if "realization" in case:
+        return getattr(astropy.cosmology, case["realization"])
     common = dict(
         H0=case["H0"], Om0=case["Om0"], w0=case["w0"], wa=case["wa"],
         Tcmb0=case["Tcmb0"], Neff=case["Neff"], m_nu=case["m_nu"] * u.eV,
