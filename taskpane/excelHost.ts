@@ -9,6 +9,7 @@ import { activeModelSettingKey } from "../functions/activeModel.js";
 import { storedWorkbookModels, workbookModelsSettingKey } from "../functions/workbookModels.js";
 import { callsZcFunction, typedFormula } from "../functions/storedFormula.js";
 import { columnName, qualifiedAddress, splitAddress, topLeft } from "./cellAddress.js";
+import type { ReferenceRead } from "./readArgument.js";
 
 /** A rectangle of cells as the pane sees it. */
 export interface RangeSnapshot {
@@ -87,36 +88,25 @@ async function snapshot(get: (context: Excel.RequestContext) => Excel.Range): Pr
   });
 }
 
-/** The active cell as the inspector reads it. */
-export interface ActiveCell extends RangeSnapshot {
-  /** For a cell of a spilled result other than its anchor: the anchor's address (`formulas` are then the anchor's). */
-  spillAnchor?: string;
-  /**
-   * The cell's row and column in its formula's result, from the top-left (0-based): 0, 0 for a
-   * formula's own cell; undefined where this Excel cannot say which cell of a spilled result it is.
-   */
-  place?: { row: number; col: number };
-}
-
 /**
- * Whether Excel can name the anchor of a spilled cell: Range.getSpillParentOrNullObject is ExcelApi
- * 1.12 (@types/office-js; learn.microsoft.com/office/dev/add-ins/excel/excel-add-ins-ranges-dynamic-arrays).
+ * The active cell as the inspector reads it. `spillAnchor`: for a cell of a spilled result other than
+ * its anchor, the anchor's address (`formulas` are then the anchor's). `place`: the cell's row and
+ * column in its formula's result (0-based; 0, 0 for a formula's own cell), undefined where this
+ * Excel cannot say which cell of a spilled result it is.
  */
-export function spillParentSupported(): boolean {
-  return Office.context.requirements.isSetSupported("ExcelApi", "1.12");
-}
+export type ActiveCell = RangeSnapshot & { spillAnchor?: string; place?: { row: number; col: number } };
 
 /**
  * The active cell: its address, formula and value; for a cell inside a spilled result, the anchor's
- * formula and the cell's place in the result, counted from the anchor (the anchor is the result's
- * top-left cell). Where spills cannot be asked about (before ExcelApi 1.12), `place` is undefined.
+ * formula and the cell's place counted from the anchor (the result's top-left cell). The anchor comes
+ * from Range.getSpillParentOrNullObject, ExcelApi 1.12, a null object outside any spill (@types/office-js;
+ * learn.microsoft.com/office/dev/add-ins/excel/excel-add-ins-ranges-dynamic-arrays); before 1.12, `place` is undefined.
  */
 export async function readActiveCell(): Promise<ActiveCell> {
-  const spills = spillParentSupported();
+  const spills = Office.context.requirements.isSetSupported("ExcelApi", "1.12");
   return Excel.run(async (context) => {
     const cell = context.workbook.getActiveCell();
     cell.load("address,formulas,values");
-    // one cell: getSpillParentOrNullObject gives a null object for a cell outside any spill (same source)
     const parent = spills ? cell.getSpillParentOrNullObject().load("address,formulas") : undefined;
     await context.sync();
     const own = { address: cell.address, rowCount: 1, columnCount: 1, formulas: cell.formulas, values: cell.values };
@@ -133,11 +123,10 @@ export function readSelection(): Promise<RangeSnapshot> {
   return snapshot((context) => context.workbook.getSelectedRange());
 }
 
-/** The range a reference written in a formula names (relative to `defaultSheet` when it names none): an address or a defined name. */
+/** The range a reference in a formula names (on `defaultSheet` when it names none); Worksheet.getRange takes a name too (@types/office-js). */
 function referenceRange(context: Excel.RequestContext, reference: string, defaultSheet: string): Excel.Range {
   const { sheet, address } = splitAddress(reference.replaceAll("$", ""));
   if (!sheet && !/\d|:/.test(address)) return context.workbook.names.getItem(address).getRange();
-  // Worksheet.getRange takes an address or a name (@types/office-js, ExcelApi 1.1): a sheet's own name too
   return context.workbook.worksheets.getItem(sheet ?? defaultSheet).getRange(address);
 }
 
@@ -149,20 +138,15 @@ export function readReference(reference: string, defaultSheet: string): Promise<
   return snapshot((context) => referenceRange(context, reference, defaultSheet));
 }
 
-/** A reference's values with the address Excel resolved it to, or only its size when it holds too many cells to read. */
-export type BoundedRead = { address: string; values: unknown[][] } | { address: string; cells: number };
-
 /**
  * The values of a reference, read only when it holds at most `maxCells` cells: its size is asked
- * first, without its values (rowCount and columnCount, ExcelApi 1.1; `load` queues the properties
- * it names: @types/office-js, Excel.Range.load), so a name that stands for whole columns costs one
- * small request and its cells are never asked for. rowCount × columnCount, not cellCount, which reads −1
- * beyond 2,147,483,647 cells (same source).
+ * first, without its values (rowCount × columnCount, ExcelApi 1.1; `load` queues the properties it
+ * names; cellCount reads −1 beyond 2^31 − 1 cells: @types/office-js, Excel.Range), so the cells of a
+ * name that stands for whole columns are never asked for.
  * @param reference as written in a formula: an address, a sheet-qualified address or name, a defined name
  * @param defaultSheet the sheet of the formula (for a reference that names none)
- * @param maxCells cells read at most
  */
-export async function readReferenceBounded(reference: string, defaultSheet: string, maxCells: number): Promise<BoundedRead> {
+export async function readReferenceBounded(reference: string, defaultSheet: string, maxCells: number): Promise<ReferenceRead> {
   return Excel.run(async (context) => {
     const range = referenceRange(context, reference, defaultSheet).load("address,rowCount,columnCount");
     await context.sync();
