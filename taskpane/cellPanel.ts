@@ -6,7 +6,7 @@ import { readActiveModel } from "../functions/activeModel.js";
 import { callsZcFunction } from "../functions/storedFormula.js";
 import { splitAddress } from "./cellAddress.js";
 import { $, el } from "./dom.js";
-import { readActiveCell, readReference } from "./excelHost.js";
+import { readActiveCell, readReferenceBounded } from "./excelHost.js";
 import { explainFormula, type CallExplanation } from "./explainCall.js";
 
 /** Explains the active cell when the panel is showing (called on selection changes and tab switches). */
@@ -17,15 +17,19 @@ export async function explainActiveCell(): Promise<void> {
     const cell = await readActiveCell();
     const formula = cell.formulas[0]?.[0];
     const sheet = splitAddress(cell.address).sheet ?? "";
+    const where = cell.place && `row ${cell.place.row + 1}, column ${cell.place.col + 1} of its formula's result`;
     $("cell-address").textContent = cell.spillAnchor
-      ? `${cell.address}: part of a spilled range; explaining its anchor ${cell.spillAnchor}.`
-      : cell.address;
+      ? `${cell.address}: part of a spilled result (${where}); its formula is in ${cell.spillAnchor}.`
+      : cell.place
+        ? cell.address
+        : `${cell.address} (this Excel cannot say which cell of a spilled result this is: that needs ExcelApi 1.12)`;
     if (!callsZcFunction(formula)) {
       out.replaceChildren(el("p", "This cell has no ZC formula."));
       return;
     }
-    const read = async (ref: string) => (await readReference(ref, sheet)).values;
-    const calls = await explainFormula(String(formula), read, readActiveModel(), cell.values[0]?.[0]);
+    // each reference's size is asked first: one larger than the inspector's limit is not read
+    const read = (ref: string, maxCells: number) => readReferenceBounded(ref, sheet, maxCells);
+    const calls = await explainFormula(String(formula), read, readActiveModel(), cell.values[0]?.[0], cell.place);
     out.replaceChildren(el("p", "Formula:"), el("code", String(formula)), ...calls.map(renderCall));
   } catch (e) {
     out.replaceChildren(el("p", `Could not read the cell: ${(e as Error).message}`, "error"));
@@ -39,7 +43,9 @@ function renderCall(c: CallExplanation): HTMLElement {
   const add = (term: string, value: string, cls?: string) => dl.append(el("dt", term), el("dd", value, cls));
   add("Computes", c.equation);
   for (const a of c.args) add(a.name, `${a.text} → ${a.value}${a.unit ? ` [${a.unit}]` : ""}`);
-  if (c.model) add("Model", `${c.model.spec} (${c.model.source}): ${c.model.description}`);
+  if (c.model) add("Model", `${c.model.spec} (${c.model.source}${c.model.where ? `: ${c.model.where}` : ""}): ${c.model.description}`);
+  else if (c.modelNote) add("Model", c.modelNote);
+  if (c.models) add("Models in this formula", c.models.map((m) => `"${m}"`).join(", "));
   if (c.conventions.length) add("Conventions", c.conventions.join(" "));
   add("Method", c.methodPlain);
   if (c.methodPlain !== c.method) {

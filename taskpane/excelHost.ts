@@ -9,6 +9,7 @@ import { activeModelSettingKey } from "../functions/activeModel.js";
 import { storedWorkbookModels, workbookModelsSettingKey } from "../functions/workbookModels.js";
 import { callsZcFunction, typedFormula } from "../functions/storedFormula.js";
 import { columnName, qualifiedAddress, splitAddress, topLeft } from "./cellAddress.js";
+import type { ReferenceRead } from "./readArgument.js";
 
 /** A rectangle of cells as the pane sees it. */
 export interface RangeSnapshot {
@@ -88,19 +89,32 @@ async function snapshot(get: (context: Excel.RequestContext) => Excel.Range): Pr
 }
 
 /**
- * The active cell: its address, formula and value; for a cell inside a spilled range, the anchor's
- * formula (spillAnchor names the anchor; ExcelApi 1.12).
+ * The active cell as the inspector reads it. `spillAnchor`: for a cell of a spilled result other than
+ * its anchor, the anchor's address (`formulas` are then the anchor's). `place`: the cell's row and
+ * column in its formula's result (0-based; 0, 0 for a formula's own cell), undefined where this
+ * Excel cannot say which cell of a spilled result it is.
  */
-export async function readActiveCell(): Promise<RangeSnapshot & { spillAnchor?: string }> {
+export type ActiveCell = RangeSnapshot & { spillAnchor?: string; place?: { row: number; col: number } };
+
+/**
+ * The active cell: its address, formula and value; for a cell inside a spilled result, the anchor's
+ * formula and the cell's place counted from the anchor (the result's top-left cell). The anchor comes
+ * from Range.getSpillParentOrNullObject, ExcelApi 1.12, a null object outside any spill (@types/office-js;
+ * learn.microsoft.com/office/dev/add-ins/excel/excel-add-ins-ranges-dynamic-arrays); before 1.12, `place` is undefined.
+ */
+export async function readActiveCell(): Promise<ActiveCell> {
+  const spills = Office.context.requirements.isSetSupported("ExcelApi", "1.12");
   return Excel.run(async (context) => {
     const cell = context.workbook.getActiveCell();
-    cell.load("address,rowCount,columnCount,formulas,values");
-    const parent = cell.getSpillParentOrNullObject();
-    parent.load("address,formulas,values");
+    cell.load("address,formulas,values");
+    const parent = spills ? cell.getSpillParentOrNullObject().load("address,formulas") : undefined;
     await context.sync();
     const own = { address: cell.address, rowCount: 1, columnCount: 1, formulas: cell.formulas, values: cell.values };
-    if (parent.isNullObject || parent.address === cell.address) return own;
-    return { ...own, formulas: parent.formulas, spillAnchor: parent.address };
+    if (!parent) return own;
+    if (parent.isNullObject || parent.address === cell.address) return { ...own, place: { row: 0, col: 0 } };
+    const at = topLeft(splitAddress(cell.address).address);
+    const anchor = topLeft(splitAddress(parent.address).address);
+    return { ...own, formulas: parent.formulas, spillAnchor: parent.address, place: { row: at.row - anchor.row, col: at.col - anchor.col } };
   });
 }
 
@@ -109,15 +123,38 @@ export function readSelection(): Promise<RangeSnapshot> {
   return snapshot((context) => context.workbook.getSelectedRange());
 }
 
+/** The range a reference in a formula names (on `defaultSheet` when it names none); Worksheet.getRange takes a name too (@types/office-js). */
+function referenceRange(context: Excel.RequestContext, reference: string, defaultSheet: string): Excel.Range {
+  const { sheet, address } = splitAddress(reference.replaceAll("$", ""));
+  if (!sheet && !/\d|:/.test(address)) return context.workbook.names.getItem(address).getRange();
+  return context.workbook.worksheets.getItem(sheet ?? defaultSheet).getRange(address);
+}
+
 /**
  * Values of a reference as written in a formula (relative to `defaultSheet` when it names none).
  * @param reference e.g. "B2", "$A$2:$A$40", "'My sheet'!B2", or a defined name
  */
 export function readReference(reference: string, defaultSheet: string): Promise<RangeSnapshot> {
-  const { sheet, address } = splitAddress(reference.replaceAll("$", ""));
-  return snapshot((context) => {
-    if (!sheet && !/\d|:/.test(address)) return context.workbook.names.getItem(address).getRange();
-    return context.workbook.worksheets.getItem(sheet ?? defaultSheet).getRange(address);
+  return snapshot((context) => referenceRange(context, reference, defaultSheet));
+}
+
+/**
+ * The values of a reference, read only when it holds at most `maxCells` cells: its size is asked
+ * first, without its values (rowCount × columnCount, ExcelApi 1.1; `load` queues the properties it
+ * names; cellCount reads −1 beyond 2^31 − 1 cells: @types/office-js, Excel.Range), so the cells of a
+ * name that stands for whole columns are never asked for.
+ * @param reference as written in a formula: an address, a sheet-qualified address or name, a defined name
+ * @param defaultSheet the sheet of the formula (for a reference that names none)
+ */
+export async function readReferenceBounded(reference: string, defaultSheet: string, maxCells: number): Promise<ReferenceRead> {
+  return Excel.run(async (context) => {
+    const range = referenceRange(context, reference, defaultSheet).load("address,rowCount,columnCount");
+    await context.sync();
+    const cells = range.rowCount * range.columnCount;
+    if (cells > maxCells) return { address: range.address, cells };
+    range.load("values");
+    await context.sync();
+    return { address: range.address, values: range.values };
   });
 }
 

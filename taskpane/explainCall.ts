@@ -11,25 +11,38 @@ import { CellError, type ErrorKind } from "../functions/cellError.js";
 import { adviseOnError } from "./errorAdvice.js";
 import { definitions } from "../functions/definitions.js";
 import { describeModel } from "../functions/describeModel.js";
-import { evaluate, type Cell } from "../functions/evaluate.js";
+import { evaluate, type ArgSpec, type Cell, type FunctionDef } from "../functions/evaluate.js";
+import { isBlank, keyValueBlockSpec } from "../functions/modelArgument.js";
 import { modelFor } from "../functions/modelCache.js";
 import { resolvedSpec } from "../functions/workbookModels.js";
 import { formatValue } from "../functions/messages.js";
-import { columnNumber, splitAddress } from "./cellAddress.js";
-import { findCalls, parseArrayConstant, type FormulaCall, type Token } from "./formulaCalls.js";
+import { parentsOf, placeIn, placeWords, within, type CellPlace } from "./broadcastPlace.js";
+import { findCalls, type FormulaCall } from "./formulaCalls.js";
+import { cellName, cut, firstOf, inspectorReadLimit, matrixOf, readArgument, showValue, type ReadArgument, type ReferenceRead } from "./readArgument.js";
 
-/** One explained call. */
+export { inspectorReadLimit } from "./readArgument.js";
+export type { ReferenceRead } from "./readArgument.js";
+
+/** One explained call, for the selected cell: the arguments' values and the model of that cell. */
 export interface CallExplanation {
   name: string;
   summary: string;
   equation: string;
   args: { name: string; text: string; value: string; unit?: string }[];
-  model?: { spec: string; source: "given in the formula" | "the workbook's model"; description: string };
+  /**
+   * The model that computed the selected cell: its text as given (or the workbook's), where it came
+   * from (`where`: the cell of a model range, a key/value block) and its description.
+   */
+  model?: { spec: string; source: "given in the formula" | "the workbook's model"; where?: string; description: string };
+  /** For a range of models: the distinct models it names, in order (a blank cell as the workbook's model). */
+  models?: string[];
+  /** When the model of the selected cell is not known here: why. */
+  modelNote?: string;
   conventions: string[];
   method: string;
   /** The method in one plain line; `method` holds the detail. */
   methodPlain: string;
-  /** The result as a person reads it: at most 6 significant digits, with the unit. */
+  /** The result of the selected cell as a person reads it: at most 6 significant digits, with the unit. */
   result: string;
   /** The result's full value (every digit Excel holds), when it is a number. */
   exact?: string;
@@ -38,8 +51,11 @@ export interface CallExplanation {
   fault?: { argument?: string; text?: string; value?: string; fix: string };
 }
 
-/** Reads the values behind a reference written in a formula (e.g. "B2", "'Sheet 2'!A1:A9"). */
-export type ReferenceReader = (reference: string) => Promise<unknown[][]>;
+/**
+ * Reads the values behind a reference written in a formula (e.g. "B2", "'Sheet 2'!A1:A9", a defined
+ * name), or only its size when it holds more than `maxCells` cells (a bare matrix stands for values).
+ */
+export type ReferenceReader = (reference: string, maxCells: number) => Promise<unknown[][] | ReferenceRead>;
 
 const tabled =
   "quintic Hermite tables in ln(1+z) built once per model from Gauss–Legendre panels of the exact integrals " +
@@ -128,66 +144,39 @@ const about: Record<string, { summary: string; equation: string; method: string;
   VERSION: { summary: "version and engine conventions", equation: "—", method: closedForm },
 };
 
-/** Cells the inspector reads from one reference at most (a whole column is 1,048,576: "Excel specifications and limits", from memory). */
-export const inspectorReadLimit = 100_000;
+/** Models of a range listed at most; the rest are counted. */
+const modelsListed = 8;
+/** Characters of a model's text shown at most (a cell may hold 32,767: a stranger's text is cut). */
+const modelTextShown = 100;
 
-/** How many cells a reference names (A1, A1:C9, A:A, 1:3; a name counts as one cell here). */
-function referenceCells(reference: string): number {
-  const local = splitAddress(reference.replaceAll("$", "")).address;
-  const [a, b = a] = local.split(":");
-  const cell = /^([A-Za-z]{1,3})?(\d+)?$/;
-  const p = cell.exec(a);
-  const q = cell.exec(b);
-  if (!p || !q) return 1;
-  const rows = p[2] && q[2] ? Math.abs(Number(q[2]) - Number(p[2])) + 1 : 1_048_576;
-  const cols = p[1] && q[1] ? Math.abs(columnNumber(q[1]) - columnNumber(p[1])) + 1 : 16_384;
-  return rows * cols;
+/** A call with its arguments read and, when every one is known, its whole result as the worksheet function returns it. */
+interface EvaluatedCall {
+  call: FormulaCall;
+  def: FunctionDef;
+  args: ReadArgument[];
+  cells?: Cell[][];
 }
 
-/** A value from an argument's tokens, or undefined when only Excel can compute it. */
-async function argumentValue(
-  tokens: Token[],
-  text: string,
-  read: ReferenceReader,
-  nested: Map<string, Cell>,
-): Promise<{ known: boolean; value: unknown; note?: string }> {
-  if (tokens.length === 0) return { known: true, value: undefined };
-  const only = tokens.length === 1 ? tokens[0] : undefined;
-  const negative = tokens.length === 2 && tokens[0].text === "-" && tokens[1].kind === "number";
-  if (negative) return { known: true, value: -Number(tokens[1].text.replace("%", "")) * (tokens[1].text.endsWith("%") ? 0.01 : 1) };
-  if (!only) return nested.has(text) ? { known: true, value: nested.get(text) } : { known: false, value: undefined };
-  switch (only.kind) {
-    case "number":
-      return { known: true, value: Number(only.text.replace("%", "")) * (only.text.endsWith("%") ? 0.01 : 1) };
-    case "string":
-      return { known: true, value: only.text.slice(1, -1).replaceAll('""', '"') };
-    case "bool":
-      return { known: true, value: only.text.toUpperCase() === "TRUE" };
-    case "array":
-      return { known: true, value: parseArrayConstant(only.text) };
-    case "ref":
-    case "name": {
-      const cells = referenceCells(only.text);
-      if (cells > inspectorReadLimit) return { known: false, value: undefined, note: `a range of ${cells.toLocaleString("en-US")} cells, not read (the inspector reads at most ${inspectorReadLimit.toLocaleString("en-US")})` };
-      return { known: true, value: await read(only.text) };
-    }
-    default:
-      return { known: false, value: undefined };
+/** A model argument that is a key/value block: the spec it spells, or why it spells none. */
+function blockOf(arg: ReadArgument | undefined): { spec: string } | { error: string } | undefined {
+  const m = arg?.known ? matrixOf(arg.value) : undefined;
+  if (!m || m.length * m[0].length === 1) return undefined;
+  try {
+    const spec = keyValueBlockSpec(m);
+    return spec === undefined ? undefined : { spec };
+  } catch (e) {
+    return { error: (e as Error).message };
   }
 }
 
-function showValue(value: unknown): string {
-  if (value === undefined) return "omitted";
-  if (value instanceof CellError) return `${value.excelText} (${value.message})`;
-  if (Array.isArray(value)) {
-    const rows = value.length;
-    const cols = (value[0] as unknown[])?.length ?? 0;
-    if (rows === 1 && cols === 1) return showValue((value as unknown[][])[0][0]);
-    return `range ${rows}×${cols}, first ${showValue((value as unknown[][])[0][0])}`;
+/** How an argument's value reads, with what an omitted or blank one stands for. */
+function describeArg(spec: ArgSpec, value: unknown): string {
+  if (value === undefined || value === "") {
+    if (spec.kind === "unit") return `default "${spec.default}"`;
+    if (spec.kind === "model") return "the workbook's model";
+    if (spec.kind === "number" && spec.default !== undefined) return Number.isNaN(spec.default) ? "not given" : `default ${spec.default}`;
   }
-  if (value === "" || value === null) return "blank";
-  if (typeof value === "string") return `"${value}"`;
-  return String(value);
+  return showValue(value);
 }
 
 function modelConventions(m: Cosmology): string[] {
@@ -206,110 +195,210 @@ function shownErrorKind(value: unknown): ErrorKind | undefined {
   return (["value", "num", "na"] as const).find((kind) => new CellError(kind, "").excelText === value);
 }
 
+type ModelOfCell = Pick<CallExplanation, "model" | "models" | "modelNote"> & { cosmology?: Cosmology };
+
 /**
- * Explains every ZC call in a formula.
+ * The model one cell of a model argument names, as the functions read it (`readArguments.ts`: blank →
+ * the workbook's model; text → preset, spec or workbook model).
+ * @param value the cell's value
+ * @param cell where it is, e.g. "Sheet1!C1" (undefined for a single value)
+ */
+function modelNamed(value: unknown, cell: string | undefined, active: ActiveModelSetting): ModelOfCell {
+  const given = typeof value === "string" ? value.trim() : value;
+  if (isBlank(given)) {
+    return built(active.spec, "the workbook's model", cell && `${cell} for this cell is blank`, active);
+  }
+  if (typeof given !== "string") {
+    const description = "not a model: a model is text (a preset, a spec, a model of this workbook) or a key/value block";
+    return { model: { spec: cut(showValue(given), modelTextShown), source: "given in the formula", where: cell && `${cell} for this cell`, description } };
+  }
+  return built(given, "given in the formula", cell && `${cell} for this cell`, active);
+}
+
+function built(spec: string, source: "given in the formula" | "the workbook's model", where: string | undefined, active: ActiveModelSetting): ModelOfCell {
+  const shown = cut(spec, modelTextShown);
+  try {
+    const resolved = resolvedSpec(spec, active.models);
+    const m = modelFor(resolved); // the functions' own cache: no model is built twice
+    const ours = resolved !== spec ? "a model of this workbook" : undefined;
+    const at = [where, ours].filter(Boolean).join("; ") || undefined;
+    return { model: { spec: shown, source, where: at, description: describeModel(m) }, cosmology: m };
+  } catch (e) {
+    return { model: { spec: shown, source, where, description: (e as Error).message } };
+  }
+}
+
+/** The distinct models of a range of models, in order, a blank cell as the workbook's; at most `modelsListed`, then a count. */
+function modelsIn(m: unknown[][], active: ActiveModelSetting): string[] {
+  const seen = new Set<string>();
+  for (const row of m) {
+    for (const value of row) {
+      const text = typeof value === "string" ? value.trim() : value;
+      seen.add(isBlank(text) ? `${active.spec} (the workbook's model)` : typeof text === "string" ? cut(text, modelTextShown) : showValue(text));
+    }
+  }
+  const listed = [...seen].slice(0, modelsListed);
+  if (seen.size > modelsListed) listed.push(`… and ${(seen.size - modelsListed).toLocaleString("en-US")} more`);
+  return listed;
+}
+
+/** The model of the selected cell: the one model given, or the cell of a model range at the cell's place in the broadcast. */
+function modelOfCell(arg: ReadArgument, text: string, place: CellPlace | undefined, active: ActiveModelSetting): ModelOfCell {
+  if (!arg.known) return { modelNote: `${arg.note ?? "computed by Excel"}: not known here` };
+  const block = blockOf(arg);
+  const where = arg.source?.kind === "reference" ? (arg.source.address ?? arg.source.text) : text;
+  if (block && "error" in block) {
+    return { model: { spec: cut(text, modelTextShown), source: "given in the formula", where: `the key/value block ${where}`, description: block.error } };
+  }
+  if (block) return built(block.spec, "given in the formula", `the key/value block ${where}`, active);
+  const m = matrixOf(arg.value);
+  if (!m || m.length * m[0].length === 1) return modelNamed(firstOf(arg.value), undefined, active);
+  const models = modelsIn(m, active);
+  const q = place && placeIn(place, m.length, m[0].length);
+  if (!q) return { models, modelNote: `one per cell of ${text}; which of them computed this cell is not known here` };
+  return { ...modelNamed(m[q.row][q.col], cellName(arg.source, q, m.length, m[0].length), active), models };
+}
+
+/**
+ * Explains every ZC call in a formula, for the selected cell: a call whose result has several cells
+ * is explained at the cell the selected one shows (the arguments' cells and the model at that place
+ * in the broadcast), where that is known.
  * @param formula the cell's formula
- * @param readReference reads the values of a reference
+ * @param readReference reads the values of a reference (at most `inspectorReadLimit` cells)
  * @param active the workbook's active model
  * @param cellValue the value Excel shows in the cell (used when an argument only Excel can compute)
+ * @param at the selected cell's row and column in the formula's spilled result (0, 0 for the
+ *   formula's own cell); undefined when not known
+ * @returns the calls, outermost first, in the order they are written
  */
 export async function explainFormula(
   formula: string,
   readReference: ReferenceReader,
   active: ActiveModelSetting,
   cellValue?: unknown,
+  at?: CellPlace,
 ): Promise<CallExplanation[]> {
-  const calls = findCalls(formula).filter((c) => c.name.startsWith("ZC.") && definitions[c.name.slice(3)]);
-  const nested = new Map<string, Cell>();
-  const readOnce = new Map<string, Promise<unknown[][]>>(); // a reference named by several calls is read once
-  const read: ReferenceReader = (reference) => {
-    let values = readOnce.get(reference);
-    if (!values) readOnce.set(reference, (values = readReference(reference)));
-    return values;
+  const calls = findCalls(formula);
+  const parents = parentsOf(calls);
+  const ours = calls.flatMap((c, i) => (c.name.startsWith("ZC.") && definitions[c.name.slice(3)] ? [i] : []));
+  const readOnce = new Map<string, Promise<ReferenceRead>>(); // a reference named by several calls is read once
+  const read = (reference: string) => {
+    let got = readOnce.get(reference);
+    if (!got) readOnce.set(reference, (got = readReference(reference, inspectorReadLimit).then((r) => (Array.isArray(r) ? { values: r } : r))));
+    return got;
   };
-  const explanations: CallExplanation[] = [];
-  // innermost first, so that a nested call's value is known to its caller
-  for (const call of [...calls].sort((a, b) => b.depth - a.depth)) {
-    explanations.push(await explainCall(call, read, active, nested, cellValue));
+  const nested = new Map<string, Cell[][]>();
+  const evaluated = new Map<number, EvaluatedCall>();
+  // innermost first, so that a nested call's result is known to its caller
+  for (const i of [...ours].sort((a, b) => calls[b].depth - calls[a].depth)) {
+    evaluated.set(i, await evaluateCall(calls[i], read, active, nested));
   }
-  return explanations.reverse();
+  // outermost first (findCalls lists a call before those inside it): the cell of each result the selected cell reads
+  const whole = formula.replace(/^=/, "").trim();
+  const places = new Map<number, CellPlace | undefined>();
+  for (const i of ours) {
+    const { cells } = evaluated.get(i)!;
+    let place: CellPlace | undefined;
+    if (cells && cells.length * cells[0].length === 1) place = { row: 0, col: 0 };
+    else if (parents[i] < 0) place = calls[i].text !== whole ? undefined : cells ? within(at, cells.length, cells[0].length) : at;
+    else place = placeInCaller(evaluated.get(parents[i]), places.get(parents[i]), calls[i].text, cells);
+    places.set(i, place);
+  }
+  return ours.map((i) => explainAt(evaluated.get(i)!, places.get(i), active, cellValue));
 }
 
-async function explainCall(
+/**
+ * The cell of a nested call's result that its caller reads for the caller's cell `outer`: by the
+ * broadcast for a cell argument, the first for a unit or a scalar text (read once), none known for a
+ * key/value block or a function of whole columns (every cell is read).
+ */
+function placeInCaller(caller: EvaluatedCall | undefined, outer: CellPlace | undefined, text: string, cells: Cell[][] | undefined): CellPlace | undefined {
+  const k = caller ? caller.call.args.indexOf(text) : -1;
+  if (!caller || !outer || !cells || k < 0 || k >= caller.def.args.length) return undefined;
+  const spec = caller.def.args[k];
+  if (spec.kind === "unit" || (spec.kind === "text" && spec.scalar)) return { row: 0, col: 0 };
+  if (caller.def.over || caller.def.table || (spec.kind === "model" && blockOf(caller.args[k]))) return undefined;
+  if (caller.cells && caller.cells.length * caller.cells[0].length === 1) return undefined; // the caller's one cell is an error of the whole call (shapes that do not broadcast)
+  return placeIn(outer, cells.length, cells[0].length);
+}
+
+async function evaluateCall(
   call: FormulaCall,
-  read: ReferenceReader,
+  read: (reference: string) => Promise<ReferenceRead>,
   active: ActiveModelSetting,
-  nested: Map<string, Cell>,
-  cellValue: unknown,
-): Promise<CallExplanation> {
-  const short = call.name.slice(3);
-  const def = definitions[short];
-  const info = about[short];
-  const raw: unknown[] = [];
-  let allKnown = true;
-  const args: CallExplanation["args"] = [];
-  for (let i = 0; i < def.args.length; i++) {
-    const spec = def.args[i];
+  nested: Map<string, Cell[][]>,
+): Promise<EvaluatedCall> {
+  const def = definitions[call.name.slice(3)];
+  const args: ReadArgument[] = [];
+  for (let i = 0; i < def.args.length; i++) args.push(await readArgument(call.argTokens[i] ?? [], call.args[i] ?? "", read, nested));
+  if (!args.every((a) => a.known)) return { call, def, args };
+  const cells = evaluate(def, args.map((a) => a.value), active);
+  nested.set(call.text, cells);
+  return { call, def, args, cells };
+}
+
+/** A call explained at one cell of its result (`place`), or as a whole when the place is not known. */
+function explainAt(e: EvaluatedCall, at: CellPlace | undefined, active: ActiveModelSetting, cellValue: unknown): CallExplanation {
+  const { call, def } = e;
+  // a single cell from ranges of several is an error of the whole call (shapes that do not broadcast): no cell of theirs computed it
+  const place = !e.cells || e.cells.length * e.cells[0].length > 1 ? at : undefined;
+  const info = about[def.name];
+  const modelIndex = def.args.findIndex((a) => a.kind === "model");
+  // arguments broadcast cell by cell, except units and scalar texts (read once), key/value blocks and whole columns
+  const broadcasts = (spec: ArgSpec, arg: ReadArgument) =>
+    !def.over && !def.table && spec.kind !== "unit" && !(spec.kind === "text" && spec.scalar) && !(spec.kind === "model" && blockOf(arg));
+  const args: CallExplanation["args"] = def.args.map((spec, i) => {
+    const arg = e.args[i];
     const text = call.args[i] ?? "";
-    const { known, value, note } = await argumentValue(call.argTokens[i] ?? [], text, read, nested);
-    allKnown &&= known;
-    raw.push(value);
     const unitSpec = def.args.find((a) => a.kind === "unit" && (typeof a.applies === "string" ? [a.applies] : a.applies).includes(spec.name));
     const unit = unitSpec?.kind === "unit" ? unitSpec.default : undefined;
-    let shown = known ? showValue(value) : (note ?? "computed by Excel");
-    if (value === undefined || value === "") {
-      if (spec.kind === "unit") shown = `default "${spec.default}"`;
-      else if (spec.kind === "model") shown = "the workbook's model";
-      else if (spec.kind === "number" && spec.default !== undefined) shown = Number.isNaN(spec.default) ? "not given" : `default ${spec.default}`;
+    const m = arg.known ? matrixOf(arg.value) : undefined;
+    const q = m && m.length * m[0].length > 1 && place && broadcasts(spec, arg) ? placeIn(place, m.length, m[0].length) : undefined;
+    let value: string;
+    if (!arg.known) value = arg.note ?? "computed by Excel";
+    else if (q) value = `${describeArg(spec, m![q.row][q.col])} (${cellName(arg.source, q, m!.length, m![0].length)} for this cell)`;
+    else {
+      const block = spec.kind === "model" ? blockOf(arg) : undefined;
+      value = block && "spec" in block ? `a key/value block: "${cut(block.spec, modelTextShown)}"` : describeArg(spec, arg.value);
     }
-    args.push({ name: spec.name, text: text || "(omitted)", value: shown, unit });
-  }
-  const modelIndex = def.args.findIndex((a) => a.kind === "model");
-  let model: CallExplanation["model"];
-  let conventions: string[] = [];
-  if (modelIndex >= 0) {
-    const given = raw[modelIndex];
-    const text = Array.isArray(given) && given.length === 1 && given[0].length === 1 ? given[0][0] : given;
-    const explicit = typeof text === "string" && text.trim() !== "";
-    const spec = explicit ? (text as string) : active.spec;
-    try {
-      const m = modelFor(resolvedSpec(spec, active.models)); // the functions' own cache: no model is built twice
-      model = { spec: m.spec, source: explicit ? "given in the formula" : "the workbook's model", description: describeModel(m) };
-      conventions = modelConventions(m);
-    } catch (e) {
-      model = { spec, source: explicit ? "given in the formula" : "the workbook's model", description: (e as Error).message };
-    }
-  }
+    return { name: spec.name, text: text || "(omitted)", value, unit };
+  });
+  const chosen: ModelOfCell = modelIndex >= 0 ? modelOfCell(e.args[modelIndex], call.args[modelIndex] ?? "", place, active) : {};
+  const conventions = chosen.cosmology ? modelConventions(chosen.cosmology) : [];
   if (info.kcorr) conventions.push("K-correction sign: M = m − μ − K, with K = −2.5(1+α)log10(1+z) for S_ν ∝ ν^α.");
 
   let result: string;
   let exact: string | undefined;
   let isError = false;
   let fault: CallExplanation["fault"];
-  if (allKnown) {
-    const cells = evaluate(def, raw, active);
-    const first = cells[0][0];
-    nested.set(call.text, first);
-    if (first instanceof CellError) {
+  if (e.cells) {
+    const rows = e.cells.length;
+    const cols = e.cells[0].length;
+    const several = rows * cols > 1;
+    const q = several ? within(at, rows, cols) : { row: 0, col: 0 };
+    const cell = q ? e.cells[q.row][q.col] : e.cells[0][0];
+    const which = !several ? "" : q ? ` (${placeWords(q, rows, cols)} of ${rows}×${cols} values: this cell)` : ` (the first of ${rows}×${cols} values; which one this cell shows is not known here)`;
+    if (cell instanceof CellError) {
       isError = true;
-      result = `${first.excelText} — ${first.message}`;
-      const advice = adviseOnError(def, first.kind, first.message);
-      const at = args.find((a) => a.name === advice.argument);
-      fault = { ...advice, text: at?.text, value: at?.value };
+      result = `${cell.excelText} — ${cell.message}${which}`;
+      const advice = adviseOnError(def, cell.kind, cell.message);
+      const named = args.find((a) => a.name === advice.argument);
+      fault = { ...advice, text: named?.text, value: named?.value };
     } else {
       const resultUnit = def.args.find((a) => a.kind === "unit" && a.applies === "result");
-      const unitIndex = resultUnit ? def.args.indexOf(resultUnit) : -1;
-      const unitText = unitIndex >= 0 && typeof raw[unitIndex] === "string" && raw[unitIndex] ? (raw[unitIndex] as string) : resultUnit?.kind === "unit" ? resultUnit.default : "";
-      const size = cells.length * cells[0].length;
-      const shown = typeof first === "number" ? formatValue(first) : showValue(first);
-      result = `${size > 1 ? `${cells.length}×${cells[0].length} values, first ` : ""}${shown}${unitText ? ` ${unitText}` : ""}`;
-      if (typeof first === "number" && shown !== String(first)) exact = `${String(first)}${unitText ? ` ${unitText}` : ""}`;
+      const given = resultUnit ? firstOf(e.args[def.args.indexOf(resultUnit)].value) : undefined;
+      const unitText = typeof given === "string" && given.trim() ? given.trim() : resultUnit?.kind === "unit" ? resultUnit.default : "";
+      const shown = typeof cell === "number" ? formatValue(cell) : showValue(cell);
+      result = `${shown}${unitText ? ` ${unitText}` : ""}${which}`;
+      if (typeof cell === "number" && shown !== String(cell)) exact = `${String(cell)}${unitText ? ` ${unitText}` : ""}`;
     }
   } else {
-    result = `${showValue(cellValue)} (as Excel shows it; an argument is computed by Excel)`;
+    const why = e.args.some((a) => a.note) ? "an argument is not read" : "an argument is computed by Excel";
+    result = `${showValue(cellValue)} (as Excel shows it; ${why})`;
     isError = typeof cellValue === "string" && cellValue.startsWith("#");
     const kind = shownErrorKind(cellValue);
     if (kind) fault = adviseOnError(def, kind, "");
   }
-  return { name: call.name, summary: info.summary, equation: info.equation, args, model, conventions, method: info.method, methodPlain: plainMethod(info.method), result, exact, isError, fault };
+  const { model, models, modelNote } = chosen;
+  return { name: call.name, summary: info.summary, equation: info.equation, args, model, models, modelNote, conventions, method: info.method, methodPlain: plainMethod(info.method), result, exact, isError, fault };
 }

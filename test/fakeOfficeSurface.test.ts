@@ -62,7 +62,7 @@ const g = globalThis as unknown as { window: unknown; __fakeInit?: unknown; Offi
 
 function install(): void {
   g.window = globalThis;
-  (g.window as { __fakeInit: unknown }).__fakeInit = { sheets: { Sheet1: { A1: { value: 1 } } }, selection: "Sheet1!A1" };
+  (g.window as { __fakeInit: unknown }).__fakeInit = { sheets: { Sheet1: { A1: { value: 1 } } }, selection: "Sheet1!A1", names: { Data: "Sheet1!A1:A9" } };
   new Function(readFileSync(`${root}test/browser/fakeOffice.js`, "utf8"))();
 }
 
@@ -124,6 +124,7 @@ describe("the fake Office host offers only real APIs", () => {
   add("CommentCollection (workbook)", workbook.comments, excelClass("CommentCollection"));
   add("Application", workbook.application, excelClass("Application"));
   add("NamedItemCollection", workbook.names, excelClass("NamedItemCollection"));
+  add("NamedItem", (workbook.names as Fake & { getItem(n: string): Fake }).getItem("Data"), excelClass("NamedItem"));
   const charts = sheet.charts as Fake & { add(t: string, r: Fake, b: string): Fake };
   add("ChartCollection", charts, excelClass("ChartCollection"));
   const chart = charts.add("XYScatterLinesNoMarkers", range, "Columns") as Fake & { series: Fake & { add(n: string): Fake } };

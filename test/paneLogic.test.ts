@@ -1,7 +1,15 @@
-/** The pane's logic without a host: the model form, table plans, provenance notes, theme contrast. */
+/** The pane's logic without a host: the model form, table plans, provenance notes, theme contrast, the cell inspector. */
+import fc from "fast-check";
 import { describe, expect, test } from "vitest";
 import { definitions } from "../functions/definitions.js";
-import { explainFormula } from "../taskpane/explainCall.js";
+import { evaluate } from "../functions/evaluate.js";
+import { readWorkbookModels } from "../functions/workbookModels.js";
+import { parentsOf, placeIn } from "../taskpane/broadcastPlace.js";
+import { explainFormula, inspectorReadLimit, type ReferenceReader } from "../taskpane/explainCall.js";
+import { findCalls } from "../taskpane/formulaCalls.js";
+import { publishedModels } from "./fixtures.js";
+import { expectRelative } from "./helpers.js";
+import { SlowCosmology } from "./reference/slowCosmology.js";
 import { changedFields, derivedValues, formFromSpec, modelFromForm } from "../taskpane/modelForm.js";
 import { provenanceNote } from "../taskpane/provenanceNote.js";
 import { contrast } from "../taskpane/theme.js";
@@ -178,5 +186,221 @@ describe("the not-applied mark", () => {
     expect(changedFields({ ...applied, H0: " 69.32 " }, applied)).toEqual([]); // spaces are not a change
     expect(changedFields(formFromSpec("W9-ALL; Om=0.3"), applied)).toEqual(["Om"]);
     expect(changedFields(formFromSpec("P18-CMB"), applied)[0]).toBe("preset");
+  });
+});
+
+/** A reader over an invented Sheet1: each reference's values by its text, with the address Excel would resolve. */
+function sheet1(cells: Record<string, unknown[][]>, reads: [string, number][] = []): ReferenceReader {
+  return async (reference, maxCells) => {
+    reads.push([reference, maxCells]);
+    if (!(reference in cells)) throw new Error(`no reference ${reference}`);
+    return { address: `Sheet1!${reference.replaceAll("$", "")}`, values: cells[reference] };
+  };
+}
+
+/** Einstein–de Sitter (Ωm = 1, flat, no radiation) D_L = (1+z)·2D_H(1 − 1/√(1+z)): Hogg (1999) eq. 16 with ΩΛ = 0, Ωm = 1; EDS is H0 = 70. */
+const edsLuminosityDistanceMpc = (z: number) => (1 + z) * 2 * (299_792.458 / 70) * (1 - 1 / Math.sqrt(1 + z));
+
+/** The exact value of a call's result (every digit), as a number. */
+const exactOf = (call: { exact?: string; result: string }) => Number(/^-?[\d.e+-]+/.exec(call.exact ?? call.result)![0]);
+
+describe("the inspector at one cell of a spilled result: the model and the arguments of that cell", () => {
+  const active = { spec: "P18-CMB", stored: false };
+  // the what-if table the pane inserts: a column of redshifts against a row of models
+  const table = "=ZC.DIST_LUM($A$2:$A$3,$B$1:$C$1)";
+  const cells = { "$A$2:$A$3": [[0.5], [1]], "$B$1:$C$1": [["EDS", "W9-ALL"]] };
+
+  test.each([
+    // row col  z    model     model cell
+    [0,    0,   0.5, "EDS",    "Sheet1!B1"],
+    [1,    0,   1,   "EDS",    "Sheet1!B1"],
+    [0,    1,   0.5, "W9-ALL", "Sheet1!C1"],
+    [1,    1,   1,   "W9-ALL", "Sheet1!C1"],
+  ] as const)("a what-if table at row %i, column %i: z = %s under %s", async (row, col, z, model, modelCell) => {
+    const [call] = await explainFormula(table, sheet1(cells), active, undefined, { row, col });
+    expect(call.model).toMatchObject({ spec: model, source: "given in the formula", where: `${modelCell} for this cell` });
+    expect(call.model!.description.startsWith(`${model}: `)).toBe(true);
+    expect(call.models).toEqual(["EDS", "W9-ALL"]);
+    expect(call.args[0].value).toBe(`${z} (Sheet1!A${2 + row} for this cell)`);
+    expect(call.args[1].value).toBe(`"${model}" (${modelCell} for this cell)`);
+    // the same value as the formula of that one cell, computed on its own
+    const [single] = await explainFormula(`=ZC.DIST_LUM(${z},"${model}")`, sheet1({}), active);
+    expect(call.result).toBe(`${single.result} (row ${row + 1}, column ${col + 1} of 2×2 values: this cell)`);
+    expect(call.exact).toBe(single.exact);
+    // and the physics: EDS from its closed form, W9-ALL from the independent slow path (Hinshaw et al. 2013 Table 4)
+    const expected = model === "EDS" ? edsLuminosityDistanceMpc(z) : new SlowCosmology(publishedModels["W9-ALL"]).luminosityDistanceMpc(z);
+    expectRelative(exactOf(call), expected, 1e-9, `${model} at z = ${z}`);
+  });
+
+  test("a key/value block is one model for every cell", async () => {
+    const block = { "$A$2:$A$3": [[0.5], [1]], "$E$1:$F$2": [["H0", 70], ["Om", 0.3]] };
+    const [call] = await explainFormula("=ZC.DIST_LUM($A$2:$A$3,$E$1:$F$2)", sheet1(block), active, undefined, { row: 1, col: 0 });
+    expect(call.model).toMatchObject({ spec: "H0=70; Om=0.3", source: "given in the formula", where: "the key/value block Sheet1!E1:F2" });
+    expect(call.models).toBeUndefined();
+    expect(call.args[1].value).toBe('a key/value block: "H0=70; Om=0.3"');
+    expect(call.args[0].value).toBe("1 (Sheet1!A3 for this cell)");
+    // flat, H0 = 70, Ωm = 0.3, no radiation (a spec without a preset has Tcmb = 0): the slow path
+    const slow = new SlowCosmology({ H0: 70, Om: 0.3, w0: -1, wa: 0, Tcmb: 0, Neff: 3.046, mnu: [] });
+    expectRelative(exactOf(call), slow.luminosityDistanceMpc(1), 1e-9, "D_L(1), H0=70; Om=0.3");
+  });
+
+  test("a model cell naming a model of this workbook names it, with what it stands for", async () => {
+    const withModels = { ...active, models: readWorkbookModels({ "TEAM-FIDUCIAL": "P18-BAO; H0=70" }) };
+    const [call] = await explainFormula(table, sheet1({ ...cells, "$B$1:$C$1": [["team-fiducial", "EDS"]] }), withModels, undefined, { row: 1, col: 0 });
+    expect(call.model).toMatchObject({ spec: "team-fiducial", source: "given in the formula", where: "Sheet1!B1 for this cell; a model of this workbook" });
+    expect(call.model!.description).toMatch(/^P18-BAO; H0=70: flat/);
+    // Planck 2018 VI Table 2 (P18-BAO) with H0 = 70, from the slow path
+    expectRelative(exactOf(call), new SlowCosmology({ ...publishedModels["P18-BAO"], H0: 70 }).luminosityDistanceMpc(1), 1e-9, "TEAM-FIDUCIAL");
+  });
+
+  test("a blank model cell is the workbook's model, said so", async () => {
+    const [call] = await explainFormula(table, sheet1({ ...cells, "$B$1:$C$1": [["", "W9-ALL"]] }), active, undefined, { row: 0, col: 0 });
+    expect(call.model).toMatchObject({ spec: "P18-CMB", source: "the workbook's model", where: "Sheet1!B1 for this cell is blank" });
+    expect(call.models).toEqual(["P18-CMB (the workbook's model)", "W9-ALL"]);
+    expect(call.args[1].value).toBe("the workbook's model (Sheet1!B1 for this cell)");
+    expectRelative(exactOf(call), new SlowCosmology(publishedModels["P18-CMB"]).luminosityDistanceMpc(0.5), 1e-9, "P18-CMB (Planck 2018 VI Table 2)");
+  });
+
+  test("a nested ZC.MODEL over a row of H0 values: each cell names its own model, the inner call its own cell", async () => {
+    const formula = '=ZC.DIST_LUM($A$2:$A$3,ZC.MODEL("P18-CMB","H0",$B$1:$C$1))';
+    const [outer, inner] = await explainFormula(formula, sheet1({ ...cells, "$B$1:$C$1": [[60, 75]] }), active, undefined, { row: 1, col: 1 });
+    expect(outer.name).toBe("ZC.DIST_LUM");
+    expect(outer.model).toMatchObject({ spec: "P18-CMB; H0=75", where: "column 2 of the result of ZC.MODEL for this cell" });
+    expect(outer.models).toEqual(["P18-CMB; H0=60", "P18-CMB; H0=75"]);
+    expect(inner.args.find((a) => a.name === "value1")!.value).toBe("75 (Sheet1!C1 for this cell)");
+    expect(inner.result).toBe('"P18-CMB; H0=75" (column 2 of 1×2 values: this cell)');
+    expectRelative(exactOf(outer), new SlowCosmology({ ...publishedModels["P18-CMB"], H0: 75 }).luminosityDistanceMpc(1), 1e-9, "P18-CMB, H0 = 75");
+  });
+
+  test("where the cell's place is not known, the models are listed and none is claimed", async () => {
+    for (const [formula, at] of [[table, undefined], [`=SUM(${table.slice(1)})`, { row: 0, col: 0 }]] as const) {
+      const [call] = await explainFormula(formula, sheet1(cells), active, undefined, at);
+      expect(call.model, formula).toBeUndefined();
+      expect(call.modelNote).toBe("one per cell of $B$1:$C$1; which of them computed this cell is not known here");
+      expect(call.models).toEqual(["EDS", "W9-ALL"]);
+      expect(call.result).toMatch(/ \(the first of 2×2 values; which one this cell shows is not known here\)$/);
+    }
+  });
+
+  test("a place outside the result is not taken for a cell of it", async () => {
+    const [call] = await explainFormula(table, sheet1(cells), active, undefined, { row: 2, col: 0 });
+    expect(call.model).toBeUndefined();
+    expect(call.result).toMatch(/which one this cell shows is not known here/);
+  });
+
+  test("ranges that do not broadcast: the error of the whole call, no cell of theirs named", async () => {
+    const [call] = await explainFormula("=ZC.DIST_LUM($A$2:$A$3,$B$1:$B$3)", sheet1({ ...cells, "$B$1:$B$3": [["EDS"], ["W9-ALL"], ["EDS"]] }), active, undefined, { row: 0, col: 0 });
+    expect(call.isError).toBe(true);
+    expect(call.result).toMatch(/^#VALUE! — ZC.DIST_LUM: /);
+    expect(call.result).not.toMatch(/this cell/);
+    expect(call.args[0].value).toBe("range 2×1, first 0.5");
+    expect(call.model).toBeUndefined();
+    expect(call.modelNote).toMatch(/which of them computed this cell is not known here/);
+  });
+
+  test("a single model given in the formula or omitted is the same for every cell", async () => {
+    const [given] = await explainFormula('=ZC.DIST_LUM($A$2:$A$3,"W9-ALL")', sheet1(cells), active, undefined, { row: 1, col: 0 });
+    expect(given.model).toMatchObject({ spec: "W9-ALL", source: "given in the formula" });
+    expect(given.model!.where).toBeUndefined();
+    const [omitted] = await explainFormula("=ZC.DIST_LUM($A$2:$A$3)", sheet1(cells), active, undefined, { row: 1, col: 0 });
+    expect(omitted.model).toMatchObject({ spec: "P18-CMB", source: "the workbook's model" });
+    expect(omitted.result).toMatch(/ \(row 2 of 2×1 values: this cell\)$/);
+  });
+
+  test("a model only Excel computes is not claimed to be the workbook's", async () => {
+    const [call] = await explainFormula('=ZC.DIST_LUM(1,IF(TRUE,"EDS"))', sheet1({}), active, undefined, { row: 0, col: 0 });
+    expect(call.model).toBeUndefined();
+    expect(call.modelNote).toBe("computed by Excel: not known here");
+  });
+
+  test("any shapes that broadcast: each cell is explained with the cells of its arguments at its place (fast-check)", async () => {
+    const shapes = (rows: number, cols: number) => fc.constantFrom([1, 1], [rows, 1], [1, cols], [rows, cols]);
+    const models = ["EDS", "W9-ALL", "P18-CMB", "", "CONCORDANCE; H0=73"];
+    await fc.assert(
+      fc.asyncProperty(
+        fc.integer({ min: 1, max: 4 }).chain((rows) =>
+          fc.integer({ min: 1, max: 4 }).chain((cols) =>
+            fc.record({
+              rows: fc.constant(rows),
+              cols: fc.constant(cols),
+              zShape: shapes(rows, cols),
+              mShape: shapes(rows, cols),
+              zs: fc.array(fc.constantFrom(0, 0.25, 0.5, 1, 2, 3), { minLength: 16, maxLength: 16 }),
+              ms: fc.array(fc.constantFrom(...models), { minLength: 16, maxLength: 16 }),
+              row: fc.integer({ min: 0, max: rows - 1 }),
+              col: fc.integer({ min: 0, max: cols - 1 }),
+            }),
+          ),
+        ),
+        async ({ zShape, mShape, zs, ms, row: anyRow, col: anyCol }) => {
+          const grid = (shape: readonly number[], values: unknown[]) => Array.from({ length: shape[0] }, (_, r) => Array.from({ length: shape[1] }, (_, c) => values[r * 4 + c]));
+          const z = grid(zShape, zs);
+          const m = grid(mShape, ms);
+          const rows = Math.max(zShape[0], mShape[0]);
+          const cols = Math.max(zShape[1], mShape[1]);
+          const [row, col] = [anyRow % rows, anyCol % cols]; // a cell of the result
+          const [call] = await explainFormula("=ZC.DIST_LUM(Z,M)", sheet1({ Z: z, M: m }), active, undefined, { row, col });
+          // the documented rule, written out here: a single row (column) serves every row (column)
+          const pick = (x: unknown[][]) => x[x.length === 1 ? 0 : row][x[0].length === 1 ? 0 : col];
+          const [zHere, mHere] = [pick(z), pick(m)];
+          expect(call.model!.spec).toBe(mHere === "" ? "P18-CMB" : mHere);
+          const [single] = await explainFormula(`=ZC.DIST_LUM(${zHere},"${mHere}")`, sheet1({}), active);
+          const where = rows * cols === 1 ? "" : ` (${rows === 1 ? `column ${col + 1}` : cols === 1 ? `row ${row + 1}` : `row ${row + 1}, column ${col + 1}`} of ${rows}×${cols} values: this cell)`;
+          expect(call.result).toBe(`${single.result}${where}`);
+          // the wrapper's own broadcast gives that cell the same value
+          expect(evaluate(definitions.DIST_LUM, [z, m], active)[row][col]).toBe(evaluate(definitions.DIST_LUM, [zHere, mHere], active)[0][0]);
+        },
+      ),
+      { numRuns: 60 },
+    );
+  });
+
+  test("placeIn reads a single row or column for every row or column, and nothing outside", () => {
+    expect(placeIn({ row: 2, col: 1 }, 1, 3)).toEqual({ row: 0, col: 1 });
+    expect(placeIn({ row: 2, col: 1 }, 4, 1)).toEqual({ row: 2, col: 0 });
+    expect(placeIn({ row: 2, col: 1 }, 1, 1)).toEqual({ row: 0, col: 0 });
+    expect(placeIn({ row: 2, col: 1 }, 2, 2)).toBeUndefined();
+  });
+
+  test("each call's parent is the call it is written in", () => {
+    const calls = findCalls("=ZC.DIST_LUM(ZC.REDSHIFT(ZC.AGE(1),\"AGE\"), SUM(ZC.AGE(2)), (ZC.HUBBLE(3)))+ZC.AGE(4)");
+    expect(calls.map((c) => c.name)).toEqual(["ZC.DIST_LUM", "ZC.REDSHIFT", "ZC.AGE", "SUM", "ZC.AGE", "ZC.HUBBLE", "ZC.AGE"]);
+    expect(parentsOf(calls)).toEqual([-1, 0, 1, 0, 3, 0, -1]);
+  });
+});
+
+describe("the inspector reads no reference larger than its limit", () => {
+  const active = { spec: "P18-CMB", stored: false };
+
+  test("every reference, a defined name too, is asked with the limit; one too large is not read, and the pane says so", async () => {
+    const reads: [string, number][] = [];
+    const reader: ReferenceReader = async (reference, maxCells) => {
+      reads.push([reference, maxCells]);
+      return { address: "Sheet1!A1:B1048576", cells: 2_097_152 };
+    };
+    const [call] = await explainFormula("=ZC.DIST_LUM(BigData)", reader, active, 2919.6);
+    expect(reads).toEqual([["BigData", inspectorReadLimit]]);
+    expect(call.args[0].value).toBe(`a range of 2,097,152 cells, not read (the inspector reads at most ${inspectorReadLimit.toLocaleString("en-US")})`);
+    expect(call.result).toBe("2919.6 (as Excel shows it; an argument is not read)");
+  });
+
+  test("a reference Excel cannot read leaves the rest of the explanation standing", async () => {
+    const reader: ReferenceReader = async () => {
+      throw new Error("The requested resource doesn't exist.");
+    };
+    const [call] = await explainFormula("=ZC.DIST_LUM(Missing)", reader, active, "#NAME?");
+    expect(call.args[0].value).toBe("not read (Excel: The requested resource doesn't exist.)");
+    expect(call.equation).toMatch(/D_L = \(1\+z\)/);
+  });
+
+  test("a stranger's model range: long texts are cut, thousands of distinct ones are counted, not listed", async () => {
+    const long = "P".repeat(32_767);
+    const many = [[long, ...Array.from({ length: 1_999 }, (_, i) => `crafted ${i}`)]];
+    const [call] = await explainFormula("=ZC.DIST_LUM(1,$A$1:$BXX$1)", sheet1({ "$A$1:$BXX$1": many }), active, undefined, { row: 0, col: 0 });
+    expect(call.model!.spec.length).toBeLessThanOrEqual(101);
+    expect(call.models!.length).toBe(9);
+    expect(call.models!.at(-1)).toBe("… and 1,992 more");
+    expect(Math.max(...call.models!.map((m) => m.length))).toBeLessThanOrEqual(101);
+    expect(call.isError).toBe(true);
   });
 });

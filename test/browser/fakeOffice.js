@@ -18,6 +18,8 @@
     runs: [],
     reads: [],
     protectedSheets: init.protectedSheets || [],
+    // defined names: "BigData" (the workbook's) or "Sheet2!Local" (a sheet's) → the address it stands for
+    names: Object.assign({}, init.names || {}),
     // the built functions, as functions.js registers them, and each parameter's dimensionality (functions.json)
     functions: {},
     metadata: null,
@@ -74,8 +76,10 @@
       address: (/[^A-Za-z0-9_]/.test(sheetName) ? "'" + sheetName + "'" : sheetName) + "!" + local,
       rowCount: area.r1 - area.r0 + 1,
       columnCount: area.c1 - area.c0 + 1,
+      // a load of the cells' formulas or values reads them (counted); address and size come without them
       load(props) {
-        if (typeof props === "string" && props.split(",").includes("formulas")) fake.reads.push(this.rowCount * this.columnCount);
+        const loaded = typeof props === "string" ? props.split(",") : [];
+        if (loaded.includes("formulas") || loaded.includes("values")) fake.reads.push(this.rowCount * this.columnCount);
         return this;
       },
       getCell(r, c) { return makeRange(sheetName, { r0: area.r0 + r, c0: area.c0 + c, r1: area.r0 + r, c1: area.c0 + c }); },
@@ -98,8 +102,25 @@
         writable();
         m.forEach((row, i) => row.forEach((v, j) => (cells[key(area.r0 + i, area.c0 + j)] = { value: v })));
       },
-      getSpillParentOrNullObject() { return { isNullObject: true, load() { return this; } }; },
+      // the anchor of a spilled result for one cell of it (the anchor itself included), else a null object;
+      // ExcelApi 1.12 (@types/office-js, Excel.Range.getSpillParentOrNullObject): an older host lacks it
+      getSpillParentOrNullObject() {
+        if (minor(init.excelApi || "1.18") < 12) throw Object.assign(new Error("This API is not supported (simulated)."), { code: "ApiNotFound" });
+        const single = area.r0 === area.r1 && area.c0 === area.c1;
+        const here = single ? cells[key(area.r0, area.c0)] : undefined;
+        const own = key(area.r0, area.c0);
+        const anchor = here && (here.spilledFrom || (Object.values(cells).some((x) => x.spilledFrom === own) ? own : undefined));
+        if (!anchor) return { isNullObject: true, load() { return this; } };
+        return makeRange(sheetName, parse(anchor));
+      },
     };
+  }
+  // a range by address or defined name, as Worksheet.getRange takes either ("The string representing the address or name of the range", @types/office-js)
+  function rangeOf(sheetName, address) {
+    const named = fake.names[sheetName + "!" + address] || fake.names[address];
+    if (named === undefined) return makeRange(sheetName, parse(address));
+    const a = parse(named);
+    return makeRange(a.sheet || sheetName, a);
   }
   // a chart proxy over its record; a title or series is written straight through
   function chartObject(record) {
@@ -222,7 +243,7 @@
         },
       },
       load() { return this; },
-      getRange(address) { return makeRange(name, parse(address)); },
+      getRange(address) { return rangeOf(name, address); },
       getUsedRangeOrNullObject() {
         const keys = Object.keys(fake.sheets[name] || {});
         if (!keys.length) return { isNullObject: true, load() { return this; } };
@@ -282,7 +303,12 @@
         getItem(name) { return worksheet(name); },
         getActiveWorksheet() { return worksheet(selectedSheet()); },
       },
-      names: { getItem(name) { throw new Error("no name " + name); } },
+      names: {
+        getItem(name) {
+          if (fake.names[name] === undefined) throw Object.assign(new Error("no name " + name), { code: "ItemNotFound" });
+          return { name, getRange() { return rangeOf(selectedSheet(), name); } };
+        },
+      },
       application: {
         calculate(type) {
           if (init.calculateFails) throw Object.assign(new Error("The request could not be completed (simulated)."), { code: "GeneralException" });

@@ -10,7 +10,7 @@ import type { Page } from "playwright-core";
 import { publishedModels } from "../fixtures.js";
 import { expectRelative } from "../helpers.js";
 import { SlowCosmology, type SlowParameters } from "../reference/slowCosmology.js";
-import { browserAvailable, fakeState, openPane as openPaneIn, startPageHost, type PageHost, type PanePage } from "./pageHost.js";
+import { browserAvailable, fakeState, openPane as openPaneIn, selectCells, startPageHost, type PageHost, type PanePage } from "./pageHost.js";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 
 const root = fileURLToPath(new URL("../../", import.meta.url));
@@ -46,6 +46,51 @@ const workbook = {
     E5: { value: "occupied" },
   },
 };
+
+/** Einstein–de Sitter (Ωm = 1, flat, no radiation) D_L = (1+z)·2D_H(1 − 1/√(1+z)): Hogg (1999) eq. 16 with ΩΛ = 0, Ωm = 1; EDS is H0 = 70. */
+const edsLuminosityDistanceMpc = (z: number) => (1 + z) * 2 * (299_792.458 / 70) * (1 - 1 / Math.sqrt(1 + z));
+
+/**
+ * An invented sheet of what-if tables of D_L over z = 0.5, 1 (A2:A3), one for each way of giving the
+ * models: a key/value block (E1:F2), a workbook model's name beside a preset (H1:I1), a nested
+ * ZC.MODEL over a row of H0 values (K1:L1), a blank model cell beside a preset (N1:O1).
+ */
+const cases = {
+  A1: { value: "z" }, A2: { value: 0.5 }, A3: { value: 1 },
+  E1: { value: "H0" }, F1: { value: 70 }, E2: { value: "Om" }, F2: { value: 0.3 },
+  B2: { formula: "=ZC.DIST_LUM($A$2:$A$3,$E$1:$F$2)", value: 0 },
+  H1: { value: "TEAM-FIDUCIAL" }, I1: { value: "EDS" }, H2: { formula: "=ZC.DIST_LUM($A$2:$A$3,$H$1:$I$1)", value: 0 },
+  K1: { value: 60 }, L1: { value: 75 }, K2: { formula: '=ZC.DIST_LUM($A$2:$A$3,ZC.MODEL("P18-CMB","H0",$K$1:$L$1))', value: 0 },
+  O1: { value: "W9-ALL" }, N2: { formula: "=ZC.DIST_LUM($A$2:$A$3,$N$1:$O$1)", value: 0 },
+};
+
+/** Each explained call in the pane: its title, each term with its description, and the exact value. */
+function explanations(page: Page): Promise<{ title: string; lines: Record<string, string>; exact?: string }[]> {
+  return page.locator("#cell-explanation article").evaluateAll((articles) =>
+    articles.map((a) => {
+      const lines: Record<string, string> = {};
+      for (const dt of a.querySelectorAll("dt")) if (dt.textContent) lines[dt.textContent] = dt.nextElementSibling?.textContent ?? "";
+      return { title: a.querySelector("h3")?.textContent ?? "", lines, exact: a.querySelector(".exact-value")?.textContent ?? undefined };
+    }),
+  );
+}
+
+/** Every formula of the fake workbook computed by the built functions, as a full recalculation would. */
+async function calculateAll(page: Page): Promise<void> {
+  await page.evaluate(() => (window as unknown as { Excel: typeof Excel }).Excel.run(async (c) => c.workbook.application.calculate("Full")));
+  await page.evaluate("window.__fake.settled()");
+}
+
+/** `text` as a regular expression that matches it literally. */
+const escaped = (text: string) => text.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
+
+/** Selects a cell and waits until the inspector has explained it (the old explanation is cleared first). */
+async function inspect(page: Page, address: string): Promise<void> {
+  await page.evaluate(() => void (document.getElementById("cell-explanation")!.textContent = ""));
+  await selectCells(page, address);
+  await expect.poll(() => page.locator("#cell-explanation").textContent()).toMatch(/^(Formula:|This cell has no ZC formula)/);
+  expect(await page.locator("#cell-address").textContent()).toMatch(new RegExp(`^${escaped(address)}\\b`));
+}
 
 describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host", () => {
   let host: PageHost;
@@ -338,6 +383,115 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await page.close();
     });
   }
+
+  test("this cell in a what-if table: each cell of the spilled result names its own model and arguments, with its value", async () => {
+    const page = await openPane(light, { "zcell.workbookModels": { "TEAM-FIDUCIAL": "P18-BAO; H0=70" } }, true, { sheets: { ...structuredClone(workbook), Cases: cases } });
+    // the table the pane itself inserts: z = 0.1, 0.35, 0.6, 0.85 in D11:D14 against EDS and W9-ALL in E10:F10
+    await page.getByRole("tab", { name: "Tables" }).click();
+    await selectCells(page, "Sheet1!D10");
+    await page.fill("#table-stop", "1");
+    await page.fill("#table-step", "0.25");
+    await page.fill("#table-models", "EDS\nW9-ALL");
+    await page.locator("#insert-table").click();
+    await expect.poll(() => page.locator("#table-status").textContent()).toBe("Inserted 4 redshifts × 2 models, one live formula at D10.");
+    await calculateAll(page); // the Cases sheet's formulas, as Excel computes them on opening
+    const sheets = (await fake(page, "sheets")) as Record<string, Record<string, { value?: unknown }>>;
+    await page.getByRole("tab", { name: "This cell" }).click();
+
+    const slowOf = (p: SlowParameters) => (z: number) => slow(p).luminosityDistanceMpc(z);
+    const w9 = slowOf(publishedModels["W9-ALL"]); // Hinshaw et al. 2013 Table 4
+    //  cell           z     model line (its start)                                                                  place in the result           independent D_L
+    const rows: [string, number, string, string, (z: number) => number][] = [
+      ["Sheet1!E11",   0.1,  "EDS (given in the formula: Sheet1!E10 for this cell)",                                "row 1, column 1 of 4×2",      edsLuminosityDistanceMpc],
+      ["Sheet1!E13",   0.6,  "EDS (given in the formula: Sheet1!E10 for this cell)",                                "row 3, column 1 of 4×2",      edsLuminosityDistanceMpc],
+      ["Sheet1!F12",   0.35, "W9-ALL (given in the formula: Sheet1!F10 for this cell)",                             "row 2, column 2 of 4×2",      w9],
+      ["Sheet1!F14",   0.85, "W9-ALL (given in the formula: Sheet1!F10 for this cell)",                             "row 4, column 2 of 4×2",      w9],
+      // a key/value block: one model for every cell (flat, no radiation: a spec without a preset has Tcmb = 0)
+      ["Cases!B3",     1,    "H0=70; Om=0.3 (given in the formula: the key/value block Cases!E1:F2)",               "row 2 of 2×1",                slowOf({ H0: 70, Om: 0.3, w0: -1, wa: 0, Tcmb: 0, Neff: 3.046, mnu: [] })],
+      // a workbook model's name, and the preset beside it
+      ["Cases!H3",     1,    "TEAM-FIDUCIAL (given in the formula: Cases!H1 for this cell; a model of this workbook)", "row 2, column 1 of 2×2",   slowOf({ ...publishedModels["P18-BAO"], H0: 70 })],
+      ["Cases!I2",     0.5,  "EDS (given in the formula: Cases!I1 for this cell)",                                  "row 1, column 2 of 2×2",      edsLuminosityDistanceMpc],
+      // a nested ZC.MODEL over a row of H0 values (Planck 2018 VI Table 2 with H0 changed)
+      ["Cases!L3",     1,    "P18-CMB; H0=75 (given in the formula: column 2 of the result of ZC.MODEL for this cell)", "row 2, column 2 of 2×2",   slowOf({ ...publishedModels["P18-CMB"], H0: 75 })],
+      ["Cases!K2",     0.5,  "P18-CMB; H0=60 (given in the formula: column 1 of the result of ZC.MODEL for this cell)", "row 1, column 1 of 2×2",   slowOf({ ...publishedModels["P18-CMB"], H0: 60 })],
+      // a blank model cell: the workbook's model (P18-CMB, Planck 2018 VI Table 2), and the preset beside it
+      ["Cases!N3",     1,    "P18-CMB (the workbook's model: Cases!N1 for this cell is blank)",                     "row 2, column 1 of 2×2",      slowOf(publishedModels["P18-CMB"])],
+      ["Cases!O2",     0.5,  "W9-ALL (given in the formula: Cases!O1 for this cell)",                               "row 1, column 2 of 2×2",      w9],
+    ];
+    for (const [cell, z, modelLine, place, expected] of rows) {
+      await inspect(page, cell);
+      const [call] = await explanations(page);
+      expect(call.title, cell).toBe("ZC.DIST_LUM: luminosity distance");
+      expect(call.lines.Model.startsWith(`${modelLine}: `), `${cell}: ${call.lines.Model}`).toBe(true);
+      const zCell = cell.startsWith("Sheet1") ? `Sheet1!D${11 + Number(/row (\d)/.exec(place)![1]) - 1}` : `Cases!A${1 + Number(/row (\d)/.exec(place)![1])}`;
+      expect(call.lines.z, cell).toBe(`${cell.startsWith("Sheet1") ? "$D$11:$D$14" : "$A$2:$A$3"} → ${z} (${zCell} for this cell)`);
+      // the value shown is that of the cell: the one the fake host computed there with the built functions, and the physics
+      const shown = new RegExp(`^([\\d.]+) Mpc \\(${escaped(place)} values: this cell\\)$`).exec(call.lines.Result);
+      expect(shown, `${cell}: ${call.lines.Result}`).not.toBeNull();
+      const [sheet, local] = cell.split("!");
+      expect(Number(call.exact!.replace(" Mpc", "")), cell).toBe(sheets[sheet][local].value);
+      expectRelative(Number(call.exact!.replace(" Mpc", "")), expected(z), 1e-9, cell);
+      expectRelative(Number(shown![1]), expected(z), 5e-6, `${cell}, 6 digits`);
+    }
+    // the models of the whole formula, and where the selected cell sits in it
+    await inspect(page, "Sheet1!F13");
+    expect(await page.locator("#cell-address").textContent()).toBe("Sheet1!F13: part of a spilled result (row 3, column 2 of its formula's result); its formula is in Sheet1!E11.");
+    expect((await explanations(page))[0].lines["Models in this formula"]).toBe('"EDS", "W9-ALL"');
+    await page.screenshot({ path: `${shots}cell-spill-light.png`, fullPage: true });
+    await inspect(page, "Cases!L2");
+    const [outer, inner] = await explanations(page);
+    expect(outer.lines["Models in this formula"]).toBe('"P18-CMB; H0=60", "P18-CMB; H0=75"');
+    expect(inner.title).toBe("ZC.MODEL: model spec text: a base model with parameters changed");
+    expect(inner.lines.value1).toBe("$K$1:$L$1 → 75 (Cases!L1 for this cell)");
+    expect(page.errors).toEqual([]);
+    await page.close();
+  });
+
+  test("this cell where Excel cannot name a spill's anchor (before ExcelApi 1.12): the models are listed, none is claimed", async () => {
+    const page = await openPane(light, {}, true, { sheets: { Cases: structuredClone(cases) }, selection: "Cases!A1", excelApi: "1.11" });
+    await calculateAll(page);
+    await page.getByRole("tab", { name: "This cell" }).click();
+    await inspect(page, "Cases!N2");
+    expect(await page.locator("#cell-address").textContent()).toBe("Cases!N2 (this Excel cannot say which cell of a spilled result this is: that needs ExcelApi 1.12)");
+    const [call] = await explanations(page);
+    expect(call.lines.Model).toBe("one per cell of $N$1:$O$1; which of them computed this cell is not known here");
+    expect(call.lines["Models in this formula"]).toBe('"P18-CMB (the workbook\'s model)", "W9-ALL"');
+    expect(call.lines.Result).toMatch(/ Mpc \(the first of 2×2 values; which one this cell shows is not known here\)$/);
+    expect(page.errors).toEqual([]);
+    await page.close();
+  });
+
+  test("this cell asks a defined name's size before reading it: a name over whole columns is never read", async () => {
+    const sheets = {
+      Sheet1: {
+        A2: { value: 0.5 }, A3: { value: 1 },
+        G1: { formula: "=ZC.DIST_LUM(BigData)", value: 2919.6 },
+        G2: { formula: "=ZC.DIST_LUM(Cases!Wide)", value: 2919.6 },
+        G3: { formula: "=ZC.DIST_LUM(Pair)", value: 2919.6 },
+      },
+      Cases: { A1: { value: 0.5 } },
+    };
+    // two columns of a workbook name, a hundred whole rows of a sheet's name, and a small name (invented)
+    const names = { BigData: "Sheet1!A:B", "Cases!Wide": "Cases!1:100", Pair: "Sheet1!A2:A3" };
+    const page = await openPane(light, {}, true, { sheets, names, selection: "Sheet1!A2" });
+    await page.getByRole("tab", { name: "This cell" }).click();
+    for (const [cell, text, cells] of [["Sheet1!G1", "BigData", "2,097,152"], ["Sheet1!G2", "Cases!Wide", "1,638,400"]] as const) {
+      await page.evaluate("window.__fake.reads.length = 0");
+      await inspect(page, cell);
+      const [call] = await explanations(page);
+      expect(call.lines.z).toBe(`${text} → a range of ${cells} cells, not read (the inspector reads at most 100,000)`);
+      expect(call.lines.Result).toBe("2919.6 (as Excel shows it; an argument is not read)");
+      // what was read: the selected cell (and no spill parent); the name's size came without its cells
+      expect(await fake(page, "reads"), cell).toEqual([1]);
+    }
+    // a small name is read, and explained at the cell of the formula (its first): D_L(0.5) under P18-CMB (Planck 2018 VI Table 2)
+    await inspect(page, "Sheet1!G3");
+    const [call] = await explanations(page);
+    expect(call.lines.z).toBe("Pair → 0.5 (Sheet1!A2 for this cell)");
+    expectRelative(Number(call.exact!.replace(" Mpc", "")), slow(publishedModels["P18-CMB"]).luminosityDistanceMpc(0.5), 1e-9, "Pair, first cell");
+    expect(page.errors).toEqual([]);
+    await page.close();
+  });
 
   test("axe-core: the outside-Office page has no WCAG 2.2 A/AA or best-practice violation", async () => {
     const page = await openPane(light, {}, false);
