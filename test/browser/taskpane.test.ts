@@ -4,29 +4,16 @@
  * selection events and settings. Driven as a person would; screenshots of each panel in light and
  * dark theme go to test-artifacts/screenshots (git-ignored).
  */
-import { mkdirSync, readFileSync } from "node:fs";
+import { mkdirSync } from "node:fs";
 import { fileURLToPath } from "node:url";
-import type { Page } from "playwright-core";
 import { publishedModels } from "../fixtures.js";
 import { expectRelative } from "../helpers.js";
 import { SlowCosmology, type SlowParameters } from "../reference/slowCosmology.js";
-import { browserAvailable, fakeState, openPane as openPaneIn, startPageHost, type PageHost, type PanePage } from "./pageHost.js";
+import { axeSource, axeViolations, browserAvailable, fakeState, openPane as openPaneIn, startPageHost, type PageHost, type PanePage } from "./pageHost.js";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 
 const root = fileURLToPath(new URL("../../", import.meta.url));
 const shots = `${root}test-artifacts/screenshots/`;
-const axeSource = readFileSync(`${root}node_modules/axe-core/axe.min.js`, "utf8");
-
-/** axe-core's violations of the WCAG 2.0–2.2 A/AA rules and of its best practices, as "rule: targets". */
-async function axeViolations(page: Page): Promise<string[]> {
-  return page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run(ctx: Document, opts: object): Promise<{ passes: unknown[]; violations: { id: string; nodes: { target: string[] }[] }[] }> } }).axe;
-    const tags = ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22a", "wcag22aa", "best-practice"];
-    const result = await axe.run(document, { runOnly: { type: "tag", values: tags } });
-    if (result.passes.length < 10) throw new Error(`axe checked too little: ${result.passes.length} rules passed`);
-    return result.violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
-  });
-}
 
 const light = { bodyBackgroundColor: "#ffffff", bodyForegroundColor: "#242424", controlBackgroundColor: "#ffffff", controlForegroundColor: "#242424" };
 const dark = { bodyBackgroundColor: "#1f1f1f", bodyForegroundColor: "#f0f0f0", controlBackgroundColor: "#2b2b2b", controlForegroundColor: "#f0f0f0" };
