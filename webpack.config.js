@@ -1,51 +1,20 @@
 // Build: functions.js (self-contained: registers every ZC.* function), functions.json (metadata
-// from the JSDoc), taskpane.html/.js (shared runtime page), help.html (from README.md), the
-// manifest and icons. `--env url=https://host/path/` rewrites every https://localhost:3000/ URL.
+// from the JSDoc), taskpane.html/.js (shared runtime page), help.html and help.css (the users' help
+// page, scripts/helpPage.ts: an entry per function from the declarations and definitions, examples
+// computed), the manifest and icons. `--env url=https://host/path/` rewrites every
+// https://localhost:3000/ URL (the help page holds none: it is the same for every host).
 import CopyWebpackPlugin from "copy-webpack-plugin";
 import CustomFunctionsMetadataPlugin from "custom-functions-metadata-plugin";
 import HtmlWebpackPlugin from "html-webpack-plugin";
 import { generateCustomFunctionsMetadata } from "custom-functions-metadata";
-import { marked } from "marked";
 import { readFileSync } from "node:fs";
+import { tsImport } from "tsx/esm/api";
 import { fileURLToPath } from "node:url";
 
 const devUrl = "https://localhost:3000/";
 const root = fileURLToPath(new URL(".", import.meta.url));
 /** The declaration files, one per family of functions (the metadata plugin reads their JSDoc). */
 const declarationFiles = JSON.parse(readFileSync(`${root}functions/declarationFiles.json`, "utf8"));
-
-/**
- * The README sections a user of a hosted add-in reads (what zcell does, how to share workbooks and what
- * the pane writes, the function reference and conventions); the install, development and testing
- * sections speak to a developer with a local server and stay out of a hosted build's help page.
- */
-const hostedSections = ["Sharing workbooks", "Security", "Function reference", "Model spec", "Models of this workbook", "Presets", "Conventions", "Units", "Errors"];
-
-/** The README for the help page of a build served from `base`: for a hosted build, the user's sections and how to report a problem. */
-function helpMarkdown(markdown, hosted) {
-  if (!hosted) return markdown;
-  const parts = markdown.split(/^(?=#{1,3} )/m);
-  const kept = parts.filter((part, i) => {
-    if (i === 0) return true; // the title and the caution that results depend on the assumed cosmology
-    const heading = /^#{1,3} (.*)$/m.exec(part)[1].trim();
-    return hostedSections.includes(heading);
-  });
-  // the dev server's bullet of the Security section is about npm start on a developer's machine
-  const text = kept.join("").replace(/^- \*\*The dev server\*\*[^]*?(?=^\S|^- |(?![^]))/m, "");
-  return `${text}\n## Reporting a problem\n\nTell the people who host zcell for you: the cell, its formula, the value you expected and the one shown, and the model (\`=ZC.DESCRIBE()\` writes it out). \`=ZC.VERSION()\` gives the version.\n`;
-}
-
-/** README as a page; headings get ids (GitHub-style slugs) so that help links can point at sections. */
-function helpPage(markdown) {
-  const slug = (html) =>
-    html.replace(/<[^>]+>/g, "").trim().toLowerCase().replace(/[^\p{L}\p{N}\s-]/gu, "").replace(/\s+/g, "-");
-  const body = marked
-    .parse(markdown, { async: false })
-    .replace(/<h([1-6])>(.*?)<\/h\1>/g, (_, level, inner) => `<h${level} id="${slug(inner)}">${inner}</h${level}>`);
-  return `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>zcell help</title>
-<meta http-equiv="Content-Security-Policy" content="default-src 'self'; img-src 'self' data:"></head>
-<body>${body}</body></html>`;
-}
 
 /** Name and description of each worksheet function, for the pane's reference outside Excel. */
 async function functionList() {
@@ -102,9 +71,22 @@ export default async (env = {}, argv = {}) => {
           { from: "manifest/manifest.xml", to: "manifest.xml", transform: (content) => rewrite(content.toString()) },
           { from: "manifest/assets", to: "assets" },
           { from: "taskpane/taskpane.css", to: "taskpane.css" },
-          { from: "README.md", to: "help.html", transform: (content) => helpPage(helpMarkdown(content.toString(), Boolean(env.url))) },
         ],
       }),
+      {
+        // the help page, built from the same declarations and definitions (scripts/helpPage.ts)
+        apply(compiler) {
+          compiler.hooks.thisCompilation.tap("HelpPage", (compilation) => {
+            compilation.hooks.processAssets.tapPromise({ name: "HelpPage", stage: compilation.constructor.PROCESS_ASSETS_STAGE_ADDITIONAL }, async () => {
+              const { helpPage } = await tsImport("./scripts/helpPage.ts", import.meta.url);
+              const { html, css } = await helpPage();
+              const { RawSource } = compiler.webpack.sources;
+              compilation.emitAsset("help.html", new RawSource(html));
+              compilation.emitAsset("help.css", new RawSource(css));
+            });
+          });
+        },
+      },
       {
         // functions.json carries help URLs: point them at the same host as the manifest
         apply(compiler) {

@@ -17,8 +17,10 @@
 import { mkdirSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import ExcelJS from "exceljs";
+import { findPreset } from "../core/index.js";
 import { defaultModelSpec } from "../functions/activeModel.js";
 import { definitions } from "../functions/definitions.js";
+import { zcellVersion } from "../functions/describeModel.js";
 import { evaluate } from "../functions/evaluate.js";
 import { storedFormula } from "../functions/storedFormula.js";
 
@@ -65,9 +67,47 @@ function formatColumns(ws: ExcelJS.Worksheet, headerRow: number, formats: Record
     for (let r = rows[0]; r <= rows[1]; r++) ws.getCell(`${letter}${r}`).numFmt = format;
     const headerCell = ws.getCell(`${letter}${headerRow}`);
     const header = String(headerCell.value ?? "");
-    ws.getColumn(letter).width = Math.max(11, header.length + 2);
+    fitWidth(ws, letter, header);
     if (header) headerCell.alignment = { horizontal: "right" }; // over its numbers, which a sheet aligns right
   }
+}
+
+/**
+ * Widens a column to hold a text in full (never narrows it, never below 11): a width is counted in
+ * the default font's digits, and a header of capitals, μ or Σ runs wider than its length; another
+ * reader's substitute font (LibreOffice without Calibri) wider still, so a tenth is added and two more.
+ */
+function fitWidth(ws: ExcelJS.Worksheet, letter: string, text: string): void {
+  const column = ws.getColumn(letter);
+  column.width = Math.max(column.width ?? 0, 11, Math.ceil(text.length * 1.1) + 2);
+}
+
+/** A model in words for a reader of the printed sheet: a preset's description and source, a preset with changes as such. */
+function modelInWords(spec: string): string {
+  const [base, ...changes] = spec.split(";").map((part) => part.trim());
+  const preset = findPreset(base);
+  if (!preset) return spec;
+  const changed = changes.map((c) => c.replace("=", " = ") + (c.startsWith("H0") ? " km/s/Mpc" : ""));
+  return changed.length ? `${preset.name} with ${changed.join(", ")}, all else as ${preset.name}` : `${preset.name}: ${preset.description}`;
+}
+
+/**
+ * How a sheet prints: landscape, as many pages wide as its columns need (about 12 a page stay
+ * legible), the header row and the label column on every page (print titles; no label column where
+ * column A does not label every row of the sheet's tables), and on every page a header with the
+ * sheet's name (&A) and the model(s) the values were computed under, and a footer with the page
+ * number (Excel's header and footer codes: &L, &R sections, &A sheet, &P page, &N pages).
+ * @param models the model(s) in a few words, e.g. "P18-CMB"
+ * @param labelColumn whether column A labels the rows of every table on the sheet
+ */
+function printSetup(ws: ExcelJS.Worksheet, headerRow: number, models: string, labelColumn = true): void {
+  const pagesWide = Math.ceil(ws.columnCount / 12);
+  ws.pageSetup = {
+    ...ws.pageSetup, orientation: "landscape", fitToPage: true, fitToWidth: pagesWide, fitToHeight: 0,
+    printTitlesRow: `${headerRow}:${headerRow}`, ...(labelColumn ? { printTitlesColumn: "A:A" } : {}),
+  };
+  const text = (t: string) => t.replaceAll("&", "&&");
+  ws.headerFooter = { oddHeader: `&L&A&R${text(`computed under ${models} by zcell ${zcellVersion}`)}`, oddFooter: "&RPage &P of &N" };
 }
 /** Formats by quantity (common practice): redshift, distance, time, luminosity, magnitude, angle, small numbers. */
 const fmt = { z: "0.000", zErr: "0.0000", dist: "0.0", time: "0.000", sci: "0.00E+00", mag: "0.00", angle: "0.00", deg: "0.0", ratio: "0.000" };
@@ -77,7 +117,10 @@ workbook.creator = "zcell demo (invented data)";
 
 const sheet = workbook.addWorksheet("Catalogue (invented)");
 sheet.addRow(["INVENTED demo catalogue: names and values are made up for the zcell tour; they are not measurements."]);
-sheet.addRow(["source", "z", "flux [erg/s/cm2]", "m", "angle [arcsec]", "D_L [Mpc]", "look-back [Gyr]", "L [Lsun]", "size [kpc]", "K (α=−0.5)", "M"]);
+sheet.addRow([
+  "source", "z", "F_bol [erg/s/cm2]", "m (r, AB) [mag]", "angle [arcsec]", "D_L [Mpc]", "look-back [Gyr]", "L_bol [Lsun]",
+  "proper size [kpc]", "K [mag], α = −0.5", "M (r, AB) [mag]",
+]);
 catalogue.forEach(([name, z, flux, m, angle], i) => {
   const r = i + 3;
   const k = evaluate(definitions.KCORRECTION, [z, -0.5], active)[0][0];
@@ -92,31 +135,48 @@ catalogue.forEach(([name, z, flux, m, angle], i) => {
   ]);
 });
 sheet.addRow([]);
-const describeRow = sheet.addRow(["Model used above:", zc("ZC.DESCRIBE()", "DESCRIBE")]);
+const describeRow = sheet.addRow(["Every value above assumes:", zc("ZC.DESCRIBE()", "DESCRIBE")]);
 // the model in words is a paragraph: wrapped over the table's width rather than running off the page
 sheet.mergeCells(`B${describeRow.number}:K${describeRow.number}`);
 describeRow.getCell(2).alignment = { wrapText: true, vertical: "top" };
-describeRow.getCell(1).alignment = { vertical: "top" };
+describeRow.getCell(1).alignment = { vertical: "top", wrapText: true };
 describeRow.height = 48;
 formatColumns(sheet, 2, { B: fmt.z, C: fmt.sci, D: fmt.mag, E: fmt.angle, F: fmt.dist, G: fmt.time, H: fmt.sci, I: fmt.dist, J: fmt.ratio, K: fmt.mag }, [3, 14]);
 sheet.getColumn("A").width = 18;
+printSetup(sheet, 2, defaultModelSpec);
 
 const whatIf = workbook.addWorksheet("What-if");
 const models = [defaultModelSpec, "W9-ALL", `${defaultModelSpec}; H0=73`];
+whatIf.addRow(["Luminosity distance D_L [Mpc] of each redshift (column A) under each model (row 2): one formula per cell."]);
 whatIf.addRow(["z", ...models]);
 const columns = ["B", "C", "D"];
 [0.1, 0.25, 0.5, 1, 2, 3, 5, 8].forEach((z, i) => {
-  const r = i + 2;
-  whatIf.addRow([z, ...models.map((model, j) => zc(`ZC.DIST_LUM($A${r},${columns[j]}$1)`, "DIST_LUM", z, model))]);
+  const r = i + 3;
+  whatIf.addRow([z, ...models.map((model, j) => zc(`ZC.DIST_LUM($A${r},${columns[j]}$2)`, "DIST_LUM", z, model))]);
 });
-whatIf.getCell("F1").value = "D_L in Mpc: one formula per cell, a redshift from column A against a model from row 1.";
-formatColumns(whatIf, 1, { A: fmt.z, B: fmt.dist, C: fmt.dist, D: fmt.dist }, [2, 9]);
-whatIf.getColumn("D").width = 17;
+formatColumns(whatIf, 2, { A: fmt.z, B: fmt.dist, C: fmt.dist, D: fmt.dist }, [3, 10]);
+fitWidth(whatIf, "D", models[2]);
+// the models in words, beside the table they head
+whatIf.getCell("F2").value = "The models of row 2, in words:";
+models.forEach((model, i) => (whatIf.getCell(`F${i + 3}`).value = modelInWords(model)));
+printSetup(whatIf, 2, `${models.slice(0, -1).join(", ")} and ${models.at(-1)} (one a column)`);
 
 const inCells = workbook.addWorksheet("Model in cells");
-inCells.addRows([["H0", 70], ["Om", 0.3], ["OL", 0.7], [], ["z", "D_L [Mpc]"], [1, zc("ZC.DIST_LUM(A6,$A$1:$B$3)", "DIST_LUM", 1, [["H0", 70], ["Om", 0.3], ["OL", 0.7]])]]);
-inCells.getCell("D1").value = "A block of keys and values is one model: change H0 and every dependent formula recalculates.";
+const block = [["H0", 70], ["Om", 0.3], ["OL", 0.7]];
+inCells.addRows([...block, [], ["z", "D_L [Mpc]"], [1, zc("ZC.DIST_LUM(A6,$A$1:$B$3)", "DIST_LUM", 1, block)]]);
+// what each key means, outside the block (A1:B3 is read as the model)
+["km/s/Mpc", "matter today", "dark energy (Λ) today"].forEach((meaning, i) => {
+  inCells.getCell(`C${i + 1}`).value = meaning;
+  inCells.getCell(`C${i + 1}`).alignment = { horizontal: "left", indent: 1 };
+});
+inCells.getCell("E1").value = "A block of keys and values is one model: change H0 and every dependent formula recalculates.";
+inCells.getCell("E2").value = "The block gives no Tcmb, so radiation is off (no photons, no neutrinos): flat, matter + Λ only.";
+inCells.getCell("D5").value = "The model of B6, in words:";
+inCells.getCell("D6").value = zc("ZC.DESCRIBE($A$1:$B$3)", "DESCRIBE", block);
+inCells.mergeCells("D6:L8");
+inCells.getCell("D6").alignment = { wrapText: true, vertical: "top" };
 formatColumns(inCells, 5, { A: fmt.z, B: fmt.dist }, [6, 6]);
+printSetup(inCells, 5, "H0=70; Om=0.3; OL=0.7 (no radiation)");
 
 /**
  * Catalogue recipes on a second invented sample: name, z, σz, RA, Dec [deg], S_3GHz, σS [mJy], α,
@@ -138,9 +198,11 @@ const survey = { fluxLimit: 8e-16, zLo: 0.05, zHi: 3, areaDeg2: 50, magLimit: 24
 const recipes = workbook.addWorksheet("Recipes (invented)");
 recipes.addRow(["INVENTED sample and survey for the catalogue recipes: made up, not measurements."]);
 recipes.addRow([
-  "source", "z", "z_err", "RA [deg]", "Dec [deg]", "S_3GHz [mJy]", "S_err [mJy]", "alpha", "flux [erg/s/cm2]", "flux_err", "m", "m_err",
-  "angle [arcsec]", "angle_err", "z_cmb", "D_L err [Mpc]", "D_C [Mpc/h]", "L [erg/s]", "L err [erg/s]", "M_bol", "L_1.4GHz [W/Hz]",
-  "L_1.4GHz err [W/Hz]", "M", "M err", "size err [kpc]", "dimming [mag]", "z_max", "1/V_max [Mpc-3]", "z_max (m)",
+  "source", "z (heliocentric)", "z_err", "RA (ICRS) [deg]", "Dec (ICRS) [deg]", "S_3GHz [mJy]", "S_err [mJy]", "α (S_ν ∝ ν^α)",
+  "F_bol [erg/s/cm2]", "F_bol err [erg/s/cm2]", "m (r, AB) [mag]", "m err [mag]", "angle [arcsec]", "angle err [arcsec]",
+  "z_cmb (CMB frame)", "D_L err [Mpc]", "D_C [Mpc/h]", "L_bol [erg/s]", "L_bol err [erg/s]", "M_bol [mag]", "L_1.4GHz rest [W/Hz]",
+  "L_1.4GHz err [W/Hz]", "M (r, AB) [mag]", "M err [mag]", "size err [kpc]", "dimming [mag]", "z_max (flux limit)", "1/V_max [Mpc-3]",
+  "z_max (m limit)",
 ]);
 let weights = 0;
 recipeSources.forEach(([name, z, zErr, ra, dec, s, sErr, alpha, flux, fluxErr, m, mErr, angle, angleErr], i) => {
@@ -172,16 +234,19 @@ recipeSources.forEach(([name, z, zErr, ra, dec, s, sErr, alpha, flux, fluxErr, m
 });
 recipes.addRow([]);
 recipes.getCell("AA12").value = "Σ 1/V_max [Mpc-3]";
+recipes.getCell("AA12").alignment = { horizontal: "right" };
 recipes.getCell("AB12").value = { formula: "SUM(AB3:AB10)", result: weights, date1904: false };
 const surveyCells: [string, number][] = [
-  ["flux limit [erg/s/cm2]", survey.fluxLimit], ["z_lo", survey.zLo], ["z_hi", survey.zHi], ["area [deg2]", survey.areaDeg2], ["m limit", survey.magLimit],
+  ["flux limit [erg/s/cm2]", survey.fluxLimit], ["z_lo", survey.zLo], ["z_hi", survey.zHi], ["area [deg2]", survey.areaDeg2], ["m limit (r, AB) [mag]", survey.magLimit],
 ];
 recipes.getCell("AE1").value = "survey (invented)";
 surveyCells.forEach(([label, v], i) => {
   recipes.getCell(`AE${i + 2}`).value = label;
   recipes.getCell(`AF${i + 2}`).value = v;
 });
-recipes.getCell("A13").value = "Cached values computed under P18-CMB; first-order errors assume independent inputs.";
+// beside the outputs (O … AC), not under the inputs: which model they assume, in words
+recipes.getCell("O12").value = `Columns O–AC: cached values computed under ${modelInWords(defaultModelSpec)}.`;
+recipes.getCell("O13").value = "First-order errors from independent inputs (no covariances).";
 // source, z, z_err, RA, Dec, S, S_err, alpha, flux, flux_err, m, m_err, angle, angle_err, then the recipe columns O … AC
 formatColumns(
   recipes,
@@ -194,7 +259,9 @@ formatColumns(
   [3, 10],
 );
 recipes.getCell("AB12").numFmt = fmt.sci;
-recipes.getColumn("AE").width = 22;
+fitWidth(recipes, "AA", String(recipes.getCell("AA12").value));
+for (const [label] of surveyCells) fitWidth(recipes, "AE", label);
+printSetup(recipes, 2, defaultModelSpec);
 
 const structure = workbook.addWorksheet("Structure (invented)");
 structure.addRow(["INVENTED inputs for the population and structure recipes: made up, not measurements."]);
@@ -204,25 +271,28 @@ const rd = structureValue("SOUND_HORIZON");
 const structureRows: [string, ExcelJS.CellFormulaValue, string, string][] = [
   ["r_d [Mpc]", zc("ZC.SOUND_HORIZON()", "SOUND_HORIZON"), "0.00", "sound horizon at the drag epoch (Aubourg et al. 2015 fit)"],
   ["D_V(0.51) / r_d", { formula: storedFormula("ZC.DIST_VOLUME(0.51)/B3"), result: structureValue("DIST_VOLUME", 0.51) / rd, date1904: false }, "0.000", "isotropic BAO distance in units of r_d"],
-  ["L from a W7-BAO paper [erg/s]", zc('ZC.RESCALE(3.2E44,0.84,"luminosity","W7-BAO")', "RESCALE", 3.2e44, 0.84, "luminosity", "W7-BAO"), "0.000E+00", "3.2e44 erg/s published under W7-BAO, restated"],
+  ["L from a W7-BAO paper [erg/s]", zc('ZC.RESCALE(3.2E44,0.84,"luminosity","W7-BAO")', "RESCALE", 3.2e44, 0.84, "luminosity", "W7-BAO"), "0.000E+00", "3.2e44 erg/s published under W7-BAO (WMAP seven-year + BAO + H0), restated"],
   ["Σ_cr, lens 0.35, sources 1.2 [Msun/pc2]", zc("ZC.SIGMA_CRIT(0.35,1.2)", "SIGMA_CRIT", 0.35, 1.2), "0", "critical surface density"],
   ["R_500c of 2e14 Msun at z = 0.3 [kpc]", zc('ZC.HALO_RADIUS(2E14,0.3,"500c")', "HALO_RADIUS", 2e14, 0.3, "500c"), "0", "radius at 500 ρ_crit(z)"],
   ["Δ_vir at z = 0.3", zc('ZC.OVERDENSITY(0.3,"vir")', "OVERDENSITY", 0.3, "vir"), "0.0", "Bryan & Norman 1998, relative to ρ_crit(z)"],
   ["D(z = 1) / D(0)", zc("ZC.GROWTH(1)", "GROWTH", 1), "0.0000", "linear growth factor"],
   ["f(z = 0.5)", zc("ZC.GROWTH_RATE(0.5)", "GROWTH_RATE", 0.5), "0.0000", "linear growth rate dlnD/dlna"],
-  ["Σ of 24.1 mag/arcsec² at z = 0.6 [Lsun/pc2]", zc("ZC.SURFACE_LUM(24.1,0.6,4.65,0.4)", "SURFACE_LUM", 24.1, 0.6, 4.65, 0.4), "0.00", "M☉ = 4.65, K = 0.4; dimming removed"],
+  // the Sun's absolute magnitude in V, Vega system: 4.81 (Willmer 2018, ApJS 236, 47, abstract and Table 3)
+  ["Σ_V of μ_V = 24.1 mag/arcsec² at z = 0.6 [Lsun/pc2 in V]", zc("ZC.SURFACE_LUM(24.1,0.6,4.81,0.4)", "SURFACE_LUM", 24.1, 0.6, 4.81, 0.4), "0.00", "V band, Vega system: M☉,V = 4.81 (Willmer 2018, ApJS 236, 47), K = 0.4; dimming removed"],
 ];
 structureRows.forEach(([label, value, format, how], i) => {
   structure.getCell(`A${i + 3}`).value = label;
   structure.getCell(`B${i + 3}`).value = value;
   structure.getCell(`B${i + 3}`).numFmt = format;
   structure.getCell(`C${i + 3}`).value = how;
+  structure.getCell(`C${i + 3}`).alignment = { horizontal: "left", indent: 1 }; // apart from the number before it
 });
-structure.getCell(`A${structureRows.length + 4}`).value = "Cached values computed under P18-CMB.";
+structure.getCell(`A${structureRows.length + 4}`).value = `Column B: cached values computed under ${modelInWords(defaultModelSpec)}.`;
 // every label and value shows in full (a value too wide for its column shows as ###)
 structure.getColumn("A").width = Math.max(...structureRows.map(([label]) => label.length)) + 2;
 structure.getColumn("B").width = 12;
 structure.getCell("B2").alignment = { horizontal: "right" };
+printSetup(structure, 2, defaultModelSpec);
 
 // Populations: an INVENTED sample (log10 L, V_max, distance moduli made up for the tour) for the binned
 // luminosity function and the χ² of a Hubble diagram. LUMINOSITY_FUNCTION returns a table; as on the
@@ -233,7 +303,7 @@ structure.getCell("B2").alignment = { horizontal: "right" };
 // dynamic arrays, the one formula spills the same table.
 const populations = workbook.addWorksheet("Populations (invented)");
 populations.addRow(["INVENTED sample for the luminosity-function and Hubble-diagram recipes: made up, not measurements."]);
-const populationHeaders = ["source", "z", "log10 L [erg/s]", "V_max [Mpc3]", "μ [mag]", "σ_μ [mag]"];
+const populationHeaders = ["source", "z", "log10 L_bol [erg/s]", "V_max [Mpc3]", "μ [mag]", "σ_μ [mag]"];
 //   source    z       log10 L  V_max [Mpc3]  μ [mag]  σ_μ [mag]   (all invented)
 const sample: [string, number, number, number, number, number][] = [
   ["POP-01",   0.031,  42.12,   3.1e5,        35.88,   0.15],
@@ -251,9 +321,9 @@ populations.addRow(populationHeaders);
 for (const row of sample) populations.addRow(row);
 const lastSample = 2 + sample.length; // rows 3 … 12
 const edges = [42, 42.5, 43, 43.5, 44, 44.5];
-populations.getCell("H2").value = "bin edges (log10 L)";
+populations.getCell("H2").value = "edges [log10 erg/s]";
 edges.forEach((edge, i) => (populations.getCell(`H${i + 3}`).value = edge));
-const tableHeaders = ["low", "high", "N", "Φ [Mpc-3 dex-1]", "σ_Φ [Mpc-3 dex-1]"];
+const tableHeaders = ["low [log10 erg/s]", "high [log10 erg/s]", "N (sources)", "Φ [Mpc-3 dex-1]", "σ_Φ [Mpc-3 dex-1]"];
 tableHeaders.forEach((header, i) => (populations.getCell(2, 10 + i).value = header)); // J2:N2
 const column = (k: number) => sample.map((row) => [row[k]]);
 const lfFormula = `ZC.LUMINOSITY_FUNCTION($C$3:$C$${lastSample},$D$3:$D$${lastSample},$H$3:$H$${2 + edges.length})`;
@@ -268,22 +338,24 @@ const chi2Models = ["P18-CMB", "W9-ALL", "EDS"];
 populations.getCell(`A${chiRow - 1}`).value = "χ² of the Hubble diagram (offset minimised), by model";
 chi2Models.forEach((spec, i) => {
   populations.getCell(`A${chiRow + i}`).value = spec;
+  // the model in words, beside its χ², wrapped within the first page's columns (C:H)
+  populations.getCell(`C${chiRow + i}`).value = modelInWords(spec);
+  populations.mergeCells(`C${chiRow + i}:H${chiRow + i}`);
+  populations.getCell(`C${chiRow + i}`).alignment = { horizontal: "left", indent: 1, wrapText: true, vertical: "top" };
+  populations.getRow(chiRow + i).height = 30;
+  populations.getCell(`A${chiRow + i}`).alignment = { vertical: "top" };
   const formula = `ZC.CHI2_MODULUS(B3:B${lastSample},E3:E${lastSample},F3:F${lastSample},A${chiRow + i})`;
   populations.getCell(`B${chiRow + i}`).value = zc(formula, "CHI2_MODULUS", column(1), column(4), column(5), spec);
   populations.getCell(`B${chiRow + i}`).numFmt = "0.00";
+  populations.getCell(`B${chiRow + i}`).alignment = { vertical: "top" };
 });
 formatColumns(populations, 2, { B: fmt.z, C: fmt.mag, D: fmt.sci, E: fmt.mag, F: fmt.mag }, [3, lastSample]);
 formatColumns(populations, 2, { H: "0.0" }, [3, 2 + edges.length]);
 formatColumns(populations, 2, { J: "0.0", K: "0.0", L: "0", M: fmt.sci, N: fmt.sci }, [3, 2 + lf.length]);
 populations.getColumn("A").width = 12;
-populations.getCell(`A${chiRow + chi2Models.length + 1}`).value = "Cached values computed under P18-CMB (the χ² under the model in column A).";
-
-// Printed (or rendered to PDF by another reader), each sheet is one page wide, in landscape: a table
-// split across pages by columns is hard to read.
-for (const ws of workbook.worksheets) {
-  const pagesWide = Math.ceil(ws.columnCount / 12); // about 12 columns a landscape page stay legible
-  ws.pageSetup = { ...ws.pageSetup, orientation: "landscape", fitToPage: true, fitToWidth: pagesWide, fitToHeight: 0 };
-}
+populations.getCell(`A${chiRow + chi2Models.length + 1}`).value =
+  "Cached values: each χ² under the model in its row; the luminosity function needs no model (V_max is given).";
+printSetup(populations, 2, "the model in column A for each χ² (P18-CMB, W9-ALL, EDS)", false);
 
 const out = fileURLToPath(new URL("../demo/", import.meta.url));
 mkdirSync(out, { recursive: true });

@@ -1,11 +1,11 @@
 // npm start: build (production, with source maps beside it), serve it at https://localhost:3000
 // with a development certificate, and print how to load it into Excel. A second npm start while
 // our server runs says so; a port held by another program is an error, never a false success.
-import { execFileSync, spawn, spawnSync } from "node:child_process";
+import { execFileSync, spawn } from "node:child_process";
 import { chmodSync, existsSync, mkdirSync, openSync, readFileSync, writeFileSync } from "node:fs";
 import { platform } from "node:os";
 import { join } from "node:path";
-import { nssTrustSteps, selfSignedLeaf } from "./devCertificate.mjs";
+import { has, nssTrustSteps, selfSignedLeaf, systemTrustStep } from "./devCertificate.mjs";
 import { isZcellServer, pidFile, portTaken, recordedPid, serverConfig, servedPid } from "./serverState.mjs";
 
 const { root, port, stateDir, dist } = serverConfig;
@@ -34,8 +34,6 @@ if (process.env.ZCELL_NO_BUILD !== "1") {
     stdio: ["ignore", "ignore", "inherit"],
   });
 }
-
-const has = (cmd) => spawnSync("sh", ["-c", `command -v ${cmd}`], { stdio: "ignore" }).status === 0;
 
 /** The Office dev-certs tooling where it can install its CA; otherwise a self-signed leaf of our own. */
 async function certificate() {
@@ -87,7 +85,7 @@ if (ca) {
 The certificate is self-signed (${cert}). Trust it once:
 ${nssTrustSteps(cert, false)}
   Other programs on Debian/Ubuntu (system store):
-    sudo cp "${cert}" /usr/local/share/ca-certificates/zcell-localhost.crt && sudo update-ca-certificates
+${systemTrustStep(cert)}
   Or open ${url}manifest.xml in the browser you use for Excel and accept the warning.`);
 }
 if (platform() === "win32" || platform() === "darwin") {

@@ -1,8 +1,9 @@
 /**
- * The "Freeze" panel. Freeze replaces the selection's ZC formulas by their values and attaches to
- * each cell a note with the formula, the model and the zcell version; Thaw reads those notes and
- * writes the formulas back, on any Excel version. Excel's Undo is promised only where the host can
- * record the freeze as one undo step (ExcelApi 1.20).
+ * The "Values" panel (called Freeze/Thaw before 0.3.0; the code keeps those words). "Replace with
+ * values" (freeze) replaces the selection's ZC formulas by their values and attaches to each cell a
+ * note with the formula, the model and the zcell version; "Restore formulas" (thaw) reads those notes
+ * and writes the formulas back, on any Excel version. Excel's Undo is promised only where the host
+ * can record the replacement as one undo step (ExcelApi 1.20).
  */
 import { readActiveModel } from "../functions/activeModel.js";
 import { zcellVersion } from "../functions/describeModel.js";
@@ -27,8 +28,8 @@ function cellsOf(selection: { address: string; formulas: unknown[][]; values: un
 /** What the panel says about Undo, true to the host it runs in. */
 function undoSentence(): string {
   return undoGroupSupported()
-    ? "Undo: Excel's Undo (Ctrl+Z / ⌘Z) reverts a freeze in one step here; Thaw below works at any time, in any Excel."
-    : "Undo: this Excel cannot record an add-in's changes as one undo step (that needs ExcelApi 1.20), so do not count on Ctrl+Z; Thaw below brings frozen formulas back.";
+    ? "Undo: Excel's Undo (Ctrl+Z / ⌘Z) reverts a replacement in one step here; Restore formulas below works at any time, in any Excel."
+    : "Undo: this Excel cannot record an add-in's changes as one undo step (that needs ExcelApi 1.20), so do not count on Ctrl+Z; Restore formulas below brings the formulas back.";
 }
 
 /** Wires Freeze (with its confirmation) and Thaw. */
@@ -52,18 +53,18 @@ export function setupFreeze(): void {
         frozen.push({ address: cell.address, value: cell.value, note: provenanceNote(String(cell.formula), models, zcellVersion, today) });
       }
       if (frozen.length === 0) {
-        status.textContent = "The selection has no ZC formulas to freeze.";
+        status.textContent = "The selection has no ZC formulas to replace.";
         return;
       }
       pending = { sheet, cells: frozen };
       const n = frozen.length;
       $("freeze-confirm-text").textContent =
         `Replace ${plural(n, "ZC formula")} by ${n === 1 ? "its value" : "their values"}, with a provenance note on each? ` +
-        (undoGroupSupported() ? "Excel's Undo reverts it in one step; Thaw brings them back later." : "Thaw brings them back later.");
+        (undoGroupSupported() ? "Excel's Undo reverts it in one step; Restore formulas brings them back later." : "Restore formulas brings them back later.");
       $("freeze-confirm").hidden = false;
       $("freeze-go").focus();
     } catch (e) {
-      status.textContent = `Not frozen: ${(e as Error).message}`;
+      status.textContent = `Not replaced: ${(e as Error).message}`;
     }
   });
 
@@ -74,11 +75,11 @@ export function setupFreeze(): void {
       const undo = oneUndoStep
         ? "Excel's Undo reverts it in one step."
         : undoGroupSupported()
-          ? "Excel could not record it as one undo step; Thaw brings the formulas back."
-          : "Thaw brings the formulas back.";
-      status.textContent = `Froze ${plural(pending.cells.length, "cell")}; formula, model and version are in each cell's ${carrier}. ${undo}`;
+          ? "Excel could not record it as one undo step; Restore formulas brings them back."
+          : "Restore formulas brings them back.";
+      status.textContent = `Replaced ${plural(pending.cells.length, "cell")} with values; formula, model and version are in each cell's ${carrier}. ${undo}`;
     } catch (e) {
-      status.textContent = `Not frozen: ${(e as Error).message}`;
+      status.textContent = `Not replaced: ${(e as Error).message}`;
     }
     pending = undefined;
     $("freeze-confirm").hidden = true;
@@ -87,7 +88,7 @@ export function setupFreeze(): void {
   $("freeze-cancel").addEventListener("click", () => {
     pending = undefined;
     $("freeze-confirm").hidden = true;
-    status.textContent = "Nothing frozen.";
+    status.textContent = "Nothing replaced.";
   });
 
   setupThaw();
@@ -142,8 +143,8 @@ function setupThaw(): void {
       const refusedText = refused.length ? ` ${plural(refused.length, "cell")} not restored, listed below.` : "";
       if (restoring.length === 0) {
         thawStatus.textContent = refused.length
-          ? `Nothing to thaw:${refusedText}`
-          : "The selection has no frozen cells (cells whose note zcell wrote when freezing).";
+          ? `Nothing to restore:${refusedText}`
+          : "The selection has no cells that zcell replaced with values (cells with the note zcell writes then).";
         return;
       }
       pending = { sheet, cells: restoring };
@@ -155,7 +156,7 @@ function setupThaw(): void {
       $("thaw-confirm").hidden = false;
       $("thaw-go").focus();
     } catch (e) {
-      thawStatus.textContent = `Not thawed: ${(e as Error).message}`;
+      thawStatus.textContent = `Not restored: ${(e as Error).message}`;
     }
   });
 
@@ -168,16 +169,16 @@ function setupThaw(): void {
       const now = readActiveModel().spec;
       const moved = thawing.cells.filter((c) => c.models.length > 0 && !c.models.includes(now)).length;
       thawStatus.textContent =
-        `Thawed ${plural(thawing.cells.length, "cell")}: the ZC formulas are back and their notes removed. ` +
+        `Restored ${plural(thawing.cells.length, "cell")}: the ZC formulas are back and their notes removed. ` +
         `They compute under the workbook's model (${now}) unless they name their own` +
-        (moved ? `; ${moved} of them had been frozen under another model, so their values may change.` : ".");
+        (moved ? `; ${moved} of them had been replaced with values under another model, so their values may change.` : ".");
     } catch (e) {
-      thawStatus.textContent = `Not thawed: ${(e as Error).message}`;
+      thawStatus.textContent = `Not restored: ${(e as Error).message}`;
     }
   });
 
   $("thaw-cancel").addEventListener("click", () => {
     hideConfirm();
-    thawStatus.textContent = "Nothing thawed.";
+    thawStatus.textContent = "Nothing restored.";
   });
 }

@@ -3,9 +3,20 @@
  * ZC formula is in the stored spelling `_xldudf_ZC_…` (how Excel saves an add-in function; see
  * ../shared notes and OfficeDev/office-js issue 3558), every formula cell has a cached value, and the
  * README's tour describes the file as it is.
+ *
+ * On paper: every sheet defines print titles (`_xlnm.Print_Titles`: its header row, and column A
+ * where it labels the rows), a page header with the sheet's name and "computed under <model> by zcell
+ * <version>", headers that give unit and band or convention, no text cut at its column width (by a
+ * character-width estimate from the file), and the model of each sheet's results in words beside
+ * them. Where LibreOffice (soffice) and poppler-utils are installed, the workbook is also rendered as
+ * `npm run render:demo` does and the pages are read back: each page's header, the titles repeated on
+ * every page of a sheet that spans pages, every header whole. LibreOffice is not in CI (.ci/run does
+ * not install it): there only the checks of the file run, and the rendering check is skipped with a hint.
  */
 import { execFileSync } from "node:child_process";
-import { readFileSync } from "node:fs";
+import { mkdtempSync, readFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import JSZip from "jszip";
 import { beforeAll, describe, expect, test } from "vitest";
@@ -13,13 +24,22 @@ import { parseStrictXml, type ManifestElement as XmlElement } from "../scripts/c
 import { publishedModels } from "./fixtures.js";
 import { SlowCosmology } from "./reference/slowCosmology.js";
 import { storedFormula } from "../functions/storedFormula.js";
+import { zcellVersion } from "../functions/describeModel.js";
+import { pageTexts, renderPdf, renderToolsMissing, sheetOfPage } from "../scripts/renderDemo.mjs";
 import { expectRelative } from "./helpers.js";
 
 const root = fileURLToPath(new URL("..", import.meta.url));
 
-interface SheetCell { formula?: string; formulaType?: string; formulaRef?: string; value?: string; type?: string; numFmtId?: number }
+interface SheetCell {
+  formula?: string; formulaType?: string; formulaRef?: string; value?: string; type?: string; numFmtId?: number;
+  /** The cell style's alignment. */
+  horizontal?: string; wrap?: boolean;
+}
 /** Sheet name → cell address → formula, cached value text and cell type, from the raw sheet XML. */
 const sheets = new Map<string, Map<string, SheetCell>>();
+/** How a sheet prints and its column widths (in the default font's digits), from the raw XML. */
+interface SheetLayout { widths: Map<number, number>; defaultWidth: number; header: string; footer: string; merged: string[]; printTitles?: string }
+const layouts = new Map<string, SheetLayout>();
 
 const textOf = (e: XmlElement | undefined): string | undefined => (e ? e.text + e.children.map((c) => textOf(c)).join("") : undefined);
 
@@ -33,8 +53,12 @@ beforeAll(async () => {
     : [];
   // the number format of each cell style (styles.xml cellXfs; numFmtId 0 is General)
   const styles = parseStrictXml(await zip.file("xl/styles.xml")!.async("string"));
-  const formatOfStyle = styles.children.find((c) => c.name === "cellXfs")!.children.map((xf) => Number(xf.attributes.numFmtId ?? 0));
-  for (const s of book.children.find((c) => c.name === "sheets")!.children) {
+  const xfs = styles.children.find((c) => c.name === "cellXfs")!.children;
+  const formatOfStyle = xfs.map((xf) => Number(xf.attributes.numFmtId ?? 0));
+  const alignmentOfStyle = xfs.map((xf) => xf.children.find((c) => c.name === "alignment")?.attributes ?? {});
+  const definedNames = book.children.find((c) => c.name === "definedNames")?.children ?? [];
+  const sheetList = book.children.find((c) => c.name === "sheets")!.children;
+  for (const [index, s] of sheetList.entries()) {
     const target = rels.children.find((r) => r.attributes.Id === s.attributes["r:id"])!.attributes.Target;
     const xml = parseStrictXml(await zip.file(`xl/${target.replace(/^\/xl\//, "")}`)!.async("string"));
     const cells = new Map<string, SheetCell>();
@@ -43,10 +67,30 @@ beforeAll(async () => {
         const f = c.children.find((x) => x.name === "f");
         const v = c.children.find((x) => x.name === "v");
         const value = c.attributes.t === "s" ? strings[Number(textOf(v))] : c.attributes.t === "inlineStr" ? textOf(c) : textOf(v);
-        cells.set(c.attributes.r, { formula: textOf(f), formulaType: f?.attributes.t, formulaRef: f?.attributes.ref, value, type: c.attributes.t, numFmtId: formatOfStyle[Number(c.attributes.s ?? 0)] });
+        const style = Number(c.attributes.s ?? 0);
+        const { horizontal, wrapText } = alignmentOfStyle[style];
+        cells.set(c.attributes.r, {
+          formula: textOf(f), formulaType: f?.attributes.t, formulaRef: f?.attributes.ref, value, type: c.attributes.t, numFmtId: formatOfStyle[style],
+          horizontal, wrap: wrapText === "1",
+        });
       }
     }
     sheets.set(s.attributes.name, cells);
+    const child = (name: string) => xml.children.find((c) => c.name === name);
+    const widths = new Map<number, number>();
+    for (const col of child("cols")?.children ?? []) {
+      for (let n = Number(col.attributes.min); n <= Number(col.attributes.max); n++) widths.set(n, Number(col.attributes.width));
+    }
+    const headerFooter = child("headerFooter");
+    layouts.set(s.attributes.name, {
+      widths,
+      // without <sheetFormatPr defaultColWidth>, a column is 8.43 digits wide (Excel's default width, from memory)
+      defaultWidth: Number(child("sheetFormatPr")?.attributes.defaultColWidth ?? 8.43),
+      header: textOf(headerFooter?.children.find((c) => c.name === "oddHeader")) ?? "",
+      footer: textOf(headerFooter?.children.find((c) => c.name === "oddFooter")) ?? "",
+      merged: (child("mergeCells")?.children ?? []).map((m) => m.attributes.ref),
+      printTitles: textOf(definedNames.find((d) => d.attributes.name === "_xlnm.Print_Titles" && Number(d.attributes.localSheetId) === index)),
+    });
   }
 });
 
@@ -65,7 +109,7 @@ describe("demo workbook, read as Excel reads it", () => {
 
   test("every formula calls ZC in the stored spelling, never the bare ZC. name", () => {
     const all = formulaCells();
-    expect(all.length).toBe(12 * 6 + 1 + 8 * 3 + 1 + 8 * 15 + 1 + 9 + 5 * 5 + 3);
+    expect(all.length).toBe(12 * 6 + 1 + 8 * 3 + 2 + 8 * 15 + 1 + 9 + 5 * 5 + 3);
     for (const c of all) {
       expect(c.formula, `${c.sheet}!${c.address}`).not.toMatch(/(^|[^_\w])ZC\./);
       // the one formula without ZC is the sum of the 1/V_max weights
@@ -90,7 +134,7 @@ describe("demo workbook, read as Excel reads it", () => {
   test("every formula cell carries a cached value: a finite number, or text for DESCRIBE", () => {
     for (const c of formulaCells()) {
       expect(c.value, `${c.sheet}!${c.address}`).toBeDefined();
-      if (c.type === "str") expect(c.formula).toBe("_xldudf_ZC_DESCRIBE()");
+      if (c.type === "str") expect(c.formula).toMatch(/^_xldudf_ZC_DESCRIBE\((\$A\$1:\$B\$3)?\)$/);
       else expect(Number.isFinite(Number(c.value)), `${c.sheet}!${c.address} = ${c.value}`).toBe(true);
     }
   });
@@ -114,19 +158,21 @@ describe("demo workbook, read as Excel reads it", () => {
   });
 
   test("the README's what-if and model-in-cells descriptions match the file", () => {
-    const readme = readFileSync(`${root}README.md`, "utf8");
+    const readme = readFileSync(`${root}README.md`, "utf8").replace(/\s+/g, " ");
     const whatIf = sheets.get("What-if")!;
-    expect(["B1", "C1", "D1"].map((a) => whatIf.get(a)!.value)).toEqual(["P18-CMB", "W9-ALL", "P18-CMB; H0=73"]);
-    expect(readme).toContain("the models `P18-CMB`, `W9-ALL` and `P18-CMB; H0=73` in B1:D1");
-    const [, typed] = /in B2:D9 one formula per cell, `=([^`]+)`/.exec(readme)!;
-    expect(whatIf.get("B2")!.formula).toBe(storedFormula(typed));
-    for (const column of ["B", "C", "D"]) for (let r = 2; r <= 9; r++) {
-      expect(whatIf.get(`${column}${r}`)!.formula).toBe(storedFormula(`ZC.DIST_LUM($A${r},${column}$1)`));
+    expect(["B2", "C2", "D2"].map((a) => whatIf.get(a)!.value)).toEqual(["P18-CMB", "W9-ALL", "P18-CMB; H0=73"]);
+    expect(readme).toContain("the models `P18-CMB`, `W9-ALL` and `P18-CMB; H0=73` in B2:D2 (each in words, with its source, in F3:F5)");
+    const [, typed] = /B3:D10 one formula per cell, `=([^`]+)`/.exec(readme)!;
+    expect(whatIf.get("B3")!.formula).toBe(storedFormula(typed));
+    for (const column of ["B", "C", "D"]) for (let r = 3; r <= 10; r++) {
+      expect(whatIf.get(`${column}${r}`)!.formula).toBe(storedFormula(`ZC.DIST_LUM($A${r},${column}$2)`));
     }
-    expect(whatIf.get("A10")).toBeUndefined();
-    expect(readme).toContain("spills the same 8×3 table");
-    const [, inCells] = /passed as\n`model` is one model: `=([^`]+)` in B6/.exec(readme)!;
+    expect(whatIf.get("A11")).toBeUndefined();
+    expect(readme).toContain("`=ZC.DIST_LUM(A3:A10,B2:D2)` spills the same 8×3 table");
+    const [, inCells] = /passed as `model` is one model: `=([^`]+)` in B6/.exec(readme)!;
     expect(sheets.get("Model in cells")!.get("B6")!.formula).toBe(storedFormula(inCells));
+    const [, described] = /`=([^`]+)` in D6 writes the model in words/.exec(readme)!;
+    expect(sheets.get("Model in cells")!.get("D6")!.formula).toBe(storedFormula(described));
   });
 
   test("the README's recipes table names the recipe sheet's headers (row 2) and formulas (row 3)", () => {
@@ -230,5 +276,232 @@ describe("demo workbook, read as Excel reads it", () => {
     for (let r = 3; r <= 14; r++) {
       expectRelative(Number(cells.get(`F${r}`)!.value), p18.luminosityDistanceMpc(Number(cells.get(`B${r}`)!.value)), 1e-9, `F${r}`);
     }
+  });
+});
+
+/** What each sheet's printed pages must say: the model(s) in the page header, the print titles. */
+const paper: Record<string, { models: string; headerRow: number; labelColumn: boolean }> = {
+  // sheet                    models as the page header gives them                               header row  column A labels every row
+  "Catalogue (invented)":   { models: "P18-CMB",                                                  headerRow: 2, labelColumn: true },
+  "What-if":                { models: "P18-CMB, W9-ALL and P18-CMB; H0=73 (one a column)",        headerRow: 2, labelColumn: true },
+  "Model in cells":         { models: "H0=70; Om=0.3; OL=0.7 (no radiation)",                     headerRow: 5, labelColumn: true },
+  "Recipes (invented)":     { models: "P18-CMB",                                                  headerRow: 2, labelColumn: true },
+  "Structure (invented)":   { models: "P18-CMB",                                                  headerRow: 2, labelColumn: true },
+  "Populations (invented)": { models: "the model in column A for each χ² (P18-CMB, W9-ALL, EDS)", headerRow: 2, labelColumn: false },
+};
+
+const columnNumberOf = (letters: string) => [...letters].reduce((n, c) => n * 26 + c.charCodeAt(0) - 64, 0);
+const columnLetters = (n: number): string => (n > 26 ? columnLetters(Math.floor((n - 1) / 26)) : "") + String.fromCharCode(65 + ((n - 1) % 26));
+const split = (address: string) => {
+  const [, letters, row] = /^([A-Z]+)(\d+)$/.exec(address)!;
+  return { col: columnNumberOf(letters), row: Number(row) };
+};
+
+/**
+ * A text's width in digits of the default font (Calibri 11, which the workbook names), by character
+ * class, on the wide side: narrow i, l and punctuation, wide m, w, capitals and symbols, plus about one
+ * digit of cell padding (proportions from memory of the font; LibreOffice's substitute font, wider
+ * still, is checked by the rendering test below).
+ */
+function estimatedWidth(text: string): number {
+  let width = 1;
+  for (const ch of text) {
+    if (/[ijlI.,:;'|!]/.test(ch)) width += 0.45;
+    else if (/[ftr()[\]/\- ]/.test(ch)) width += 0.6;
+    else if (/[mwMWΣΦ%@]/.test(ch)) width += 1.5;
+    else if (/[A-ZΔ]/.test(ch)) width += 1.2;
+    else width += 1.05;
+  }
+  return width;
+}
+
+/** Text cells that cannot spill into the next cell (it holds something), so their column must hold them: sheet → addresses. */
+function cellsThatMustFit(): { sheet: string; address: string; text: string; width: number }[] {
+  const out: { sheet: string; address: string; text: string; width: number }[] = [];
+  for (const [sheet, cells] of sheets) {
+    const layout = layouts.get(sheet)!;
+    const inMerge = (col: number, row: number) =>
+      layout.merged.some((ref) => {
+        const [a, b] = ref.split(":").map(split);
+        return col >= a.col && col <= b.col && row >= a.row && row <= b.row;
+      });
+    for (const [address, c] of cells) {
+      if (c.formula !== undefined || c.type !== "s" || c.wrap || !c.value) continue;
+      const { col, row } = split(address);
+      if (inMerge(col, row)) continue;
+      // text spills to the right (to the left when right-aligned) while the next cell is empty
+      const next = `${columnLetters(c.horizontal === "right" ? col - 1 : col + 1)}${row}`;
+      const blocked = c.horizontal === "right" ? col > 1 && cells.has(next) : cells.has(next);
+      if (!blocked) continue;
+      out.push({ sheet, address, text: c.value, width: layout.widths.get(col) ?? layout.defaultWidth });
+    }
+  }
+  return out;
+}
+
+describe("demo workbook on paper", () => {
+  test("every sheet prints its header row, and column A where it labels the rows, on every page (print titles)", () => {
+    for (const [sheet, want] of Object.entries(paper)) {
+      const quoted = `'${sheet}'`;
+      const rows = `${quoted}!$${want.headerRow}:$${want.headerRow}`;
+      expect(layouts.get(sheet)!.printTitles, sheet).toBe(want.labelColumn ? `${quoted}!$A:$A,${rows}` : rows);
+    }
+  });
+
+  test("every page's header names the sheet and the model its values were computed under, with zcell's version; the footer numbers the pages", () => {
+    // Excel's header codes: &L left, &R right, &A the sheet's name, &P page, &N pages ("&&" is a literal &)
+    for (const [sheet, want] of Object.entries(paper)) {
+      expect(layouts.get(sheet)!.header, sheet).toBe(`&L&A&Rcomputed under ${want.models} by zcell ${zcellVersion}`);
+      expect(layouts.get(sheet)!.footer, sheet).toBe("&RPage &P of &N");
+    }
+  });
+
+  test.each([
+    // sheet                   cell    header: quantity, unit, and band or convention
+    ["Catalogue (invented)",   "C2",   "F_bol [erg/s/cm2]"],
+    ["Catalogue (invented)",   "D2",   "m (r, AB) [mag]"],
+    ["Catalogue (invented)",   "H2",   "L_bol [Lsun]"],
+    ["Catalogue (invented)",   "J2",   "K [mag], α = −0.5"],
+    ["Catalogue (invented)",   "K2",   "M (r, AB) [mag]"],
+    ["Recipes (invented)",     "B2",   "z (heliocentric)"],
+    ["Recipes (invented)",     "H2",   "α (S_ν ∝ ν^α)"],
+    ["Recipes (invented)",     "J2",   "F_bol err [erg/s/cm2]"],
+    ["Recipes (invented)",     "K2",   "m (r, AB) [mag]"],
+    ["Recipes (invented)",     "L2",   "m err [mag]"],
+    ["Recipes (invented)",     "N2",   "angle err [arcsec]"],
+    ["Recipes (invented)",     "R2",   "L_bol [erg/s]"],
+    ["Recipes (invented)",     "T2",   "M_bol [mag]"],
+    ["Recipes (invented)",     "W2",   "M (r, AB) [mag]"],
+    ["Recipes (invented)",     "AA2",  "z_max (flux limit)"],
+    ["Recipes (invented)",     "AC2",  "z_max (m limit)"],
+    ["Recipes (invented)",     "AA12", "Σ 1/V_max [Mpc-3]"],
+    ["Populations (invented)", "C2",   "log10 L_bol [erg/s]"],
+    ["Populations (invented)", "L2",   "N (sources)"],
+  ])("%s!%s reads %s", (sheet, address, header) => {
+    expect(sheets.get(sheet)!.get(address)!.value).toBe(header);
+  });
+
+  test("every header of a number column has its unit in brackets, or is a dimensionless quantity named as such", () => {
+    const dimensionless = /^(z\b|z_|α |N \(sources\)$)/;
+    for (const sheet of ["Catalogue (invented)", "Recipes (invented)", "Populations (invented)"]) {
+      const cells = sheets.get(sheet)!;
+      for (const [address, c] of cells) {
+        const { col, row } = split(address);
+        if (row !== paper[sheet].headerRow || col === 1 || c.type !== "s") continue;
+        const below = cells.get(`${columnLetters(col)}${row + 1}`);
+        if (below?.type === "s") continue; // a column of text (labels), not of numbers
+        expect(c.value, `${sheet}!${address}`).toMatch(dimensionless.test(c.value!) ? /./ : /\[[^\]]+\]/);
+      }
+    }
+  });
+
+  test("the width estimate finds the header that was cut before (Σ 1/V_max in an 11-digit column), and passes short ones", () => {
+    expect(estimatedWidth("Σ 1/V_max [Mpc-3]")).toBeGreaterThan(11);
+    expect(estimatedWidth("z_max")).toBeLessThan(11);
+  });
+
+  test("no text is cut at its column width: every text cell whose next cell is filled fits its column (by the width estimate)", () => {
+    const checked = cellsThatMustFit();
+    expect(checked.length).toBeGreaterThan(60); // every header row, and labels beside values
+    const cut = checked.filter((c) => estimatedWidth(c.text) > c.width).map((c) => `${c.sheet}!${c.address} "${c.text}": ~${estimatedWidth(c.text).toFixed(1)} > ${c.width}`);
+    expect(cut).toEqual([]);
+  });
+
+  test("each sheet says beside its results which model(s) they assume, in words", () => {
+    const at = (sheet: string, address: string) => sheets.get(sheet)!.get(address)?.value ?? "";
+    expect(at("Catalogue (invented)", "A16")).toBe("Every value above assumes:");
+    expect(sheets.get("Catalogue (invented)")!.get("B16")!.formula).toBe("_xldudf_ZC_DESCRIBE()");
+    // What-if: each model of row 2 in words with its source, W9-ALL too (Hinshaw et al. 2013, the preset's source)
+    expect(at("What-if", "F2")).toBe("The models of row 2, in words:");
+    expect(at("What-if", "F3")).toMatch(/^P18-CMB: H0 67\.36, Ωm 0\.3153 .*Planck 2018 VI/);
+    expect(at("What-if", "F4")).toMatch(/^W9-ALL: H0 69\.32, Ωm 0\.2865, massless ν, flat — WMAP nine-year, Hinshaw et al\. 2013/);
+    expect(at("What-if", "F5")).toBe("P18-CMB with H0 = 73 km/s/Mpc, all else as P18-CMB");
+    // Model in cells: radiation is off, said in words and by DESCRIBE of the block beside the result
+    expect(at("Model in cells", "E2")).toMatch(/no Tcmb, so radiation is off/);
+    expect(sheets.get("Model in cells")!.get("D6")!.formula).toBe("_xldudf_ZC_DESCRIBE($A$1:$B$3)");
+    expect(sheets.get("Model in cells")!.get("D6")!.value).toMatch(/no radiation \(Tcmb = 0: no photons, no neutrinos\)/);
+    // Recipes: the line sits in the first output column (O), under the outputs, not under the inputs
+    expect(at("Recipes (invented)", "O12")).toMatch(/^Columns O–AC: cached values computed under P18-CMB: H0 67\.36/);
+    expect([...sheets.get("Recipes (invented)")!.keys()].filter((a) => /^[A-N]1[1-9]$/.test(a))).toEqual([]);
+    expect(at("Structure (invented)", "A13")).toMatch(/^Column B: cached values computed under P18-CMB: H0 67\.36/);
+    for (const [row, model] of [[15, "P18-CMB"], [16, "W9-ALL"], [17, "EDS"]] as const) {
+      expect(at("Populations (invented)", `C${row}`)).toMatch(new RegExp(`^${model}: H0 `));
+    }
+  });
+
+  test("the surface-brightness example names the band and system of M☉, with its source", () => {
+    // M☉,V = 4.81 in the Vega system: Willmer 2018 (ApJS 236, 47), abstract ("MV = 4.81 … in the vegamag system")
+    const cells = sheets.get("Structure (invented)")!;
+    const row = [...cells].find(([, c]) => c.formula?.startsWith("_xldudf_ZC_SURFACE_LUM("))![0].replace(/^B/, "");
+    expect(cells.get(`B${row}`)!.formula).toBe("_xldudf_ZC_SURFACE_LUM(24.1,0.6,4.81,0.4)");
+    expect(cells.get(`A${row}`)!.value).toMatch(/μ_V = 24\.1 mag\/arcsec² .*\[Lsun\/pc2 in V\]/);
+    expect(cells.get(`C${row}`)!.value).toMatch(/^V band, Vega system: M☉,V = 4\.81 \(Willmer 2018, ApJS 236, 47\)/);
+  });
+});
+
+/** Where LibreOffice renders the workbook (not in CI: .ci/run does not install it). */
+const missingRenderTools = renderToolsMissing() as string[][];
+if (missingRenderTools.length) {
+  console.warn(`skipping the demo's rendering check: ${missingRenderTools.map(([tool, pkg]) => `${tool} (Debian ${pkg})`).join(", ")} not installed`);
+}
+
+describe.runIf(missingRenderTools.length === 0)("demo workbook rendered by LibreOffice, as npm run render:demo does", () => {
+  /** Text without spaces or line breaks, so that a header reads the same wherever the PDF breaks its words. */
+  const squeezed = (text: string) => text.replace(/\s+/g, "");
+  let pages: { sheet: string | undefined; text: string }[] = [];
+
+  beforeAll(() => {
+    const out = mkdtempSync(join(tmpdir(), "zcell-render-"));
+    const names = [...sheets.keys()];
+    pages = (pageTexts(renderPdf(`${root}demo/zcell-demo.xlsx`, out)) as string[]).map((text) => ({ sheet: sheetOfPage(text, names) as string | undefined, text }));
+  });
+
+  test("every page starts with its header: the sheet's name and the model its values were computed under; every sheet has pages", () => {
+    expect(pages.length).toBeGreaterThanOrEqual(Object.keys(paper).length);
+    pages.forEach(({ sheet, text }, i) => {
+      expect(sheet, `page ${i + 1}: ${text.slice(0, 80)}`).toBeDefined();
+      expect(text.split("\n")[0], `page ${i + 1}`).toBe(`${sheet} computed under ${paper[sheet!].models} by zcell ${zcellVersion}`);
+      expect(text, `page ${i + 1}`).toContain(`Page ${i + 1} of ${pages.length}`);
+    });
+    for (const sheet of Object.keys(paper)) expect(pages.some((p) => p.sheet === sheet), sheet).toBe(true);
+  });
+
+  test("a sheet printed on several pages repeats its header row, and its row labels where column A labels them, on every page", () => {
+    const spanning = Object.keys(paper).filter((sheet) => pages.filter((p) => p.sheet === sheet).length > 1);
+    expect(spanning).toContain("Recipes (invented)");
+    for (const sheet of spanning) {
+      const cells = sheets.get(sheet)!;
+      const { headerRow, labelColumn } = paper[sheet];
+      const headers = [...cells].filter(([a, c]) => split(a).row === headerRow && c.type === "s").map(([, c]) => squeezed(c.value!));
+      const labels = [...cells].filter(([a, c]) => split(a).col === 1 && split(a).row > headerRow && /^[A-Z]{3}-\d\d$/.test(c.value ?? "")).map(([, c]) => c.value!);
+      for (const [i, page] of pages.filter((p) => p.sheet === sheet).entries()) {
+        const text = squeezed(page.text);
+        expect(headers.filter((h) => text.includes(h)).length, `${sheet} page ${i + 1}: a header of row ${headerRow}`).toBeGreaterThan(1);
+        if (labelColumn) for (const label of [cells.get(`A${headerRow}`)!.value!, ...labels]) expect(text, `${sheet} page ${i + 1}`).toContain(label);
+      }
+    }
+  });
+
+  test("every header, and every text whose next cell is filled, shows whole (LibreOffice leaves out what a column cuts)", () => {
+    const shown = new Map<string, string>();
+    for (const p of pages) shown.set(p.sheet!, (shown.get(p.sheet!) ?? "") + squeezed(p.text));
+    const headers = [...sheets].flatMap(([sheet, cells]) =>
+      [...cells].filter(([a, c]) => split(a).row === paper[sheet].headerRow && c.type === "s" && c.value).map(([address, c]) => ({ sheet, address, text: c.value! })),
+    );
+    const cut = [...headers, ...cellsThatMustFit()].filter((c) => !shown.get(c.sheet)!.includes(squeezed(c.text))).map((c) => `${c.sheet}!${c.address} "${c.text}"`);
+    expect(cut).toEqual([]);
+  });
+
+  test("the check sees a cut header: a column too narrow for its header, beside a filled cell, leaves part of it out", async () => {
+    const { default: ExcelJS } = await import("exceljs");
+    const workbook = new ExcelJS.Workbook();
+    const ws = workbook.addWorksheet("Cut");
+    ws.addRow(["source", "a header far wider than its column [erg/s/cm2]", "next"]);
+    ws.getColumn("B").width = 11;
+    const out = mkdtempSync(join(tmpdir(), "zcell-cut-"));
+    await workbook.xlsx.writeFile(join(out, "cut.xlsx"));
+    const [text] = pageTexts(renderPdf(join(out, "cut.xlsx"), out)) as string[];
+    expect(squeezed(text)).toContain("source");
+    expect(squeezed(text)).not.toContain(squeezed("a header far wider than its column [erg/s/cm2]"));
   });
 });

@@ -99,7 +99,7 @@ describe("model spec text: the messages and the OL/Ok exchange", () => {
     [3 as never,          undefined, "model spec must be text"],
     ["H0=70=3",           undefined, "\"H0=70=3\" holds several keys: separate keys with ';', e.g. \"H0=70; Om=0.3; OL=0.7\""],
     ["=70",               undefined, "unknown key \"\": use H0, Om, OL, Ok, Ob, w0, wa, Tcmb, Neff, mnu"],
-    ["NOPE",              many,      "unknown preset \"NOPE\": use one of P18-CMB, P18-BAO, P15-EXT, W9-ALL, W7-BAO, DR2-CMB, DR2-CMB-PP, DR2-CMB-U3, DR2-CMB-DY5, CONCORDANCE, EDS, M0 … and 19 more"],
+    ["NOPE",              many,      "unknown preset \"NOPE\": use one of P18-CMB, P18-BAO, P15-EXT, W9-ALL, W7-BAO, DESI2-CMB, DESI2-CMB-PP, DESI2-CMB-U3, DESI2-CMB-DY5, CONCORDANCE, EDS, M0 … and 19 more"],
     ["H0=70; Om=0.3; mnu=1,2,3,4", undefined, "mnu: at most three masses, got 4"],
   ])("%j", (spec, named, message) => {
     expect(() => parseModelSpec(spec, named)).toThrow(new TypeError(message));

@@ -11,7 +11,7 @@ import { publishedModels } from "./fixtures.js";
 import { expectRelative } from "./helpers.js";
 import { SlowCosmology } from "./reference/slowCosmology.js";
 import { changedFields, derivedValues, formFromSpec, modelFromForm } from "../taskpane/modelForm.js";
-import { provenanceNote } from "../taskpane/provenanceNote.js";
+import { parseProvenanceNote, provenanceNote } from "../taskpane/provenanceNote.js";
 import { contrast } from "../taskpane/theme.js";
 import { columnName, columnNumber } from "../taskpane/cellAddress.js";
 import { chartTitle, planTableForColumn, planTableWithRedshifts, redshiftSteps, tableCounts } from "../taskpane/whatIfTable.js";
@@ -76,10 +76,24 @@ describe("what-if tables", () => {
 
 describe("provenance and contrast", () => {
   test("the note carries formula, every model and the version", () => {
-    const note = provenanceNote("=ZC.DIST_LUM(A2)", ["W9-ALL", "W9-ALL"], "0.1.0", "2026-12-01");
+    const note = provenanceNote("=ZC.DIST_LUM(A2)", ["W9-ALL", "W9-ALL"], "0.3.0", "2026-12-01");
     expect(note).toBe(
-      "Frozen by zcell 0.1.0 on 2026-12-01.\nFormula: \"=ZC.DIST_LUM(A2)\"\nModel: W9-ALL\nValue computed under that cosmology; recompute with the add-in if the model changes.",
+      "Replaced with its value by zcell 0.3.0 on 2026-12-01.\nFormula: \"=ZC.DIST_LUM(A2)\"\nModel: W9-ALL\nValue computed under that cosmology; recompute with the add-in if the model changes.",
     );
+    expect(parseProvenanceNote(note)).toEqual({ formula: "=ZC.DIST_LUM(A2)", models: ["W9-ALL"] });
+  });
+
+  test.each([
+    // a note as an earlier version wrote it (its pane called the action Freeze)                                                              | formula read back
+    ["0.2.0", 'Frozen by zcell 0.2.0 on 2026-03-02.\nFormula: "=ZC.DIST_LUM(A2, \\"W9-ALL\\")"\nModel: W9-ALL\nValue computed under that cosmology; recompute with the add-in if the model changes.', '=ZC.DIST_LUM(A2, "W9-ALL")'],
+    ["0.1.0", "Frozen by zcell 0.1.0 on 2025-11-20.\nFormula: =ZC.AGE(B3)\nModel: P18-BAO\nValue computed under that cosmology; recompute with the add-in if the model changes.",                 "=ZC.AGE(B3)"],
+  ])("a note written by zcell %s is still read", (_version, note, formula) => {
+    expect(parseProvenanceNote(note)?.formula).toBe(formula);
+  });
+
+  test("only our first line makes a note ours: a person's note that mentions zcell is not", () => {
+    expect(parseProvenanceNote('Replaced with its value by hand on 2026-01-01.\nFormula: "=ZC.AGE()"\nModel: W9-ALL')).toBeUndefined();
+    expect(parseProvenanceNote('Thawed by zcell 0.2.0 on 2026-01-01.\nFormula: "=ZC.AGE()"\nModel: W9-ALL')).toBeUndefined();
   });
 
   test.each([

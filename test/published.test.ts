@@ -2,9 +2,11 @@
 import { describe, expect, test } from "vitest";
 import { abZeroPointJy, solarLuminosityW } from "../core/units/constants.js";
 import { Cosmology } from "../core/distances/Cosmology.js";
-import { findPreset } from "../core/model/presets.js";
+import { findPreset, presets } from "../core/model/presets.js";
 import { abFluxDensityJy, abMagnitude, bolometricAbsoluteMagnitude, fluxWm2 } from "../core/observables/photometry.js";
 import { expectRelative } from "./helpers.js";
+import { sheetCalls } from "./sheetCalls.js";
+import { modelNameProblem } from "../functions/workbookModels.js";
 
 describe("Planck 2018 (A&A 641, A6, Table 2)", () => {
   // Posterior means, so compared at 2e-4 (ages) and 1e-3 (z_eq) relative.
@@ -56,9 +58,9 @@ describe("rules of thumb (common practice, no source)", () => {
 describe("DESI DR2 presets (DESI Collaboration 2025, arXiv:2503.14738)", () => {
   test.each([
     // preset        | H0    | Om     | w0      | wa     — the values the issue supplied, from memory and unverified (the paper's table could not be read)
-    ["DR2-CMB",       68.17,  0.3027,  -1,       0],
-    ["DR2-CMB-PP",    67.51,  0.3114,  -0.838,   -0.62],
-    ["DR2-CMB-U3",    65.91,  0.3275,  -0.667,   -1.09],
+    ["DESI2-CMB",     68.17,  0.3027,  -1,       0],
+    ["DESI2-CMB-PP",  67.51,  0.3114,  -0.838,   -0.62],
+    ["DESI2-CMB-U3",  65.91,  0.3275,  -0.667,   -1.09],
     ["DR2-CMB-DY5",   66.74,  0.3191,  -0.752,   -0.86],
   ])("%s: H0 %d, Om %d, w0 %d, wa %d, flat, and its description says the values are unverified", (name, H0, Om, w0, wa) => {
     const m = Cosmology.fromSpec(name);
@@ -68,5 +70,31 @@ describe("DESI DR2 presets (DESI Collaboration 2025, arXiv:2503.14738)", () => {
     const description = findPreset(name)!.description;
     expect(description).toContain("arXiv:2503.14738");
     expect(description).toContain("from memory, unverified");
+  });
+
+  test.each([
+    // name saved by 0.1 / 0.2 | read as      (the rename of 0.3.0, CHANGELOG)
+    ["DR2-CMB",                  "DESI2-CMB"],
+    ["DR2-CMB-PP",               "DESI2-CMB-PP"],
+    ["dr2-cmb-u3",               "DESI2-CMB-U3"],
+    ["DR2-CMB-DY5; H0=70",       "DESI2-CMB-DY5; H0=70"],
+  ])("a workbook's old name %s still reads, as the same parameters, and is written %s", (old, spec) => {
+    const m = Cosmology.fromSpec(old);
+    expect(m.spec).toBe(spec);
+    expect(m.parameters).toEqual(Cosmology.fromSpec(spec).parameters);
+    expect(findPreset(old.split(";")[0])!.description).toContain(`called ${old.split(";")[0].toUpperCase()} before zcell 0.3.0`);
+  });
+
+  test("a workbook saved with an old name: its formulas, its stored model and DESCRIBE give the new name", () => {
+    const sheet = sheetCalls("DR2-CMB-PP"); // the workbook's stored model, as 0.2 wrote it
+    expect(sheet.one("DESCRIBE")).toMatch(/^DESI2-CMB-PP: flat: matter \+ w0–wa dark energy \+ radiation; H0 = 67\.51 km\/s\/Mpc/);
+    expect(sheet.one("DESCRIBE", "DR2-CMB")).toMatch(/^DESI2-CMB: /);
+    expect(sheet.num("DIST_LUM", 1, "DR2-CMB")).toBe(sheet.num("DIST_LUM", 1, "DESI2-CMB"));
+    expect(modelNameProblem("dr2-cmb")).toBe('"DR2-CMB" is a built-in preset: choose another name'); // an old name is still taken
+  });
+
+  test("the list of presets and its message name only the new names", () => {
+    expect(presets.map((p) => p.name).filter((n) => n.includes("DESI2"))).toEqual(["DESI2-CMB", "DESI2-CMB-PP", "DESI2-CMB-U3", "DESI2-CMB-DY5"]);
+    expect(presets.some((p) => p.name.startsWith("DR2"))).toBe(false);
   });
 });

@@ -157,7 +157,7 @@ describe("linear growth", () => {
   test.each([
     // model                          | z
     ["P18-CMB",                         0.5],
-    ["DR2-CMB-DY5",                     1.2],   // w0–wa
+    ["DESI2-CMB-DY5",                   1.2],   // w0–wa
     ["H0=70; Om=0.3; OL=0.5",           0.8],   // open
     ["H0=70; Om=0.35; OL=0.8",          2],     // closed
   ])("%s at z = %d: f = −(1+z) dlnD/dz from a finite difference of GROWTH (rel ≤ 1e-6)", (model, z) => {

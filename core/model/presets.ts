@@ -17,10 +17,13 @@ export interface Preset {
   description: string;
   /** The parameters (flat unless OL is present). */
   parameters: ModelParameters;
+  /** Names this set had in earlier versions, still read in saved workbooks (a spec then shows `name`). */
+  formerNames?: readonly string[];
 }
 
-function preset(name: string, description: string, p: Omit<ModelParameters, "preset">): Preset {
-  return { name, description, parameters: { preset: name, ...p } };
+function preset(name: string, description: string, p: Omit<ModelParameters, "preset">, formerNames?: readonly string[]): Preset {
+  if (!formerNames) return { name, description, parameters: { preset: name, ...p } };
+  return { name, description: `${description}; called ${formerNames.join(", ")} before zcell 0.3.0`, parameters: { preset: name, ...p }, formerNames };
 }
 
 const planckNeff = 3.046;
@@ -32,7 +35,9 @@ export const defaultPresetName = "P18-CMB";
  * The presets by name, the default first. The names say the data combination: P18-CMB (Planck 2018
  * CMB with lensing, the values papers quote as "Planck 2018": the add-in's default), P18-BAO (Planck
  * 2018 CMB with lensing and BAO), P15-EXT (Planck 2015 with external data),
- * W9-ALL (WMAP nine-year with every external set), W7-BAO (WMAP seven-year with BAO and H0).
+ * W9-ALL (WMAP nine-year with every external set), W7-BAO (WMAP seven-year with BAO and H0), and
+ * DESI2-CMB… (the DESI collaboration's second data release, DR2, with the CMB and each supernova set;
+ * called DR2-CMB… in 0.1 and 0.2, names still read: "DR2" alone reads as another survey's release).
  */
 export const presets: readonly Preset[] = [
   preset(
@@ -65,24 +70,28 @@ export const presets: readonly Preset[] = [
   // (as each description says); Ob from Ωb h² = 0.02242 with the preset's h is ASSUMED (Planck 2018's
   // value, not the paper's); neutrinos as in the P18 sets. Check against the paper before publishing.
   preset(
-    "DR2-CMB",
+    "DESI2-CMB",
     "H0 68.17, Ωm 0.3027, ΛCDM, flat — DESI DR2 BAO + CMB, DESI Collaboration 2025, arXiv:2503.14738 (values from memory, unverified; Ob assumed)",
     { H0: 68.17, Om: 0.3027, Ob: 0.02242 / 0.6817 ** 2, w0: -1, wa: 0, Tcmb: 2.7255, Neff: planckNeff, mnu: [0.06] },
+    ["DR2-CMB"],
   ),
   preset(
-    "DR2-CMB-PP",
+    "DESI2-CMB-PP",
     "H0 67.51, Ωm 0.3114, w0 −0.838, wa −0.62, flat — DESI DR2 BAO + CMB + Pantheon+, DESI Collaboration 2025, arXiv:2503.14738 (values from memory, unverified; Ob assumed)",
     { H0: 67.51, Om: 0.3114, Ob: 0.02242 / 0.6751 ** 2, w0: -0.838, wa: -0.62, Tcmb: 2.7255, Neff: planckNeff, mnu: [0.06] },
+    ["DR2-CMB-PP"],
   ),
   preset(
-    "DR2-CMB-U3",
+    "DESI2-CMB-U3",
     "H0 65.91, Ωm 0.3275, w0 −0.667, wa −1.09, flat — DESI DR2 BAO + CMB + Union3, DESI Collaboration 2025, arXiv:2503.14738 (values from memory, unverified; Ob assumed)",
     { H0: 65.91, Om: 0.3275, Ob: 0.02242 / 0.6591 ** 2, w0: -0.667, wa: -1.09, Tcmb: 2.7255, Neff: planckNeff, mnu: [0.06] },
+    ["DR2-CMB-U3"],
   ),
   preset(
-    "DR2-CMB-DY5",
+    "DESI2-CMB-DY5",
     "H0 66.74, Ωm 0.3191, w0 −0.752, wa −0.86, flat — DESI DR2 BAO + CMB + DES Y5 supernovae, DESI Collaboration 2025, arXiv:2503.14738 (values from memory, unverified; Ob assumed)",
     { H0: 66.74, Om: 0.3191, Ob: 0.02242 / 0.6674 ** 2, w0: -0.752, wa: -0.86, Tcmb: 2.7255, Neff: planckNeff, mnu: [0.06] },
+    ["DR2-CMB-DY5"],
   ),
   preset(
     "CONCORDANCE",
@@ -96,8 +105,11 @@ export const presets: readonly Preset[] = [
   ),
 ];
 
-/** The preset with this name (case-insensitive), or undefined. */
+/**
+ * The preset with this name or a former name (case-insensitive), or undefined.
+ * @example findPreset("dr2-cmb")?.name // "DESI2-CMB"
+ */
 export function findPreset(name: string): Preset | undefined {
   const upper = name.toUpperCase();
-  return presets.find((p) => p.name === upper);
+  return presets.find((p) => p.name === upper || p.formerNames?.includes(upper));
 }

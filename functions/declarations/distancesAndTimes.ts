@@ -13,7 +13,8 @@ import { callFromSheet } from "../evaluate.js";
 /**
  * Luminosity distance D_L = (1+z) D_M (Hogg 1999), in Mpc unless a unit is given.
  * @customfunction DIST_LUM DIST_LUM
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#DIST_LUM
+ * @example =ZC.DIST_LUM(1)
  * @param z Redshift, ≥ 0 (value or range).
  * @param [model] Cosmology: preset name, model spec, or key/value block; blank = workbook's active model.
  * @param [unit] Output unit, default "Mpc" (e.g. "Gpc", "Gly", "m").
@@ -26,7 +27,8 @@ export function DIST_LUM(z: any[][], model?: any[][], unit?: string): any[][] {
 /**
  * Angular-diameter distance D_A = D_M / (1+z), in Mpc unless a unit is given.
  * @customfunction DIST_ANG DIST_ANG
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#DIST_ANG
+ * @example =ZC.DIST_ANG(1.5)
  * @param z Redshift, ≥ 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [unit] Output unit, default "Mpc".
@@ -39,7 +41,8 @@ export function DIST_ANG(z: any[][], model?: any[][], unit?: string): any[][] {
 /**
  * Line-of-sight comoving distance D_C, in Mpc unless a unit is given.
  * @customfunction DIST_LOS DIST_LOS
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#DIST_LOS
+ * @example =ZC.DIST_LOS(0.5, , "Mpc/h")
  * @param z Redshift, ≥ 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [unit] Output unit, default "Mpc".
@@ -52,7 +55,8 @@ export function DIST_LOS(z: any[][], model?: any[][], unit?: string): any[][] {
 /**
  * Transverse comoving distance D_M, in Mpc unless a unit is given.
  * @customfunction DIST_TRANS DIST_TRANS
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#DIST_TRANS
+ * @example =ZC.DIST_TRANS(2, "H0=70; Om=0.3; Ok=0.1")
  * @param z Redshift, ≥ 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [unit] Output unit, default "Mpc".
@@ -65,7 +69,8 @@ export function DIST_TRANS(z: any[][], model?: any[][], unit?: string): any[][] 
 /**
  * Angular-diameter distance of a source at z2 seen from z1 (lens to source), in Mpc.
  * @customfunction DIST_BETWEEN DIST_BETWEEN
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#DIST_BETWEEN
+ * @example =ZC.DIST_BETWEEN(0.35, 1.2)
  * @param z1 Redshift of the observer (e.g. a lens), ≥ 0 (value or range).
  * @param z2 Redshift of the source, ≥ z1 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
@@ -79,7 +84,8 @@ export function DIST_BETWEEN(z1: any[][], z2: any[][], model?: any[][], unit?: s
 /**
  * Light-travel distance: c times the look-back time, in Mpc unless a unit is given.
  * @customfunction DIST_LIGHT DIST_LIGHT
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#DIST_LIGHT
+ * @example =ZC.DIST_LIGHT(3, , "Gly")
  * @param z Redshift, ≥ 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [unit] Output unit, default "Mpc" (e.g. "Gly").
@@ -92,7 +98,8 @@ export function DIST_LIGHT(z: any[][], model?: any[][], unit?: string): any[][] 
 /**
  * Distance modulus μ = 5 log10(D_L / 10 pc), in magnitudes.
  * @customfunction MODULUS MODULUS
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#MODULUS
+ * @example =ZC.MODULUS(0.1)
  * @param z Redshift, > 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @returns Distance modulus (mag).
@@ -104,7 +111,8 @@ export function MODULUS(z: any[][], model?: any[][]): any[][] {
 /**
  * Look-back time to redshift z, in Gyr unless a unit is given.
  * @customfunction LOOKBACK LOOKBACK
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#LOOKBACK
+ * @example =ZC.LOOKBACK(2)
  * @param z Redshift, ≥ 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [unit] Output unit, default "Gyr" (e.g. "Myr", "yr").
@@ -117,7 +125,8 @@ export function LOOKBACK(z: any[][], model?: any[][], unit?: string): any[][] {
 /**
  * Age of the universe at redshift z (today if z is omitted), in Gyr unless a unit is given.
  * @customfunction AGE AGE
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#AGE
+ * @example =ZC.AGE()
  * @param [z] Redshift, ≥ 0 (value or range); omitted = today.
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [unit] Output unit, default "Gyr".
@@ -130,7 +139,8 @@ export function AGE(z?: any[][], model?: any[][], unit?: string): any[][] {
 /**
  * Hubble parameter H(z), in km/s/Mpc unless a unit is given.
  * @customfunction HUBBLE HUBBLE
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#HUBBLE
+ * @example =ZC.HUBBLE(1)
  * @param [z] Redshift, ≥ 0 (value or range); omitted = today (H0).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [unit] Output unit, default "km/s/Mpc" (e.g. "s-1").
@@ -143,7 +153,8 @@ export function HUBBLE(z?: any[][], model?: any[][], unit?: string): any[][] {
 /**
  * Density parameter of one component at z: "matter" (CDM + baryons + massive ν at every z, as Om), "cold" (CDM + baryons: the matter of PARAM("z_eq")), "darkenergy", "curvature", "radiation" (photons + massless ν), "photons" or "neutrinos" (all ν).
  * @customfunction OMEGA OMEGA
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#OMEGA
+ * @example =ZC.OMEGA("matter", 1)
  * @param component "matter", "cold", "darkenergy", "curvature", "radiation", "photons" or "neutrinos" (value or range).
  * @param [z] Redshift, ≥ 0 (value or range); omitted = today.
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
@@ -156,7 +167,8 @@ export function OMEGA(component: any[][], z?: any[][], model?: any[][]): any[][]
 /**
  * CMB temperature at redshift z, Tcmb (1+z), in K.
  * @customfunction CMB_TEMP CMB_TEMP
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#CMB_TEMP
+ * @example =ZC.CMB_TEMP(1100)
  * @param [z] Redshift, ≥ 0 (value or range); omitted = today.
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @returns Temperature (K).
@@ -168,7 +180,8 @@ export function CMB_TEMP(z?: any[][], model?: any[][]): any[][] {
 /**
  * Critical density 3H(z)²/(8πG), in kg/m3 unless a unit is given.
  * @customfunction CRIT_DENSITY CRIT_DENSITY
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#CRIT_DENSITY
+ * @example =ZC.CRIT_DENSITY(0, , "solMass/Mpc3")
  * @param [z] Redshift, ≥ 0 (value or range); omitted = today.
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [unit] Output unit, default "kg/m3" (e.g. "solMass/Mpc3", "g/cm3").
@@ -181,7 +194,8 @@ export function CRIT_DENSITY(z?: any[][], model?: any[][], unit?: string): any[]
 /**
  * Proper size per unit angle at z (proper scale), in kpc/arcsec unless a unit is given.
  * @customfunction PROPER_SCALE PROPER_SCALE
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#PROPER_SCALE
+ * @example =ZC.PROPER_SCALE(0.5)
  * @param z Redshift, > 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [unit] Output unit, default "kpc/arcsec" (e.g. "Mpc/deg").
@@ -194,7 +208,8 @@ export function PROPER_SCALE(z: any[][], model?: any[][], unit?: string): any[][
 /**
  * Proper size subtending an angle at z, in kpc unless a unit is given (angle in arcsec by default).
  * @customfunction SIZE SIZE
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#SIZE
+ * @example =ZC.SIZE(2.5, 0.8)
  * @param angle Angle, ≥ 0, in arcsec by default (value or range).
  * @param z Redshift, ≥ 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
@@ -209,7 +224,8 @@ export function SIZE(angle: any[][], z: any[][], model?: any[][], angle_unit?: s
 /**
  * Angle subtended by a proper size at z, in arcsec unless a unit is given (size in kpc by default).
  * @customfunction ANGLE ANGLE
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#ANGLE
+ * @example =ZC.ANGLE(30, 2)
  * @param size Proper size, ≥ 0, in kpc by default (value or range).
  * @param z Redshift, > 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
@@ -224,7 +240,8 @@ export function ANGLE(size: any[][], z: any[][], model?: any[][], size_unit?: st
 /**
  * All-sky comoving volume within redshift z, in Mpc3 unless a unit is given.
  * @customfunction VOLUME VOLUME
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#VOLUME
+ * @example =ZC.VOLUME(1, , "Gpc3")
  * @param z Redshift, ≥ 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [unit] Output unit, default "Mpc3" (e.g. "Gpc3").
@@ -237,7 +254,8 @@ export function VOLUME(z: any[][], model?: any[][], unit?: string): any[][] {
 /**
  * Comoving volume between z1 and z2 over a sky area (all sky if omitted), in Mpc3 (area in deg2).
  * @customfunction VOLUME_SHELL VOLUME_SHELL
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#VOLUME_SHELL
+ * @example =ZC.VOLUME_SHELL(0.5, 1, 100)
  * @param z1 Inner redshift, ≥ 0 (value or range).
  * @param z2 Outer redshift, ≥ z1 (value or range).
  * @param [area] Sky area, in deg2 by default; omitted = whole sky (value or range).
@@ -253,7 +271,8 @@ export function VOLUME_SHELL(z1: any[][], z2: any[][], area?: any[][], model?: a
 /**
  * Comoving volume element dV/dz/dΩ = D_H D_M² / E(z), in Mpc3/sr unless a unit is given.
  * @customfunction VOLUME_ELEMENT VOLUME_ELEMENT
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#VOLUME_ELEMENT
+ * @example =ZC.VOLUME_ELEMENT(1)
  * @param z Redshift, ≥ 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [unit] Output unit, default "Mpc3/sr" (e.g. "Mpc3/deg2").
@@ -266,7 +285,8 @@ export function VOLUME_ELEMENT(z: any[][], model?: any[][], unit?: string): any[
 /**
  * Redshift at which a quantity takes a value (inverse): quantity is "DIST_LUM", "DIST_LOS", "DIST_TRANS", "DIST_ANG" (lower branch), "DIST_LIGHT", "MODULUS", "LOOKBACK", "AGE" or "VOLUME".
  * @customfunction REDSHIFT REDSHIFT
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#REDSHIFT
+ * @example =ZC.REDSHIFT(10, "LOOKBACK")
  * @param value Value of the quantity, in its default unit unless one is given (value or range).
  * @param quantity Name of the function inverted, e.g. "DIST_LUM".
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
@@ -280,7 +300,8 @@ export function REDSHIFT(value: any[][], quantity: string, model?: any[][], unit
 /**
  * Redshift in the CMB frame: corrects a heliocentric redshift for the Sun's motion, 369.82 km/s towards galactic (l, b) = (264.021°, 48.253°) (Planck 2018 CMB dipole).
  * @customfunction REDSHIFT_CMB REDSHIFT_CMB
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#REDSHIFT_CMB
+ * @example =ZC.REDSHIFT_CMB(0.05, 150, 20)
  * @param z_helio Heliocentric redshift, > −1 (value or range).
  * @param ra Right ascension (ICRS), in deg by default (value or range).
  * @param dec Declination (ICRS), −90° … 90°, in deg by default (value or range).

@@ -11,7 +11,8 @@ import { callFromSheet } from "../evaluate.js";
 /**
  * 1σ error of the luminosity distance from a redshift error, |dD_L/dz| σ_z (first order, exact derivative), in Mpc unless a unit is given.
  * @customfunction DIST_LUM_ERR DIST_LUM_ERR
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#DIST_LUM_ERR
+ * @example =ZC.DIST_LUM_ERR(0.5, 0.002)
  * @param z Redshift, ≥ 0 (value or range).
  * @param z_err 1σ error of z, ≥ 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
@@ -25,7 +26,8 @@ export function DIST_LUM_ERR(z: any[][], z_err: any[][], model?: any[][], unit?:
 /**
  * 1σ error of a bolometric luminosity from independent flux and redshift errors (first order): σ_L/L = √((σ_F/F)² + (2σ_z dlnD_L/dz)²).
  * @customfunction LUMINOSITY_ERR LUMINOSITY_ERR
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#LUMINOSITY_ERR
+ * @example =ZC.LUMINOSITY_ERR(1E-13, 5E-15, 0.5, 0.002)
  * @param flux Bolometric flux, ≥ 0, in erg/s/cm2 by default (value or range).
  * @param flux_err 1σ error of the flux, ≥ 0, in the flux's unit (value or range).
  * @param z Redshift, > 0 (value or range).
@@ -42,7 +44,8 @@ export function LUMINOSITY_ERR(flux: any[][], flux_err: any[][], z: any[][], z_e
 /**
  * 1σ error of a spectral luminosity L_ν (as ZC.LUMINOSITY_NU) from independent errors of flux density, z and spectral index (first order).
  * @customfunction LUMINOSITY_NU_ERR LUMINOSITY_NU_ERR
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#LUMINOSITY_NU_ERR
+ * @example =ZC.LUMINOSITY_NU_ERR(0.012, 0.001, 0.8, 0.005, -0.7, 0.1)
  * @param flux_density Observed flux density, ≥ 0 (value or range), in Jy unless in_unit says otherwise (catalogues in mJy: give "mJy").
  * @param flux_density_err 1σ error of the flux density, ≥ 0 (value or range), in Jy unless in_unit says otherwise (catalogues in mJy: give "mJy").
  * @param z Redshift, > 0 (value or range).
@@ -61,7 +64,8 @@ export function LUMINOSITY_NU_ERR(flux_density: any[][], flux_density_err: any[]
 /**
  * 1σ error of an absolute magnitude M = m − μ − K from independent errors of m, z and K (first order): √(σ_m² + (d(μ + K)/dz σ_z)² + σ_K²); K's slope enters when alpha is given.
  * @customfunction MAG_ABS_ERR MAG_ABS_ERR
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#MAG_ABS_ERR
+ * @example =ZC.MAG_ABS_ERR(0.05, 0.3, 0.01)
  * @param m_err 1σ error of the apparent magnitude, ≥ 0; ±99 (|value| ≥ 50) is a missing-value flag, #N/A (value or range).
  * @param z Redshift, > 0 (value or range).
  * @param z_err 1σ error of z, ≥ 0 (value or range).
@@ -77,7 +81,8 @@ export function MAG_ABS_ERR(m_err: any[][], z: any[][], z_err: any[][], kcorr_er
 /**
  * 1σ error of a proper size (as ZC.SIZE) from independent angle and redshift errors (first order), in kpc unless a unit is given.
  * @customfunction SIZE_ERR SIZE_ERR
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#SIZE_ERR
+ * @example =ZC.SIZE_ERR(2.5, 0.2, 0.8, 0.01)
  * @param angle Angle, ≥ 0, in arcsec by default (value or range).
  * @param angle_err 1σ error of the angle, ≥ 0, in the angle's unit (value or range).
  * @param z Redshift, ≥ 0 (value or range).
@@ -94,7 +99,8 @@ export function SIZE_ERR(angle: any[][], angle_err: any[][], z: any[][], z_err: 
 /**
  * 1σ error of a rest-frame spectral luminosity at another frequency (as ZC.LUMINOSITY_REST) from independent errors of flux density, z and spectral index (first order); the α term is ln(rest / ((1+z) observed)) σ_α.
  * @customfunction LUMINOSITY_REST_ERR LUMINOSITY_REST_ERR
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#LUMINOSITY_REST_ERR
+ * @example =ZC.LUMINOSITY_REST_ERR(2.5, 0.2, 1.1, 0.01, -0.7, 0.1, 3, 1.4, , , "mJy")
  * @param flux_density Flux density observed at `observed`, ≥ 0 (value or range), in Jy unless in_unit says otherwise (catalogues in mJy: give "mJy").
  * @param flux_density_err 1σ error of the flux density, ≥ 0 (value or range), in Jy unless in_unit says otherwise (catalogues in mJy: give "mJy").
  * @param z Redshift, > 0 (value or range).

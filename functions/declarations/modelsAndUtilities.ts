@@ -11,7 +11,8 @@ import { callFromSheet } from "../evaluate.js";
 /**
  * Converts a value between astronomical units (pc, Mpc, ly, au, erg/s, Lsun, Jy, deg2, ...).
  * @customfunction CONVERT CONVERT
- * @helpurl https://localhost:3000/help.html#units
+ * @helpurl https://localhost:3000/help.html#CONVERT
+ * @example =ZC.CONVERT(1, "Mpc", "Gly")
  * @param value Value (value or range).
  * @param from Unit of value, e.g. "Mpc".
  * @param to Wanted unit, e.g. "Gly".
@@ -25,7 +26,8 @@ export function CONVERT(value: any[][], from: string, to: string, model?: any[][
 /**
  * Model spec text: a base model changed by key/value pairs, e.g. ZC.MODEL("P18-BAO", "H0", B1); keys H0, Om, OL, Ok, Ob, w0, wa, Tcmb, Neff, mnu.
  * @customfunction MODEL MODEL
- * @helpurl https://localhost:3000/help.html#model-spec
+ * @helpurl https://localhost:3000/help.html#MODEL
+ * @example =ZC.MODEL("P18-BAO", "H0", 73)
  * @param base Model to start from: preset, spec, key/value block or workbook model; blank = workbook's active model.
  * @param key1 Parameter to change, e.g. "H0" (value or range).
  * @param value1 Its new value (value or range); mnu may be a list as text "0.05,0.01".
@@ -51,7 +53,8 @@ export function MODEL(
 /**
  * A parameter or derived value of a model: H0, h, Om, OL, Ok, Or, Ob, w0, wa, Tcmb, Neff, mnu, age_today (Gyr), hubble_time (Gyr), hubble_distance (Mpc), z_eq (cold matter = photons + all neutrinos counted as radiation, as OMEGA("cold")).
  * @customfunction PARAM PARAM
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#PARAM
+ * @example =ZC.PARAM("age_today")
  * @param name Parameter name, e.g. "age_today" (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @returns The parameter's value.
@@ -63,7 +66,8 @@ export function PARAM(name: any[][], model?: any[][]): any[][] {
 /**
  * Table of the parameter sets: the built-in presets with their sources, then the models defined in this workbook.
  * @customfunction PRESETS PRESETS
- * @helpurl https://localhost:3000/help.html#presets
+ * @helpurl https://localhost:3000/help.html#PRESETS
+ * @example =ZC.PRESETS()
  * @returns Two columns: name, description.
  */
 export function PRESETS(): any[][] {
@@ -73,7 +77,8 @@ export function PRESETS(): any[][] {
 /**
  * One line of plain words describing a model, all parameters shown.
  * @customfunction DESCRIBE DESCRIBE
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#DESCRIBE
+ * @example =ZC.DESCRIBE("W9-ALL")
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @returns Description text.
  */
@@ -84,7 +89,8 @@ export function DESCRIBE(model?: any[][]): any[][] {
 /**
  * zcell's version and the engine's conventions, for provenance in shared workbooks.
  * @customfunction VERSION VERSION
- * @helpurl https://localhost:3000/help.html#conventions
+ * @helpurl https://localhost:3000/help.html#VERSION
+ * @example =ZC.VERSION()
  * @returns Version text.
  */
 export function VERSION(): any[][] {
@@ -94,7 +100,8 @@ export function VERSION(): any[][] {
 /**
  * A value published under one cosmology restated under another, at the source's redshift: "distance" × D_M,to/D_M,from; "luminosity" × (D_L,to/D_L,from)²; "size" × D_A,to/D_A,from; "magnitude" (absolute) + 5 log10(D_L,from/D_L,to); "density" (number density) × (dV/dz)_from/(dV/dz)_to.
  * @customfunction RESCALE RESCALE
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#RESCALE
+ * @example =ZC.RESCALE(3.2E44, 0.84, "luminosity", "W7-BAO")
  * @param value The published value, in any unit (a magnitude in mag) (value or range).
  * @param z The source's redshift, > 0 (value or range).
  * @param quantity "distance", "luminosity", "size", "magnitude" or "density" (value or range).

@@ -10,7 +10,8 @@ import { callFromSheet } from "../evaluate.js";
 /**
  * Hubble distance at z, D_H(z) = c / H(z), the radial BAO distance (D_H/r_d is a ratio of cells); in Mpc unless a unit is given.
  * @customfunction DIST_HUBBLE DIST_HUBBLE
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#DIST_HUBBLE
+ * @example =ZC.DIST_HUBBLE(0.51)
  * @param z Redshift, ≥ 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [unit] Output unit, default "Mpc" (e.g. "Mpc/h").
@@ -23,7 +24,8 @@ export function DIST_HUBBLE(z: any[][], model?: any[][], unit?: string): any[][]
 /**
  * Volume-averaged distance D_V(z) = [z D_M² c/H(z)]^(1/3) (Eisenstein et al. 2005), the isotropic BAO distance; in Mpc unless a unit is given.
  * @customfunction DIST_VOLUME DIST_VOLUME
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#DIST_VOLUME
+ * @example =ZC.DIST_VOLUME(0.51)
  * @param z Redshift, ≥ 0 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [unit] Output unit, default "Mpc" (e.g. "Mpc/h").
@@ -36,7 +38,8 @@ export function DIST_VOLUME(z: any[][], model?: any[][], unit?: string): any[][]
 /**
  * Sound horizon at the drag epoch r_d, from the fit of Aubourg et al. 2015 (eq. 16) in ω_b, ω_cb and ω_ν, for the standard Neff; needs Ob in the model. D_M/r_d, D_H/r_d and D_V/r_d are then ratios of cells.
  * @customfunction SOUND_HORIZON SOUND_HORIZON
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#SOUND_HORIZON
+ * @example =ZC.SOUND_HORIZON()
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [unit] Output unit, default "Mpc" (e.g. "Mpc/h").
  * @returns r_d (Mpc by default).
@@ -48,7 +51,8 @@ export function SOUND_HORIZON(model?: any[][], unit?: string): any[][] {
 /**
  * Critical surface density of a thin gravitational lens, Σ_cr = c² D_s / (4πG D_l D_ls) (angular-diameter distances; D_ls from lens to source, any curvature); in Msun/pc2 unless a unit is given.
  * @customfunction SIGMA_CRIT SIGMA_CRIT
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#SIGMA_CRIT
+ * @example =ZC.SIGMA_CRIT(0.35, 1.2)
  * @param z_lens Lens redshift, > 0 (value or range).
  * @param z_source Source redshift, > z_lens (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
@@ -62,7 +66,8 @@ export function SIGMA_CRIT(z_lens: any[][], z_source: any[][], model?: any[][], 
 /**
  * Overdensity Δ of a halo definition relative to the critical density at z: "vir" (Bryan & Norman 1998: flat models with Λ, or no dark energy), "200c", "500c", "200m" (200 Ωm(z)), any "<N>c" or "<N>m".
  * @customfunction OVERDENSITY OVERDENSITY
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#OVERDENSITY
+ * @example =ZC.OVERDENSITY(0.3, "vir")
  * @param z Redshift, ≥ 0 (value or range).
  * @param definition "vir", "200c", "500c", "200m", or any "<N>c" / "<N>m" (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
@@ -75,7 +80,8 @@ export function OVERDENSITY(z: any[][], definition: any[][], model?: any[][]): a
 /**
  * Radius within which a halo of mass M has mean density Δ ρ_crit(z): R = (3M / (4π Δ ρ_crit(z)))^(1/3); mass in Msun, radius in kpc unless units are given.
  * @customfunction HALO_RADIUS HALO_RADIUS
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#HALO_RADIUS
+ * @example =ZC.HALO_RADIUS(2E14, 0.3, "500c")
  * @param mass Halo mass, ≥ 0, in Msun by default (value or range).
  * @param z Redshift, ≥ 0 (value or range).
  * @param definition "vir", "200c", "500c", "200m", or any "<N>c" / "<N>m" (value or range).
@@ -91,7 +97,8 @@ export function HALO_RADIUS(mass: any[][], z: any[][], definition: any[][], mode
 /**
  * Mass within a radius at mean density Δ ρ_crit(z): M = (4π/3) Δ ρ_crit(z) R³ (the inverse of ZC.HALO_RADIUS); radius in kpc, mass in Msun unless units are given.
  * @customfunction HALO_MASS HALO_MASS
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#HALO_MASS
+ * @example =ZC.HALO_MASS(1200, 0.3, "200m")
  * @param radius Radius, ≥ 0, in kpc by default (value or range).
  * @param z Redshift, ≥ 0 (value or range).
  * @param definition "vir", "200c", "500c", "200m", or any "<N>c" / "<N>m" (value or range).
@@ -107,7 +114,8 @@ export function HALO_MASS(radius: any[][], z: any[][], definition: any[][], mode
 /**
  * Linear growth factor D(z)/D(0) of cold matter: sub-horizon, scale-independent, massive neutrinos clustering like matter (free streaming ignored); from the growth equation in ln a, for any curvature, radiation and w0–wa dark energy.
  * @customfunction GROWTH GROWTH
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#GROWTH
+ * @example =ZC.GROWTH(1)
  * @param z Redshift, 0 … 99999 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @returns D(z)/D(0).
@@ -119,7 +127,8 @@ export function GROWTH(z: any[][], model?: any[][]): any[][] {
 /**
  * Linear growth rate f = d ln D / d ln a (same assumptions as ZC.GROWTH); fσ8 is f times σ8(z) = σ8 · ZC.GROWTH(z).
  * @customfunction GROWTH_RATE GROWTH_RATE
- * @helpurl https://localhost:3000/help.html#function-reference
+ * @helpurl https://localhost:3000/help.html#GROWTH_RATE
+ * @example =ZC.GROWTH_RATE(0.5)
  * @param z Redshift, 0 … 99999 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @returns f.

@@ -39,7 +39,7 @@ describe.runIf(browserAvailable())("a crafted shared workbook against the pane",
   for (const [carrier, excelApi] of [["notes", "1.18"], ["comments", "1.10"]] as const) {
     test(`Thaw restores only ZC formulas from ${carrier} (ExcelApi ${excelApi}), after one confirmation, only in the selection`, async () => {
       const page = await openPane(host, { settings: {}, sheets: frozenSheet(), selection: "Sheet1!B2:E2", excelApi, [carrier]: annotations });
-      await page.getByRole("tab", { name: "Freeze" }).click();
+      await page.getByRole("tab", { name: "Values" }).click();
       await page.locator("#thaw").click();
       await expect.poll(() => page.locator("#thaw-confirm-text").textContent()).toBe("Restore 1 ZC formula in the selection? 3 cells not restored, listed below.");
       expect(await page.locator("#thaw-preview li").allTextContents()).toEqual(['B2: =ZC.DIST_LUM(A2,\n "P18-BAO; H0=73")']);
@@ -51,7 +51,7 @@ describe.runIf(browserAvailable())("a crafted shared workbook against the pane",
       // nothing is written before the confirmation
       expect(((await fakeState(page, "sheets.Sheet1")) as Cells).B2).toEqual({ value: 2919.6 });
       await page.locator("#thaw-go").click();
-      await expect.poll(() => page.locator("#thaw-status").textContent()).toMatch(/^Thawed 1 cell: the ZC formulas are back/);
+      await expect.poll(() => page.locator("#thaw-status").textContent()).toMatch(/^Restored 1 cell: the ZC formulas are back/);
       const after = (await fakeState(page, "sheets")) as Record<string, Cells>;
       expect(after.Sheet1).toEqual({
         A2: { value: 0.5 },
@@ -70,12 +70,12 @@ describe.runIf(browserAvailable())("a crafted shared workbook against the pane",
     });
   }
 
-  test("Cancel on the Thaw confirmation writes nothing", async () => {
+  test("Cancel on the Restore formulas confirmation writes nothing", async () => {
     const page = await openPane(host, { settings: {}, sheets: frozenSheet(), selection: "Sheet1!B2", notes: annotations });
-    await page.getByRole("tab", { name: "Freeze" }).click();
+    await page.getByRole("tab", { name: "Values" }).click();
     await page.locator("#thaw").click();
     await page.locator("#thaw-cancel").click();
-    await expect.poll(() => page.locator("#thaw-status").textContent()).toBe("Nothing thawed.");
+    await expect.poll(() => page.locator("#thaw-status").textContent()).toBe("Nothing restored.");
     expect((await fakeState(page, "sheets")) as object).toEqual(frozenSheet());
     await page.close();
   });
@@ -120,7 +120,7 @@ describe.runIf(browserAvailable())("a crafted shared workbook against the pane",
       await page.locator("#apply").click();
       await expect.poll(() => page.locator("#apply-status").textContent()).toBe("Applied W9-ALL; 1 formula recalculated.");
       expect(((await fakeState(page, "saved")) as Record<string, unknown>)["zcell.activeModel"]).toBe("W9-ALL");
-      for (const tab of ["This cell", "Tables", "Freeze"]) {
+      for (const tab of ["This cell", "Tables", "Values"]) {
         await page.getByRole("tab", { name: tab }).click();
         expect(await page.getByRole("tab", { name: tab }).getAttribute("aria-selected")).toBe("true");
       }

@@ -1,7 +1,7 @@
 /**
  * What the browser tests share: the tests' build served on a free loopback port (with extra pages
- * where a test needs one), Debian chromium launched headless with the machine's flags, and the
- * check that chromium is there at all.
+ * where a test needs one), Debian chromium launched headless with the machine's flags, the check
+ * that chromium is there at all, and axe-core's accessibility check of a page.
  */
 import { existsSync, readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
@@ -53,6 +53,20 @@ export async function startPageHost(pages: Record<string, string> = {}): Promise
       await new Promise((r) => server.close(r));
     },
   };
+}
+
+/** axe-core's script, to evaluate in a page before `axeViolations`. */
+export const axeSource = readFileSync(fileURLToPath(new URL("../../node_modules/axe-core/axe.min.js", import.meta.url)), "utf8");
+
+/** axe-core's violations of the WCAG 2.0–2.2 A/AA rules and of its best practices, as "rule: targets". */
+export async function axeViolations(page: Page): Promise<string[]> {
+  return page.evaluate(async () => {
+    const axe = (window as unknown as { axe: { run(ctx: Document, opts: object): Promise<{ passes: unknown[]; violations: { id: string; nodes: { target: string[] }[] }[] }> } }).axe;
+    const tags = ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22a", "wcag22aa", "best-practice"];
+    const result = await axe.run(document, { runOnly: { type: "tag", values: tags } });
+    if (result.passes.length < 10) throw new Error(`axe checked too little: ${result.passes.length} rules passed`);
+    return result.violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
+  });
 }
 
 const fakeOffice = readFileSync(fileURLToPath(new URL("./fakeOffice.js", import.meta.url)), "utf8");

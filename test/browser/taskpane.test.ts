@@ -4,29 +4,17 @@
  * selection events and settings. Driven as a person would; screenshots of each panel in light and
  * dark theme go to test-artifacts/screenshots (git-ignored).
  */
-import { mkdirSync, readFileSync } from "node:fs";
+import { mkdirSync } from "node:fs";
 import { fileURLToPath } from "node:url";
-import type { Page } from "playwright-core";
 import { publishedModels } from "../fixtures.js";
+import type { Page } from "playwright-core";
 import { expectRelative } from "../helpers.js";
 import { SlowCosmology, type SlowParameters } from "../reference/slowCosmology.js";
-import { browserAvailable, fakeState, openPane as openPaneIn, selectCells, startPageHost, type PageHost, type PanePage } from "./pageHost.js";
+import { axeSource, axeViolations, browserAvailable, fakeState, openPane as openPaneIn, selectCells, startPageHost, type PageHost, type PanePage } from "./pageHost.js";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 
 const root = fileURLToPath(new URL("../../", import.meta.url));
 const shots = `${root}test-artifacts/screenshots/`;
-const axeSource = readFileSync(`${root}node_modules/axe-core/axe.min.js`, "utf8");
-
-/** axe-core's violations of the WCAG 2.0–2.2 A/AA rules and of its best practices, as "rule: targets". */
-async function axeViolations(page: Page): Promise<string[]> {
-  return page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run(ctx: Document, opts: object): Promise<{ passes: unknown[]; violations: { id: string; nodes: { target: string[] }[] }[] }> } }).axe;
-    const tags = ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22a", "wcag22aa", "best-practice"];
-    const result = await axe.run(document, { runOnly: { type: "tag", values: tags } });
-    if (result.passes.length < 10) throw new Error(`axe checked too little: ${result.passes.length} rules passed`);
-    return result.violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
-  });
-}
 
 const light = { bodyBackgroundColor: "#ffffff", bodyForegroundColor: "#242424", controlBackgroundColor: "#ffffff", controlForegroundColor: "#242424" };
 const dark = { bodyBackgroundColor: "#1f1f1f", bodyForegroundColor: "#f0f0f0", controlBackgroundColor: "#2b2b2b", controlForegroundColor: "#f0f0f0" };
@@ -295,47 +283,47 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       await page.close();
     });
 
-    test(`freeze and thaw (${themeName}): values with provenance notes, then the formulas back`, async () => {
+    test(`values tab (${themeName}): replace with values and provenance notes, then restore the formulas`, async () => {
       const page = await openPane(theme, { "zcell.activeModel": "W9-ALL" });
-      await page.getByRole("tab", { name: "Freeze" }).click();
+      await page.getByRole("tab", { name: "Values" }).click();
       // ExcelApi 1.18 here: no undo group, so the pane must not promise Ctrl+Z
       expect(await page.locator("#undo-hint").textContent()).toMatch(/cannot record an add-in's changes as one undo step.*do not count on Ctrl\+Z/);
       await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!A2:C2"));
       await page.locator("#freeze").click();
-      await expect.poll(() => page.locator("#freeze-confirm-text").textContent()).toMatch(/Replace 2 ZC formulas by their values.*Thaw brings them back later/);
+      await expect.poll(() => page.locator("#freeze-confirm-text").textContent()).toMatch(/Replace 2 ZC formulas by their values.*Restore formulas brings them back later/);
       expect(await page.locator("#freeze-confirm-text").textContent()).not.toMatch(/Undo/);
       await page.screenshot({ path: `${shots}freeze-${themeName}.png`, fullPage: true });
       await page.locator("#freeze-go").click();
-      await expect.poll(() => page.locator("#freeze-status").textContent()).toMatch(/Froze 2 cells; formula, model and version are in each cell's note. Thaw brings the formulas back/);
+      await expect.poll(() => page.locator("#freeze-status").textContent()).toMatch(/Replaced 2 cells with values; formula, model and version are in each cell's note. Restore formulas brings them back/);
       const cells = (await fake(page, "sheets.Sheet1")) as Record<string, { formula?: string; value?: unknown }>;
       expect(cells.B2).toEqual({ value: 2919.6 });
       expect(cells.C2).toEqual({ value: -20.3 });
       const notes = (await fake(page, "notes")) as { address: string; text: string }[];
       expect(notes.map((n) => n.address)).toEqual(["'Sheet1'!B2", "'Sheet1'!C2"]);
-      expect(notes[0].text).toMatch(/^Frozen by zcell \d+\.\d+\.\d+ on \d{4}-\d\d-\d\d\.\nFormula: "=ZC.DIST_LUM\(A2\)"\nModel: W9-ALL/);
+      expect(notes[0].text).toMatch(/^Replaced with its value by zcell \d+\.\d+\.\d+ on \d{4}-\d\d-\d\d\.\nFormula: "=ZC.DIST_LUM\(A2\)"\nModel: W9-ALL/);
       await page.locator("#thaw").click();
       await expect.poll(() => page.locator("#thaw-confirm-text").textContent()).toBe("Restore 2 ZC formulas in the selection?");
       expect(await page.locator("#thaw-preview").textContent()).toBe("B2: =ZC.DIST_LUM(A2)C2: =ZC.MAG_ABS(22, A2, ZC.KCORRECTION(A2, -0.5))");
       await page.locator("#thaw-go").click();
-      await expect.poll(() => page.locator("#thaw-status").textContent()).toMatch(/Thawed 2 cells: the ZC formulas are back and their notes removed. They compute under the workbook's model \(W9-ALL\)/);
+      await expect.poll(() => page.locator("#thaw-status").textContent()).toMatch(/Restored 2 cells: the ZC formulas are back and their notes removed. They compute under the workbook's model \(W9-ALL\)/);
       await page.screenshot({ path: `${shots}thaw-${themeName}.png`, fullPage: true });
       const after = (await fake(page, "sheets.Sheet1")) as Record<string, { formula?: string }>;
       expect([after.B2.formula, after.C2.formula]).toEqual(["=ZC.DIST_LUM(A2)", "=ZC.MAG_ABS(22, A2, ZC.KCORRECTION(A2, -0.5))"]);
       expect(await fake(page, "notes")).toEqual([]);
       await page.locator("#thaw").click();
-      await expect.poll(() => page.locator("#thaw-status").textContent()).toMatch(/The selection has no frozen cells/);
+      await expect.poll(() => page.locator("#thaw-status").textContent()).toMatch(/The selection has no cells that zcell replaced with values/);
       expect((page as unknown as { errors: string[] }).errors).toEqual([]);
       await page.close();
     });
 
-    test(`freeze (${themeName}) where ExcelApi 1.20 merges the undo group: one undo step, said so`, async () => {
+    test(`replace with values (${themeName}) where ExcelApi 1.20 merges the undo group: one undo step, said so`, async () => {
       const page = await openPane(theme, {}, true, { excelApi: "1.20" });
-      await page.getByRole("tab", { name: "Freeze" }).click();
-      expect(await page.locator("#undo-hint").textContent()).toMatch(/Excel's Undo \(Ctrl\+Z \/ ⌘Z\) reverts a freeze in one step here/);
+      await page.getByRole("tab", { name: "Values" }).click();
+      expect(await page.locator("#undo-hint").textContent()).toMatch(/Excel's Undo \(Ctrl\+Z \/ ⌘Z\) reverts a replacement in one step here/);
       await page.evaluate(() => (window as unknown as { __fake: { select(a: string): void } }).__fake.select("Sheet1!B2"));
       await page.locator("#freeze").click();
       await page.locator("#freeze-go").click();
-      await expect.poll(() => page.locator("#freeze-status").textContent()).toMatch(/Froze 1 cell;.*Excel's Undo reverts it in one step/);
+      await expect.poll(() => page.locator("#freeze-status").textContent()).toMatch(/Replaced 1 cell with values;.*Excel's Undo reverts it in one step/);
       expect(await fake(page, "runs")).toContainEqual({ mergeUndoGroup: true });
       await page.close();
     });
@@ -370,7 +358,7 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
       const page = await openPane(theme, {}, true, { sheets });
       await expect.poll(() => page.locator("#repair").isVisible()).toBe(true);
       await page.evaluate(axeSource);
-      for (const tab of ["Cosmology", "This cell", "Tables", "Freeze"]) {
+      for (const tab of ["Cosmology", "This cell", "Tables", "Values"]) {
         await page.getByRole("tab", { name: tab }).click();
         if (tab === "This cell") await expect.poll(() => page.locator("#cell-explanation").textContent()).toMatch(/D_L/);
         if (tab === "Cosmology") {
@@ -508,7 +496,7 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
     const { nodes } = (await cdp.send("Accessibility.getFullAXTree")) as { nodes: { role?: { value: string }; name?: { value: string }; ignored?: boolean }[] };
     const named = (role: string) => nodes.filter((n) => !n.ignored && n.role?.value === role).map((n) => n.name?.value ?? "");
     expect(named("button")).toEqual(expect.arrayContaining(["Copy", "Apply to workbook"]));
-    expect(named("tab")).toEqual(["Cosmology", "This cell", "Tables", "Freeze"]);
+    expect(named("tab")).toEqual(["Cosmology", "This cell", "Tables", "Values"]);
     expect(named("textbox").every((name) => name.length > 0)).toBe(true);
     expect(named("combobox").every((name) => name.length > 0)).toBe(true);
     await page.close();
