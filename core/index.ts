@@ -57,8 +57,8 @@ export {
 export { defaultPresetName, findPreset, presets, type Preset } from "./model/presets.js";
 export { rescaledValue, rescaleQuantities, type RescaleQuantity } from "./distances/rescale.js";
 export { hubbleDistanceAtMpc, soundHorizonDragMpc, volumeAveragedDistanceMpc } from "./distances/baoScales.js";
-export { criticalSurfaceDensityMsunPc2 } from "./observables/lensing.js";
-export { growthFactor, growthRate } from "./observables/growth.js";
+export { criticalSurfaceDensityMsunPc2, lensingCoordinates, type LensingCoordinates } from "./observables/lensing.js";
+export { growthFactor, growthNeutrinoConventions, growthRate, type GrowthNeutrinos } from "./observables/growth.js";
 export { binnedLuminosityFunction, type LuminosityFunctionBin } from "./observables/luminosityFunction.js";
 export { hubbleDiagramChi2 } from "./observables/hubbleDiagram.js";
 export { haloMassMsun, haloOverdensity, haloRadiusMpc } from "./observables/halos.js";

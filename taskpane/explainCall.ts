@@ -61,7 +61,7 @@ const tabled =
   "quintic Hermite tables in ln(1+z) built once per model from Gauss–Legendre panels of the exact integrals " +
   "(direct quadrature below z ≈ 0.065 and above z = 1e8); relative error ≤ 1e-10 for z ≤ 1e4, ≤ 1e-8 to 1e7";
 const closedForm = "closed form, exact to rounding";
-const growthMethod = "fourth-order Runge–Kutta in ln a from a = 1e-5 on the Mészáros growing mode, cubic Hermite between steps; relative error ≤ 1e-7";
+const growthMethod = "fourth-order Runge–Kutta in ln a from a = 1e-8 on the Mészáros growing mode, cubic Hermite between steps; relative error ≤ 1e-7";
 const inverse = "Newton's method on the same tables, bracketed by bisection; |Δz| ≤ 1e-9 (1+z)";
 const firstOrder = "first-order propagation of independent errors with the exact derivative dD_C/dz = D_H/E(z) (no covariances)";
 const firstCrossing = "scan upward in ln(1+z), then Newton with the exact derivative on the first crossing";
@@ -125,12 +125,12 @@ const about: Record<string, { summary: string; equation: string; method: string;
   DIMMING: { summary: "surface-brightness dimming", equation: "10·log10(1+z) bolometric; 2.5·(3 − α)·log10(1+z) per unit frequency", method: closedForm },
   DIST_HUBBLE: { summary: "Hubble distance at z (radial BAO distance)", equation: "D_H(z) = c/H(z)", method: closedForm },
   DIST_VOLUME: { summary: "volume-averaged distance (isotropic BAO distance)", equation: "D_V = [z·D_M²·c/H(z)]^(1/3) (Eisenstein et al. 2005)", method: tabled },
-  SOUND_HORIZON: { summary: "sound horizon at the drag epoch", equation: "r_d = 55.154·exp(−72.3(ω_ν + 0.0006)²)/(ω_cb^0.25351·ω_b^0.12807) Mpc (Aubourg et al. 2015 eq. 16)", method: "fit to a Boltzmann code, about 0.02% for the standard Neff" },
-  SIGMA_CRIT: { summary: "critical surface density of a thin lens", equation: "Σ_cr = c²·D_s/(4πG·D_l·D_ls), angular-diameter distances", method: tabled },
+  SOUND_HORIZON: { summary: "sound horizon at the drag epoch", equation: "r_d = 55.154·exp(−72.3(ω_ν + 0.0006)²)/(ω_cb^0.25351·ω_b^0.12807) Mpc (Aubourg et al. 2015 eq. 16), × ∫c_s dz/H of the model over that with Neff = 3.046, Tcmb = 2.7255 K (same z_d)", method: "fit to a Boltzmann code, about 0.02% for the standard Neff; another Neff through the direct integral" },
+  SIGMA_CRIT: { summary: "critical surface density of a thin lens", equation: "Σ_cr = c²·D_s/(4πG·D_l·D_ls), angular-diameter distances, per physical area; comoving: Σ_cr/(1+z_l)²", method: tabled },
   OVERDENSITY: { summary: "overdensity of a halo definition relative to ρ_crit(z)", equation: "Δ = N (Nc), N·Ωm(z) (Nm), 18π² + 82x − 39x², x = Ωm(z) − 1 (vir, Bryan & Norman 1998)", method: closedForm },
   HALO_RADIUS: { summary: "halo radius at mean density Δ·ρ_crit(z)", equation: "R = (3M/(4π·Δ·ρ_crit(z)))^(1/3)", method: closedForm },
   HALO_MASS: { summary: "halo mass within a radius at mean density Δ·ρ_crit(z)", equation: "M = (4π/3)·Δ·ρ_crit(z)·R³", method: closedForm },
-  GROWTH: { summary: "linear growth factor D(z)/D(0) of cold matter", equation: "D″ + (2 + ½·dlnE²/dlna)·D′ − (3/2)·Ωm(a)·D = 0 in ln a", method: growthMethod },
+  GROWTH: { summary: "linear growth factor D(z)/D(0)", equation: "D″ + (2 + ½·dlnE²/dlna)·D′ − (3/2)·Ω_s(a)·D = 0 in ln a; Ω_s: CDM + baryons (neutrinos \"smooth\") or + ρ_ν − 3P_ν (\"clustering\")", method: growthMethod },
   GROWTH_RATE: { summary: "linear growth rate f = dlnD/dlna", equation: "f = D′/D from the growth equation", method: growthMethod },
   RESCALE: { summary: "a published value restated under another cosmology", equation: "× D_M ratio (distance), × D_L² ratio (luminosity), × D_A ratio (size), + 5·log10(D_L,from/D_L,to) (magnitude), × dV/dz ratio (density)", method: tabled },
   SURFACE_LUM: { summary: "intrinsic surface luminosity density", equation: "Σ = 10^(−0.4(μ − 10·log10(1+z) − K − M☉ − 21.572)) L☉/pc²", method: closedForm },

@@ -196,6 +196,7 @@ describe("units and arguments that refuse a likely mistake", () => {
     [-2,     "lambda",    0],      // f_λ ∝ λ^−2 is flat in f_ν
     [0.7,    "radio",     -0.7],   // S_ν ∝ ν^−0.7
     [0.7,    "RADIO",     -0.7],   // words in any case
+    [-0.5,   "radio",     0.5],    // a negative radio index is negated too: S_ν ∝ ν^+0.5, a rising (inverted) spectrum
   ])("SPECTRAL_INDEX(%d, %s) = %d", (value, convention, alpha) => {
     expectRelative(num("SPECTRAL_INDEX", value, convention), alpha, 1e-15, "α");
   });

@@ -80,16 +80,16 @@ const pinned: [string, string][] = [
     ["SURFACE_MAG"         , "kcorr=0"],
     ["DIST_HUBBLE"         , "unit=Mpc"],
     ["DIST_VOLUME"         , "unit=Mpc"],
-    ["SIGMA_CRIT"          , "unit=Msun/pc2"],
+    ["SIGMA_CRIT"          , "unit=Msun/pc2; coordinates=blank"],   // coordinates: 0.3.0, blank = physical
     ["OVERDENSITY"         , ""],
     ["HALO_RADIUS"         , "mass_unit=Msun; radius_unit=kpc"],
     ["HALO_MASS"           , "radius_unit=kpc; mass_unit=Msun"],
-    ["RESCALE"             , "to_model=the workbook's model"],
-    ["GROWTH"              , ""],
+    ["RESCALE"             , "to_model=the workbook's model; unit=blank"],   // unit: 0.3.0, blank = a unit without h
+    ["GROWTH"              , "neutrinos=blank"],   // neutrinos: 0.3.0, blank = smooth
     ["SOUND_HORIZON"       , "unit=Mpc"],
     ["LUMINOSITY_FUNCTION" , ""],
     ["CHI2_MODULUS"        , "offset=not given"],
-    ["GROWTH_RATE"         , ""],
+    ["GROWTH_RATE"         , "neutrinos=blank"],   // neutrinos: 0.3.0, blank = smooth
 ];
 
 describe("defaults that saved workbooks depend on", () => {

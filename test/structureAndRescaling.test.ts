@@ -4,6 +4,7 @@
  * written out with the existing functions (DIST_*, HUBBLE, CRIT_DENSITY, OMEGA), closed forms, and the
  * published formulas named beside each.
  */
+import { readFileSync } from "node:fs";
 import { describe, expect, test } from "vitest";
 import { Cosmology, growthFactor, growthRate } from "../core/index.js";
 import { sheetCalls } from "./sheetCalls.js";
@@ -71,6 +72,27 @@ describe("SIGMA_CRIT: the critical surface density of a thin lens", () => {
     expectRelative(num("SIGMA_CRIT", zl, zs, model), expected, 1e-6, "Σ_cr");
   });
 
+  test.each([
+    // lens | source | model (flat: D_M between the planes is D_M,s − D_M,l, Hogg 1999 eq. 16)
+    [0.3,    1,       "P18-CMB"],
+    [0.5,    2,       "EDS"],
+    [1.2,    3,       "DR2-CMB-DY5"],
+  ])("comoving Σ_cr at z_l = %d, z_s = %d in %s: c² D_M,s / (4πG D_M,l (D_M,s − D_M,l) (1+z_l)) from DIST_TRANS (rel ≤ 1e-6), the physical one / (1+z_l)²", (zl, zs, model) => {
+    const dl = num("DIST_TRANS", zl, model) * mpcM;
+    const ds = num("DIST_TRANS", zs, model) * mpcM;
+    const expected = ((c * c * ds) / (4 * Math.PI * GMsun * dl * (ds - dl) * (1 + zl))) * pcM * pcM; // M☉ per comoving pc²
+    expectRelative(num("SIGMA_CRIT", zl, zs, model, "", "comoving"), expected, 1e-6, "comoving Σ_cr");
+    expectRelative(num("SIGMA_CRIT", zl, zs, model, "", "comoving"), num("SIGMA_CRIT", zl, zs, model) / (1 + zl) ** 2, 1e-14, "(1+z_l)²");
+    expect(num("SIGMA_CRIT", zl, zs, model, "", "physical")).toBe(num("SIGMA_CRIT", zl, zs, model));
+    expect(num("SIGMA_CRIT", zl, zs, model, "h Msun/pc2", "comoving")).toBeCloseTo(num("SIGMA_CRIT", zl, zs, model, "", "comoving") / (num("HUBBLE", 0, model) / 100), 6);
+  });
+
+  test("coordinates other than physical or comoving are #VALUE! naming both", () => {
+    const cell = failure("SIGMA_CRIT", 0.3, 1, "", "", "proper");
+    expect(cell.kind).toBe("value");
+    expect(cell.message).toBe('ZC.SIGMA_CRIT: coordinates: "proper" is not one of physical, comoving');
+  });
+
   test("a source in front of the lens is #NUM! with the reason", () => {
     const cell = failure("SIGMA_CRIT", 1, 0.5);
     expect(cell.kind).toBe("num");
@@ -130,9 +152,35 @@ describe("surface brightness", () => {
   });
 });
 
+describe("what the help says (the recorded metadata, equal to the build's: test/hostSimulation.test.ts)", () => {
+  const metadata = JSON.parse(readFileSync(new URL("./fixtures/functions.metadata.json", import.meta.url), "utf8")) as {
+    functions: { id: string; description: string; parameters: { name: string; description: string }[] }[];
+  };
+  const help = (id: string) => metadata.functions.find((f) => f.id === id)!;
+  const param = (id: string, name: string) => help(id).parameters.find((p) => p.name === name)!.description;
+
+  test("SURFACE_LUM and SURFACE_MAG: M☉ in the band and the system (AB or Vega) of μ", () => {
+    for (const id of ["SURFACE_LUM", "SURFACE_MAG"]) {
+      expect(param(id, "sun_abs_mag")).toBe("The Sun's absolute magnitude in the band of μ, in the same system (AB or Vega) (value or range).");
+    }
+    expect(help("SURFACE_LUM").description).toContain("M☉ must be the Sun's absolute magnitude in the same band and the same system (AB or Vega) as μ");
+  });
+
+  test("SPECTRAL_INDEX: radio negates the value whatever its sign, and says so", () => {
+    expect(help("SPECTRAL_INDEX").description).toContain("alpha = −value, whatever its sign: a negative radio index, a rising spectrum, gives a positive alpha");
+  });
+
+  test("SIGMA_CRIT says physical, and the comoving one is smaller by (1+z_l)²; GROWTH names both neutrino limits; SOUND_HORIZON its dependence on ω_b and ω_cb", () => {
+    expect(help("SIGMA_CRIT").description).toContain("mass per physical area at the lens (the default), or per comoving area, smaller by (1+z_l)²");
+    expect(help("GROWTH").description).toContain('"smooth" (blank) keeps them out of the source');
+    expect(help("SOUND_HORIZON").description).toContain('r_d follows ω_b and ω_cb, not the fractions: "P18-CMB; H0=73" (same Ωb, Ωm) has r_d 6% smaller');
+    expect(param("RESCALE", "unit")).toContain("needed when it holds h = H0/100");
+  });
+});
+
 describe("linear growth", () => {
   test.each([0, 0.5, 2, 10, 1000])("Einstein–de Sitter at z = %d: D = 1/(1+z) and f = 1 (D ∝ a, Peebles 1980 §11)", (z) => {
-    // 384 Runge–Kutta steps in ln a from z = 1e5: measured 4e-8 at z = 1000, 5e-9 at z = 2
+    // Runge–Kutta steps of 0.018 in ln a from a = 1e-8
     expectRelative(num("GROWTH", z, "EDS"), 1 / (1 + z), 1e-7, "D");
     expectRelative(num("GROWTH_RATE", z, "EDS"), 1, 1e-7, "f");
   });
@@ -185,8 +233,8 @@ describe("linear growth", () => {
     expectRelative(num("GROWTH_RATE", 0, "H0=70; Om=0.3"), 0.3 ** 0.55, 1e-2, "γ = 0.55");
   });
 
-  test("beyond z = 1e5 the growth is not computed: #NUM! with the reason", () => {
-    expect(failure("GROWTH", 2e5).message).toBe("ZC.GROWTH: z = 200000: linear growth is computed from z = 1e5 on (matter and radiation alone before)");
+  test("beyond z = 99999 the growth is not given: #NUM! with the reason", () => {
+    expect(failure("GROWTH", 2e5).message).toBe("ZC.GROWTH: z = 200000: linear growth is given up to z = 99999");
   });
 });
 

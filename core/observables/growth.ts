@@ -1,54 +1,109 @@
 /**
- * Linear growth of cold matter on sub-horizon scales: D(a) solves
- *   d²D/dln a² + (2 + ½ dln E²/dln a) dD/dln a − (3/2) Ωm(a) D = 0
- * (Peebles 1980, The Large-Scale Structure of the Universe, §10; written in ln a), with Ωm(a) all
- * matter, massive neutrinos included as if they clustered like cold matter (their free streaming is
- * ignored), and the growth scale-independent. It holds for every model zcell builds: any curvature,
- * radiation, massive neutrinos, w0–wa dark energy.
+ * Linear growth of matter perturbations on sub-horizon scales, scale-independent: D(a) solves
+ *   d²D/dln a² + (2 + ½ dln E²/dln a) dD/dln a − (3/2) Ω_s(a) D = 0
+ * (Peebles 1980, The Large-Scale Structure of the Universe, §10; written in ln a), where E(a) is the
+ * model's whole expansion rate and Ω_s(a) = ρ_s/ρ_crit(a) the density that clusters, the source. Massive
+ * neutrinos enter the source in one of the two limits of the trade (Lesgourgues & Pastor 2006, Phys.
+ * Rep. 429, 307, from memory: on scales well inside their free-streaming length they stay smooth; on
+ * scales well outside it they cluster like cold matter once non-relativistic):
+ * - "smooth": the source is cold matter alone, CDM + baryons (OMEGA("cold")): the growth on small
+ *   scales, where massive neutrinos are a smooth background that only adds to the expansion rate;
+ * - "clustering": the source adds the neutrinos' ρ_ν − 3P_ν, the part of their density that gravitates
+ *   like matter (0 while relativistic, → ρ_ν once non-relativistic; from the Fermi–Dirac integrals,
+ *   ρ − 3P = ρ_massless × dF/dln y): the growth on large scales.
+ * Without massive neutrinos the two are the same. Radiation (photons and relativistic neutrinos) never
+ * clusters. It holds for any curvature, radiation, massive neutrinos and w0–wa dark energy, as long as
+ * matter and radiation dominate early on (a dark energy that grows faster into the past is refused).
  *
- * The ODE runs by classical Runge–Kutta (fourth order) in ln a from a = 1e-5, where matter and
- * radiation alone matter, started on the growing mode of that era, D ∝ a + (2/3) a_eq (Mészáros 1974,
- * A&A 37, 225: D ∝ 1 + 3y/2, y = a/a_eq; D ∝ a without radiation), to a = 1. D, dD/dln a and their
- * slopes are kept at every step, so a value between steps is a cubic Hermite interpolation; one table
- * a model, built at first use.
+ * The ODE runs by classical Runge–Kutta (fourth order) in ln a from a = 1e-8 (z ≈ 1e8, deep in
+ * radiation domination), started on the growing mode of matter and radiation, D ∝ a + (2/3) a_eq with
+ * a_eq = Ω_r/Ω_cb counting every neutrino as radiation (Mészáros 1974, A&A 37, 225: D ∝ 1 + 3y/2,
+ * y = a/a_eq; D ∝ a without radiation), to a = 1. That mode is exact for matter and radiation alone,
+ * and every other term is negligible at the start (dark energy ~1e-32 of E² in ΛCDM; the neutrinos'
+ * mass ~1e-11 of their density for 0.3 eV), so the result does not depend on where the integration
+ * starts, to ~1e-11 (tested against starts from a = 1e-6 to 1e-12 and against an independent
+ * integration, test/growth.test.ts). D, dD/dln a and their slopes are kept at
+ * every step, so a value between steps is a cubic Hermite interpolation; one table a model and
+ * convention, built at first use.
  */
 import { checkRedshift } from "../checks/redshift.js";
 import type { Cosmology } from "../distances/Cosmology.js";
+import { fermiDiracDensityFactorLogSlope } from "../model/fermiDirac.js";
 
-/** ln a where the integration starts (a = 1e-5, z ≈ 1e5) and the number of steps to a = 1. */
-const lnAStart = Math.log(1e-5);
-const steps = 384;
-const step = -lnAStart / steps;
+/** How massive neutrinos enter the source of the growth equation (see the file's comment). */
+export const growthNeutrinoConventions = ["smooth", "clustering"] as const;
+export type GrowthNeutrinos = (typeof growthNeutrinoConventions)[number];
+
+/** ln a where the integration starts (a = 1e-8, z ≈ 1e8) and the step in ln a. */
+const lnAStart = Math.log(1e-8);
+const targetStep = 0.018;
+/** Largest redshift asked of the growth (the tables start far above it). */
+const maxRedshift = 99_999;
+/**
+ * Largest share of E² at the start held by dark energy (one that grows faster than the dominant term
+ * into the past): the starting mode would not be the growing one. Our choice; in ΛCDM it is ~1e-32.
+ */
+const largestDarkEnergyShareAtStart = 1e-6;
 
 interface GrowthTable {
+  lnAStart: number;
+  step: number;
+  steps: number;
   /** D, dD/dln a and d²D/dln a² at ln a = lnAStart + i·step, normalised to D(a = 1) = 1. */
   d: Float64Array;
   d1: Float64Array;
   d2: Float64Array;
 }
 
-const tables = new WeakMap<Cosmology, GrowthTable>();
+const tables: Record<GrowthNeutrinos, WeakMap<Cosmology, GrowthTable>> = { smooth: new WeakMap(), clustering: new WeakMap() };
 
-function buildTable(model: Cosmology): GrowthTable {
+/** The clustering source ρ_s / ρ_crit,0 at 1+z = zp: cold matter, plus the neutrinos' ρ − 3P when they cluster. */
+function sourceDensity(model: Cosmology, neutrinos: GrowthNeutrinos, zp: number): number {
   const expansion = model.expansion;
+  let source = expansion.coldMatter * zp * zp * zp;
+  if (neutrinos === "clustering") {
+    const y0 = expansion.massiveY0;
+    let nu = 0;
+    for (let i = 0; i < y0.length; i++) nu += fermiDiracDensityFactorLogSlope(y0[i] / zp);
+    source += expansion.neutrinoSpeciesDensity * zp ** 4 * nu;
+  }
+  return source;
+}
+
+function buildTable(model: Cosmology, neutrinos: GrowthNeutrinos, lnA0: number): GrowthTable {
+  const expansion = model.expansion;
+  const steps = Math.ceil(-lnA0 / targetStep);
+  const step = -lnA0 / steps;
   // second derivative of D from (D, D′) at ln a
   const accel = (lnA: number, y: number, v: number): number => {
     const lnZp = -lnA;
     const zp = Math.exp(lnZp);
     const e2 = expansion.e2(zp, lnZp);
     const dlnE2 = (-zp * expansion.de2dz(zp, lnZp)) / e2;
-    const om = expansion.matterDensity(zp) / e2;
-    return -(2 + 0.5 * dlnE2) * v + 1.5 * om * y;
+    return -(2 + 0.5 * dlnE2) * v + (1.5 * sourceDensity(model, neutrinos, zp) * y) / e2;
   };
+  // the growing mode of cold matter and radiation (every neutrino relativistic), scaled by Ω_cb:
+  // D = Ω_cb a + (2/3) Ω_r, D′ = Ω_cb a; a model with neither has D constant
+  const a0 = Math.exp(lnA0);
+  const cold = expansion.coldMatter;
+  const radiation = expansion.Ogamma + 3 * expansion.neutrinoSpeciesDensity;
+  const zp0 = 1 / a0;
+  const e2Start = expansion.e2(zp0, -lnA0);
+  // dark energy's share (curvature's, Ω_k a/Ω_m at most, only shrinks into the past)
+  const darkEnergy = e2Start - expansion.matterDensity(zp0) - expansion.Or * zp0 ** 4 - expansion.Ok * zp0 * zp0;
+  if (Math.abs(darkEnergy) > largestDarkEnergyShareAtStart * e2Start) {
+    throw new RangeError(
+      `linear growth starts where matter and radiation dominate, but in this model dark energy makes ${Number(((Math.abs(darkEnergy) / e2Start) * 100).toPrecision(3))}% of H² at a = ${Number(a0.toPrecision(3))}`,
+    );
+  }
+  let y = cold * a0 + (2 / 3) * radiation;
+  let v = cold * a0;
+  if (y === 0) [y, v] = [1, 0];
   const d = new Float64Array(steps + 1);
   const d1 = new Float64Array(steps + 1);
   const d2 = new Float64Array(steps + 1);
-  const a0 = Math.exp(lnAStart);
-  const aEq = Number.isFinite(model.expansion.equalityRedshift) ? 1 / (1 + model.expansion.equalityRedshift) : 0;
-  let y = a0 + (2 / 3) * aEq;
-  let v = a0;
   for (let i = 0; i <= steps; i++) {
-    const x = lnAStart + i * step;
+    const x = lnA0 + i * step;
     const acc = accel(x, y, v);
     d[i] = y;
     d1[i] = v;
@@ -72,21 +127,23 @@ function buildTable(model: Cosmology): GrowthTable {
     d1[i] /= today;
     d2[i] /= today;
   }
-  return { d, d1, d2 };
+  return { lnAStart: lnA0, step, steps, d, d1, d2 };
 }
 
-function tableOf(model: Cosmology): GrowthTable {
-  let table = tables.get(model);
-  if (!table) tables.set(model, (table = buildTable(model)));
+function tableOf(model: Cosmology, neutrinos: GrowthNeutrinos): GrowthTable {
+  const cache = tables[neutrinos];
+  if (!cache) throw new TypeError(`unknown neutrino convention "${String(neutrinos)}": use ${growthNeutrinoConventions.join(" or ")}`);
+  let table = cache.get(model);
+  if (!table) cache.set(model, (table = buildTable(model, neutrinos, lnAStart)));
   return table;
 }
 
 /** Cubic Hermite value of f (slope g = df/dln a) at ln a. */
-function hermite(f: Float64Array, g: Float64Array, lnA: number): number {
-  const t = (lnA - lnAStart) / step;
-  const i = Math.min(steps - 1, Math.max(0, Math.floor(t)));
-  const s = t - i;
-  const [f0, f1, g0, g1] = [f[i], f[i + 1], g[i] * step, g[i + 1] * step];
+function hermite(t: GrowthTable, f: Float64Array, g: Float64Array, lnA: number): number {
+  const u = (lnA - t.lnAStart) / t.step;
+  const i = Math.min(t.steps - 1, Math.max(0, Math.floor(u)));
+  const s = u - i;
+  const [f0, f1, g0, g1] = [f[i], f[i + 1], g[i] * t.step, g[i + 1] * t.step];
   const s2 = s * s;
   const s3 = s2 * s;
   return (2 * s3 - 3 * s2 + 1) * f0 + (s3 - 2 * s2 + s) * g0 + (-2 * s3 + 3 * s2) * f1 + (s3 - s2) * g1;
@@ -94,32 +151,54 @@ function hermite(f: Float64Array, g: Float64Array, lnA: number): number {
 
 function lnAOf(z: number): number {
   checkRedshift(z);
-  const lnA = -Math.log1p(z);
-  if (lnA < lnAStart) throw new RangeError(`z = ${z}: linear growth is computed from z = 1e5 on (matter and radiation alone before)`);
-  return lnA;
+  if (z > maxRedshift) throw new RangeError(`z = ${z}: linear growth is given up to z = 99999`);
+  return -Math.log1p(z);
 }
 
 /**
- * The linear growth factor D(z)/D(0) of cold matter (sub-horizon, scale-independent).
+ * The linear growth factor D(z)/D(0) (sub-horizon, scale-independent).
  * @param model the cosmology
  * @param z redshift, 0 ≤ z ≤ 99999
+ * @param neutrinos "smooth" (source CDM + baryons: small scales; the default) or "clustering"
+ *   (source adds the massive neutrinos' ρ − 3P: large scales); the same without massive neutrinos
  * @returns D(z)/D(0), dimensionless
  * @example growthFactor(Cosmology.fromSpec("EDS"), 1) // 0.5 (D ∝ a in Einstein–de Sitter)
  */
-export function growthFactor(model: Cosmology, z: number): number {
-  const t = tableOf(model);
-  return hermite(t.d, t.d1, lnAOf(z));
+export function growthFactor(model: Cosmology, z: number, neutrinos: GrowthNeutrinos = "smooth"): number {
+  const lnA = lnAOf(z);
+  const t = tableOf(model, neutrinos);
+  return hermite(t, t.d, t.d1, lnA);
 }
 
 /**
  * The linear growth rate f = d ln D / d ln a (fσ8 is then f × σ8(z)).
  * @param model the cosmology
  * @param z redshift, 0 ≤ z ≤ 99999
+ * @param neutrinos "smooth" (the default) or "clustering", as for growthFactor
  * @returns f, dimensionless
  * @example growthRate(Cosmology.fromSpec("EDS"), 2) // 1 (Einstein–de Sitter)
  */
-export function growthRate(model: Cosmology, z: number): number {
-  const t = tableOf(model);
+export function growthRate(model: Cosmology, z: number, neutrinos: GrowthNeutrinos = "smooth"): number {
   const lnA = lnAOf(z);
-  return hermite(t.d1, t.d2, lnA) / hermite(t.d, t.d1, lnA);
+  const t = tableOf(model, neutrinos);
+  return hermite(t, t.d1, t.d2, lnA) / hermite(t, t.d, t.d1, lnA);
+}
+
+/**
+ * D(z)/D(0) and f(z) from an integration started at scale factor `startA` instead of 1e-8 (a table
+ * built for this call, not kept): shows that the result does not depend on the start.
+ * @param model the cosmology
+ * @param z redshift, 0 ≤ z < 1/startA − 1
+ * @param neutrinos "smooth" or "clustering"
+ * @param startA the scale factor where the integration starts, 0 < startA < 1/(1+z)
+ * @returns { d: D(z)/D(0), f }
+ * @example growthStartedAt(Cosmology.fromSpec("EDS"), 1, "smooth", 1e-6).d // 0.5
+ */
+export function growthStartedAt(model: Cosmology, z: number, neutrinos: GrowthNeutrinos, startA: number): { d: number; f: number } {
+  const lnA = lnAOf(z);
+  if (!(startA > 0 && Math.log(startA) < lnA)) throw new RangeError(`the start a = ${startA} must lie before z = ${z}`);
+  if (!tables[neutrinos]) throw new TypeError(`unknown neutrino convention "${String(neutrinos)}"`);
+  const t = buildTable(model, neutrinos, Math.log(startA));
+  const d = hermite(t, t.d, t.d1, lnA);
+  return { d, f: hermite(t, t.d1, t.d2, lnA) / d };
 }

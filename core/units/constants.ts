@@ -112,3 +112,16 @@ export const cmbDipoleGalacticDeg = { l: 264.021, b: 48.253 } as const;
  * 1997, Vol. 1, §1.5.3).
  */
 export const galacticFrameDeg = { poleRa: 192.85948, poleDec: 27.12825, celestialPoleL: 122.93192 } as const;
+
+/**
+ * The CMB temperature today [K]: 2.7255 K (Fixsen 2009, ApJ 707, 916; the value of the Planck 2018
+ * presets). The sound-horizon fit of baoScales.ts was made at it.
+ */
+export const cmbTemperatureK = 2.7255;
+
+/**
+ * The standard effective number of neutrino species, 3.046 (Mangano et al. 2005, Nucl. Phys. B 729,
+ * 221: three species with non-instantaneous decoupling; the value of the Planck 2018 presets). The
+ * sound-horizon fit of baoScales.ts was made at it.
+ */
+export const standardNeff = 3.046;

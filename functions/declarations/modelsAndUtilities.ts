@@ -98,17 +98,18 @@ export function VERSION(): any[][] {
 }
 
 /**
- * A value published under one cosmology restated under another, at the source's redshift: "distance" × D_M,to/D_M,from; "luminosity" × (D_L,to/D_L,from)²; "size" × D_A,to/D_A,from; "magnitude" (absolute) + 5 log10(D_L,from/D_L,to); "density" (number density) × (dV/dz)_from/(dV/dz)_to.
+ * A value published under one cosmology restated under another, at the source's redshift: "distance" × D_M,to/D_M,from; "luminosity" × (D_L,to/D_L,from)²; "size" × D_A,to/D_A,from; "magnitude" (absolute) + 5 log10(D_L,from/D_L,to); "density" (number density) × (dV/dz)_from/(dV/dz)_to. A value in h-scaled units (Mpc/h, h3 Mpc-3, h-2 Lsun) needs its unit: it is converted with each model's own h and comes back in the same unit.
  * @customfunction RESCALE RESCALE
  * @helpurl https://localhost:3000/help.html#RESCALE
  * @example =ZC.RESCALE(3.2E44, 0.84, "luminosity", "W7-BAO")
- * @param value The published value, in any unit (a magnitude in mag) (value or range).
+ * @param value The published value, in its own unit (a magnitude in mag) (value or range).
  * @param z The source's redshift, > 0 (value or range).
  * @param quantity "distance", "luminosity", "size", "magnitude" or "density" (value or range).
  * @param from_model The cosmology the value was computed under: preset, spec or key/value block (value or range).
  * @param [to_model] The cosmology wanted; blank = workbook's active model.
- * @returns The value under to_model, in its own unit.
+ * @param [unit] The value's unit; needed when it holds h = H0/100 (e.g. "Mpc/h", "h3 Mpc-3", "h-2 Lsun"); blank = a unit without h.
+ * @returns The value under to_model, in the value's unit.
  */
-export function RESCALE(value: any[][], z: any[][], quantity: any[][], from_model: any[][], to_model?: any[][]): any[][] {
-  return callFromSheet(d.RESCALE, [value, z, quantity, from_model, to_model]);
+export function RESCALE(value: any[][], z: any[][], quantity: any[][], from_model: any[][], to_model?: any[][], unit?: string): any[][] {
+  return callFromSheet(d.RESCALE, [value, z, quantity, from_model, to_model, unit]);
 }

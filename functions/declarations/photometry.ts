@@ -187,7 +187,7 @@ export function DIMMING(z: any[][], alpha?: any[][]): any[][] {
 }
 
 /**
- * A spectral index in another field's convention as zcell's alpha (S_ν ∝ ν^alpha): "photon" (X-ray photon index Γ of N(E) ∝ E^−Γ: alpha = 1 − Γ), "lambda" (f_λ ∝ λ^β: alpha = −2 − β) or "radio" (S_ν ∝ ν^−value: alpha = −value).
+ * A spectral index in another field's convention as zcell's alpha (S_ν ∝ ν^alpha): "photon" (X-ray photon index Γ of N(E) ∝ E^−Γ: alpha = 1 − Γ), "lambda" (f_λ ∝ λ^β: alpha = −2 − β) or "radio" (S_ν ∝ ν^−value: alpha = −value, whatever its sign: a negative radio index, a rising spectrum, gives a positive alpha; an index already written as S_ν ∝ ν^alpha, −0.7 for synchrotron, needs no conversion and would come back as +0.7).
  * @customfunction SPECTRAL_INDEX SPECTRAL_INDEX
  * @helpurl https://localhost:3000/help.html#SPECTRAL_INDEX
  * @example =ZC.SPECTRAL_INDEX(1.9, "photon")
@@ -200,13 +200,13 @@ export function SPECTRAL_INDEX(value: any[][], convention: any[][]): any[][] {
 }
 
 /**
- * Intrinsic surface luminosity density from an observed surface brightness, removing the (1+z)⁴ dimming (10 log10(1+z) mag) and K: Σ = 10^(−0.4 (μ − 10 log10(1+z) − K − M☉ − 21.572)) Lsun/pc2. No cosmology enters.
+ * Intrinsic surface luminosity density from an observed surface brightness, removing the (1+z)⁴ dimming (10 log10(1+z) mag) and K: Σ = 10^(−0.4 (μ − 10 log10(1+z) − K − M☉ − 21.572)) Lsun/pc2, in solar luminosities of the band. M☉ must be the Sun's absolute magnitude in the same band and the same system (AB or Vega) as μ: a mismatch shifts Σ by the zero-point difference. No cosmology enters.
  * @customfunction SURFACE_LUM SURFACE_LUM
  * @helpurl https://localhost:3000/help.html#SURFACE_LUM
  * @example =ZC.SURFACE_LUM(24.1, 0.6, 4.81, 0.4)
  * @param mu Observed surface brightness, mag/arcsec2 (value or range).
  * @param z Redshift, ≥ 0 (value or range).
- * @param sun_abs_mag The Sun's absolute magnitude in the band (value or range).
+ * @param sun_abs_mag The Sun's absolute magnitude in the band of μ, in the same system (AB or Vega) (value or range).
  * @param [kcorr] K-correction of the band (mag); blank = 0 (value or range).
  * @returns Σ (Lsun/pc2).
  */
@@ -215,13 +215,13 @@ export function SURFACE_LUM(mu: any[][], z: any[][], sun_abs_mag: any[][], kcorr
 }
 
 /**
- * Observed surface brightness of an intrinsic surface luminosity density (the inverse of ZC.SURFACE_LUM): μ = M☉ + 21.572 − 2.5 log10(Σ) + 10 log10(1+z) + K.
+ * Observed surface brightness of an intrinsic surface luminosity density (the inverse of ZC.SURFACE_LUM): μ = M☉ + 21.572 − 2.5 log10(Σ) + 10 log10(1+z) + K. μ comes out in the band and system (AB or Vega) of M☉, the Sun's absolute magnitude given.
  * @customfunction SURFACE_MAG SURFACE_MAG
  * @helpurl https://localhost:3000/help.html#SURFACE_MAG
  * @example =ZC.SURFACE_MAG(100, 0.6, 4.81)
  * @param sigma Surface luminosity density, > 0, Lsun/pc2 (value or range).
  * @param z Redshift, ≥ 0 (value or range).
- * @param sun_abs_mag The Sun's absolute magnitude in the band (value or range).
+ * @param sun_abs_mag The Sun's absolute magnitude in the band of μ, in the same system (AB or Vega) (value or range).
  * @param [kcorr] K-correction of the band (mag); blank = 0 (value or range).
  * @returns μ (mag/arcsec2).
  */

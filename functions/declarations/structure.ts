@@ -36,7 +36,7 @@ export function DIST_VOLUME(z: any[][], model?: any[][], unit?: string): any[][]
 }
 
 /**
- * Sound horizon at the drag epoch r_d, from the fit of Aubourg et al. 2015 (eq. 16) in ω_b, ω_cb and ω_ν, for the standard Neff; needs Ob in the model. D_M/r_d, D_H/r_d and D_V/r_d are then ratios of cells.
+ * Sound horizon at the drag epoch r_d: the fit of Aubourg et al. 2015 (eq. 16) in ω_b = Ω_b h², ω_cb and ω_ν, made for Neff = 3.046 and Tcmb = 2.7255 K; another Neff (or Tcmb within 2.72–2.73 K) scales it by the direct integral of the sound speed. Needs Ob in the model. r_d follows ω_b and ω_cb, not the fractions: "P18-CMB; H0=73" (same Ωb, Ωm) has r_d 6% smaller. #N/A outside ω_b 0.015–0.03, ω_cb 0.08–0.22, Neff 2–5, Σm_ν ≤ 1 eV. D_M/r_d, D_H/r_d and D_V/r_d are then ratios of cells.
  * @customfunction SOUND_HORIZON SOUND_HORIZON
  * @helpurl https://localhost:3000/help.html#SOUND_HORIZON
  * @example =ZC.SOUND_HORIZON()
@@ -49,7 +49,7 @@ export function SOUND_HORIZON(model?: any[][], unit?: string): any[][] {
 }
 
 /**
- * Critical surface density of a thin gravitational lens, Σ_cr = c² D_s / (4πG D_l D_ls) (angular-diameter distances; D_ls from lens to source, any curvature); in Msun/pc2 unless a unit is given.
+ * Critical surface density of a thin gravitational lens, Σ_cr = c² D_s / (4πG D_l D_ls) (angular-diameter distances; D_ls from lens to source, any curvature): mass per physical area at the lens (the default), or per comoving area, smaller by (1+z_l)² (coordinates "comoving", as weak-lensing ΔΣ profiles in comoving units need); in Msun/pc2 unless a unit is given.
  * @customfunction SIGMA_CRIT SIGMA_CRIT
  * @helpurl https://localhost:3000/help.html#SIGMA_CRIT
  * @example =ZC.SIGMA_CRIT(0.35, 1.2)
@@ -57,10 +57,11 @@ export function SOUND_HORIZON(model?: any[][], unit?: string): any[][] {
  * @param z_source Source redshift, > z_lens (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
  * @param [unit] Output unit, default "Msun/pc2" (e.g. "kg/m2", "h Msun/pc2").
+ * @param [coordinates] "physical" (blank: per physical pc² at the lens) or "comoving" (per comoving pc², Σ_cr/(1+z_l)²).
  * @returns Σ_cr (Msun/pc2 by default).
  */
-export function SIGMA_CRIT(z_lens: any[][], z_source: any[][], model?: any[][], unit?: string): any[][] {
-  return callFromSheet(d.SIGMA_CRIT, [z_lens, z_source, model, unit]);
+export function SIGMA_CRIT(z_lens: any[][], z_source: any[][], model?: any[][], unit?: string, coordinates?: string): any[][] {
+  return callFromSheet(d.SIGMA_CRIT, [z_lens, z_source, model, unit, coordinates]);
 }
 
 /**
@@ -112,27 +113,29 @@ export function HALO_MASS(radius: any[][], z: any[][], definition: any[][], mode
 }
 
 /**
- * Linear growth factor D(z)/D(0) of cold matter: sub-horizon, scale-independent, massive neutrinos clustering like matter (free streaming ignored); from the growth equation in ln a, for any curvature, radiation and w0–wa dark energy.
+ * Linear growth factor D(z)/D(0), sub-horizon and scale-independent, from the growth equation in ln a (any curvature, radiation, w0–wa dark energy). Massive neutrinos: "smooth" (blank) keeps them out of the source, which is then cold matter (CDM + baryons, as ZC.OMEGA("cold")): the growth on scales inside their free-streaming length, where σ8, halos and most fσ8 measurements are; "clustering" adds their ρ − 3P (nothing while relativistic, all of it once slow): the growth on larger scales. Without massive neutrinos both are the same.
  * @customfunction GROWTH GROWTH
  * @helpurl https://localhost:3000/help.html#GROWTH
  * @example =ZC.GROWTH(1)
  * @param z Redshift, 0 … 99999 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [neutrinos] "smooth" (blank: massive neutrinos do not cluster, small scales) or "clustering" (they cluster once non-relativistic, large scales).
  * @returns D(z)/D(0).
  */
-export function GROWTH(z: any[][], model?: any[][]): any[][] {
-  return callFromSheet(d.GROWTH, [z, model]);
+export function GROWTH(z: any[][], model?: any[][], neutrinos?: string): any[][] {
+  return callFromSheet(d.GROWTH, [z, model, neutrinos]);
 }
 
 /**
- * Linear growth rate f = d ln D / d ln a (same assumptions as ZC.GROWTH); fσ8 is f times σ8(z) = σ8 · ZC.GROWTH(z).
+ * Linear growth rate f = d ln D / d ln a (same assumptions and neutrinos argument as ZC.GROWTH); fσ8 is f times σ8(z) = σ8 · ZC.GROWTH(z).
  * @customfunction GROWTH_RATE GROWTH_RATE
  * @helpurl https://localhost:3000/help.html#GROWTH_RATE
  * @example =ZC.GROWTH_RATE(0.5)
  * @param z Redshift, 0 … 99999 (value or range).
  * @param [model] Cosmology: preset, spec or key/value block; blank = workbook's active model.
+ * @param [neutrinos] "smooth" (blank: massive neutrinos do not cluster, small scales) or "clustering" (they cluster once non-relativistic, large scales).
  * @returns f.
  */
-export function GROWTH_RATE(z: any[][], model?: any[][]): any[][] {
-  return callFromSheet(d.GROWTH_RATE, [z, model]);
+export function GROWTH_RATE(z: any[][], model?: any[][], neutrinos?: string): any[][] {
+  return callFromSheet(d.GROWTH_RATE, [z, model, neutrinos]);
 }

@@ -108,7 +108,8 @@ export const modelsAndUtilities: FunctionDef[] = [
     args: [
       num("value"), z, { kind: "text", name: "quantity", choices: rescaleQuantities },
       { kind: "model", name: "from_model", required: true }, { kind: "model", name: "to_model" },
+      { kind: "text", name: "unit", scalar: true, optional: true },
     ],
-    compute: (a) => rescaledValue(n(a, "value"), n(a, "z"), a.quantity as RescaleQuantity, a.from_model as Cosmology, a.to_model as Cosmology),
+    compute: (a) => rescaledValue(n(a, "value"), n(a, "z"), a.quantity as RescaleQuantity, a.from_model as Cosmology, a.to_model as Cosmology, a.unit as string),
   },
 ];

@@ -7,11 +7,15 @@
 import {
   criticalSurfaceDensityMsunPc2,
   growthFactor,
+  growthNeutrinoConventions,
   growthRate,
+  type GrowthNeutrinos,
   haloMassMsun,
   haloOverdensity,
   haloRadiusMpc,
   hubbleDistanceAtMpc,
+  lensingCoordinates,
+  type LensingCoordinates,
   soundHorizonDragMpc,
   volumeAveragedDistanceMpc,
 } from "../../core/index.js";
@@ -20,6 +24,9 @@ import { amount, m, model, n, num, unit, z } from "./argumentKinds.js";
 
 const definition: ArgSpec = { kind: "text", name: "definition" };
 const def = (a: Args) => a.definition as string;
+/** How massive neutrinos enter the growth: "smooth" (blank) or "clustering". */
+const neutrinos: ArgSpec = { kind: "text", name: "neutrinos", choices: growthNeutrinoConventions, scalar: true, optional: true };
+const nu = (a: Args) => ((a.neutrinos as string) || "smooth") as GrowthNeutrinos;
 
 /** Structure functions, in the order of their declarations. */
 export const structure: FunctionDef[] = [
@@ -42,8 +49,8 @@ export const structure: FunctionDef[] = [
   },
   {
     name: "SIGMA_CRIT",
-    args: [num("z_lens"), num("z_source"), model, unit("unit", "Msun/pc2")],
-    compute: (a) => criticalSurfaceDensityMsunPc2(m(a), n(a, "z_lens"), n(a, "z_source")),
+    args: [num("z_lens"), num("z_source"), model, unit("unit", "Msun/pc2"), { kind: "text", name: "coordinates", choices: lensingCoordinates, scalar: true, optional: true }],
+    compute: (a) => criticalSurfaceDensityMsunPc2(m(a), n(a, "z_lens"), n(a, "z_source"), ((a.coordinates as string) || "physical") as LensingCoordinates),
   },
   {
     name: "OVERDENSITY",
@@ -62,14 +69,14 @@ export const structure: FunctionDef[] = [
   },
   {
     name: "GROWTH",
-    args: [z, model],
-    compute: (a) => growthFactor(m(a), n(a, "z")),
-    kernel: { arg: "z", of: (a, zz) => growthFactor(m(a), zz) },
+    args: [z, model, neutrinos],
+    compute: (a) => growthFactor(m(a), n(a, "z"), nu(a)),
+    kernel: { arg: "z", of: (a, zz) => growthFactor(m(a), zz, nu(a)) },
   },
   {
     name: "GROWTH_RATE",
-    args: [z, model],
-    compute: (a) => growthRate(m(a), n(a, "z")),
-    kernel: { arg: "z", of: (a, zz) => growthRate(m(a), zz) },
+    args: [z, model, neutrinos],
+    compute: (a) => growthRate(m(a), n(a, "z"), nu(a)),
+    kernel: { arg: "z", of: (a, zz) => growthRate(m(a), zz, nu(a)) },
   },
 ];

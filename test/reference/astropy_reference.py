@@ -39,6 +39,7 @@ def main():
             "lookbackTimeGyr": cosmo.lookback_time(z).to_value(u.Gyr).tolist(),
             "ageGyr": cosmo.age(z).to_value(u.Gyr).tolist(),
             "comovingVolumeMpc3": cosmo.comoving_volume(z).to_value(u.Mpc**3).tolist(),
+            "comovingVolumeElementMpc3Sr": cosmo.differential_comoving_volume(z).to_value(u.Mpc**3 / u.sr).tolist(),
             "expansionRate": cosmo.efunc(z).tolist(),
         }
     json.dump({"results": results}, sys.stdout)

@@ -1,0 +1,122 @@
+/**
+ * Linear growth with massive neutrinos in the trade's two limits ("smooth": the source is CDM +
+ * baryons; "clustering": it adds the neutrinos' ρ − 3P), checked against an independent integration
+ * (test/reference/growth_reference.py: another form of the equation, another Runge–Kutta scheme, another
+ * start, its own neutrino integrals; Debian python3-mpmath), against the values an outside integration
+ * gave in issue 28, and for independence from where the integration starts.
+ */
+import { describe, expect, test } from "vitest";
+import { Cosmology } from "../core/distances/Cosmology.js";
+import { growthFactor, growthRate, growthStartedAt, type GrowthNeutrinos } from "../core/observables/growth.js";
+import { relativeError } from "./helpers.js";
+import { referenceAvailable, runPythonReference } from "./reference/python.js";
+import { onFirstUse } from "./requirements.js";
+import { sheetCalls } from "./sheetCalls.js";
+
+const { num, failure } = sheetCalls("P18-CMB");
+const conventions: GrowthNeutrinos[] = ["smooth", "clustering"];
+
+// Σm_ν = 0, 0.06 and 0.3 eV on the P18-CMB background (one massive species, as the preset)
+const models: [id: string, spec: string][] = [
+  ["massless", "P18-CMB; mnu=0"],
+  ["0.06 eV", "P18-CMB"],
+  ["0.3 eV", "P18-CMB; mnu=0.3"],
+];
+const zs = [0, 0.01, 0.1, 0.3, 0.5, 1, 2, 3, 5, 10, 20, 50, 100, 200, 500, 1000, 2000, 5000, 1e4];
+
+type Reply = Record<string, Record<GrowthNeutrinos, { d: number[]; f: number[] }>>;
+
+describe.runIf(referenceAvailable("mpmath", "python3-mpmath"))("against an independent integration (test/reference/growth_reference.py)", () => {
+  const reply = onFirstUse(() =>
+    runPythonReference<Reply>("growth_reference.py", {
+      models: models.map(([id, spec]) => {
+        const p = Cosmology.fromSpec(spec).parameters;
+        return { id, H0: p.H0, Om: p.Om, Tcmb: p.Tcmb, Neff: p.Neff, mnu: p.mnu };
+      }),
+      z: zs,
+      conventions,
+    }),
+  );
+
+  test.each(models.flatMap(([id, spec]) => conventions.map((c) => [id, spec, c] as const)))(
+    "%s (%s), %s: D(z)/D(0) and f for 0 ≤ z ≤ 1e4 to 1e-6",
+    (id, spec, convention) => {
+      const m = Cosmology.fromSpec(spec);
+      const ref = reply()[id][convention];
+      let worst = 0;
+      zs.forEach((z, k) => {
+        const eD = relativeError(growthFactor(m, z, convention), ref.d[k]);
+        const eF = relativeError(growthRate(m, z, convention), ref.f[k]);
+        worst = Math.max(worst, eD, eF);
+        expect(eD, `D at z = ${z}`).toBeLessThanOrEqual(1e-6);
+        expect(eF, `f at z = ${z}`).toBeLessThanOrEqual(1e-6);
+      });
+      console.log(`growth ${id} ${convention}: worst relative difference ${worst.toExponential(1)}`);
+    },
+  );
+});
+
+describe("the two neutrino conventions", () => {
+  test("are the same without massive neutrinos, bit for bit", () => {
+    const m = Cosmology.fromSpec("P18-CMB; mnu=0");
+    for (const z of [0, 1, 100, 1e4]) {
+      expect(growthFactor(m, z, "clustering")).toBe(growthFactor(m, z, "smooth"));
+      expect(growthRate(m, z, "clustering")).toBe(growthRate(m, z, "smooth"));
+    }
+  });
+
+  test.each([
+    // convention   | quantity      | value  | quoted to
+    ["clustering",    "GROWTH",       0.0015131, 5e-8],
+    ["clustering",    "GROWTH_RATE",  0.8362,    5e-5],
+    ["smooth",        "GROWTH",       0.0015329, 5e-8],
+  ])("P18-CMB at z = 1000, %s: %s = %d as the outside integration quoted in issue 28 (to its last digit)", (convention, fn, value, half) => {
+    expect(Math.abs(num(fn as string, 1000, "P18-CMB", convention) - (value as number))).toBeLessThanOrEqual(half as number);
+  });
+
+  test("smooth neutrinos slow the growth: D(z)/D(0) is larger at every z > 0, and f smaller today (they add to H but not to the source)", () => {
+    const m = Cosmology.fromSpec("P18-CMB; mnu=0.3");
+    for (const z of [0.5, 10, 1000]) expect(growthFactor(m, z, "smooth")).toBeGreaterThan(growthFactor(m, z, "clustering"));
+    expect(growthRate(m, 0, "smooth")).toBeLessThan(growthRate(m, 0, "clustering"));
+  });
+
+  test("a blank or omitted neutrinos argument is smooth; the choice is case-insensitive; another word is #VALUE! naming the choices", () => {
+    expect(num("GROWTH", 3)).toBe(num("GROWTH", 3, null, "smooth"));
+    expect(num("GROWTH", 3, null, "")).toBe(num("GROWTH", 3, null, "smooth"));
+    expect(num("GROWTH_RATE", 3, null, "Clustering")).toBe(growthRate(Cosmology.fromSpec("P18-CMB"), 3, "clustering"));
+    const cell = failure("GROWTH", 3, null, "free-streaming");
+    expect(cell.kind).toBe("value");
+    expect(cell.message).toBe('ZC.GROWTH: neutrinos: "free-streaming" is not one of smooth, clustering');
+  });
+});
+
+describe("independence from where the integration starts", () => {
+  test.each([
+    // start a | tolerance: the starting mode leaves out the neutrinos' mass, ~(m/T_ν)² a² of their density
+    [1e-6,       1e-7],   // measured 5e-8 (0.3 eV, clustering), 1e-10 (smooth)
+    [1e-7,       1e-9],   // measured 5e-10
+    [1e-10,      1e-10],  // measured 5e-12: the start at 1e-8 is that close to the limit
+    [1e-12,      1e-10],
+  ])("a start at a = %d gives D and f within %d of the start at 1e-8, for z ≤ 1e4, both conventions", (startA, tol) => {
+    const m = Cosmology.fromSpec("P18-CMB; mnu=0.3");
+    for (const convention of conventions) {
+      for (const z of [0, 10, 1000, 1e4]) {
+        const other = growthStartedAt(m, z, convention, startA);
+        expect(relativeError(other.d, growthFactor(m, z, convention)), `D, ${convention}, z = ${z}`).toBeLessThanOrEqual(tol);
+        expect(relativeError(other.f, growthRate(m, z, convention)), `f, ${convention}, z = ${z}`).toBeLessThanOrEqual(tol);
+      }
+    }
+  });
+
+  test("a start inside the range asked for is refused", () => {
+    expect(() => growthStartedAt(Cosmology.fromSpec("EDS"), 1e4, "smooth", 1e-3)).toThrow(/must lie before z = 10000/);
+  });
+
+  test("a model whose dark energy dominates the early universe (w0 + wa > 0 without radiation) is #NUM!: no growing mode to start on; curvature is no such problem", () => {
+    const cell = failure("GROWTH", 1, "H0=70; Om=0.3; w0=0.2");
+    expect(cell.kind).toBe("num");
+    expect(cell.message).toBe("ZC.GROWTH: linear growth starts where matter and radiation dominate, but in this model dark energy makes 100% of H² at a = 1e-8");
+    // an almost empty open model without radiation: Ω_k a / Ω_m = 1e-5 at the start; D is nearly constant today
+    expect(num("GROWTH_RATE", 0, "H0=70; Om=0.001; OL=0")).toBeLessThan(0.01);
+  });
+});
