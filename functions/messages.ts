@@ -30,6 +30,8 @@ export const messages = {
   unitArgument: (arg: string, detail: string) => `${arg}: ${detail}`,
   choice: (arg: string, value: string, choices: readonly string[]) =>
     `${arg}: "${value}" is not one of ${choices.join(", ")}`,
+  outsideLawRange: (arg: string, value: number, unit: string, law: string, low: number, high: number) =>
+    `${arg} = ${withUnit(value, unit)} is outside ${law}'s range, ${formatValue(low)} to ${withUnit(high, unit)}: the law is not defined there`,
   notFiniteResult: (fn: string) => `${fn}: the result is not a finite number for these arguments`,
   model: (detail: string) => `model: ${detail}`,
   unitInModelSlot: (text: string) =>
