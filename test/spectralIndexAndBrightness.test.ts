@@ -114,6 +114,12 @@ describe("BRIGHTNESS_TEMP: Rayleigh–Jeans T_b of an elliptical Gaussian", () =
     expectRelative(num("BRIGHTNESS_TEMP", 0.05, (speedOfLightMPerS / 5e9) * 100, 0.002, 0.001, "", "", "cm"), reference, 1e-13, "cm");
   });
 
+  test("blank in, blank out; a blank z is the observed frame", () => {
+    expect(one("BRIGHTNESS_TEMP", "", 1.4, 1, 1)).toBe("");
+    expect(one("BRIGHTNESS_TEMP", 1, 1.4, 1, "")).toBe("");
+    expect(one("BRIGHTNESS_TEMP", 1, 1.4, 1, 1, "")).toBe(one("BRIGHTNESS_TEMP", 1, 1.4, 1, 1, 0));
+  });
+
   test.each([
     // arguments                            kind     message
     [[1, 1.4, 0, 1],                        "num",   "ZC.BRIGHTNESS_TEMP: major = 0 arcsec must be > 0 arcsec"],
