@@ -121,7 +121,7 @@ function catalogueSteps(bundle: string): void {
   const pad = (s: string, w: number) => s.padEnd(w);
   for (const name of catalogueStepFigures) {
     const r = figure(bundle, `catalogue:${name}`, "ns");
-    console.log(pad(`one call over 100k rows: ${name}`, 42) + pad(`${r.min.toFixed(0)} / ${r.median.toFixed(0)} ns a cell`, 20) + `≤ ${targets.structure} ns`);
+    console.log(pad(`one call over 100k rows: ${name}`, 50) + pad(`${r.min.toFixed(0)} / ${r.median.toFixed(0)} ns a cell`, 20) + `≤ ${targets.structure} ns`);
   }
 }
 
