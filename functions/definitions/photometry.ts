@@ -5,12 +5,12 @@
  */
 import {
   abFluxDensityJy,
-  fluxDensityFactorJy,
   abMagnitude,
   absoluteMagnitude,
   apparentMagnitude,
   bolometricAbsoluteMagnitude,
   bolometricLuminosityW,
+  fluxDensityFactorJy,
   fluxWm2,
   frequencyHz,
   janskySI,
