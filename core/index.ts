@@ -6,6 +6,7 @@ export {
   abZeroPointJy,
   angstromM,
   auM,
+  boltzmannJPerK,
   bolometricZeroPointW,
   cmbDipoleGalacticDeg,
   cmbDipoleSpeedKmPerS,
@@ -74,4 +75,17 @@ export {
   restFrameSpectralLuminosityErrorWHz,
   spectralLuminosityErrorWHz,
 } from "./observables/uncertainties.js";
-export { conversionFactor, convertUnit, frequencyHz, parseUnit, scaledConversion, unitKind, type Unit } from "./units/units.js";
+export { bandInUnit, conversionFactor, convertUnit, frequencyHz, parseUnit, scaledConversion, unitKind, type Unit } from "./units/units.js";
+export { fluxDensityFactorJy } from "./units/fluxDensityFactorJy.js";
+export { naturalCubicSpline } from "./numerics/naturalCubicSpline.js";
+export {
+  defaultRv,
+  extinctionLawNamed,
+  extinctionLaws,
+  extinctionMag,
+  extinctionRangeAngstrom,
+  inRange,
+  type ExtinctionLaw,
+} from "./dust/extinction.js";
+export { spectralIndexBetween, spectralIndexBetweenError } from "./observables/spectralIndexBetween.js";
+export { brightnessTemperatureK } from "./observables/brightnessTemperature.js";

@@ -6,6 +6,7 @@
  * declaration file.
  */
 import { distancesAndTimes } from "./definitions/distancesAndTimes.js";
+import { dustAndSpectra } from "./definitions/dustAndSpectra.js";
 import { errors } from "./definitions/errors.js";
 import { limitsAndPopulations } from "./definitions/limitsAndPopulations.js";
 import { modelsAndUtilities } from "./definitions/modelsAndUtilities.js";
@@ -13,7 +14,7 @@ import { photometry } from "./definitions/photometry.js";
 import { structure } from "./definitions/structure.js";
 import type { FunctionDef } from "./FunctionDef.js";
 
-const families = [distancesAndTimes, photometry, errors, limitsAndPopulations, structure, modelsAndUtilities];
+const families = [distancesAndTimes, photometry, errors, limitsAndPopulations, structure, modelsAndUtilities, dustAndSpectra];
 
 /** The worksheet functions by name (without the ZC. namespace). */
 export const definitions: Readonly<Record<string, FunctionDef>> = Object.fromEntries(families.flat().map((d) => [d.name, d]));

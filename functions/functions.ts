@@ -12,3 +12,4 @@ import "./declarations/errors.js";
 import "./declarations/limitsAndPopulations.js";
 import "./declarations/structure.js";
 import "./declarations/modelsAndUtilities.js";
+import "./declarations/dustAndSpectra.js";

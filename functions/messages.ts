@@ -33,6 +33,8 @@ export const messages = {
   otherKind: (detail: string, kind: string, use: string) => `${detail}: for ${kind} use ${use}`,
   choice: (arg: string, value: string, choices: readonly string[]) =>
     `${arg}: "${value}" is not one of ${choices.join(", ")}`,
+  outsideLawRange: (arg: string, value: number, unit: string, law: string, low: number, high: number) =>
+    `${arg} = ${withUnit(value, unit)} is outside ${law}'s range, ${formatValue(low)} to ${withUnit(high, unit)}: the law is not defined there`,
   notFiniteResult: (fn: string) => `${fn}: the result is not a finite number for these arguments`,
   model: (detail: string) => `model: ${detail}`,
   /** A spec without H0 or Om: the same changes on the workbook's model, as a ZC.MODEL call (when it can take them all). */

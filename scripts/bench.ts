@@ -2,13 +2,14 @@
  * Benchmark (not a test): ns per value over 1e6 random redshifts in [0, 10] for the main quantities,
  * model build time, and the same workload through astropy where /usr/bin/python3 has it; then the
  * worksheet path through the built bundle (scripts/benchWorksheet.ts). Run with `npm run bench`
- * (`npm run bench -- --worksheet` for the worksheet path alone).
+ * (`npm run bench -- --worksheet` for the worksheet path alone, `npm run bench -- --steps` for the
+ * catalogue steps of issue 29 alone).
  */
 import { execFileSync, spawnSync } from "node:child_process";
 import { fileURLToPath } from "node:url";
 import { Cosmology } from "../core/distances/Cosmology.js";
 import { fermiDiracDensityFactor } from "../core/model/fermiDirac.js";
-import { benchWorksheet } from "./benchWorksheet.js";
+import { benchCatalogueSteps, benchWorksheet } from "./benchWorksheet.js";
 
 const n = 1_000_000;
 
@@ -82,6 +83,11 @@ if (only >= 0) {
 
 if (process.argv.includes("--worksheet")) {
   await benchWorksheet();
+  process.exit(0);
+}
+
+if (process.argv.includes("--steps")) {
+  benchCatalogueSteps();
   process.exit(0);
 }
 

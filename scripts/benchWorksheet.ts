@@ -21,6 +21,9 @@ const catalogueFunctions = ["DIST_LUM_ERR", "LUMINOSITY_ERR", "LUMINOSITY_REST",
 /** The population and structure functions of 0.2.0, each timed against ≤ 1 µs a cell over a 100k-row column. */
 const structureFunctions = ["LUMINOSITY_REST_ERR", "RESCALE", "DIST_HUBBLE", "DIST_VOLUME", "SIGMA_CRIT", "OVERDENSITY", "HALO_RADIUS", "HALO_MASS", "SURFACE_LUM", "SURFACE_MAG", "GROWTH", "GROWTH_RATE"];
 
+/** Issue 29's catalogue steps, each timed against ≤ 1 µs a cell over a 100k-row column (EXTINCTION twice: its default law in Angstrom, and Calzetti 2000 in um; MAG_AB with f_λ). */
+const catalogueStepFigures = ["EXTINCTION", "EXTINCTION_CALZETTI_UM", "INDEX_BETWEEN", "INDEX_BETWEEN_ERR", "BRIGHTNESS_TEMP", "MAG_AB_FLAMBDA"];
+
 /** First formulas after the bundle loads (scripts/benchBundle.mjs cold:*): the model and its tables are built for them. */
 const coldFormulas: [string, string][] = [
   ["cold", "DIST_LUM(1)"],
@@ -109,5 +112,22 @@ export async function benchWorksheet(): Promise<void> {
       const r = figure(bundle, `catalogue:${name}`, "ns");
       console.log(pad(`one call over 100k rows: ${name}`, 42) + pad(`${fmt(r, 0)} ns a cell`, 20) + `≤ ${targets.structure} ns`);
     }
+    catalogueSteps(bundle);
   }
+}
+
+/** The catalogue-step rows: one call over a 100k-row column each, min / median of 5 processes. */
+function catalogueSteps(bundle: string): void {
+  const pad = (s: string, w: number) => s.padEnd(w);
+  for (const name of catalogueStepFigures) {
+    const r = figure(bundle, `catalogue:${name}`, "ns");
+    console.log(pad(`one call over 100k rows: ${name}`, 50) + pad(`${r.min.toFixed(0)} / ${r.median.toFixed(0)} ns a cell`, 20) + `≤ ${targets.structure} ns`);
+  }
+}
+
+/** Only the catalogue-step rows, through the production build (`npm run bench -- --steps`). */
+export function benchCatalogueSteps(): void {
+  const bundle = build([]);
+  console.log(`catalogue steps through ${bundle} (production build, fresh process each, P18-BAO); min / median of ${runs} processes`);
+  catalogueSteps(bundle);
 }

@@ -103,8 +103,8 @@ const about: Record<string, { summary: string; equation: string; method: string;
   KCORRECTION: { summary: "K-correction of a power law", equation: "K = −2.5·(1+α)·log10(1+z)", method: closedForm, kcorr: true },
   MAG_ABS: { summary: "absolute magnitude", equation: "M = m − μ(z) − K", method: tabled, kcorr: true },
   MAG_APP: { summary: "apparent magnitude", equation: "m = M + μ(z) + K", method: tabled, kcorr: true },
-  MAG_AB: { summary: "AB magnitude", equation: "m_AB = −2.5·log10(f_ν / 3630.78 Jy)", method: closedForm },
-  FLUX_AB: { summary: "flux density of an AB magnitude", equation: "f_ν = 3630.78 Jy · 10^(−m_AB/2.5)", method: closedForm },
+  MAG_AB: { summary: "AB magnitude", equation: "m_AB = −2.5·log10(f_ν / 3630.78 Jy); f_ν = f_λ·λ²/c for a unit per wavelength", method: closedForm },
+  FLUX_AB: { summary: "flux density of an AB magnitude", equation: "f_ν = 3630.78 Jy · 10^(−m_AB/2.5); f_λ = f_ν·c/λ² for a unit per wavelength", method: closedForm },
   DIST_LUM_ERR: { summary: "1σ error of the luminosity distance", equation: "σ_DL = |dD_L/dz|·σ_z, dD_L/dz = D_M + (1+z)·dD_M/dz", method: firstOrder },
   LUMINOSITY_ERR: { summary: "1σ error of a bolometric luminosity", equation: "σ_L/L = √((σ_F/F)² + (2σ_z·dlnD_L/dz)²)", method: firstOrder },
   LUMINOSITY_NU_ERR: { summary: "1σ error of a spectral luminosity", equation: "σ_L/L = √((σ_S/S)² + (σ_z(2·dlnD_L/dz − (1+α)/(1+z)))² + (σ_α·ln(1+z))²)", method: firstOrder },
@@ -142,6 +142,14 @@ const about: Record<string, { summary: string; equation: string; method: string;
   PRESETS: { summary: "the parameter sets: built in, and defined in this workbook", equation: "—", method: closedForm },
   DESCRIBE: { summary: "the model in words", equation: "—", method: closedForm },
   VERSION: { summary: "version and engine conventions", equation: "—", method: closedForm },
+  EXTINCTION: {
+    summary: "extinction A_λ of a published law for a colour excess E(B−V)",
+    equation: "A_λ = E(B−V)·A_λ/E(B−V) at one wavelength: Fitzpatrick 1999 (FM90 UV, spline in the optical/IR), Cardelli 1989 and O'Donnell 1994 (R_V·a(x) + b(x), x = 1/λ), Calzetti 2000 (k′(λ), a galaxy's own attenuation)",
+    method: "the laws' published formulas, exact to rounding (Fitzpatrick 1999: a natural cubic spline through its anchor points); a band's A is the law's value at its effective wavelength",
+  },
+  INDEX_BETWEEN: { summary: "spectral index between two bands", equation: "α = ln(S1/S2)/ln(ν1/ν2), S_ν ∝ ν^α", method: closedForm },
+  INDEX_BETWEEN_ERR: { summary: "1σ error of a two-band spectral index", equation: "σ_α = √((σ1/S1)² + (σ2/S2)²)/|ln(ν1/ν2)|", method: "first-order propagation of independent flux-density errors (bands exact)" },
+  BRIGHTNESS_TEMP: { summary: "brightness temperature of an elliptical Gaussian source (Rayleigh–Jeans)", equation: "T_b = (1+z)·S·c²/(2k·ν²·Ω), Ω = π·θ_maj·θ_min/(4 ln 2), FWHM axes", method: closedForm },
 };
 
 /** Models of a range listed at most; the rest are counted. */

@@ -52,8 +52,8 @@ const pinned: [string, string][] = [
     ["KCORRECTION"         , ""],
     ["MAG_ABS"             , "kcorr=0"],
     ["MAG_APP"             , "kcorr=0"],
-    ["MAG_AB"              , "unit=Jy"],
-    ["FLUX_AB"             , "unit=Jy"],
+    ["MAG_AB"              , "unit=blank; wavelength=not given"],
+    ["FLUX_AB"             , "unit=blank; wavelength=not given"],
     ["LUMINOSITY_REST"     , "band_unit=blank; in_unit=Jy; out_unit=blank"],
     ["MAG_BOL"             , "unit=erg/s"],
     ["LUM_BOL"             , "unit=erg/s"],
@@ -90,6 +90,12 @@ const pinned: [string, string][] = [
     ["LUMINOSITY_FUNCTION" , ""],
     ["CHI2_MODULUS"        , "offset=not given"],
     ["GROWTH_RATE"         , "neutrinos=blank"],   // neutrinos: 0.3.0, blank = smooth
+  // new in 0.3.0: dust, two-band indices, brightness temperature (CHANGELOG.md); MAG_AB and FLUX_AB
+  // above took a last argument, wavelength, and read their unit as text (blank is still Jy)
+    ["EXTINCTION"          , "law=blank; r_v=not given; wavelength_unit=blank"],
+    ["INDEX_BETWEEN"       , "band_unit=blank"],
+    ["INDEX_BETWEEN_ERR"   , "band_unit=blank"],
+    ["BRIGHTNESS_TEMP"     , "z=0; flux_unit=Jy; band_unit=blank; angle_unit=arcsec"],
 ];
 
 describe("defaults that saved workbooks depend on", () => {
@@ -113,6 +119,13 @@ describe("defaults that saved workbooks depend on", () => {
     ["REDSHIFT", [1e5, "VOLUME", "EDS", ""], [1e5, "VOLUME", "EDS", "Mpc3"]],
     ["REDSHIFT", [3000, "DIST_LUM", "EDS", ""], [3000, "DIST_LUM", "EDS", "Mpc"]],
     ["REDSHIFT", [5, "LOOKBACK", "EDS", ""], [5, "LOOKBACK", "EDS", "Gyr"]],
+    ["MAG_AB", [12, ""], [12, "Jy"]],
+    ["FLUX_AB", [21, ""], [21, "Jy"]],
+    ["EXTINCTION", [5000, 0.1, "", "", ""], [5000, 0.1, "Fitzpatrick 1999", 3.1, "Angstrom"]],
+    ["EXTINCTION", [5000, 0.1, "Calzetti 2000", "", ""], [5000, 0.1, "Calzetti 2000", 4.05, "Angstrom"]],
+    ["INDEX_BETWEEN", [2, 1.4, 1, 5, ""], [2, 1.4, 1, 5, "GHz"]],
+    ["INDEX_BETWEEN_ERR", [2, 1.4, 1, 5, 0.1, 0.1, ""], [2, 1.4, 1, 5, 0.1, 0.1, "GHz"]],
+    ["BRIGHTNESS_TEMP", [1, 1.4, 2, 1, "", "", "", ""], [1, 1.4, 2, 1, 0, "Jy", "GHz", "arcsec"]],
   ])("%s: a blank text unit means its default", (name, blank, written) => {
     const active = { spec: defaultModelSpec, stored: false };
     const a = evaluate(definitions[name], blank, active)[0][0];

@@ -27,7 +27,9 @@ function fluxDensityArguments(): { fn: string; arg: string; unitArg: string | un
   const found: { fn: string; arg: string; unitArg: string | undefined }[] = [];
   for (const [fn, def] of Object.entries(definitions)) {
     const units = def.args.filter((a): a is Extract<ArgSpec, { kind: "unit" }> => a.kind === "unit" && a.applies !== "result" && isFluxDensity(a.unit));
-    const unitOf = (name: string) => units.find((u) => (typeof u.applies === "string" ? [u.applies] : u.applies).includes(name))?.name;
+    // a unit read as text in each cell (MAG_AB's unit, which may be per wavelength) is the function's `unit` argument
+    const textUnit = def.args.find((a) => a.kind === "text" && /^(flux_)?unit$/.test(a.name))?.name;
+    const unitOf = (name: string) => units.find((u) => (typeof u.applies === "string" ? [u.applies] : u.applies).includes(name))?.name ?? (/flux_density/.test(name) ? textUnit : undefined);
     for (const arg of def.args) {
       if (arg.kind === "unit" || arg.kind === "model") continue;
       const unitArg = unitOf(arg.name);
@@ -45,9 +47,13 @@ describe("flux-density arguments say they are read in Jy", () => {
     ]));
   });
 
-  test.each(fluxDensityArguments())("$fn: $arg names its unit argument and mJy", ({ fn, arg, unitArg }) => {
-    expect(unitArg, `${fn}.${arg} takes a flux density but no unit argument applies to it`).toBeDefined();
+  test.each(fluxDensityArguments())("$fn: $arg names its unit argument and mJy, or says that only a ratio counts", ({ fn, arg, unitArg }) => {
     const description = metadata.functions.find((f) => f.id === fn)?.parameters.find((p) => p.name === arg)?.description;
+    if (unitArg === undefined) {
+      // a function of a ratio of two flux densities (INDEX_BETWEEN) reads no unit: both must be in the same one
+      expect(description, `${fn}.${arg} takes a flux density but no unit argument applies to it`).toMatch(/in any unit, the same for both|in the unit of flux_density\d/);
+      return;
+    }
     expect(description).toContain(`in Jy unless ${unitArg} says otherwise (catalogues in mJy: give "mJy")`);
   });
 });

@@ -1,6 +1,6 @@
 /**
  * What a test file does when a tool it needs is missing (Debian python3-astropy, python3-mpmath,
- * chromium, libxml2-utils). On a developer machine only the parts that need the tool are skipped,
+ * python3-extinction, chromium, libxml2-utils). On a developer machine only the parts that need the tool are skipped,
  * with a one-line hint naming the package; under CI the missing tool fails the run.
  */
 

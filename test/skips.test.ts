@@ -1,7 +1,7 @@
 /**
  * Honest skips: without a tool only the tests that need it are skipped, each with a hint naming the
- * Debian package; under CI the same run fails. Checked by running the CMB-frame and mpmath files in
- * a child vitest with a python3 that does not exist (ZCELL_PYTHON).
+ * Debian package; under CI the same run fails. Checked by running the CMB-frame, mpmath and
+ * extinction files in a child vitest with a python3 that does not exist (ZCELL_PYTHON).
  */
 import { spawnSync } from "node:child_process";
 import { mkdtempSync, readFileSync } from "node:fs";
@@ -13,14 +13,14 @@ import { inCI } from "./requirements.js";
 
 const root = fileURLToPath(new URL("..", import.meta.url));
 
-/** Runs two test files in a child vitest without python3; CI as given (undefined: unset). */
+/** Runs three test files in a child vitest without python3; CI as given (undefined: unset). */
 function runWithoutPython(ci: string | undefined) {
   const out = join(mkdtempSync(join(tmpdir(), "zcell-skips-")), "report.json");
   const env: Record<string, string | undefined> = { ...process.env, ZCELL_PYTHON: "/nonexistent/python3", CI: ci };
   if (ci === undefined) delete env.CI;
   const r = spawnSync(
     process.execPath,
-    [`${root}node_modules/vitest/vitest.mjs`, "run", "--config", `${root}test/reference/plain.vitest.config.ts`, "--reporter=default", "--reporter=json", `--outputFile.json=${out}`, "test/cmbFrame.test.ts", "test/mpmath.test.ts"],
+    [`${root}node_modules/vitest/vitest.mjs`, "run", "--config", `${root}test/reference/plain.vitest.config.ts`, "--reporter=default", "--reporter=json", `--outputFile.json=${out}`, "test/cmbFrame.test.ts", "test/mpmath.test.ts", "test/extinction.test.ts"],
     { cwd: root, env: env as NodeJS.ProcessEnv, encoding: "utf8", timeout: 120_000 },
   );
   let report: { numPassedTests: number; numPendingTests: number; numFailedTestSuites: number } | undefined;
@@ -38,6 +38,7 @@ describe("a run without python3", () => {
     expect(r.status, r.output).toBe(0);
     expect(r.output).toContain("skipping: Debian python3-astropy is not installed: apt-get install -y python3-astropy");
     expect(r.output).toContain("skipping: Debian python3-mpmath is not installed: apt-get install -y python3-mpmath");
+    expect(r.output).toContain("skipping: Debian python3-extinction is not installed: apt-get install -y python3-extinction");
     expect(r.report!.numPassedTests).toBeGreaterThanOrEqual(6); // the CMB-frame tests that need no Python
     expect(r.report!.numPendingTests).toBeGreaterThan(0);
   });

@@ -38,6 +38,9 @@ export const gravitationalConstantSI = 6.6743e-11;
 /** Stefan–Boltzmann constant [W m⁻² K⁻⁴]. Exact in SI 2019 (derived from exact h, k, c). */
 export const stefanBoltzmannSI = 5.670374419e-8;
 
+/** Boltzmann constant [J/K]. Exact in SI 2019 (BIPM, The International System of Units, 9th ed., 2019). */
+export const boltzmannJPerK = 1.380649e-23;
+
 /** Boltzmann constant [eV/K]. CODATA 2018 (exact in SI 2019: k/e = 1.380649e-23 / 1.602176634e-19). */
 export const boltzmannEvPerK = 8.617333262e-5;
 

@@ -25,6 +25,7 @@ const kinds: readonly [Dimensions, string][] = [
   [d(2, 1, -3), "a luminosity or power"],
   [d(0, 1, -3), "a flux"],
   [d(0, 1, -2), "a flux density"],
+  [d(-1, 1, -3), "a flux density per wavelength (f_λ)"],
   [d(0, 0, -1), "a frequency"],
   [d(1, 0, -1), "a speed"],
   [d(1, 0, -2), "an acceleration"],

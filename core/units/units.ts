@@ -369,3 +369,17 @@ export function frequencyHz(value: number, unit: string, name: string): number {
   if (sameDimensions(u.dimensions, d(2, 1, -2))) return x / planckConstantJs;
   throw new TypeError(`${name}: "${u.text}" is ${dimensionWords(u.dimensions, u.text)}; use a frequency (GHz), a wavelength (Angstrom, um) or an energy (eV)`);
 }
+
+/**
+ * A frequency as a band value in `unit`: the inverse of `frequencyHz` (x = ν, c/ν or h_P ν in the unit).
+ *
+ * @param nuHz frequency [Hz], > 0
+ * @param unit a frequency, wavelength or energy unit
+ * @returns the band's value in `unit`
+ * @throws TypeError for a unit of another kind
+ * @example bandInUnit(2.99792458e14, "um") // 1
+ */
+export function bandInUnit(nuHz: number, unit: string): number {
+  const one = frequencyHz(1, unit, "band"); // the frequency of 1 in the unit
+  return sameDimensions(parseUnit(unit).dimensions, d(1, 0, 0)) ? one / nuHz : nuHz / one;
+}

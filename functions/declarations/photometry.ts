@@ -102,29 +102,31 @@ export function MAG_APP(M: any[][], z: any[][], kcorr?: any[][], model?: any[][]
 }
 
 /**
- * AB magnitude of a flux density: −2.5 log10(f_ν / 3630.78 Jy).
+ * AB magnitude of a flux density: −2.5 log10(f_ν / 3630.78 Jy). A flux density per wavelength (f_λ, e.g. "erg/s/cm2/Angstrom") is first turned into f_ν = f_λ λ²/c at the wavelength given.
  * @customfunction MAG_AB MAG_AB
  * @helpurl https://localhost:3000/help.html#MAG_AB
  * @example =ZC.MAG_AB(0.001)
  * @param flux_density Flux density, > 0 (value or range), in Jy unless unit says otherwise (catalogues in mJy: give "mJy").
- * @param [unit] Unit of flux density, default "Jy" (e.g. "uJy", "erg/s/cm2/Hz").
+ * @param [unit] Unit of flux density, default "Jy" (e.g. "uJy", "erg/s/cm2/Hz"), or per wavelength ("erg/s/cm2/Angstrom", "W/m2/um"), which needs the wavelength.
+ * @param [wavelength] Wavelength in Angstrom, > 0, of a flux density per wavelength: required with such a unit, not used with a per-frequency one (value or range).
  * @returns AB magnitude (mag).
  */
-export function MAG_AB(flux_density: any[][], unit?: string): any[][] {
-  return callFromSheet(d.MAG_AB, [flux_density, unit]);
+export function MAG_AB(flux_density: any[][], unit?: string, wavelength?: any[][]): any[][] {
+  return callFromSheet(d.MAG_AB, [flux_density, unit, wavelength]);
 }
 
 /**
- * Flux density of an AB magnitude, in Jy unless a unit is given.
+ * Flux density of an AB magnitude, f_ν = 3630.78 Jy × 10^(−m_AB/2.5), in Jy unless a unit is given; in a unit per wavelength (f_λ, e.g. "erg/s/cm2/Angstrom"), f_λ = f_ν c/λ² at the wavelength given.
  * @customfunction FLUX_AB FLUX_AB
  * @helpurl https://localhost:3000/help.html#FLUX_AB
  * @example =ZC.FLUX_AB(20, "uJy")
  * @param m_ab AB magnitude (value or range).
- * @param [unit] Output unit, default "Jy" (e.g. "uJy").
+ * @param [unit] Output unit, default "Jy" (e.g. "uJy", "erg/s/cm2/Hz"), or per wavelength ("erg/s/cm2/Angstrom", "W/m2/um"), which needs the wavelength.
+ * @param [wavelength] Wavelength in Angstrom, > 0, for a unit per wavelength: required with such a unit, not used with a per-frequency one (value or range).
  * @returns Flux density (Jy by default).
  */
-export function FLUX_AB(m_ab: any[][], unit?: string): any[][] {
-  return callFromSheet(d.FLUX_AB, [m_ab, unit]);
+export function FLUX_AB(m_ab: any[][], unit?: string, wavelength?: any[][]): any[][] {
+  return callFromSheet(d.FLUX_AB, [m_ab, unit, wavelength]);
 }
 
 /**

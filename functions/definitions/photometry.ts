@@ -10,6 +10,7 @@ import {
   apparentMagnitude,
   bolometricAbsoluteMagnitude,
   bolometricLuminosityW,
+  fluxDensityFactorJy,
   fluxWm2,
   frequencyHz,
   janskySI,
@@ -25,9 +26,36 @@ import {
   type SpectralIndexConvention,
   surfaceBrightnessDimmingMag,
 } from "../../core/index.js";
-import type { FunctionDef } from "../FunctionDef.js";
+import { CellError } from "../cellError.js";
+import type { Args, FunctionDef } from "../FunctionDef.js";
+import { messages } from "../messages.js";
 import { num, amount, mag, model, unit, z, optionalAlpha, isGiven, optionalText, m, n, inSpectralOrPowerUnit } from "./argumentKinds.js";
 
+/** The optional wavelength [Å] of a per-wavelength flux density (MAG_AB, FLUX_AB): NaN when not given. */
+const fluxDensityWavelength = num("wavelength", { default: Number.NaN, blankMeansDefault: true, min: 0, minExclusive: true });
+
+/** The last flux-density unit and wavelength read, and their factor (a column in one unit at one band). */
+let lastFactor = { text: "Jy", wavelength: Number.NaN, factor: 1 };
+
+/**
+ * The factor from the cell's flux-density unit into Jy: f_ν units directly, f_λ units at the cell's
+ * wavelength (f_ν = f_λ λ²/c). Blank is Jy; "MJy" is refused as for every flux-density unit.
+ */
+function unitFactorJy(a: Args): number {
+  const text = (a.unit as string) || "Jy";
+  const wavelength = n(a, "wavelength");
+  if (text === lastFactor.text && Object.is(wavelength, lastFactor.wavelength)) return lastFactor.factor;
+  if (/(^|[^A-Za-z])MJy(?![A-Za-z])/.test(text)) throw new CellError("value", messages.megajansky("unit", text));
+  let factor: number;
+  try {
+    factor = fluxDensityFactorJy(text, wavelength);
+  } catch (e) {
+    if (e instanceof TypeError && !e.message.startsWith("wavelength")) throw new TypeError(messages.unitArgument("unit", e.message));
+    throw e;
+  }
+  lastFactor = { text, wavelength, factor };
+  return factor;
+}
 
 /** Photometry functions, in the order of their declarations. */
 export const photometry: FunctionDef[] = [
@@ -63,13 +91,15 @@ export const photometry: FunctionDef[] = [
   },
   {
     name: "MAG_AB",
-    args: [num("flux_density", { min: 0, minExclusive: true }), unit("unit", "Jy", "Jy", "flux_density")],
-    compute: (a) => abMagnitude(n(a, "flux_density")),
+    args: [num("flux_density", { min: 0, minExclusive: true }), optionalText("unit"), fluxDensityWavelength],
+    compute: (a) => abMagnitude(n(a, "flux_density") * unitFactorJy(a)),
+    kernel: { arg: "flux_density", of: (a, x) => abMagnitude(x * unitFactorJy(a)) },
   },
   {
     name: "FLUX_AB",
-    args: [mag("m_ab"), unit("unit", "Jy")],
-    compute: (a) => abFluxDensityJy(n(a, "m_ab")),
+    args: [mag("m_ab"), optionalText("unit"), fluxDensityWavelength],
+    compute: (a) => abFluxDensityJy(n(a, "m_ab")) / unitFactorJy(a),
+    kernel: { arg: "m_ab", of: (a, x) => abFluxDensityJy(x) / unitFactorJy(a) },
   },
   {
     name: "LUMINOSITY_REST",

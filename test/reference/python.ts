@@ -1,5 +1,6 @@
 /**
- * Runs the outside reference tools (Debian python3-astropy, python3-mpmath) from the test suite.
+ * Runs the outside reference tools (Debian python3-astropy, python3-mpmath, python3-extinction) from
+ * the test suite.
  * Under CI a missing tool is a failure; on a developer machine the tests that need it are skipped
  * with a one-line hint (test/requirements.ts). ZCELL_PYTHON names another interpreter (a test uses a
  * missing one to check the skips).
