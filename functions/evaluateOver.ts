@@ -1,12 +1,12 @@
 /**
  * The shared wrapper for functions of whole columns (FunctionDef.over): the column arguments are
- * read cell by cell into lists (readColumnCells: blanks and errors kept in place, so the function
- * can name the row a problem came from), every other argument as one cell through readCall; the
- * function returns the whole result.
+ * read into columns of numbers (readColumnCells: up to the last cell that is not blank, blanks and
+ * the first error kept in place, so the function can name the row a problem came from), every
+ * other argument as one cell through readCall; the function returns the whole result.
  */
 import type { ActiveModelSetting } from "./activeModel.js";
 import { CellError } from "./cellError.js";
-import type { Args, Cell, ColumnCell, FunctionDef } from "./FunctionDef.js";
+import type { Args, Cell, ColumnCells, FunctionDef } from "./FunctionDef.js";
 import { messages } from "./messages.js";
 import { readCall, readColumnCells } from "./readArguments.js";
 
@@ -20,7 +20,7 @@ import { readCall, readColumnCells } from "./readArguments.js";
  */
 export function evaluateOver(def: FunctionDef, raw: readonly unknown[], active: ActiveModelSetting): Cell[][] {
   const over = def.over!;
-  const columns: Record<string, ColumnCell[]> = {};
+  const columns: Record<string, ColumnCells> = {};
   const others: FunctionDef = { name: def.name, args: [] };
   const otherRaw: unknown[] = [];
   def.args.forEach((spec, i) => {

@@ -7,7 +7,7 @@
 import { Cosmology, parseModelSpec, parseUnit, scaledConversion } from "../core/index.js";
 import type { ActiveModelSetting } from "./activeModel.js";
 import { CellError, classify, isIncomingError } from "./cellError.js";
-import type { Args, ArgSpec, ColumnCell, FunctionDef } from "./FunctionDef.js";
+import type { Args, ArgSpec, ColumnCells, FunctionDef } from "./FunctionDef.js";
 import { messages } from "./messages.js";
 import { isBlank, keyValueBlockSpec } from "./modelArgument.js";
 import { modelFor } from "./modelCache.js";
@@ -53,8 +53,12 @@ export interface CallArguments {
   cols: number;
   /** Every argument given as one cell (or a unit, or a scalar text), by name, read. */
   args: Args;
-  /** The first of those that is an error or blank: every cell of the result shows it. */
+  /**
+   * The first of those that is an error or blank: every cell of the result shows it, unless one of
+   * the ranges before it in the signature (`ranges` up to `rangesBeforeProblem`) is an error or blank there.
+   */
   problem: CellError | typeof blank | undefined;
+  rangesBeforeProblem: number;
   /** Arguments given as ranges, in the order of the signature. */
   ranges: readonly Column[];
   /** Factor of the result into the output unit the user asked for. */
@@ -123,11 +127,11 @@ function singleCell(raw: unknown): unknown {
   return row.length === 1 ? row[0] : row.length === 0 ? undefined : several;
 }
 
-/** The spec text of one cell of a model range (blank: the active model's), or an error. */
-function modelText(value: unknown, active: ActiveModelSetting): string | CellError {
-  if (isIncomingError(value)) return new CellError("value", messages.inputError("model"));
+/** The spec text of one cell of a model argument `name` (blank: the active model's), or an error. */
+function modelText(name: string, value: unknown, active: ActiveModelSetting): string | CellError {
+  if (isIncomingError(value)) return new CellError("value", messages.inputError(name));
   if (isBlank(value)) return active.spec;
-  if (typeof value !== "string") return new CellError("value", messages.notText("model", value));
+  if (typeof value !== "string") return new CellError("value", messages.notText(name, value));
   const block = value.trim();
   return block === "" ? active.spec : block;
 }
@@ -145,7 +149,7 @@ function readArg(
   if (isIncomingError(value)) return new CellError("value", messages.inputError(spec.name));
   switch (spec.kind) {
     case "model": {
-      const text = modelText(value, active);
+      const text = modelText(spec.name, value, active);
       return text instanceof CellError ? text : modelOf(text);
     }
     case "number": {
@@ -251,14 +255,14 @@ export function readCall(def: FunctionDef, raw: readonly unknown[], active: Acti
     const i = cells[k];
     const value = singleCell(raw[i]);
     if (value === several) return readRanges(def, raw, active, { conversions, resultFactor, args, h });
-    if (problem !== undefined) continue; // the first bad argument decides; the rest must still be single cells
     const spec = specs[i];
     if (value === undefined && isRequired(spec)) throw new CellError("value", messages.required(spec.name));
+    if (problem !== undefined) continue; // the first bad argument decides; the rest must still be single cells and given
     const read = readArg(spec, value, raw[i] !== undefined && raw[i] !== null, conversions[spec.name], active, resolve);
     if (read instanceof CellError || read === blank) problem = read;
     else args[spec.name] = read;
   }
-  return { rows: 1, cols: 1, args, problem, ranges: noRanges, resultFactor, h };
+  return { rows: 1, cols: 1, args, problem, rangesBeforeProblem: 0, ranges: noRanges, resultFactor, h };
 }
 
 /** The ranges of a call with none (shared: one formula a row allocates no list). */
@@ -269,7 +273,7 @@ type Fixed = { conversions: Record<string, Conversion>; resultFactor: number; ar
 /**
  * The arguments read once per call whatever the shape of the others: units (their conversions, the
  * factor of the result, and any h-scaling left for the cell's model) and scalar texts (into a fresh
- * args object).
+ * args object). Each must be one cell: it applies to every cell of the result.
  */
 function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): Fixed {
   const conversions: Record<string, Conversion> = {};
@@ -278,6 +282,7 @@ function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): Fixed
   const args: Args = {};
   for (const i of plan.units) {
     const spec = def.args[i] as Extract<ArgSpec, { kind: "unit" }>;
+    if (singleCell(raw[i]) === several) throw new CellError("value", messages.oneValueOnly(spec.name));
     let conversion: Conversion;
     try {
       conversion = unitConversion(spec, raw[i]);
@@ -297,6 +302,7 @@ function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): Fixed
   }
   for (const i of plan.scalarTexts) {
     const spec = def.args[i] as Extract<ArgSpec, { kind: "text" }>;
+    if (singleCell(raw[i]) === several) throw new CellError("value", messages.oneValueOnly(spec.name));
     const text = toMatrix(raw[i])?.[0]?.[0];
     args[spec.name] = spec.optional && isBlank(text) ? "" : readText(spec, text);
   }
@@ -417,13 +423,16 @@ function readRanges(def: FunctionDef, raw: readonly unknown[], active: ActiveMod
   // one args object of fixed shape for every cell
   for (const g of given) args[g.spec.name] = undefined;
   let problem: CellError | typeof blank | undefined;
+  let rangesBeforeProblem = 0;
   const ranges: Column[] = [];
   for (const g of given) {
     const conversion = conversions[g.spec.name];
     if (g.rows === 1 && g.cols === 1) {
       const read = readArg(g.spec, g.matrix?.[0][0], g.matrix !== undefined, conversion, active, modelOf);
-      if (read instanceof CellError || read === blank) problem ??= read;
-      else args[g.spec.name] = read;
+      if (read instanceof CellError || read === blank) {
+        if (problem === undefined) rangesBeforeProblem = ranges.length;
+        problem ??= read;
+      } else args[g.spec.name] = read;
     } else {
       const column: Column = { name: g.spec.name, rows: g.rows, cols: g.cols, numbers: undefined, others: new Map() };
       readColumn(column, g.spec, g.matrix!, conversion, active, modelOf);
@@ -431,7 +440,7 @@ function readRanges(def: FunctionDef, raw: readonly unknown[], active: ActiveMod
       ranges.push(column);
     }
   }
-  return { rows, cols, args, problem, ranges, resultFactor: fixed.resultFactor, h: fixed.h };
+  return { rows, cols, args, problem, rangesBeforeProblem, ranges, resultFactor: fixed.resultFactor, h: fixed.h };
 }
 
 /** Reads every cell of a range argument into `column` (row-major). */
@@ -447,7 +456,7 @@ function readColumn(
   let i = 0;
   if (spec.kind !== "number") {
     for (const row of matrix) {
-      for (const value of row) others.set(i++, spec.kind === "model" ? modelText(value, active) : readArg(spec, value, true, conversion, active, modelOf));
+      for (const value of row) others.set(i++, spec.kind === "model" ? modelText(spec.name, value, active) : readArg(spec, value, true, conversion, active, modelOf));
     }
     return;
   }
@@ -468,27 +477,54 @@ function readColumn(
   }
 }
 
-/** Cells one whole-column argument may hold (a whole column of a sheet, 1,048,576 rows: from memory). */
+/** Cells one whole-column argument may hold (a whole column of a sheet, 1,048,576 rows: Microsoft's "Excel specifications and limits"). */
 const maxColumnCells = 1_048_576;
 
 /**
- * A whole-column argument (FunctionDef.over) as a list of cells, row-major: numbers (text numbers
- * too), "" for blanks, and errors in place, so the function can name the row a problem came from.
- * @throws CellError when the argument is omitted or longer than a sheet's column
+ * A whole-column argument (FunctionDef.over), row-major: numbers (text numbers too) up to the last
+ * cell that is not blank, NaN for blanks, and the first cell that is not a number with its error, so
+ * the function can name the row a problem came from. Cells after that first error are not read.
+ * @throws CellError when the argument is omitted or holds more cells than a sheet's column
  */
-export function readColumnCells(name: string, raw: unknown): ColumnCell[] {
+export function readColumnCells(name: string, raw: unknown): ColumnCells {
   const matrix = toMatrix(raw);
   if (!matrix) throw new CellError("value", messages.required(name));
-  const cells: ColumnCell[] = [];
-  for (const row of matrix) {
-    for (const value of row) {
-      if (cells.length >= maxColumnCells) throw new CellError("value", messages.tooLarge(cells.length + 1, maxColumnCells));
-      if (typeof value === "number") cells.push(Number.isFinite(value) ? value : new CellError("num", messages.notFinite(name)));
-      else if (isBlank(value)) cells.push("");
-      else if (typeof value === "string" && numberText.test(value.trim())) cells.push(Number(value.trim()));
-      else if (isIncomingError(value)) cells.push(new CellError("value", messages.inputError(name)));
-      else cells.push(new CellError("value", messages.notANumber(name, value)));
+  const cols = matrix[0].length;
+  const length = matrix.length * cols;
+  if (length > maxColumnCells) throw new CellError("value", messages.columnTooLong(name, length, maxColumnCells));
+  // up to the last cell that is not blank, found from the end before anything is stored: a whole column's blank rows keep nothing
+  let used = 0;
+  for (let r = matrix.length - 1; r >= 0 && used === 0; r--) {
+    const row = matrix[r];
+    for (let c = cols - 1; c >= 0; c--) {
+      if (!isBlank(row[c])) {
+        used = r * cols + c + 1;
+        break;
+      }
     }
   }
-  return cells;
+  const numbers = new Float64Array(used);
+  for (let i = 0, r = 0; i < used; r++) {
+    const row = matrix[r];
+    for (let c = 0; c < cols && i < used; c++, i++) {
+      const value = row[c];
+      if (typeof value === "number" && value - value === 0) {
+        numbers[i] = value;
+        continue;
+      }
+      const isNumber = typeof value === "number" || (typeof value === "string" && numberText.test(value.trim()));
+      const x = isNumber ? Number(typeof value === "string" ? value.trim() : value) : Number.NaN;
+      if (x - x === 0) numbers[i] = x;
+      else if (isBlank(value)) numbers[i] = Number.NaN;
+      else {
+        const error =
+          isNumber ? new CellError("num", messages.notFinite(name))
+          : isIncomingError(value) ? new CellError("value", messages.inputError(name))
+          : new CellError("value", messages.notANumber(name, value));
+        numbers[i] = Number.NaN;
+        return { length, numbers: numbers.subarray(0, i + 1), error: { index: i, error } };
+      }
+    }
+  }
+  return { length, numbers };
 }
