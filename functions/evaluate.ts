@@ -184,8 +184,8 @@ function modelOfGroup(group: Group): ReadCell {
 
 /**
  * The cells of the range of models with the most distinct models, grouped by model: `first` maps each
- * distinct cell (spec text, or an error) to its first index (row-major), in order of first appearance,
- * and `next[i]` is the next index holding the same (−1: none). Another range of models in the same call
+ * distinct cell (spec text, or an error) to its first index (row-major), and `next[i]` is the next
+ * index holding the same (−1: none). Another range of models in the same call
  * (RESCALE's from and to) resolves through the call's bounded map and the shared cache as before.
  * Only the first `upTo` ranges are read. Undefined when none of them is a range of models.
  */
@@ -194,15 +194,13 @@ function modelGroups(ranges: readonly Column[], upTo: number): { range: Column; 
   for (const range of ranges.slice(0, upTo)) {
     if (range.model === undefined) continue;
     const n = range.rows * range.cols;
-    const next = new Int32Array(n).fill(-1);
+    const next = new Int32Array(n);
     const first = new Map<ReadCell, number>();
-    const last = new Map<ReadCell, number>();
-    for (let i = 0; i < n; i++) {
+    // from the last cell back, so that one map suffices: each cell points to the next cell of its model
+    for (let i = n - 1; i >= 0; i--) {
       const value = cellAt(range, i);
-      const end = last.get(value);
-      if (end === undefined) first.set(value, i);
-      else next[end] = i;
-      last.set(value, i);
+      next[i] = first.get(value) ?? -1;
+      first.set(value, i);
     }
     if (best === undefined || first.size > best.first.size) best = { range, first, next };
   }
