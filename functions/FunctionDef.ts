@@ -84,12 +84,23 @@ export interface FunctionDef {
   table?: (active: ActiveModelSetting) => Cell[][];
   /**
    * For functions of whole columns (a luminosity function, a χ²): the arguments named in `columns`
-   * are read as lists of cells (row-major; blanks and errors kept in place), the others as one cell
-   * each into `args`; the result is the whole output (one cell, or a table that spills).
+   * are read as columns of numbers (row-major; blanks and the first error kept in place), the others
+   * as one cell each into `args`; the result is the whole output (one cell, or a table that spills).
    */
-  over?: { columns: readonly string[]; compute: (columns: Record<string, ColumnCell[]>, args: Args) => Cell[][] };
+  over?: { columns: readonly string[]; compute: (columns: Record<string, ColumnCells>, args: Args) => Cell[][] };
 }
 
-/** One cell of a whole-column argument: its number, "" when blank, or the error it holds. */
-export type ColumnCell = number | "" | CellError;
+/**
+ * A whole-column argument as read (row-major). Only what can matter is kept: the numbers up to the
+ * last cell that is not blank (a whole-column reference's blank rows below the data cost nothing),
+ * and the first cell that is not a number (cells after it are not read: the function stops there).
+ */
+export interface ColumnCells {
+  /** Cells the range holds (rows × columns), blank ones at its end included. */
+  length: number;
+  /** Each cell's number, up to the last cell that is not blank or the first error; NaN for a blank or the error. */
+  numbers: Float64Array;
+  /** The first cell that holds an error or something other than a number: its index and the error it shows. */
+  error?: { index: number; error: CellError };
+}
 

@@ -13,7 +13,7 @@ import { CellError, classify, inFunction, toHostError } from "./cellError.js";
 import type { Args, Cell, FunctionDef } from "./FunctionDef.js";
 import { evaluateOver } from "./evaluateOver.js";
 import { messages } from "./messages.js";
-import { blank, cellAt, readCall, type CallArguments, type HScaling } from "./readArguments.js";
+import { blank, cellAt, readCall, type CallArguments, type Column, type HScaling, type ReadCell } from "./readArguments.js";
 
 export type { Args, ArgSpec, Cell, FunctionDef } from "./FunctionDef.js";
 
@@ -94,12 +94,15 @@ function allCells(def: FunctionDef, call: CallArguments, seen: { error: boolean 
   };
 
   const out: Cell[][] = new Array(rows);
-  if (problem !== undefined) {
+  // a single-cell argument that is an error or blank shows in every cell, unless a range before it
+  // in the signature has its own error or blank in that cell (the first argument decides, as for one cell)
+  const upTo = problem === undefined ? ranges.length : call.rangesBeforeProblem;
+  if (problem !== undefined && upTo === 0) {
     for (let r = 0; r < rows; r++) out[r] = new Array(cols).fill(shown(problem));
     return out;
   }
   const kernel = def.kernel;
-  if (kernel && h === undefined && ranges.length === 1 && cols === 1 && ranges[0].name === kernel.arg) {
+  if (kernel && problem === undefined && h === undefined && ranges.length === 1 && cols === 1 && ranges[0].name === kernel.arg) {
     // the common range: one column of numbers (a column of redshifts) against constant arguments
     const of = kernel.of;
     const column = ranges[0];
@@ -125,22 +128,83 @@ function allCells(def: FunctionDef, call: CallArguments, seen: { error: boolean 
     }
     return out;
   }
-  for (let r = 0; r < rows; r++) {
-    const row: Cell[] = new Array(cols);
-    for (let c = 0; c < cols; c++) {
-      let cell: Cell | undefined;
-      for (let k = 0; k < ranges.length && cell === undefined; k++) {
-        const range = ranges[k];
-        let value = cellAt(range, (range.rows === 1 ? 0 : r) * range.cols + (range.cols === 1 ? 0 : c));
+  // the cell at (r, c): each range's value there (the first error or blank decides), then compute
+  let group: Group | undefined;
+  const cellAtPosition = (r: number, c: number): Cell => {
+    for (let k = 0; k < upTo; k++) {
+      const range = ranges[k];
+      let value: ReadCell;
+      if (range === group?.range) value = modelOfGroup(group);
+      else {
+        value = cellAt(range, (range.rows === 1 ? 0 : r) * range.cols + (range.cols === 1 ? 0 : c));
         if (range.model !== undefined && typeof value === "string") value = range.model(value);
-        if (value instanceof CellError || value === blank) cell = value;
-        else args[range.name] = value;
       }
-      row[c] = shown(cell ?? cellOf());
+      if (value instanceof CellError || value === blank) return value;
+      args[range.name] = value;
     }
-    out[r] = row;
+    return problem ?? cellOf();
+  };
+  const grouping = modelGroups(ranges, upTo);
+  if (grouping === undefined) {
+    for (let r = 0; r < rows; r++) {
+      const row: Cell[] = new Array(cols);
+      for (let c = 0; c < cols; c++) row[c] = shown(cellAtPosition(r, c));
+      out[r] = row;
+    }
+    return out;
+  }
+  // a range of models: all the cells of one model, then the next, so that each is built once
+  for (let r = 0; r < rows; r++) out[r] = new Array(cols);
+  const { range, first, next } = grouping;
+  for (const [value, head] of first) {
+    group = { range, value, model: undefined };
+    for (let j = head; j >= 0; j = next[j]) {
+      const r0 = range.rows === 1 ? 0 : Math.floor(j / range.cols);
+      const c0 = range.cols === 1 ? 0 : j - r0 * range.cols;
+      // a row of models spans every row of the result, a column every column
+      const rTo = range.rows === 1 ? rows : r0 + 1;
+      const cTo = range.cols === 1 ? cols : c0 + 1;
+      for (let r = r0; r < rTo; r++) {
+        const row = out[r];
+        for (let c = c0; c < cTo; c++) row[c] = shown(cellAtPosition(r, c));
+      }
+    }
   }
   return out;
+}
+
+/** The cells of a range of models that hold one model (its spec text, or one error), and that model once resolved. */
+type Group = { range: Column; value: ReadCell; model: ReadCell | undefined };
+
+/** The model of a group, resolved at its first cell that needs it (a model whose every cell is blank in z is never built). */
+function modelOfGroup(group: Group): ReadCell {
+  if (group.model === undefined) group.model = typeof group.value === "string" ? group.range.model!(group.value) : group.value;
+  return group.model;
+}
+
+/**
+ * The cells of the range of models with the most distinct models, grouped by model: `first` maps each
+ * distinct cell (spec text, or an error) to its first index (row-major), and `next[i]` is the next
+ * index holding the same (−1: none). Another range of models in the same call
+ * (RESCALE's from and to) resolves through the call's bounded map and the shared cache as before.
+ * Only the first `upTo` ranges are read. Undefined when none of them is a range of models.
+ */
+function modelGroups(ranges: readonly Column[], upTo: number): { range: Column; first: Map<ReadCell, number>; next: Int32Array } | undefined {
+  let best: { range: Column; first: Map<ReadCell, number>; next: Int32Array } | undefined;
+  for (const range of ranges.slice(0, upTo)) {
+    if (range.model === undefined) continue;
+    const n = range.rows * range.cols;
+    const next = new Int32Array(n);
+    const first = new Map<ReadCell, number>();
+    // from the last cell back, so that one map suffices: each cell points to the next cell of its model
+    for (let i = n - 1; i >= 0; i--) {
+      const value = cellAt(range, i);
+      next[i] = first.get(value) ?? -1;
+      first.set(value, i);
+    }
+    if (best === undefined || first.size > best.first.size) best = { range, first, next };
+  }
+  return best;
 }
 
 function cleanNumber(x: number, fn: string): number | CellError {

@@ -24,8 +24,21 @@ export const messages = {
     `ranges do not fit together: ${a} is ${ra}×${ca} and ${b} is ${rb}×${cb} (use equal sizes, a single cell, or a row against a column)`,
   tooLarge: (cells: number, most: number) => `the result would have ${cells.toLocaleString("en-US")} cells; at most ${most.toLocaleString("en-US")} are allowed`,
   required: (arg: string) => `${arg} is required`,
+  columnTooLong: (arg: string, cells: number, most: number) =>
+    `${arg} has ${cells.toLocaleString("en-US")} cells; at most ${most.toLocaleString("en-US")} (one whole column) are read`,
+  oneValueOnly: (arg: string) => `${arg} must be one cell: it applies to the whole result (for several, one formula each)`,
   oneCellOnly: (arg: string) => `${arg} must be one cell here (the other arguments are whole columns)`,
   columnLengths: (a: string, na: number, b: string, nb: number) => `${a} has ${na} cells and ${b} has ${nb}: give columns of the same length`,
+  tooManyBins: (edges: number, most: number) =>
+    `edges: ${edges.toLocaleString("en-US")} edges make ${(edges - 1).toLocaleString("en-US")} bins; at most ${most.toLocaleString("en-US")} bins are returned: give only the bin edges (a short range such as H3:H10), not a column of data`,
+  noSources: "values: no sources (every row of values and v_max is blank)",
+  noValueInBins: (lo: number, hi: number, bottom: number, top: number, scale: "linear" | "log" | "other") =>
+    `no value falls within the edges: values run from ${formatValue(lo)} to ${formatValue(hi)}, the edges from ${formatValue(bottom)} to ${formatValue(top)}; ` +
+    (scale === "linear"
+      ? "the values look linear and the edges log10: bin LOG10 of the values, or give edges in the values' unit"
+      : scale === "log"
+        ? "the values look like log10 and the edges linear: give the edges as log10 too"
+        : "are the values and the edges in the same scale and unit?"),
   inRow: (arg: string, row: number, detail: string) => `${arg} in row ${row} of the range: ${detail}`,
   unitArgument: (arg: string, detail: string) => `${arg}: ${detail}`,
   /** The functions that take the other kind of a flux or luminosity (spectral for a bolometric function, and the reverse), if any. */

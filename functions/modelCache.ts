@@ -8,6 +8,7 @@ const capacity = 64;
 const cache = new Map<string, Cosmology | Error>();
 let lastSpec: string | undefined;
 let lastModel: Cosmology | undefined;
+let builds = 0;
 
 /**
  * The compiled model for a spec (built on first use; a failure is remembered too).
@@ -19,6 +20,7 @@ export function modelFor(spec: string): Cosmology {
   if (spec === lastSpec) return lastModel!; // the same model as the call before: no LRU reshuffle
   let entry = cache.get(spec);
   if (entry === undefined) {
+    builds++;
     try {
       entry = Cosmology.fromSpec(spec);
     } catch (e) {
@@ -38,4 +40,9 @@ export function modelFor(spec: string): Cosmology {
 /** Number of models currently cached (for tests). */
 export function cachedModelCount(): number {
   return cache.size;
+}
+
+/** Models built (or tried: a bad spec counts) since the add-in loaded: what a call's cost is counted in (for tests). */
+export function modelBuildCount(): number {
+  return builds;
 }

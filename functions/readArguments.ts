@@ -8,7 +8,7 @@ import { Cosmology, MissingParameterError, parseUnit } from "../core/index.js";
 import type { ActiveModelSetting } from "./activeModel.js";
 import { CellError, classify, isIncomingError } from "./cellError.js";
 import { modelPairs } from "./definitions/argumentKinds.js";
-import type { Args, ArgSpec, ColumnCell, FunctionDef } from "./FunctionDef.js";
+import type { Args, ArgSpec, FunctionDef } from "./FunctionDef.js";
 import { messages } from "./messages.js";
 import { isBlank, isModelText, keyValueBlockSpec } from "./modelArgument.js";
 import { modelFor } from "./modelCache.js";
@@ -55,8 +55,12 @@ export interface CallArguments {
   cols: number;
   /** Every argument given as one cell (or a unit, or a scalar text), by name, read. */
   args: Args;
-  /** The first of those that is an error or blank: every cell of the result shows it. */
+  /**
+   * The first of those that is an error or blank: every cell of the result shows it, unless one of
+   * the ranges before it in the signature (`ranges` up to `rangesBeforeProblem`) is an error or blank there.
+   */
   problem: CellError | typeof blank | undefined;
+  rangesBeforeProblem: number;
   /** Arguments given as ranges, in the order of the signature. */
   ranges: readonly Column[];
   /** Factor of the result into the output unit the user asked for. */
@@ -69,10 +73,10 @@ export interface CallArguments {
 export const blank = "";
 
 /** Text that Excel's own functions would read as a number (CSV and archive pastes). */
-const numberText = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+export const numberText = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 
 /** Normalises a raw argument to a matrix (undefined when omitted). */
-function toMatrix(raw: unknown): unknown[][] | undefined {
+export function toMatrix(raw: unknown): unknown[][] | undefined {
   if (raw === undefined || raw === null) return undefined;
   if (Array.isArray(raw)) {
     if (raw.length === 0) return undefined;
@@ -94,11 +98,11 @@ function singleCell(raw: unknown): unknown {
   return row.length === 1 ? row[0] : row.length === 0 ? undefined : several;
 }
 
-/** The spec text of one cell of a model range (blank: the active model's), or an error. */
-function modelText(value: unknown, active: ActiveModelSetting): string | CellError {
-  if (isIncomingError(value)) return new CellError("value", messages.inputError("model"));
+/** The spec text of one cell of a model argument `name` (blank: the active model's), or an error. */
+function modelText(name: string, value: unknown, active: ActiveModelSetting): string | CellError {
+  if (isIncomingError(value)) return new CellError("value", messages.inputError(name));
   if (isBlank(value)) return active.spec;
-  if (typeof value !== "string") return new CellError("value", messages.notText("model", value));
+  if (typeof value !== "string") return new CellError("value", messages.notText(name, value));
   const block = value.trim();
   return block === "" ? active.spec : block;
 }
@@ -116,7 +120,7 @@ function readArg(
   if (isIncomingError(value)) return new CellError("value", messages.inputError(spec.name));
   switch (spec.kind) {
     case "model": {
-      const text = modelText(value, active);
+      const text = modelText(spec.name, value, active);
       return text instanceof CellError ? text : modelOf(text);
     }
     case "number": {
@@ -222,14 +226,14 @@ export function readCall(def: FunctionDef, raw: readonly unknown[], active: Acti
     const i = cells[k];
     const value = singleCell(raw[i]);
     if (value === several) return readRanges(def, raw, active, { conversions, resultFactor, args, h });
-    if (problem !== undefined) continue; // the first bad argument decides; the rest must still be single cells
     const spec = specs[i];
     if (value === undefined && isRequired(spec)) throw new CellError("value", messages.required(spec.name));
+    if (problem !== undefined) continue; // the first bad argument decides; the rest must still be single cells and given
     const read = readArg(spec, value, raw[i] !== undefined && raw[i] !== null, conversions[spec.name], active, resolve);
     if (read instanceof CellError || read === blank) problem = read;
     else args[spec.name] = read;
   }
-  return { rows: 1, cols: 1, args, problem, ranges: noRanges, resultFactor, h };
+  return { rows: 1, cols: 1, args, problem, rangesBeforeProblem: 0, ranges: noRanges, resultFactor, h };
 }
 
 /** The ranges of a call with none (shared: one formula a row allocates no list). */
@@ -240,7 +244,7 @@ type Fixed = { conversions: Record<string, Conversion>; resultFactor: number; ar
 /**
  * The arguments read once per call whatever the shape of the others: units (their conversions, the
  * factor of the result, and any h-scaling left for the cell's model) and scalar texts (into a fresh
- * args object).
+ * args object). Each must be one cell: it applies to every cell of the result.
  */
 function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): Fixed {
   const conversions: Record<string, Conversion> = {};
@@ -249,6 +253,7 @@ function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): Fixed
   const args: Args = {};
   for (const i of plan.units) {
     const spec = def.args[i] as Extract<ArgSpec, { kind: "unit" }>;
+    if (singleCell(raw[i]) === several) throw new CellError("value", messages.oneValueOnly(spec.name));
     let conversion: Conversion;
     try {
       conversion = unitConversion(def.name, spec, Array.isArray(raw[i]) ? toMatrix(raw[i])?.[0]?.[0] : raw[i]);
@@ -268,6 +273,7 @@ function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): Fixed
   }
   for (const i of plan.scalarTexts) {
     const spec = def.args[i] as Extract<ArgSpec, { kind: "text" }>;
+    if (singleCell(raw[i]) === several) throw new CellError("value", messages.oneValueOnly(spec.name));
     const text = toMatrix(raw[i])?.[0]?.[0];
     args[spec.name] = spec.optional && isBlank(text) ? "" : readText(spec, text);
   }
@@ -379,13 +385,16 @@ function readRanges(def: FunctionDef, raw: readonly unknown[], active: ActiveMod
   // one args object of fixed shape for every cell
   for (const g of given) args[g.spec.name] = undefined;
   let problem: CellError | typeof blank | undefined;
+  let rangesBeforeProblem = 0;
   const ranges: Column[] = [];
   for (const g of given) {
     const conversion = conversions[g.spec.name];
     if (g.rows === 1 && g.cols === 1) {
       const read = readArg(g.spec, g.matrix?.[0][0], g.matrix !== undefined, conversion, active, modelOf);
-      if (read instanceof CellError || read === blank) problem ??= read;
-      else args[g.spec.name] = read;
+      if (read instanceof CellError || read === blank) {
+        if (problem === undefined) rangesBeforeProblem = ranges.length;
+        problem ??= read;
+      } else args[g.spec.name] = read;
     } else {
       const column: Column = { name: g.spec.name, rows: g.rows, cols: g.cols, numbers: undefined, others: new Map() };
       readColumn(column, g.spec, g.matrix!, conversion, active, modelOf);
@@ -393,7 +402,7 @@ function readRanges(def: FunctionDef, raw: readonly unknown[], active: ActiveMod
       ranges.push(column);
     }
   }
-  return { rows, cols, args, problem, ranges, resultFactor: fixed.resultFactor, h: fixed.h };
+  return { rows, cols, args, problem, rangesBeforeProblem, ranges, resultFactor: fixed.resultFactor, h: fixed.h };
 }
 
 /** Reads every cell of a range argument into `column` (row-major). */
@@ -409,7 +418,7 @@ function readColumn(
   let i = 0;
   if (spec.kind !== "number") {
     for (const row of matrix) {
-      for (const value of row) others.set(i++, spec.kind === "model" ? modelText(value, active) : readArg(spec, value, true, conversion, active, modelOf));
+      for (const value of row) others.set(i++, spec.kind === "model" ? modelText(spec.name, value, active) : readArg(spec, value, true, conversion, active, modelOf));
     }
     return;
   }
@@ -428,29 +437,4 @@ function readColumn(
       i++;
     }
   }
-}
-
-/** Cells one whole-column argument may hold (a whole column of a sheet, 1,048,576 rows: from memory). */
-const maxColumnCells = 1_048_576;
-
-/**
- * A whole-column argument (FunctionDef.over) as a list of cells, row-major: numbers (text numbers
- * too), "" for blanks, and errors in place, so the function can name the row a problem came from.
- * @throws CellError when the argument is omitted or longer than a sheet's column
- */
-export function readColumnCells(name: string, raw: unknown): ColumnCell[] {
-  const matrix = toMatrix(raw);
-  if (!matrix) throw new CellError("value", messages.required(name));
-  const cells: ColumnCell[] = [];
-  for (const row of matrix) {
-    for (const value of row) {
-      if (cells.length >= maxColumnCells) throw new CellError("value", messages.tooLarge(cells.length + 1, maxColumnCells));
-      if (typeof value === "number") cells.push(Number.isFinite(value) ? value : new CellError("num", messages.notFinite(name)));
-      else if (isBlank(value)) cells.push("");
-      else if (typeof value === "string" && numberText.test(value.trim())) cells.push(Number(value.trim()));
-      else if (isIncomingError(value)) cells.push(new CellError("value", messages.inputError(name)));
-      else cells.push(new CellError("value", messages.notANumber(name, value)));
-    }
-  }
-  return cells;
 }

@@ -16,6 +16,13 @@
 //   specs:<N>       DIST_LUM(1, <column of N distinct specs>): ms a spec and the extra RSS the call took, MiB
 //   catalogue:<NAME> one call over a 100k-row column of a catalogue function (arguments below; a figure
 //                   may time a function under another name, functionOf), ns a cell
+//   grid:<N>:row     DIST_LUM(1,000 z as a column, N distinct models as a row): ms the call (its models new)
+//   grid:<N>:column  the same grid turned: 1,000 z as a row against N models as a column, ms
+//   chi2:<N>         CHI2_MODULUS over N rows of z, mu, mu_err (every row filled): ms and extra RSS, MiB
+//   lf:<CASE>        LUMINOSITY_FUNCTION over a whole column (1,048,576 cells): "edges" 1,000 sources binned
+//                    by 8 edges atop a blank whole column; "full" the same against a whole column of
+//                    increasing numbers as edges; "rows" a whole column of sources (every row filled)
+//                    against 8 edges: ms, extra RSS (MiB) and what the call returned (rows, or its error)
 import { readFileSync } from "node:fs";
 import vm from "node:vm";
 
@@ -218,6 +225,49 @@ if (figure === "cold" || figure.startsWith("cold:")) {
   globalThis.gc?.(); // with --expose-gc: what the call still holds once its garbage is collected
   const retained = globalThis.gc ? (process.memoryUsage().heapUsed - heapBase) / 2 ** 20 : undefined;
   result = { msPerSpec: ms / count, ms, extraRssMiB: (peak - before) / 2 ** 20, heapAfterGcMiB: retained, check: out[count - 1][0] };
+} else if (figure.startsWith("grid:")) {
+  // a what-if table: a column of redshifts against a row of models (or turned), every model new
+  const [, count, orientation] = figure.split(":");
+  const fn = registered.get("DIST_LUM");
+  await settle(fn([[1]])); // shared tables and the workbook's model: the cold figure, not this one
+  const specs = Array.from({ length: Number(count) }, (_, i) => `${preset}; H0=${(60 + (20 * i) / Number(count)).toFixed(6)}`);
+  const zs = redshifts(1000);
+  const [z, models] = orientation === "row" ? [zs.map((x) => [x]), [specs]] : [[zs], specs.map((s) => [s])];
+  const t0 = now();
+  const out = await settle(fn(z, models));
+  result = { ms: now() - t0, cells: out.length * out[0].length, check: out[out.length - 1][out[0].length - 1] };
+} else if (figure.startsWith("chi2:") || figure.startsWith("lf:")) {
+  // an aggregate over whole columns: the time of one call and the memory it takes (inputs made first)
+  const rows = 1_048_576;
+  const zs = redshifts(1_000_000);
+  let call;
+  if (figure.startsWith("chi2:")) {
+    const count = Number(figure.slice("chi2:".length));
+    const z = zs.slice(0, count).map((x) => [x]);
+    const mu = z.map(([x], i) => [5 * Math.log10(x * 4300 * (1 + x)) + 25 + ((i % 7) - 3) * 0.05]);
+    const err = z.map(() => [0.1]);
+    call = () => registered.get("CHI2_MODULUS")(z, mu, err, null, null);
+  } else {
+    const kind = figure.slice("lf:".length);
+    const logL = (i) => 42 + (3 * ((i * 7919) % 1000)) / 1000;
+    const sources = kind === "rows" ? rows : 1000;
+    const values = Array.from({ length: rows }, (_, i) => [i < sources ? logL(i) : ""]);
+    const vMax = Array.from({ length: rows }, (_, i) => [i < sources ? 1e6 + i : ""]);
+    const edges = Array.from({ length: rows }, (_, i) => [kind === "full" ? 41 + i * 1e-5 : i < 8 ? 41.5 + 0.5 * i : ""]);
+    call = () => registered.get("LUMINOSITY_FUNCTION")(values, vMax, edges);
+  }
+  await settle(registered.get("DIST_LUM")([[1]])); // the workbook's model and shared tables: not this figure
+  globalThis.gc?.();
+  const before = process.memoryUsage().rss;
+  let peak = before;
+  const watch = setInterval(() => (peak = Math.max(peak, process.memoryUsage().rss)), 5);
+  const t0 = now();
+  const out = await settle(call());
+  const ms = now() - t0;
+  clearInterval(watch);
+  peak = Math.max(peak, process.memoryUsage().rss);
+  const first = out[0][0];
+  result = { ms, extraRssMiB: (peak - before) / 2 ** 20, rows: out.length, check: typeof first === "number" ? first : `${first.code}: ${first.message}` };
 } else if (figure === "degenerate") {
   // every inverse and some forward functions in models at the edge of what zcell builds, at values
   // from tiny to absurd: the slowest single cell once its model is built, ms

@@ -34,7 +34,7 @@ const coldFormulas: [string, string][] = [
 ];
 
 /** Targets of the worksheet path (issue: one formula per row, whole ranges, first formula, new models). */
-const targets = { single: 500, range: 100, cold: 15, models: 1, degenerate: 50, specsMiB: 100, paneMs: 1000, structure: 1000, growthTable: 1 };
+const targets = { single: 500, range: 100, cold: 15, models: 1, degenerate: 50, specsMiB: 100, paneMs: 1000, structure: 1000, growthTable: 1, chi2Ms: 1000, chi2MiB: 100 };
 
 function build(extra: string[]): string {
   const out = mkdtempSync(join(tmpdir(), "zcell-bench-"));
@@ -42,15 +42,26 @@ function build(extra: string[]): string {
   return join(out, "functions.js");
 }
 
+type Key = "ns" | "ms" | "msPerSpec" | "extraRssMiB";
+
 /** min and median of one figure over `runs` fresh processes. */
-function figure(bundle: string, name: string, key: "ns" | "ms" | "msPerSpec" | "extraRssMiB"): { min: number; median: number } {
-  const values: number[] = [];
+function figure(bundle: string, name: string, key: Key): { min: number; median: number } {
+  return figures(bundle, name, [key])[key]!;
+}
+
+/** min and median of several keys of one figure, from the same `runs` fresh processes. */
+function figures(bundle: string, name: string, keys: Key[]): Partial<Record<Key, { min: number; median: number }>> {
+  const values: Record<string, number>[] = [];
   for (let i = 0; i < runs; i++) {
     const out = execFileSync(process.execPath, ["--expose-gc", `${root}scripts/benchBundle.mjs`, bundle, name]).toString().trim().split("\n").pop()!;
-    values.push(JSON.parse(out)[key] as number);
+    values.push(JSON.parse(out) as Record<string, number>);
   }
-  values.sort((a, b) => a - b);
-  return { min: values[0], median: values[Math.floor(values.length / 2)] };
+  const result: Partial<Record<Key, { min: number; median: number }>> = {};
+  for (const key of keys) {
+    const sorted = values.map((v) => v[key]).sort((a, b) => a - b);
+    result[key] = { min: sorted[0], median: sorted[Math.floor(sorted.length / 2)] };
+  }
+  return result;
 }
 
 function reference(): { scalar_ns: number; vector_ns: number } | undefined {
@@ -104,6 +115,26 @@ export async function benchWorksheet(): Promise<void> {
     const specMemory = figure(bundle, "specs:10000", "extraRssMiB");
     console.log(pad("10,000 distinct specs in one call: time", 42) + pad(`${fmt(specTime, 2)} ms a spec`, 20) + "linear");
     console.log(pad("10,000 distinct specs in one call: memory", 42) + pad(`${fmt(specMemory, 0)} MiB`, 20) + `~${targets.specsMiB} MiB (peak RSS over the call)`);
+    // a what-if grid: 1,000 redshifts against N distinct models; the cost is ~N builds + the cells, whichever way it lies
+    for (const count of [40, 100, 200]) {
+      for (const orientation of ["row", "column"]) {
+        const grid = figure(bundle, `grid:${count}:${orientation}`, "ms");
+        const label = orientation === "row" ? `grid: 1,000 z (column) × ${count} models (row)` : `grid: 1,000 z (row) × ${count} models (column)`;
+        console.log(pad(label, 42) + pad(`${fmt(grid, 0)} ms`, 20) + pad("", 12) + `${(grid.min / count).toFixed(2)} ms a model (min), each model new`);
+      }
+    }
+    // aggregates over whole columns (1,048,576 rows): time and the memory the call takes
+    const chi2 = figures(bundle, "chi2:1000000", ["ms", "extraRssMiB"]);
+    console.log(pad("CHI2_MODULUS, 10^6 rows: time", 42) + pad(`${fmt(chi2.ms!, 0)} ms`, 20) + `≤ ${targets.chi2Ms} ms`);
+    console.log(pad("CHI2_MODULUS, 10^6 rows: memory", 42) + pad(`${fmt(chi2.extraRssMiB!, 0)} MiB`, 20) + `≤ ${targets.chi2MiB} MiB (RSS over the call)`);
+    for (const [name, label] of [
+      ["lf:edges", "edges atop a blank A:A"],
+      ["lf:rows", "10^6 sources in A:A"],
+      ["lf:full", "A:A of data as edges"],
+    ]) {
+      const lf = figures(bundle, name, ["ms", "extraRssMiB"]);
+      console.log(pad(`LUMINOSITY_FUNCTION, ${label}`, 42) + pad(`${fmt(lf.ms!, 0)} ms`, 20) + pad("", 12) + `${fmt(lf.extraRssMiB!, 0)} MiB RSS over the call`);
+    }
     for (const name of catalogueFunctions) {
       const r = figure(bundle, `catalogue:${name}`, "ns");
       console.log(pad(`one call over 100k rows: ${name}`, 42) + pad(`${fmt(r, 0)} ns a cell`, 20) + " (no target)");

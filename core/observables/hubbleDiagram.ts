@@ -18,7 +18,7 @@ import type { Cosmology } from "../distances/Cosmology.js";
  * @throws RangeError naming the index (from 0) of a bad entry
  * @example hubbleDiagramChi2(Cosmology.fromSpec("EDS"), [1], [44], [0.1], 0) // 24.755 (((44 − 43.5025)/0.1)²)
  */
-export function hubbleDiagramChi2(model: Cosmology, z: readonly number[], mu: readonly number[], muErr: readonly number[], offset = Number.NaN): number {
+export function hubbleDiagramChi2(model: Cosmology, z: ArrayLike<number>, mu: ArrayLike<number>, muErr: ArrayLike<number>, offset = Number.NaN): number {
   if (z.length !== mu.length || z.length !== muErr.length) throw new RangeError(`z, mu and mu_err have ${z.length}, ${mu.length} and ${muErr.length} entries`);
   let a = 0;
   let b = 0;

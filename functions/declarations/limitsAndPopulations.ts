@@ -82,7 +82,7 @@ export function VOLUME_MAX(z_max: any[][], z_lo: any[][], z_hi: any[][], area: a
  * @example =ZC.LUMINOSITY_FUNCTION({42.1;42.4;42.8;43.2}, {3E5;1.2E6;6.8E6;6E7}, {42;42.5;43;43.5})
  * @param values Each source's binned quantity, e.g. log10 L (range).
  * @param v_max Each source's V_max, > 0, e.g. from ZC.VOLUME_MAX (range of the same size).
- * @param edges Bin edges, increasing (range); values outside them are ignored.
+ * @param edges Bin edges, increasing, in the scale of values (log10 edges for log10 L) (range); values outside them are ignored; at most 1,000 bins (#VALUE! beyond); no value within the edges is #N/A.
  * @returns A table that spills: low, high, N, Φ, σ_Φ per bin.
  */
 export function LUMINOSITY_FUNCTION(values: any[][], v_max: any[][], edges: any[][]): any[][] {
