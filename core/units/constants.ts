@@ -112,3 +112,18 @@ export const cmbDipoleGalacticDeg = { l: 264.021, b: 48.253 } as const;
  * 1997, Vol. 1, §1.5.3).
  */
 export const galacticFrameDeg = { poleRa: 192.85948, poleDec: 27.12825, celestialPoleL: 122.93192 } as const;
+
+/**
+ * Obliquity of the ecliptic at J2000.0, ε0 = 84381.406″ [arcsec] (IAU 2006 Resolution B1, which adopts
+ * the P03 precession of Capitaine, Wallace & Chapront 2003, A&A 412, 567; the value of the IERS
+ * Conventions 2010, IERS Technical Note 36, §5.6.4, from memory).
+ */
+export const eclipticObliquityJ2000Arcsec = 84381.406;
+
+/**
+ * The supergalactic frame in galactic coordinates [deg]: the north supergalactic pole at l = 47.37°,
+ * b = +6.32°, and the zero of supergalactic longitude at l = 137.37°, b = 0° (de Vaucouleurs' plane
+ * as adopted in the Third Reference Catalogue, de Vaucouleurs et al. 1991, and by Lahav et al. 2000,
+ * MNRAS 312, 166, §2; from memory).
+ */
+export const supergalacticFrameDeg = { poleL: 47.37, poleB: 6.32, originL: 137.37 } as const;
