@@ -11,6 +11,7 @@ import type { Args, ArgSpec, ColumnCell, FunctionDef } from "./FunctionDef.js";
 import { messages } from "./messages.js";
 import { isBlank, keyValueBlockSpec } from "./modelArgument.js";
 import { modelFor } from "./modelCache.js";
+import { degreeIn, isLatitude, positionParts, readPosition, type Conversion } from "./readPositions.js";
 import { resolvedSpec } from "./workbookModels.js";
 
 /** Cells one call may return (4 × 1,048,576: four whole columns, our choice). */
@@ -66,11 +67,6 @@ export interface CallArguments {
 /** What a blank input gives: a blank result. */
 export const blank = "";
 
-/**
- * How a number argument is converted into its reference unit: the factor, the power of h = H0/100 of
- * the cell's model still to apply (h-scaled units such as Mpc/h; 0 otherwise) and the unit the user gave.
- */
-type Conversion = { factor: number; hPower: number; unit: string };
 /** Text that Excel's own functions would read as a number (CSV and archive pastes). */
 const numberText = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 
@@ -98,7 +94,7 @@ function unitConversion(spec: Extract<ArgSpec, { kind: "unit" }>, raw: unknown):
   let conversion: Conversion;
   try {
     const { factor, hPower } = spec.applies === "result" ? scaledConversion(spec.unit, text) : scaledConversion(text, spec.unit);
-    conversion = { factor, hPower, unit: text.trim() };
+    conversion = { factor, hPower, unit: text.trim(), perDegree: degreeIn(spec.unit) };
   } catch (e) {
     throw new CellError("value", isModelText(text) ? messages.modelInUnitSlot(spec.name, text) : messages.unitArgument(spec.name, (e as Error).message));
   }
@@ -155,6 +151,7 @@ function readArg(
         return spec.default;
       }
       if (typeof value === "string" && numberText.test(value.trim())) return readNumber(spec, Number(value.trim()), conversion);
+      if (spec.sexagesimal && typeof value === "string") return readPosition(spec, value, conversion);
       return new CellError("value", messages.notANumber(spec.name, value));
     }
     case "numberOrText": {
@@ -199,7 +196,6 @@ function readText(spec: Extract<ArgSpec, { kind: "text" }>, value: unknown): str
   if (!match) throw new CellError("value", messages.choice(spec.name, text, spec.choices));
   return match;
 }
-
 
 /** An argument that may not be left out: a number without a default, a model marked required. */
 function isRequired(spec: ArgSpec): boolean {
@@ -290,7 +286,7 @@ function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): Fixed
       if (h) h.result += conversion.hPower;
     } else {
       for (const name of typeof spec.applies === "string" ? [spec.applies] : spec.applies) {
-        conversions[name] = conversion;
+        conversions[name] = conversion.unit === "hourangle" && isLatitude(def, name) ? unitConversion(spec, "deg") : conversion;
         if (conversion.hPower !== 0) h!.args.push([name, conversion.hPower]);
       }
     }
@@ -300,6 +296,7 @@ function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): Fixed
     const text = toMatrix(raw[i])?.[0]?.[0];
     args[spec.name] = spec.optional && isBlank(text) ? "" : readText(spec, text);
   }
+  positionParts(def, args, conversions);
   return { conversions, resultFactor, args, h };
 }
 

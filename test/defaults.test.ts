@@ -90,6 +90,17 @@ const pinned: [string, string][] = [
     ["LUMINOSITY_FUNCTION" , ""],
     ["CHI2_MODULUS"        , "offset=not given"],
     ["GROWTH_RATE"         , ""],
+  // new in 0.3.0: positions, velocities and the rest frame (CHANGELOG.md)
+    ["COORD_DEG"           , ""],
+    ["COORD_TEXT"          , "decimals=not given"],
+    ["SEPARATION"          , "unit=arcsec"],
+    ["COORD_CONVERT"       , ""],
+    ["VELOCITY"            , "convention=blank; unit=km/s"],
+    ["Z_FROM_VELOCITY"     , "convention=blank; unit=km/s"],
+    ["Z_COMBINE"           , ""],
+    ["VELOCITY_PECULIAR"   , "unit=km/s"],
+    ["REST_FRAME"          , "unit=blank"],
+    ["OBSERVED_FRAME"      , "unit=blank"],
 ];
 
 describe("defaults that saved workbooks depend on", () => {
@@ -113,10 +124,20 @@ describe("defaults that saved workbooks depend on", () => {
     ["REDSHIFT", [1e5, "VOLUME", "EDS", ""], [1e5, "VOLUME", "EDS", "Mpc3"]],
     ["REDSHIFT", [3000, "DIST_LUM", "EDS", ""], [3000, "DIST_LUM", "EDS", "Mpc"]],
     ["REDSHIFT", [5, "LOOKBACK", "EDS", ""], [5, "LOOKBACK", "EDS", "Gyr"]],
-  ])("%s: a blank text unit means its default", (name, blank, written) => {
+    ["VELOCITY", [0.7, "", ""], [0.7, "optical", "km/s"]],
+    ["Z_FROM_VELOCITY", [3e4, "", ""], [3e4, "optical", "km/s"]],
+    ["SEPARATION", [10, 20, 11, 21, ""], [10, 20, 11, 21, "arcsec"]],
+    ["VELOCITY_PECULIAR", [0.101, 0.1, ""], [0.101, 0.1, "km/s"]],
+  ])("%s: a blank text unit (or convention) means its default", (name, blank, written) => {
     const active = { spec: defaultModelSpec, stored: false };
     const a = evaluate(definitions[name], blank, active)[0][0];
     expect(typeof a).toBe("number");
     expect(a).toBe(evaluate(definitions[name], written, active)[0][0]);
+  });
+
+  test("COORD_TEXT: blank decimals are 2 for a right ascension (0.01 s) and 1 for a declination (0.1″)", () => {
+    const active = { spec: defaultModelSpec, stored: false };
+    expect(evaluate(definitions.COORD_TEXT, [187.70583333333333, "ra", ""], active)[0][0]).toBe("12:30:49.40");
+    expect(evaluate(definitions.COORD_TEXT, [12.391111111111111, "dec", null], active)[0][0]).toBe("+12:23:28.0");
   });
 });

@@ -114,7 +114,9 @@ export const distancesAndTimes: FunctionDef[] = [
   {
     name: "REDSHIFT_CMB",
     args: [
-      num("z_helio", { min: -1, minExclusive: true }), num("ra"), num("dec", { min: -Math.PI / 2, max: { value: Math.PI / 2, what: "90°" } }),
+      num("z_helio", { min: -1, minExclusive: true }),
+      num("ra", { sexagesimal: "ra" }),
+      num("dec", { sexagesimal: "dec", min: -Math.PI / 2, max: { value: Math.PI / 2, what: "90°" } }),
       unit("angle_unit", "rad", "deg", ["ra", "dec"]),
     ],
     compute: (a) => cmbFrameRedshift(n(a, "z_helio"), n(a, "ra"), n(a, "dec")),
