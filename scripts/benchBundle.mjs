@@ -14,7 +14,8 @@
 //   degenerate      the slowest single cell among inverses and distances in models at the edge, ms
 //   growthTable     the growth table a new model builds at its first GROWTH (GROWTH minus DIST_LUM of a new model), ms
 //   specs:<N>       DIST_LUM(1, <column of N distinct specs>): ms a spec and the extra RSS the call took, MiB
-//   catalogue:<NAME> one call over a 100k-row column of a catalogue function (arguments below), ns a cell
+//   catalogue:<NAME> one call over a 100k-row column of a catalogue function (arguments below), ns a cell;
+//                  NAME@variant times the same function with other arguments (REDSHIFT_CMB@text: positions as text)
 import { readFileSync } from "node:fs";
 import vm from "node:vm";
 
@@ -126,6 +127,19 @@ if (figure === "cold" || figure.startsWith("cold:")) {
   const name = figure.slice("catalogue:".length);
   const zs = redshifts(n).map((z) => [z]);
   const lums = zs.map(([z]) => [1e43 * 10 ** (z / 2.5)]);
+  // sexagesimal positions as a catalogue prints them, spread over the sky from the redshifts: "hh:mm:ss.ss", "±dd:mm:ss.s"
+  const two = (x) => String(x).padStart(2, "0");
+  const raText = (x) => `${two(Math.floor(x / 15))}:${two(Math.floor((x * 4) % 60))}:${((x * 240) % 60).toFixed(2).padStart(5, "0")}`;
+  const decText = (x) => `${x < 0 ? "-" : "+"}${two(Math.floor(Math.abs(x)))}:${two(Math.floor((Math.abs(x) * 60) % 60))}:${((Math.abs(x) * 3600) % 60).toFixed(1).padStart(4, "0")}`;
+  const raDeg = zs.map(([z]) => (z * 997.3) % 360);
+  const decDeg = zs.map(([z]) => ((z * 7919.1) % 179) - 89.5);
+  // through JSON, as a host hands cells over (flat strings, not the ropes a template literal makes)
+  const asPassed = (column) => JSON.parse(JSON.stringify(column));
+  const ras = asPassed(raDeg.map((x) => [raText(x)]));
+  const decs = asPassed(decDeg.map((x) => [decText(x)]));
+  const ras2 = asPassed(raDeg.map((x) => [raText((x + 0.001) % 360)]));
+  const decs2 = asPassed(decDeg.map((x) => [decText(x + 0.0005)]));
+  const degrees = raDeg.map((x) => [x]);
   const calls = {
     DIST_LUM_ERR: (z) => [z, 0.01],
     LUMINOSITY_ERR: (z) => [1e-13, 1e-14, z, 0.01],
@@ -145,9 +159,22 @@ if (figure === "cold" || figure.startsWith("cold:")) {
     SURFACE_MAG: (z) => [100, z, 4.65],
     GROWTH: (z) => [z],
     GROWTH_RATE: (z) => [z],
+    // positions: text parsed in every cell
+    "REDSHIFT_CMB@text": (z, _lum, rows) => [z, ras.slice(0, rows), decs.slice(0, rows)],
+    COORD_DEG: (_z, _lum, rows) => [ras.slice(0, rows), "ra"],
+    COORD_TEXT: (_z, _lum, rows) => [degrees.slice(0, rows), "ra"],
+    SEPARATION: (_z, _lum, rows) => [ras.slice(0, rows), decs.slice(0, rows), ras2.slice(0, rows), decs2.slice(0, rows)],
+    COORD_CONVERT: (_z, _lum, rows) => [ras.slice(0, rows), decs.slice(0, rows), "equatorial", "galactic", "lat"],
+    // velocities and the rest frame
+    VELOCITY: (z) => [z],
+    Z_FROM_VELOCITY: (z) => [z.map(([x]) => [x * 29979.2458])],
+    Z_COMBINE: (z) => [z, 0.001],
+    VELOCITY_PECULIAR: (z) => [z, 0.05],
+    REST_FRAME: (z, lum) => [lum.map(([x]) => [x / 1e40]), z, "wavelength", "Angstrom"],
+    OBSERVED_FRAME: (z, lum) => [lum.map(([x]) => [x / 1e40]), z, "frequency", "GHz"],
   };
-  const fn = registered.get(name);
-  const args = (rows) => calls[name](zs.slice(0, rows), lums.slice(0, rows));
+  const fn = registered.get(name.split("@")[0]);
+  const args = (rows) => calls[name](zs.slice(0, rows), lums.slice(0, rows), rows);
   await settle(fn(...args(1000)));
   const full = args(n);
   let best = Infinity;

@@ -21,6 +21,12 @@ const catalogueFunctions = ["DIST_LUM_ERR", "LUMINOSITY_ERR", "LUMINOSITY_REST",
 /** The population and structure functions of 0.2.0, each timed against ≤ 1 µs a cell over a 100k-row column. */
 const structureFunctions = ["LUMINOSITY_REST_ERR", "RESCALE", "DIST_HUBBLE", "DIST_VOLUME", "SIGMA_CRIT", "OVERDENSITY", "HALO_RADIUS", "HALO_MASS", "SURFACE_LUM", "SURFACE_MAG", "GROWTH", "GROWTH_RATE"];
 
+/** Positions (sexagesimal text read in every cell), velocities and the rest frame (0.3.0), each timed against ≤ 1 µs a cell over a 100k-row column. */
+const positionFunctions = [
+  "COORD_DEG", "COORD_TEXT", "SEPARATION", "COORD_CONVERT", "REDSHIFT_CMB@text",
+  "VELOCITY", "Z_FROM_VELOCITY", "Z_COMBINE", "VELOCITY_PECULIAR", "REST_FRAME", "OBSERVED_FRAME",
+];
+
 /** First formulas after the bundle loads (scripts/benchBundle.mjs cold:*): the model and its tables are built for them. */
 const coldFormulas: [string, string][] = [
   ["cold", "DIST_LUM(1)"],
@@ -32,6 +38,9 @@ const coldFormulas: [string, string][] = [
 
 /** Targets of the worksheet path (issue: one formula per row, whole ranges, first formula, new models). */
 const targets = { single: 500, range: 100, cold: 15, models: 1, degenerate: 50, specsMiB: 100, paneMs: 1000, structure: 1000, growthTable: 1 };
+
+const pad = (s: string, w: number) => s.padEnd(w);
+const fmt = (x: { min: number; median: number }, digits: number) => `${x.min.toFixed(digits)} / ${x.median.toFixed(digits)}`;
 
 function build(extra: string[]): string {
   const out = mkdtempSync(join(tmpdir(), "zcell-bench-"));
@@ -65,8 +74,6 @@ export async function benchWorksheet(): Promise<void> {
     ["npm run build (production)", build([])],
     ["npm start (production + source maps)", build(["--devtool", "source-map"])],
   ];
-  const pad = (s: string, w: number) => s.padEnd(w);
-  const fmt = (x: { min: number; median: number }, digits: number) => `${x.min.toFixed(digits)} / ${x.median.toFixed(digits)}`;
   console.log(`\nworksheet path: the built functions.js in a fresh process's global scope, P18-BAO, z uniform in [0.01, 10]; min / median of ${runs} processes (each the best of 8 passes)`);
   if (ref) console.log(`reference library (astropy, same run): scalar call ${ref.scalar_ns.toFixed(0)} ns, vectorised ${ref.vector_ns.toFixed(0)} ns a value`);
   else console.log("(astropy not found at /usr/bin/python3: no reference timings)");
@@ -105,9 +112,24 @@ export async function benchWorksheet(): Promise<void> {
       const r = figure(bundle, `catalogue:${name}`, "ns");
       console.log(pad(`one call over 100k rows: ${name}`, 42) + pad(`${fmt(r, 0)} ns a cell`, 20) + " (no target)");
     }
-    for (const name of structureFunctions) {
-      const r = figure(bundle, `catalogue:${name}`, "ns");
-      console.log(pad(`one call over 100k rows: ${name}`, 42) + pad(`${fmt(r, 0)} ns a cell`, 20) + `≤ ${targets.structure} ns`);
-    }
+    catalogueRows(bundle, [...structureFunctions, ...positionFunctions]);
   }
+}
+
+/** One line a function: one call over a 100k-row column, against ≤ 1 µs a cell. */
+function catalogueRows(bundle: string, names: string[]): void {
+  for (const name of names) {
+    const r = figure(bundle, `catalogue:${name}`, "ns");
+    console.log(pad(`one call over 100k rows: ${name}`, 42) + pad(`${fmt(r, 0)} ns a cell`, 20) + `≤ ${targets.structure} ns`);
+  }
+}
+
+/** The positions, velocities and rest-frame rows alone, through the production build (`npm run bench -- --positions`). */
+export function benchPositions(): void {
+  const bundle = build([]);
+  console.log(`positions, velocities and the rest frame: the built functions.js, 100k rows; min / median of ${runs} processes (each the best of 8 passes)`);
+  console.log(pad("figure", 42) + pad("min / median", 20) + "target");
+  catalogueRows(bundle, positionFunctions);
+  const floor = figure(bundle, "floor", "ns");
+  console.log(pad("  floor: the 100k-row result array alone", 42) + pad(`${fmt(floor, 0)} ns a cell`, 20) + "(no computing)");
 }
