@@ -11,7 +11,7 @@ import type { Args, ArgSpec, ColumnCell, FunctionDef } from "./FunctionDef.js";
 import { messages } from "./messages.js";
 import { isBlank, keyValueBlockSpec } from "./modelArgument.js";
 import { modelFor } from "./modelCache.js";
-import { degreeIn, isLatitude, positionParts, readPosition, type Conversion } from "./readPositions.js";
+import { degreeIn, isLatitude, positionOrNaN, positionPart, positionParts, readPosition, type Conversion } from "./readPositions.js";
 import { resolvedSpec } from "./workbookModels.js";
 
 /** Cells one call may return (4 × 1,048,576: four whole columns, our choice). */
@@ -452,9 +452,14 @@ function readColumn(
   // the common range, plain numbers with no domain to check: only the unit's factor
   const plain = !spec.magnitude && spec.min === undefined && spec.max === undefined;
   const factor = conversion === undefined ? 1 : conversion.factor;
+  // a column of positions as text: each read straight into degrees (readArg has the rest, and the words of any error)
+  const part = positionPart(spec, conversion);
+  const perDegree = conversion === undefined ? 1 : conversion.perDegree;
   for (const row of matrix) {
     for (const value of row) {
-      let read: ReadCell = plain && typeof value === "number" && value - value === 0 ? value * factor : readArg(spec, value, true, conversion, active, modelOf);
+      const degrees = part !== undefined && typeof value === "string" ? positionOrNaN(value, part) : Number.NaN;
+      let read: ReadCell =
+        plain && typeof value === "number" && value - value === 0 ? value * factor : degrees === degrees ? degrees * perDegree : readArg(spec, value, true, conversion, active, modelOf);
       if (typeof read === "number" && read === read) numbers[i] = read;
       else {
         numbers[i] = Number.NaN;

@@ -44,13 +44,31 @@ export function positionParts(def: FunctionDef, scalars: Args, conversions: Reco
   }
 }
 
+/** The part a position argument's text is read as before compute, or undefined (not a position, or "either"). */
+export function positionPart(spec: Extract<ArgSpec, { kind: "number" }>, conversion: Conversion | undefined): AnglePart | undefined {
+  const part = conversion?.part ?? spec.sexagesimal;
+  return part === "either" || typeof part === "function" ? undefined : part;
+}
+
+/**
+ * A text's degrees when it reads as a position of the part, else NaN: the quick way for a column
+ * of positions, where only a cell that does not read goes the long way (number text, an error's words).
+ */
+export function positionOrNaN(text: string, part: AnglePart): number {
+  try {
+    return sexagesimalDegrees(text, part);
+  } catch {
+    return Number.NaN;
+  }
+}
+
 /**
  * A position given as text, read for its part into degrees and then into the reference unit; the
  * text itself when only compute knows its part ("either").
  */
 export function readPosition(spec: Extract<ArgSpec, { kind: "number" }>, text: string, conversion: Conversion | undefined): number | string | CellError {
-  const part = conversion?.part ?? spec.sexagesimal;
-  if (part === "either" || part === undefined || typeof part === "function") return text;
+  const part = positionPart(spec, conversion);
+  if (part === undefined) return text;
   try {
     const degrees = sexagesimalDegrees(text, part, spec.name);
     return conversion === undefined ? degrees : degrees * conversion.perDegree;

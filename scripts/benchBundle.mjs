@@ -133,13 +133,17 @@ if (figure === "cold" || figure.startsWith("cold:")) {
   const decText = (x) => `${x < 0 ? "-" : "+"}${two(Math.floor(Math.abs(x)))}:${two(Math.floor((Math.abs(x) * 60) % 60))}:${((Math.abs(x) * 3600) % 60).toFixed(1).padStart(4, "0")}`;
   const raDeg = zs.map(([z]) => (z * 997.3) % 360);
   const decDeg = zs.map(([z]) => ((z * 7919.1) % 179) - 89.5);
-  // through JSON, as a host hands cells over (flat strings, not the ropes a template literal makes)
+  // through JSON, as a host hands cells over (flat strings, not the ropes a template literal makes);
+  // made only for the figures that read them, so that no other figure's heap holds them
   const asPassed = (column) => JSON.parse(JSON.stringify(column));
-  const ras = asPassed(raDeg.map((x) => [raText(x)]));
-  const decs = asPassed(decDeg.map((x) => [decText(x)]));
-  const ras2 = asPassed(raDeg.map((x) => [raText((x + 0.001) % 360)]));
-  const decs2 = asPassed(decDeg.map((x) => [decText(x + 0.0005)]));
-  const degrees = raDeg.map((x) => [x]);
+  const text = (make) => {
+    let column;
+    return (rows) => (column ??= asPassed(make())).slice(0, rows);
+  };
+  const ras = text(() => raDeg.map((x) => [raText(x)]));
+  const decs = text(() => decDeg.map((x) => [decText(x)]));
+  const ras2 = text(() => raDeg.map((x) => [raText((x + 0.001) % 360)]));
+  const decs2 = text(() => decDeg.map((x) => [decText(x + 0.0005)]));
   const calls = {
     DIST_LUM_ERR: (z) => [z, 0.01],
     LUMINOSITY_ERR: (z) => [1e-13, 1e-14, z, 0.01],
@@ -160,11 +164,11 @@ if (figure === "cold" || figure.startsWith("cold:")) {
     GROWTH: (z) => [z],
     GROWTH_RATE: (z) => [z],
     // positions: text parsed in every cell
-    "REDSHIFT_CMB@text": (z, _lum, rows) => [z, ras.slice(0, rows), decs.slice(0, rows)],
-    COORD_DEG: (_z, _lum, rows) => [ras.slice(0, rows), "ra"],
-    COORD_TEXT: (_z, _lum, rows) => [degrees.slice(0, rows), "ra"],
-    SEPARATION: (_z, _lum, rows) => [ras.slice(0, rows), decs.slice(0, rows), ras2.slice(0, rows), decs2.slice(0, rows)],
-    COORD_CONVERT: (_z, _lum, rows) => [ras.slice(0, rows), decs.slice(0, rows), "equatorial", "galactic", "lat"],
+    "REDSHIFT_CMB@text": (z, _lum, rows) => [z, ras(rows), decs(rows)],
+    COORD_DEG: (_z, _lum, rows) => [ras(rows), "ra"],
+    COORD_TEXT: (_z, _lum, rows) => [raDeg.slice(0, rows).map((x) => [x]), "ra"],
+    SEPARATION: (_z, _lum, rows) => [ras(rows), decs(rows), ras2(rows), decs2(rows)],
+    COORD_CONVERT: (_z, _lum, rows) => [ras(rows), decs(rows), "equatorial", "galactic", "lat"],
     // velocities and the rest frame
     VELOCITY: (z) => [z],
     Z_FROM_VELOCITY: (z) => [z.map(([x]) => [x * 29979.2458])],

@@ -1,7 +1,8 @@
 /**
  * Redshifts in the frame of the cosmic microwave background (the dipole's apex turned from galactic
  * into ICRS coordinates by `core/positions/skyFrames.ts`). The Sun moves at v = cmbDipoleSpeedKmPerS
- * towards the dipole apex; a source at angle θ from the apex has 1 + z_cmb = (1 + z_helio) / (γ (1 − β cos θ)), β = v/c, γ = 1/√(1 − β²) (the relativistic
+ * towards the dipole apex; a source at angle θ from the apex has
+ * 1 + z_cmb = (1 + z_helio) / (γ (1 − β cos θ)), β = v/c, γ = 1/√(1 − β²) (the relativistic
  * Doppler shift of an observer moving at β, Rybicki & Lightman 1979 eq. 4.12, from memory; sign: light from the
  * apex is blueshifted by our motion, so its CMB-frame redshift is higher).
  */

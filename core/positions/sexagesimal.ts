@@ -1,8 +1,7 @@
 /**
  * Sexagesimal positions, read and written: a right ascension in hours, minutes and seconds of time
  * ("12:30:49.4", "12h30m49.4s", "12 30 49.4") and a declination in degrees, arcminutes and arcseconds
- * ("+12:23:28", "-05d07m", "−05°07′"), as catalogues print them (common practice; the IAU's own
- * recommendation of h m s and ° ′ ″ marks, IAU Style Manual 1989 §5.14, from memory).
+ * ("+12:23:28", "-05d07m", "−05°07′"), as catalogues print them (common practice).
  *
  * Reading: one to three fields, each but the last a whole number, separated by ":", spaces or the marks
  * h, m, s (hours) and d or °, m, ′ or ', s, ″ or " or '' (degrees); the minus may be "-" or "−"
@@ -61,6 +60,11 @@ function skipSpaces(text: string, i: number): number {
 
 function fail(name: string, text: string, what: string): never {
   throw new TypeError(`${name}: "${shown(text.trim())}" ${what}`);
+}
+
+/** The character at `i` as a person sees it (both halves of a surrogate pair). */
+function characterAt(text: string, i: number): string {
+  return String.fromCodePoint(text.codePointAt(i)!);
 }
 
 /** The text as quoted in a message (at most 40 characters). */
@@ -140,7 +144,7 @@ export function sexagesimalDegrees(text: string, part: AnglePart, name: string =
     if (digits + fractionDigits === 0) {
       const at = text.charCodeAt(i);
       if (at === plus || at === hyphenMinus || at === minusSign) fail(name, text, signed ? twoSigns : "has a sign inside it: give one + or − before the first field");
-      fail(name, text, i < n ? `has "${text[i]}" where a number belongs; ${hint(part)}` : `ends without a number; ${hint(part)}`);
+      fail(name, text, i < n ? `has "${characterAt(text, i)}" where a number belongs; ${hint(part)}` : `ends without a number; ${hint(part)}`);
     }
     // exact for up to 15 digits: an exact integer over an exact power of ten, rounded once (IEEE 754)
     const value =
@@ -167,7 +171,7 @@ export function sexagesimalDegrees(text: string, part: AnglePart, name: string =
         if (i === n) fail(name, text, `ends with ":"; ${hint(part)}`);
       } else if (i === fieldEnd || !isNumberStart(code)) {
         if (code === plus || code === hyphenMinus || code === minusSign) fail(name, text, signed ? twoSigns : "has a sign inside it: give one + or − before the first field");
-        fail(name, text, `has "${text[i]}" where ${["h, d, °", "m, ′ or '", "s, ″ or \""][count]}, ":" or a space belongs; ${hint(part)}`);
+        fail(name, text, `has "${characterAt(text, i)}" where ${["h, d, °", "m, ′ or '", "s, ″ or \""][count]}, ":" or a space belongs; ${hint(part)}`);
       }
     }
     count++;
@@ -194,7 +198,7 @@ export function sexagesimalDegrees(text: string, part: AnglePart, name: string =
   return negative ? -magnitude : magnitude;
 }
 
-/** How many digits after the point each part shows by default: 0.01 s of RA and 0.1″ of Dec are alike (1.5 ≈ 1 × 0.1 arcsec). */
+/** Digits after the seconds' point by default: 0.01 s of RA (0.15″ cos δ) and 0.1″ of Dec are about alike (common practice in catalogues). */
 const defaultDecimals: Record<"ra" | "dec", number> = { ra: 2, dec: 1 };
 
 /**

@@ -17,8 +17,8 @@
  *
  * A frame's rotation from its parent, for a pole at (λ_p, β_p) in the parent and the parent's pole at
  * longitude θ in the frame, is R_z(180° − θ) R_y(90° − β_p) R_z(λ_p) with rotations of the axes
- * (passive), as in e.g. Murray 1983, Vectorial Astrometry, §2 (from memory); vectors carry the
- * directions, and latitudes come from atan2, accurate at the poles.
+ * (passive; common practice); vectors carry the directions, and latitudes come from atan2, accurate
+ * at the poles.
  */
 import { eclipticObliquityJ2000Arcsec, galacticFrameDeg, supergalacticFrameDeg } from "../units/constants.js";
 import { requireFiniteNumber, requireLatitudeDeg, requireLatitudeRad } from "../checks/numberChecks.js";
