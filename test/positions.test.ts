@@ -18,6 +18,9 @@ import {
   type SkyFrame,
 } from "../core/index.js";
 import { CellError } from "../functions/cellError.js";
+import { formatValue } from "../functions/messages.js";
+import { adviseOnError } from "../taskpane/errorAdvice.js";
+import { explainFormula } from "../taskpane/explainCall.js";
 import { definitions } from "../functions/definitions.js";
 import { evaluate, type Cell } from "../functions/evaluate.js";
 import { seededRandom } from "./helpers.js";
@@ -322,6 +325,29 @@ describe("the sheet: text in every position argument, ranges, blanks and errors"
     expect(cell.message).toBe(message);
   });
 
+  test("a column of positions reads each cell as one cell alone would (text, number text, numbers, blanks, errors)", () => {
+    const cells: unknown[] = ["12:30:49.4", "187.5", "-12.5", "+12.5", "1e2", " 12 30 49.4 ", "25:00:00", "", 187.5, "abc", "+12:63:00", "400", "95", "-05d07m", true];
+    const calls: [string, (c: unknown) => unknown[]][] = [
+      ["SEPARATION", (c) => [c, 10, 0, 0]],
+      ["SEPARATION", (c) => [0, c, 0, 0]],
+      ["REDSHIFT_CMB", (c) => [0.1, c, 10]],
+      ["REDSHIFT_CMB", (c) => [0.1, 10, c, "hourangle"]],
+      ["COORD_CONVERT", (c) => [c, 10, "galactic", "equatorial", "lat"]],
+      ["COORD_CONVERT", (c) => [c, 10, "equatorial", "galactic", "lat"]],
+      ["COORD_CONVERT", (c) => [10, c, "ecliptic", "galactic", "lon"]],
+      ["COORD_DEG", (c) => [c, "dec"]],
+    ];
+    for (const [name, args] of calls) {
+      const column = sheet(name, ...args(cells.map((c) => [c])));
+      cells.forEach((c, i) => {
+        const alone = one(name, ...args(c));
+        const label = `${name}(${JSON.stringify(args(c))})`;
+        if (typeof alone === "number") expect(Math.abs((column[i][0] as number) - alone), label).toBeLessThanOrEqual(1e-12 * Math.max(1, Math.abs(alone)));
+        else expect(column[i][0], label).toEqual(alone);
+      });
+    }
+  });
+
   test("COORD_TEXT writes a column of degrees, and reads sexagesimal text to write it again", () => {
     expect(sheet("COORD_TEXT", [[187.70583333333333], [0]], "ra")).toEqual([["12:30:49.40"], ["00:00:00.00"]]);
     expect(one("COORD_TEXT", "12h30m49.4s", "ra", 1)).toBe("12:30:49.4");
@@ -360,6 +386,24 @@ describe("the sheet: text in every position argument, ranges, blanks and errors"
     expect(out[0][0]).toBe(expected);
     expect(out[1][0]).toBe("");
     expect(typeof out[2][0]).toBe("number");
+  });
+});
+
+describe("the inspector explains a position call and its errors", () => {
+  test("SEPARATION of two texts: the equation, the arguments and the result in arcsec", async () => {
+    const [call] = await explainFormula('=ZC.SEPARATION("12:30:49.4","+12:23:28",B2,"+12:23:29")', async () => [["12:30:49.5"]], active);
+    expect(call.summary).toBe("angular separation of two positions (great circle)");
+    expect(call.equation).toContain("atan2");
+    expect(call.args.map((a) => a.value)).toEqual(['"12:30:49.4"', '"+12:23:28"', '"12:30:49.5"', '"+12:23:29"', 'default "arcsec"']);
+    expect(call.result).toBe(`${formatValue(one("SEPARATION", "12:30:49.4", "+12:23:28", "12:30:49.5", "+12:23:29") as number)} arcsec`);
+  });
+
+  test("a malformed declination names dec1 and says how to write a position", async () => {
+    const [call] = await explainFormula('=ZC.SEPARATION("12:30:49.4","+12:75:00",0,0)', async () => [[""]], active);
+    expect(call.isError).toBe(true);
+    expect(call.fault?.argument).toBe("dec1");
+    expect(call.fault?.fix).toContain("sexagesimal text: a right ascension in hours (12:30:49.4");
+    expect(adviseOnError(definitions.COORD_CONVERT, "value", 'ZC.COORD_CONVERT: lon: "12:75" has minutes 75').argument).toBe("lon");
   });
 });
 
