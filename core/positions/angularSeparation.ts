@@ -5,11 +5,18 @@
  * sin φ1 sin φ2 + cos φ1 cos φ2 cos Δλ). Unlike the cosine law (which loses every digit below about
  * 1″) or the haversine (which loses them near 180°), atan2 of the two parts keeps full relative
  * precision at every separation. The middle term is written as sin(φ2 − φ1) + 2 sin φ1 cos φ2 sin²(Δλ/2)
- * (the same quantity) so that two nearby declinations do not cancel.
+ * (the same quantity) so that two nearby declinations do not cancel, and the cosine of a latitude near a
+ * pole is taken as the sine of its distance from the pole (exact in degrees), so that it keeps its digits.
  */
 import { requireFiniteNumber, requireLatitudeDeg } from "../checks/numberChecks.js";
 
 const degree = Math.PI / 180;
+
+/** cos of a latitude in degrees, as sin(90° − |lat|) near the poles, where 90° − |lat| is exact and keeps cos its digits. */
+function cosLatitude(lat: number): number {
+  const a = Math.abs(lat);
+  return a > 45 ? Math.sin((90 - a) * degree) : Math.cos(lat * degree);
+}
 
 /**
  * Great-circle distance between two directions given by longitude and latitude in one frame (right
@@ -32,9 +39,9 @@ export function angularSeparationDeg(lon1: number, lat1: number, lon2: number, l
   requireLatitudeDeg("dec2", lat2);
   const dLon = (lon2 - lon1) * degree;
   const sin1 = Math.sin(lat1 * degree);
-  const cos1 = Math.cos(lat1 * degree);
+  const cos1 = cosLatitude(lat1);
   const sin2 = Math.sin(lat2 * degree);
-  const cos2 = Math.cos(lat2 * degree);
+  const cos2 = cosLatitude(lat2);
   const sinHalf = Math.sin(dLon / 2);
   const a = cos2 * Math.sin(dLon);
   const b = Math.sin((lat2 - lat1) * degree) + 2 * sin1 * cos2 * sinHalf * sinHalf;
