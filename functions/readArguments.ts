@@ -4,14 +4,14 @@
  * their reference unit with the domain checked in the unit the user gave, text numbers too; texts;
  * models resolved; errors and blanks as they will show). `evaluate.ts` then only computes.
  */
-import { Cosmology, parseModelSpec, parseUnit, scaledConversion } from "../core/index.js";
+import { Cosmology, parseModelSpec, parseUnit, scaledConversion, type AnglePart } from "../core/index.js";
 import type { ActiveModelSetting } from "./activeModel.js";
 import { CellError, classify, isIncomingError } from "./cellError.js";
 import type { Args, ArgSpec, ColumnCell, FunctionDef } from "./FunctionDef.js";
 import { messages } from "./messages.js";
 import { isBlank, keyValueBlockSpec } from "./modelArgument.js";
 import { modelFor } from "./modelCache.js";
-import { degreeIn, isLatitude, positionOrNaN, positionPart, positionParts, readPosition, type Conversion } from "./readPositions.js";
+import { isLatitude, positionOrNaN, positionPart, positionParts, readPosition } from "./readPositions.js";
 import { resolvedSpec } from "./workbookModels.js";
 
 /** Cells one call may return (4 × 1,048,576: four whole columns, our choice). */
@@ -67,6 +67,11 @@ export interface CallArguments {
 /** What a blank input gives: a blank result. */
 export const blank = "";
 
+/**
+ * How a number argument is converted into its reference unit: the factor, the power of h = H0/100 of the cell's
+ * model still to apply (Mpc/h; 0 otherwise), the unit the user gave and the part a scalar text decides for a position.
+ */
+type Conversion = { factor: number; hPower: number; unit: string; part?: AnglePart };
 /** Text that Excel's own functions would read as a number (CSV and archive pastes). */
 const numberText = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 
@@ -94,7 +99,7 @@ function unitConversion(spec: Extract<ArgSpec, { kind: "unit" }>, raw: unknown):
   let conversion: Conversion;
   try {
     const { factor, hPower } = spec.applies === "result" ? scaledConversion(spec.unit, text) : scaledConversion(text, spec.unit);
-    conversion = { factor, hPower, unit: text.trim(), perDegree: degreeIn(spec.unit) };
+    conversion = { factor, hPower, unit: text.trim() };
   } catch (e) {
     throw new CellError("value", isModelText(text) ? messages.modelInUnitSlot(spec.name, text) : messages.unitArgument(spec.name, (e as Error).message));
   }
@@ -151,7 +156,7 @@ function readArg(
         return spec.default;
       }
       if (typeof value === "string" && numberText.test(value.trim())) return readNumber(spec, Number(value.trim()), conversion);
-      if (spec.sexagesimal && typeof value === "string") return readPosition(spec, value, conversion);
+      if (spec.sexagesimal && typeof value === "string") return readPosition(spec, value, conversion?.part);
       return new CellError("value", messages.notANumber(spec.name, value));
     }
     case "numberOrText": {
@@ -296,7 +301,7 @@ function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): Fixed
     const text = toMatrix(raw[i])?.[0]?.[0];
     args[spec.name] = spec.optional && isBlank(text) ? "" : readText(spec, text);
   }
-  positionParts(def, args, conversions);
+  for (const [name, part] of positionParts(def, args)) conversions[name] = { ...(conversions[name] ?? { factor: 1, hPower: 0, unit: "" }), part };
   return { conversions, resultFactor, args, h };
 }
 
@@ -452,14 +457,11 @@ function readColumn(
   // the common range, plain numbers with no domain to check: only the unit's factor
   const plain = !spec.magnitude && spec.min === undefined && spec.max === undefined;
   const factor = conversion === undefined ? 1 : conversion.factor;
-  // a column of positions as text: each read straight into degrees (readArg has the rest, and the words of any error)
-  const part = positionPart(spec, conversion);
-  const perDegree = conversion === undefined ? 1 : conversion.perDegree;
+  const part = positionPart(spec, conversion?.part); // positions as text, read straight into degrees (readArg: the rest, and errors' words)
   for (const row of matrix) {
     for (const value of row) {
       const degrees = part !== undefined && typeof value === "string" ? positionOrNaN(value, part) : Number.NaN;
-      let read: ReadCell =
-        plain && typeof value === "number" && value - value === 0 ? value * factor : degrees === degrees ? degrees * perDegree : readArg(spec, value, true, conversion, active, modelOf);
+      let read: ReadCell = plain && typeof value === "number" && value - value === 0 ? value * factor : degrees === degrees ? degrees : readArg(spec, value, true, conversion, active, modelOf);
       if (typeof read === "number" && read === read) numbers[i] = read;
       else {
         numbers[i] = Number.NaN;

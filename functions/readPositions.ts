@@ -1,52 +1,34 @@
 /**
  * How a position argument is read (`sexagesimal` in FunctionDef.ts): text that is not a number is a
- * sexagesimal angle ("12:30:49.4" hours of right ascension, "−05°07′" degrees), read once into the
- * argument's reference unit when its part is known before the cells are read — fixed by the
- * function, or named by a scalar text such as COORD_CONVERT's from_frame — and otherwise passed to
- * compute as text. Reading it here, not in compute, keeps a column of text positions a column of
- * numbers (no text in the per-cell loop).
+ * sexagesimal angle ("12:30:49.4" hours of right ascension, "−05°07′" degrees), read once into
+ * degrees — every position argument's reference unit — when its part is known before the cells are
+ * read (fixed by the function, or named by a scalar text such as COORD_CONVERT's from_frame), and
+ * otherwise passed to compute as text. Reading it here, not in compute, keeps a column of text
+ * positions a column of numbers (no text in the per-cell loop).
  */
-import { scaledConversion, sexagesimalDegrees, type AnglePart } from "../core/index.js";
+import { sexagesimalDegrees, type AnglePart } from "../core/index.js";
 import { CellError, classify } from "./cellError.js";
 import type { Args, ArgSpec, FunctionDef } from "./FunctionDef.js";
 
-/**
- * How a number argument is converted into its reference unit (readArguments.ts): the factor, the
- * power of h = H0/100 of the cell's model still to apply (h-scaled units such as Mpc/h; 0 otherwise),
- * the unit the user gave, and for a position given as text, a degree in the reference unit and the
- * part it is read as when a scalar text decides it.
- */
-export type Conversion = { factor: number; hPower: number; unit: string; perDegree: number; part?: AnglePart };
-
-/** One degree in an angle unit (NaN for a unit that is not an angle). */
-export function degreeIn(unit: string): number {
-  try {
-    return scaledConversion("deg", unit).factor;
-  } catch {
-    return Number.NaN;
-  }
-}
+type NumberSpec = Extract<ArgSpec, { kind: "number" }>;
 
 /** A declination or other latitude: the angle unit "hourangle" is for right ascensions, so a latitude beside one stays in degrees. */
 export function isLatitude(def: FunctionDef, name: string): boolean {
   return def.args.some((a) => a.name === name && a.kind === "number" && (a.sexagesimal === "dec" || a.sexagesimal === "lat"));
 }
 
-/** A conversion that changes nothing (a position argument in degrees with no unit argument). */
-const inDegrees: Conversion = { factor: 1, hPower: 0, unit: "", perDegree: 1 };
-
-/** Notes in `conversions` the part of each position argument that a scalar text decides, once per call. */
-export function positionParts(def: FunctionDef, scalars: Args, conversions: Record<string, Conversion>): void {
+/** The part of each position argument that a scalar text decides (read once per call), by name. */
+export function positionParts(def: FunctionDef, scalars: Args): [name: string, part: AnglePart][] {
+  const parts: [string, AnglePart][] = [];
   for (const spec of def.args) {
-    if (spec.kind === "number" && typeof spec.sexagesimal === "function") {
-      conversions[spec.name] = { ...(conversions[spec.name] ?? inDegrees), part: spec.sexagesimal(scalars) };
-    }
+    if (spec.kind === "number" && typeof spec.sexagesimal === "function") parts.push([spec.name, spec.sexagesimal(scalars)]);
   }
+  return parts;
 }
 
-/** The part a position argument's text is read as before compute, or undefined (not a position, or "either"). */
-export function positionPart(spec: Extract<ArgSpec, { kind: "number" }>, conversion: Conversion | undefined): AnglePart | undefined {
-  const part = conversion?.part ?? spec.sexagesimal;
+/** The part a position argument's text is read as before compute (`decided`: by a scalar text), or undefined (not a position, or "either"). */
+export function positionPart(spec: NumberSpec, decided: AnglePart | undefined): AnglePart | undefined {
+  const part = decided ?? spec.sexagesimal;
   return part === "either" || typeof part === "function" ? undefined : part;
 }
 
@@ -62,16 +44,12 @@ export function positionOrNaN(text: string, part: AnglePart): number {
   }
 }
 
-/**
- * A position given as text, read for its part into degrees and then into the reference unit; the
- * text itself when only compute knows its part ("either").
- */
-export function readPosition(spec: Extract<ArgSpec, { kind: "number" }>, text: string, conversion: Conversion | undefined): number | string | CellError {
-  const part = positionPart(spec, conversion);
+/** A position given as text, read for its part into degrees; the text itself when only compute knows its part ("either"). */
+export function readPosition(spec: NumberSpec, text: string, decided: AnglePart | undefined): number | string | CellError {
+  const part = positionPart(spec, decided);
   if (part === undefined) return text;
   try {
-    const degrees = sexagesimalDegrees(text, part, spec.name);
-    return conversion === undefined ? degrees : degrees * conversion.perDegree;
+    return sexagesimalDegrees(text, part, spec.name);
   } catch (e) {
     return classify(e, spec.name);
   }
