@@ -15,6 +15,8 @@ export default defineConfig({
       "test/accuracy.test.ts",
       "test/astropy.test.ts",
       "test/mpmath.test.ts",
+      "test/positionsReference.test.ts",
+      "test/velocitiesReference.test.ts",
       "test/bundleMemory.test.ts",
       "test/demo.test.ts",
       "test/devServer.test.ts",

@@ -10,6 +10,7 @@ export {
   bolometricZeroPointW,
   cmbDipoleGalacticDeg,
   cmbDipoleSpeedKmPerS,
+  eclipticObliquityJ2000Arcsec,
   electronVoltJ,
   galacticFrameDeg,
   gravitationalConstantSI,
@@ -24,8 +25,15 @@ export {
   solarMassKg,
   speedOfLightKmPerS,
   speedOfLightMPerS,
+  supergalacticFrameDeg,
 } from "./units/constants.js";
-export { cmbFrameRedshift, cosAngleToCmbApex, galacticCoordinatesRad } from "./observables/cmbFrame.js";
+export { cmbFrameRedshift, cosAngleToCmbApex } from "./observables/cmbFrame.js";
+export { sexagesimalDegrees, sexagesimalText, type AnglePart } from "./positions/sexagesimal.js";
+export { angularSeparationDeg } from "./positions/angularSeparation.js";
+export { convertSkyFrameDeg, galacticCoordinatesRad, skyFrameMatrix, skyFrames, type SkyFrame } from "./positions/skyFrames.js";
+export { dopplerConventions, redshiftOfVelocity, velocityKmPerS, type DopplerConvention } from "./observables/dopplerConventions.js";
+export { combinedRedshift, peculiarVelocityKmPerS } from "./observables/combinedRedshift.js";
+export { observedFrameValue, restFrameQuantities, restFrameValue, type RestFrameQuantity } from "./observables/restFrame.js";
 export { Cosmology, type InvertibleQuantity } from "./distances/Cosmology.js";
 export {
   angularDiameterDistanceSlopeMpc,

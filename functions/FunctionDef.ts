@@ -2,7 +2,7 @@
  * A worksheet function as data: how each argument is read (its kind, default, domain, unit) and what
  * one cell computes. `definitions.ts` lists them; `evaluate.ts` runs them.
  */
-import type { Cosmology } from "../core/index.js";
+import type { AnglePart, Cosmology } from "../core/index.js";
 import type { ActiveModelSetting } from "./activeModel.js";
 import type { CellError } from "./cellError.js";
 
@@ -27,6 +27,14 @@ export type ArgSpec =
       max?: { value: number; what: string };
       /** A magnitude: |value| ≥ 50 is a catalogue's missing-value flag (#N/A). */
       magnitude?: boolean;
+      /**
+       * A position: text that is not a number is read as a sexagesimal angle of this part ("ra" in
+       * hours, "dec", "lon", "lat" in degrees: core/positions/sexagesimal.ts) into the reference unit,
+       * or of the part a function of the scalar texts gives (COORD_CONVERT's frame); "either" passes
+       * the text to compute, for an argument whose part a cell argument names. A "dec" or "lat" stays
+       * in degrees when the angle unit is "hourangle", which is for "ra" alone (readPositions.ts).
+       */
+      sexagesimal?: AnglePart | "either" | ((scalars: Args) => AnglePart);
     }
   | {
       /** A model (or range of models): blank means the workbook's model, unless `required`. */

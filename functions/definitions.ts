@@ -11,10 +11,12 @@ import { errors } from "./definitions/errors.js";
 import { limitsAndPopulations } from "./definitions/limitsAndPopulations.js";
 import { modelsAndUtilities } from "./definitions/modelsAndUtilities.js";
 import { photometry } from "./definitions/photometry.js";
+import { positions } from "./definitions/positions.js";
 import { structure } from "./definitions/structure.js";
+import { velocities } from "./definitions/velocities.js";
 import type { FunctionDef } from "./FunctionDef.js";
 
-const families = [distancesAndTimes, photometry, errors, limitsAndPopulations, structure, modelsAndUtilities, dustAndSpectra];
+const families = [distancesAndTimes, photometry, errors, limitsAndPopulations, structure, positions, velocities, modelsAndUtilities, dustAndSpectra];
 
 /** The worksheet functions by name (without the ZC. namespace). */
 export const definitions: Readonly<Record<string, FunctionDef>> = Object.fromEntries(families.flat().map((d) => [d.name, d]));

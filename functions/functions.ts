@@ -11,5 +11,7 @@ import "./declarations/photometry.js";
 import "./declarations/errors.js";
 import "./declarations/limitsAndPopulations.js";
 import "./declarations/structure.js";
+import "./declarations/positions.js";
+import "./declarations/velocities.js";
 import "./declarations/modelsAndUtilities.js";
 import "./declarations/dustAndSpectra.js";

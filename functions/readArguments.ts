@@ -13,6 +13,7 @@ import { messages } from "./messages.js";
 import { isBlank, isModelText, keyValueBlockSpec } from "./modelArgument.js";
 import { modelFor } from "./modelCache.js";
 import { unitConversion, type Conversion } from "./unitArgument.js";
+import { isLatitude, positionOrNaN, positionPart, positionParts, readPosition } from "./readPositions.js";
 import { resolvedSpec } from "./workbookModels.js";
 
 /** Cells one call may return (4 × 1,048,576: four whole columns, our choice). */
@@ -130,6 +131,7 @@ function readArg(
         return spec.default;
       }
       if (typeof value === "string" && numberText.test(value.trim())) return readNumber(spec, Number(value.trim()), conversion);
+      if (spec.sexagesimal && typeof value === "string") return readPosition(spec, value, conversion?.part);
       return new CellError("value", messages.notANumber(spec.name, value));
     }
     case "numberOrText": {
@@ -174,7 +176,6 @@ function readText(spec: Extract<ArgSpec, { kind: "text" }>, value: unknown): str
   if (!match) throw new CellError("value", messages.choice(spec.name, text, spec.choices));
   return match;
 }
-
 
 /** An argument that may not be left out: a number without a default, a model marked required. */
 function isRequired(spec: ArgSpec): boolean {
@@ -266,7 +267,7 @@ function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): Fixed
       if (h) h.result += conversion.hPower;
     } else {
       for (const name of typeof spec.applies === "string" ? [spec.applies] : spec.applies) {
-        conversions[name] = conversion;
+        conversions[name] = conversion.unit === "hourangle" && isLatitude(def, name) ? unitConversion(def.name, spec, "deg") : conversion;
         if (conversion.hPower !== 0) h!.args.push([name, conversion.hPower]);
       }
     }
@@ -277,6 +278,7 @@ function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): Fixed
     const text = toMatrix(raw[i])?.[0]?.[0];
     args[spec.name] = spec.optional && isBlank(text) ? "" : readText(spec, text);
   }
+  for (const [name, part] of positionParts(def, args)) conversions[name] = { ...(conversions[name] ?? { factor: 1, hPower: 0, unit: "" }), part };
   return { conversions, resultFactor, args, h };
 }
 
@@ -426,9 +428,11 @@ function readColumn(
   // the common range, plain numbers with no domain to check: only the unit's factor
   const plain = !spec.magnitude && spec.min === undefined && spec.max === undefined;
   const factor = conversion === undefined ? 1 : conversion.factor;
+  const part = positionPart(spec, conversion?.part); // positions as text, read straight into degrees (readArg: the rest, and errors' words)
   for (const row of matrix) {
     for (const value of row) {
-      let read: ReadCell = plain && typeof value === "number" && value - value === 0 ? value * factor : readArg(spec, value, true, conversion, active, modelOf);
+      const degrees = part !== undefined && typeof value === "string" ? positionOrNaN(value, part) : Number.NaN;
+      let read: ReadCell = plain && typeof value === "number" && value - value === 0 ? value * factor : degrees === degrees ? degrees : readArg(spec, value, true, conversion, active, modelOf);
       if (typeof read === "number" && read === read) numbers[i] = read;
       else {
         numbers[i] = Number.NaN;

@@ -4,7 +4,7 @@
  * units: the argument's default unit named, the kind of each unit in words, and for a flux or
  * luminosity of the other kind (spectral or bolometric) the function that takes it.
  */
-import { scaledConversion, unitKind } from "../core/index.js";
+import { scaledConversion, unitKind, type AnglePart } from "../core/index.js";
 import { CellError } from "./cellError.js";
 import type { ArgSpec } from "./FunctionDef.js";
 import { messages } from "./messages.js";
@@ -12,9 +12,10 @@ import { isBlank, isModelText } from "./modelArgument.js";
 
 /**
  * How a number argument is converted into its reference unit: the factor, the power of h = H0/100 of
- * the cell's model still to apply (h-scaled units such as Mpc/h; 0 otherwise) and the unit the user gave.
+ * the cell's model still to apply (h-scaled units such as Mpc/h; 0 otherwise), the unit the user gave,
+ * and for a position the part (RA or Dec) that a scalar text decides.
  */
-export type Conversion = { factor: number; hPower: number; unit: string };
+export type Conversion = { factor: number; hPower: number; unit: string; part?: AnglePart };
 
 /** Unit conversions already worked out, by argument and unit text (a sheet uses a handful of units). */
 const conversionCache = new Map<Extract<ArgSpec, { kind: "unit" }>, Map<string, Conversion>>();

@@ -2,14 +2,15 @@
  * Benchmark (not a test): ns per value over 1e6 random redshifts in [0, 10] for the main quantities,
  * model build time, and the same workload through astropy where /usr/bin/python3 has it; then the
  * worksheet path through the built bundle (scripts/benchWorksheet.ts). Run with `npm run bench`
- * (`npm run bench -- --worksheet` for the worksheet path alone, `npm run bench -- --steps` for the
- * catalogue steps of issue 29 alone).
+ * (`npm run bench -- --worksheet` for the worksheet path alone, `-- --steps` for the catalogue steps
+ * (dust, two-band indices, brightness temperature, f_λ) alone, `-- --positions` for the rows of the
+ * positions, velocities and rest-frame functions alone).
  */
 import { execFileSync, spawnSync } from "node:child_process";
 import { fileURLToPath } from "node:url";
 import { Cosmology } from "../core/distances/Cosmology.js";
 import { fermiDiracDensityFactor } from "../core/model/fermiDirac.js";
-import { benchCatalogueSteps, benchWorksheet } from "./benchWorksheet.js";
+import { benchCatalogueSteps, benchPositions, benchWorksheet } from "./benchWorksheet.js";
 
 const n = 1_000_000;
 
@@ -78,6 +79,11 @@ const only = process.argv.indexOf("--only");
 if (only >= 0) {
   // child mode: one model in a fresh process, so each model's timings start from a clean JIT state
   console.log(JSON.stringify(measure(process.argv[only + 1])));
+  process.exit(0);
+}
+
+if (process.argv.includes("--positions")) {
+  benchPositions();
   process.exit(0);
 }
 

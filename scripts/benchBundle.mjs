@@ -14,8 +14,9 @@
 //   degenerate      the slowest single cell among inverses and distances in models at the edge, ms
 //   growthTable     the growth table a new model builds at its first GROWTH (GROWTH minus DIST_LUM of a new model), ms
 //   specs:<N>       DIST_LUM(1, <column of N distinct specs>): ms a spec and the extra RSS the call took, MiB
-//   catalogue:<NAME> one call over a 100k-row column of a catalogue function (arguments below; a figure
-//                   may time a function under another name, functionOf), ns a cell
+//   catalogue:<NAME> one call over a 100k-row column of a catalogue function (arguments below), ns a cell;
+//                  NAME@variant times the same function with other arguments (REDSHIFT_CMB@text: positions as
+//                  text, EXTINCTION@calzetti-um, MAG_AB@f-lambda)
 //   grid:<N>:row     DIST_LUM(1,000 z as a column, N distinct models as a row): ms the call (its models new)
 //   grid:<N>:column  the same grid turned: 1,000 z as a row against N models as a column, ms
 //   chi2:<N>         CHI2_MODULUS over N rows of z, mu, mu_err (every row filled): ms and extra RSS, MiB
@@ -134,6 +135,23 @@ if (figure === "cold" || figure.startsWith("cold:")) {
   const name = figure.slice("catalogue:".length);
   const zs = redshifts(n).map((z) => [z]);
   const lums = zs.map(([z]) => [1e43 * 10 ** (z / 2.5)]);
+  // sexagesimal positions as a catalogue prints them, spread over the sky from the redshifts: "hh:mm:ss.ss", "±dd:mm:ss.s"
+  const two = (x) => String(x).padStart(2, "0");
+  const raText = (x) => `${two(Math.floor(x / 15))}:${two(Math.floor((x * 4) % 60))}:${((x * 240) % 60).toFixed(2).padStart(5, "0")}`;
+  const decText = (x) => `${x < 0 ? "-" : "+"}${two(Math.floor(Math.abs(x)))}:${two(Math.floor((Math.abs(x) * 60) % 60))}:${((Math.abs(x) * 3600) % 60).toFixed(1).padStart(4, "0")}`;
+  const raDeg = zs.map(([z]) => (z * 997.3) % 360);
+  const decDeg = zs.map(([z]) => ((z * 7919.1) % 179) - 89.5);
+  // through JSON, as a host hands cells over (flat strings, not the ropes a template literal makes);
+  // made only for the figures that read them, so that no other figure's heap holds them
+  const asPassed = (column) => JSON.parse(JSON.stringify(column));
+  const text = (make) => {
+    let column;
+    return (rows) => (column ??= asPassed(make())).slice(0, rows);
+  };
+  const ras = text(() => raDeg.map((x) => [raText(x)]));
+  const decs = text(() => decDeg.map((x) => [decText(x)]));
+  const ras2 = text(() => raDeg.map((x) => [raText((x + 0.001) % 360)]));
+  const decs2 = text(() => decDeg.map((x) => [decText(x + 0.0005)]));
   const calls = {
     DIST_LUM_ERR: (z) => [z, 0.01],
     LUMINOSITY_ERR: (z) => [1e-13, 1e-14, z, 0.01],
@@ -153,20 +171,31 @@ if (figure === "cold" || figure.startsWith("cold:")) {
     SURFACE_MAG: (z) => [100, z, 4.65],
     GROWTH: (z) => [z],
     GROWTH_RATE: (z) => [z],
-    // issue 29's catalogue steps, shaped as a catalogue has them (omitted optional arguments as null,
+    // the catalogue steps (dust, indices, T_b, f_λ), shaped as a catalogue has them (omitted optional arguments as null,
     // as Excel passes them): a column of E(B−V) at one band, and a column of wavelengths in µm;
     // flux densities and errors in columns; a column of f_λ at one band
     EXTINCTION: (z) => [6231, z.map(([x]) => [0.01 + 0.05 * x]), null, null, null],
-    EXTINCTION_CALZETTI_UM: (z) => [z.map(([x]) => [0.2 + 0.2 * x]), 0.05, "Calzetti 2000", null, "um"],
+    "EXTINCTION@calzetti-um": (z) => [z.map(([x]) => [0.2 + 0.2 * x]), 0.05, "Calzetti 2000", null, "um"],
     INDEX_BETWEEN: (z) => [z.map(([x]) => [1 + x]), 1.4, z.map(([x]) => [0.5 + x / 3]), 5, null],
     INDEX_BETWEEN_ERR: (z) => [z.map(([x]) => [1 + x]), 1.4, z.map(([x]) => [0.5 + x / 3]), 5, z.map(([x]) => [0.05 + x / 100]), z.map(([x]) => [0.02 + x / 200]), null],
     BRIGHTNESS_TEMP: (z) => [z.map(([x]) => [0.01 * (1 + x)]), 5, z.map(([x]) => [1 + x / 5]), z.map(([x]) => [0.5 + x / 10]), z, null, null, "mas"],
-    MAG_AB_FLAMBDA: (z) => [z.map(([x]) => [1e-17 * (1 + x)]), "erg/s/cm2/Angstrom", 6231],
+    "MAG_AB@f-lambda": (z) => [z.map(([x]) => [1e-17 * (1 + x)]), "erg/s/cm2/Angstrom", 6231],
+    // positions: text parsed in every cell
+    "REDSHIFT_CMB@text": (z, _lum, rows) => [z, ras(rows), decs(rows)],
+    COORD_DEG: (_z, _lum, rows) => [ras(rows), "ra"],
+    COORD_TEXT: (_z, _lum, rows) => [raDeg.slice(0, rows).map((x) => [x]), "ra"],
+    SEPARATION: (_z, _lum, rows) => [ras(rows), decs(rows), ras2(rows), decs2(rows)],
+    COORD_CONVERT: (_z, _lum, rows) => [ras(rows), decs(rows), "equatorial", "galactic", "lat"],
+    // velocities and the rest frame
+    VELOCITY: (z) => [z],
+    Z_FROM_VELOCITY: (z) => [z.map(([x]) => [x * 29979.2458])],
+    Z_COMBINE: (z) => [z, 0.001],
+    VELOCITY_PECULIAR: (z) => [z, 0.05],
+    REST_FRAME: (z, lum) => [lum.map(([x]) => [x / 1e40]), z, "wavelength", "Angstrom"],
+    OBSERVED_FRAME: (z, lum) => [lum.map(([x]) => [x / 1e40]), z, "frequency", "GHz"],
   };
-  /** Figures that time a function under another name (its arguments differ). */
-  const functionOf = { EXTINCTION_CALZETTI_UM: "EXTINCTION", MAG_AB_FLAMBDA: "MAG_AB" };
-  const fn = registered.get(functionOf[name] ?? name);
-  const args = (rows) => calls[name](zs.slice(0, rows), lums.slice(0, rows));
+  const fn = registered.get(name.split("@")[0]);
+  const args = (rows) => calls[name](zs.slice(0, rows), lums.slice(0, rows), rows);
   await settle(fn(...args(1000)));
   const full = args(n);
   let best = Infinity;

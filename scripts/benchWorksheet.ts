@@ -22,7 +22,12 @@ const catalogueFunctions = ["DIST_LUM_ERR", "LUMINOSITY_ERR", "LUMINOSITY_REST",
 const structureFunctions = ["LUMINOSITY_REST_ERR", "RESCALE", "DIST_HUBBLE", "DIST_VOLUME", "SIGMA_CRIT", "OVERDENSITY", "HALO_RADIUS", "HALO_MASS", "SURFACE_LUM", "SURFACE_MAG", "GROWTH", "GROWTH_RATE"];
 
 /** Issue 29's catalogue steps, each timed against ≤ 1 µs a cell over a 100k-row column (EXTINCTION twice: its default law in Angstrom, and Calzetti 2000 in um; MAG_AB with f_λ). */
-const catalogueStepFigures = ["EXTINCTION", "EXTINCTION_CALZETTI_UM", "INDEX_BETWEEN", "INDEX_BETWEEN_ERR", "BRIGHTNESS_TEMP", "MAG_AB_FLAMBDA"];
+const catalogueStepFigures = ["EXTINCTION", "EXTINCTION@calzetti-um", "INDEX_BETWEEN", "INDEX_BETWEEN_ERR", "BRIGHTNESS_TEMP", "MAG_AB@f-lambda"];
+/** Positions (sexagesimal text read in every cell), velocities and the rest frame (0.3.0), each timed against ≤ 1 µs a cell over a 100k-row column. */
+const positionFunctions = [
+  "COORD_DEG", "COORD_TEXT", "SEPARATION", "COORD_CONVERT", "REDSHIFT_CMB@text",
+  "VELOCITY", "Z_FROM_VELOCITY", "Z_COMBINE", "VELOCITY_PECULIAR", "REST_FRAME", "OBSERVED_FRAME",
+];
 
 /** First formulas after the bundle loads (scripts/benchBundle.mjs cold:*): the model and its tables are built for them. */
 const coldFormulas: [string, string][] = [
@@ -35,6 +40,9 @@ const coldFormulas: [string, string][] = [
 
 /** Targets of the worksheet path (issue: one formula per row, whole ranges, first formula, new models). */
 const targets = { single: 500, range: 100, cold: 15, models: 1, degenerate: 50, specsMiB: 100, paneMs: 1000, structure: 1000, growthTable: 1, chi2Ms: 1000, chi2MiB: 100 };
+
+const pad = (s: string, w: number) => s.padEnd(w);
+const fmt = (x: { min: number; median: number }, digits: number) => `${x.min.toFixed(digits)} / ${x.median.toFixed(digits)}`;
 
 function build(extra: string[]): string {
   const out = mkdtempSync(join(tmpdir(), "zcell-bench-"));
@@ -79,8 +87,6 @@ export async function benchWorksheet(): Promise<void> {
     ["npm run build (production)", build([])],
     ["npm start (production + source maps)", build(["--devtool", "source-map"])],
   ];
-  const pad = (s: string, w: number) => s.padEnd(w);
-  const fmt = (x: { min: number; median: number }, digits: number) => `${x.min.toFixed(digits)} / ${x.median.toFixed(digits)}`;
   console.log(`\nworksheet path: the built functions.js in a fresh process's global scope, P18-BAO, z uniform in [0.01, 10]; min / median of ${runs} processes (each the best of 8 passes)`);
   if (ref) console.log(`reference library (astropy, same run): scalar call ${ref.scalar_ns.toFixed(0)} ns, vectorised ${ref.vector_ns.toFixed(0)} ns a value`);
   else console.log("(astropy not found at /usr/bin/python3: no reference timings)");
@@ -139,26 +145,31 @@ export async function benchWorksheet(): Promise<void> {
       const r = figure(bundle, `catalogue:${name}`, "ns");
       console.log(pad(`one call over 100k rows: ${name}`, 42) + pad(`${fmt(r, 0)} ns a cell`, 20) + " (no target)");
     }
-    for (const name of structureFunctions) {
-      const r = figure(bundle, `catalogue:${name}`, "ns");
-      console.log(pad(`one call over 100k rows: ${name}`, 42) + pad(`${fmt(r, 0)} ns a cell`, 20) + `≤ ${targets.structure} ns`);
-    }
-    catalogueSteps(bundle);
+    catalogueRows(bundle, [...structureFunctions, ...positionFunctions, ...catalogueStepFigures]);
   }
 }
 
-/** The catalogue-step rows: one call over a 100k-row column each, min / median of 5 processes. */
-function catalogueSteps(bundle: string): void {
-  const pad = (s: string, w: number) => s.padEnd(w);
-  for (const name of catalogueStepFigures) {
+/** One line a function: one call over a 100k-row column, against ≤ 1 µs a cell. */
+function catalogueRows(bundle: string, names: string[]): void {
+  for (const name of names) {
     const r = figure(bundle, `catalogue:${name}`, "ns");
-    console.log(pad(`one call over 100k rows: ${name}`, 50) + pad(`${r.min.toFixed(0)} / ${r.median.toFixed(0)} ns a cell`, 20) + `≤ ${targets.structure} ns`);
+    console.log(`${pad(`one call over 100k rows: ${name}`, 41)} ${pad(`${fmt(r, 0)} ns a cell`, 19)} ≤ ${targets.structure} ns`);
   }
 }
 
-/** Only the catalogue-step rows, through the production build (`npm run bench -- --steps`). */
+/** The positions, velocities and rest-frame rows alone, through the production build (`npm run bench -- --positions`). */
+export function benchPositions(): void {
+  const bundle = build([]);
+  console.log(`positions, velocities and the rest frame: the built functions.js, 100k rows; min / median of ${runs} processes (each the best of 8 passes)`);
+  console.log(pad("figure", 42) + pad("min / median", 20) + "target");
+  catalogueRows(bundle, positionFunctions);
+  const floor = figure(bundle, "floor", "ns");
+  console.log(pad("  floor: the 100k-row result array alone", 42) + pad(`${fmt(floor, 0)} ns a cell`, 20) + "(no computing)");
+}
+
+/** Only the catalogue-step rows (dust, two-band indices, brightness temperature, f_λ), through the production build (`npm run bench -- --steps`). */
 export function benchCatalogueSteps(): void {
   const bundle = build([]);
-  console.log(`catalogue steps through ${bundle} (production build, fresh process each, P18-BAO); min / median of ${runs} processes`);
-  catalogueSteps(bundle);
+  console.log(`catalogue steps through ${bundle} (production build, fresh process each, P18-CMB); min / median of ${runs} processes`);
+  catalogueRows(bundle, catalogueStepFigures);
 }

@@ -95,6 +95,12 @@ export function adviseOnError(def: FunctionDef, kind: ErrorKind, message: string
       const range = domain(spec);
       const unit = unitOf(def, argument);
       const inUnit = unit ? ` in the unit of ${unit.name} (default ${unit.default})` : "";
+      if (kind === "value" && spec.sexagesimal) {
+        return {
+          argument,
+          fix: `Give ${argument} as a number${inUnit || " in degrees"}, or as sexagesimal text: a right ascension in hours (12:30:49.4, 12h30m49.4s, 12 30 49.4), a declination in degrees (+12:23:28, -05d07m, −05°07′); minutes and seconds below 60, one sign, a declination within ±90°.`,
+        };
+      }
       if (kind === "value") return { argument, fix: `Give ${argument} a number${inUnit}; text that is not a number is refused.` };
       if (range) return { argument, fix: `Give ${argument} a value ${range}${inUnit}.` };
       if (/^z(?![a-z])/.test(argument)) {

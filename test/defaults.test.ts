@@ -96,6 +96,17 @@ const pinned: [string, string][] = [
     ["INDEX_BETWEEN"       , "band_unit=blank"],
     ["INDEX_BETWEEN_ERR"   , "band_unit=blank"],
     ["BRIGHTNESS_TEMP"     , "z=0; flux_unit=Jy; band_unit=blank; angle_unit=arcsec"],
+  // new in 0.3.0: positions, velocities and the rest frame (CHANGELOG.md)
+    ["COORD_DEG"           , ""],
+    ["COORD_TEXT"          , "decimals=not given"],
+    ["SEPARATION"          , "unit=arcsec"],
+    ["COORD_CONVERT"       , ""],
+    ["VELOCITY"            , "convention=blank; unit=km/s"],
+    ["Z_FROM_VELOCITY"     , "convention=blank; unit=km/s"],
+    ["Z_COMBINE"           , ""],
+    ["VELOCITY_PECULIAR"   , "unit=km/s"],
+    ["REST_FRAME"          , "unit=blank"],
+    ["OBSERVED_FRAME"      , "unit=blank"],
 ];
 
 describe("defaults that saved workbooks depend on", () => {
@@ -126,10 +137,20 @@ describe("defaults that saved workbooks depend on", () => {
     ["INDEX_BETWEEN", [2, 1.4, 1, 5, ""], [2, 1.4, 1, 5, "GHz"]],
     ["INDEX_BETWEEN_ERR", [2, 1.4, 1, 5, 0.1, 0.1, ""], [2, 1.4, 1, 5, 0.1, 0.1, "GHz"]],
     ["BRIGHTNESS_TEMP", [1, 1.4, 2, 1, "", "", "", ""], [1, 1.4, 2, 1, 0, "Jy", "GHz", "arcsec"]],
-  ])("%s: a blank text unit means its default", (name, blank, written) => {
+    ["VELOCITY", [0.7, "", ""], [0.7, "optical", "km/s"]],
+    ["Z_FROM_VELOCITY", [3e4, "", ""], [3e4, "optical", "km/s"]],
+    ["SEPARATION", [10, 20, 11, 21, ""], [10, 20, 11, 21, "arcsec"]],
+    ["VELOCITY_PECULIAR", [0.101, 0.1, ""], [0.101, 0.1, "km/s"]],
+  ])("%s: a blank text unit (or convention) means its default", (name, blank, written) => {
     const active = { spec: defaultModelSpec, stored: false };
     const a = evaluate(definitions[name], blank, active)[0][0];
     expect(typeof a).toBe("number");
     expect(a).toBe(evaluate(definitions[name], written, active)[0][0]);
+  });
+
+  test("COORD_TEXT: blank decimals are 2 for a right ascension (0.01 s) and 1 for a declination (0.1″)", () => {
+    const active = { spec: defaultModelSpec, stored: false };
+    expect(evaluate(definitions.COORD_TEXT, [187.70583333333333, "ra", ""], active)[0][0]).toBe("12:30:49.40");
+    expect(evaluate(definitions.COORD_TEXT, [12.391111111111111, "dec", null], active)[0][0]).toBe("+12:23:28.0");
   });
 });

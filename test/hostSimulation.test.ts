@@ -29,9 +29,10 @@ describe("the built functions.js in a bare host", () => {
   test("registers every function in functions.json, with the metadata's arity", () => {
     // 47 in 0.1.x; 0.2.0 adds REDSHIFT_LIMIT_NU, LUMINOSITY_REST_ERR, SPECTRAL_INDEX, RESCALE, SURFACE_LUM, SURFACE_MAG,
     // DIST_HUBBLE, DIST_VOLUME, SIGMA_CRIT, OVERDENSITY, HALO_RADIUS, HALO_MASS, GROWTH, GROWTH_RATE, SOUND_HORIZON,
-    // LUMINOSITY_FUNCTION and CHI2_MODULUS; 0.3.0 adds EXTINCTION, INDEX_BETWEEN, INDEX_BETWEEN_ERR and
-    // BRIGHTNESS_TEMP (CHANGELOG.md)
-    expect(metadata.functions.length).toBe(68);
+    // LUMINOSITY_FUNCTION and CHI2_MODULUS (CHANGELOG.md); 0.3.0 adds COORD_DEG, COORD_TEXT, SEPARATION, COORD_CONVERT,
+    // VELOCITY, Z_FROM_VELOCITY, Z_COMBINE, VELOCITY_PECULIAR, REST_FRAME, OBSERVED_FRAME, EXTINCTION, INDEX_BETWEEN,
+    // INDEX_BETWEEN_ERR and BRIGHTNESS_TEMP
+    expect(metadata.functions.length).toBe(78);
     for (const f of metadata.functions) {
       const fn = fns.get(f.id);
       expect(fn, f.id).toBeTypeOf("function");

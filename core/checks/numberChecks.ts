@@ -26,3 +26,24 @@ export function requireNonNegative(name: string, value: number, unit = "", posit
     throw new RangeError(`${name} = ${value}${unit && ` ${unit}`} must be ${positive ? ">" : "≥"} 0 and finite`);
   }
 }
+
+/**
+ * Throws unless a latitude (a declination) is a finite number of radians within ±π/2 (one rounding's
+ * width beyond allowed, so that ±90° turned into radians passes).
+ * @param name the argument's name for the message
+ * @param rad the latitude [rad]
+ */
+export function requireLatitudeRad(name: string, rad: number): void {
+  requireFiniteNumber(name, rad);
+  if (Math.abs(rad) > (Math.PI / 2) * (1 + 1e-15)) throw new RangeError(`${name} = ${rad / (Math.PI / 180)}° is outside −90° … 90°`);
+}
+
+/**
+ * Throws unless a latitude (a declination) is a finite number of degrees within ±90°.
+ * @param name the argument's name for the message
+ * @param deg the latitude [deg]
+ */
+export function requireLatitudeDeg(name: string, deg: number): void {
+  requireFiniteNumber(name, deg);
+  if (Math.abs(deg) > 90) throw new RangeError(`${name} = ${deg}° is outside −90° … 90°`);
+}

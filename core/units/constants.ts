@@ -128,3 +128,18 @@ export const cmbTemperatureK = 2.7255;
  * sound-horizon fit of baoScales.ts was made at it.
  */
 export const standardNeff = 3.046;
+
+/**
+ * Obliquity of the ecliptic at J2000.0, ε0 = 84381.406″ [arcsec] (IAU 2006 Resolution B1, which adopts
+ * the P03 precession of Capitaine, Wallace & Chapront 2003, A&A 412, 567; the value of the IERS
+ * Conventions 2010, IERS Technical Note 36, §5.6.4, from memory).
+ */
+export const eclipticObliquityJ2000Arcsec = 84381.406;
+
+/**
+ * The supergalactic frame in galactic coordinates [deg]: the north supergalactic pole at l = 47.37°,
+ * b = +6.32°, and the zero of supergalactic longitude at l = 137.37°, b = 0° (de Vaucouleurs' plane
+ * as adopted in the Third Reference Catalogue, de Vaucouleurs et al. 1991, and by Lahav et al. 2000,
+ * MNRAS 312, 166, §2; from memory).
+ */
+export const supergalacticFrameDeg = { poleL: 47.37, poleB: 6.32, originL: 137.37 } as const;

@@ -71,6 +71,7 @@ const definitions: Record<string, Definition> = {
   K: { factor: 1, dimensions: d(0, 0, 0, 1), prefixable: true },
   rad: { factor: 1, dimensions: d(0, 0, 0, 0, 1), prefixable: true },
   deg: { factor: degree, dimensions: d(0, 0, 0, 0, 1), prefixable: false },
+  hourangle: { factor: 15 * degree, dimensions: d(0, 0, 0, 0, 1), prefixable: false }, // 1h of right ascension = 15°
   arcmin: { factor: degree / 60, dimensions: d(0, 0, 0, 0, 1), prefixable: false },
   arcsec: { factor: degree / 3600, dimensions: d(0, 0, 0, 0, 1), prefixable: false },
   mas: { factor: degree / 3.6e6, dimensions: d(0, 0, 0, 0, 1), prefixable: false },

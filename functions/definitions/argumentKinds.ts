@@ -3,7 +3,7 @@
  * a 1σ error, a unit, the model …), and the two accessors every `compute` uses. Each family of
  * definitions in this folder builds its arguments from these, so one kind reads alike everywhere.
  */
-import { conversionFactor, type Cosmology } from "../../core/index.js";
+import { conversionFactor, sexagesimalDegrees, type AnglePart, type Cosmology } from "../../core/index.js";
 import type { Args, ArgSpec } from "../FunctionDef.js";
 import { messages } from "../messages.js";
 
@@ -39,11 +39,24 @@ export const area = num("area", { default: 4 * Math.PI, blankMeansDefault: true,
 export const requiredArea = num("area", { min: 0, max: { value: 4 * Math.PI, what: "the whole sky" } });
 export const angle = num("angle", { min: 0, max: { value: Math.PI, what: "180°" } });
 export const optionalText = (name: string): ArgSpec => ({ kind: "text", name, scalar: true, optional: true });
+/** A right ascension (or another longitude): a number in degrees, or sexagesimal text (hours for a right ascension). */
+export const longitude = (name: string) => num(name, { sexagesimal: "ra" });
+/** A declination (or another latitude): a number in degrees within ±90°, or sexagesimal text. */
+export const latitude = (name: string, part: "dec" | "lat" = "dec") => num(name, { sexagesimal: part, min: -90, max: { value: 90, what: "the pole, 90°" } });
 
 /** The cell's model. */
 export const m = (a: Args) => a.model as Cosmology;
 /** A number argument of the cell, in its reference unit. */
 export const n = (a: Args, name: string) => a[name] as number;
+
+/**
+ * A position argument whose part another argument names (`sexagesimal: "either"`), in degrees: a
+ * number as read, or text read as a sexagesimal angle of the part given ("ra": hours unless marked).
+ */
+export function degreesOf(a: Args, name: string, part: AnglePart): number {
+  const x = a[name];
+  return typeof x === "number" ? x : sexagesimalDegrees(x as string, part, name);
+}
 
 /** A unit given as text whose meaning depends on other arguments (blank: `shown`), as a factor into `reference`. */
 export function textUnitFactor(a: Args, name: string, shown: string, reference: string): number {

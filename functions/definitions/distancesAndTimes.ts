@@ -114,9 +114,12 @@ export const distancesAndTimes: FunctionDef[] = [
   {
     name: "REDSHIFT_CMB",
     args: [
-      num("z_helio", { min: -1, minExclusive: true }), num("ra"), num("dec", { min: -Math.PI / 2, max: { value: Math.PI / 2, what: "90°" } }),
-      unit("angle_unit", "rad", "deg", ["ra", "dec"]),
+      num("z_helio", { min: -1, minExclusive: true }),
+      num("ra", { sexagesimal: "ra" }),
+      num("dec", { sexagesimal: "dec", min: -90, max: { value: 90, what: "90°" } }),
+      unit("angle_unit", "deg", "deg", ["ra", "dec"]),
     ],
-    compute: (a) => cmbFrameRedshift(n(a, "z_helio"), n(a, "ra"), n(a, "dec")),
+    // in degrees, the reference unit of every position (sexagesimal text is read into degrees)
+    compute: (a) => cmbFrameRedshift(n(a, "z_helio"), n(a, "ra") * (Math.PI / 180), n(a, "dec") * (Math.PI / 180)),
   },
 ];

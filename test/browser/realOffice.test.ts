@@ -69,7 +69,7 @@ CustomFunctions.associate = (id, fn) => { window.__associated.push(id); window._
   test("the pane with the real office.js outside Office: its outside view, no page error, only the known violations", async () => {
     const { page, violations, errors, cdn } = await open("taskpane.html");
     await expect.poll(() => page.locator("#outside-office").isVisible(), { timeout: 15_000 }).toBe(true);
-    expect(await page.locator("#reference dt").count()).toBe(68);
+    expect(await page.locator("#reference dt").count()).toBe(78);
     expect(await page.locator("#in-excel").isHidden()).toBe(true);
     await expect.poll(async () => (await violations()).length, { timeout: 10_000 }).toBeGreaterThanOrEqual(expectedViolations.length);
     await page.waitForTimeout(500);

@@ -514,7 +514,7 @@ describe.runIf(browserAvailable())("task pane in chromium with a fake Excel host
     const page = await openPane(light, {}, false);
     await expect.poll(() => page.locator("#outside-office").isVisible()).toBe(true);
     expect(await page.locator("#outside-office h2").textContent()).toBe("zcell runs inside Excel");
-    expect(await page.locator("#reference dt").count()).toBe(68);
+    expect(await page.locator("#reference dt").count()).toBe(78);
     await page.screenshot({ path: `${shots}outside-office.png`, fullPage: true });
     await page.close();
   });
