@@ -66,11 +66,11 @@ describe("worked values from the definitions", () => {
     [["Z_FROM_VELOCITY", 100, "doppler"],                   "value", 'ZC.Z_FROM_VELOCITY: convention: "doppler" is not one of optical, radio, relativistic'],
     [["VELOCITY", -1],                                      "num",   "ZC.VELOCITY: z = -1 must be > -1"],
     [["VELOCITY", "0.1x"],                                  "value", 'ZC.VELOCITY: z: text "0.1x" where a number belongs'],
-    [["VELOCITY", 0.1, "", "Mpc"],                          "value", 'ZC.VELOCITY: unit: cannot convert "km/s" (speed) to "Mpc" (length)'],
+    [["VELOCITY", 0.1, "", "Mpc"],                          "value", 'ZC.VELOCITY: unit: cannot convert "km/s" (a speed) to "Mpc" (a length)'],
     [["Z_COMBINE", 0.1, -2],                                "num",   "ZC.Z_COMBINE: z2 = -2 must be > -1"],
     [["REST_FRAME", -5, 0.1, "wavelength"],                 "num",   "ZC.REST_FRAME: wavelength = -5 must be > 0"],
-    [["REST_FRAME", 5, 0.1, "wavelength", "GHz"],           "value", 'ZC.REST_FRAME: unit: cannot convert "GHz" (frequency) to "Angstrom" (length); a wavelength takes a length (Angstrom, nm, um)'],
-    [["OBSERVED_FRAME", 5, 0.1, "duration", "Angstrom"],    "value", 'ZC.OBSERVED_FRAME: unit: cannot convert "Angstrom" (length) to "d" (time); a duration takes a time (d, s, yr)'],
+    [["REST_FRAME", 5, 0.1, "wavelength", "GHz"],           "value", 'ZC.REST_FRAME: unit: cannot convert "GHz" (a frequency) to "Angstrom" (a length); a wavelength takes a length (Angstrom, nm, um)'],
+    [["OBSERVED_FRAME", 5, 0.1, "duration", "Angstrom"],    "value", 'ZC.OBSERVED_FRAME: unit: cannot convert "Angstrom" (a length) to "d" (a time); a duration takes a time (d, s, yr)'],
     [["REST_FRAME", 5, 0.1, "flux"],                        "value", 'ZC.REST_FRAME: quantity: "flux" is not one of wavelength, frequency, duration, equivalent_width'],
   ] as const)("%j is #%s naming the fix", (call, kind, message) => {
     const [name, ...args] = call;
