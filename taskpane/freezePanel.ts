@@ -9,7 +9,7 @@ import { zcellVersion } from "../functions/describeModel.js";
 import { callsZcFunction } from "../functions/storedFormula.js";
 import { columnName, splitAddress, topLeft } from "./cellAddress.js";
 import { $, el, plural } from "./dom.js";
-import { freezeCells, readAnnotations, readReference, readSelection, thawCells, undoGroupSupported, type FreezeCell } from "./excelHost.js";
+import { freezeCells, readAnnotations, readReference, readSelection, readSheetNames, thawCells, undoGroupSupported, type FreezeCell } from "./excelHost.js";
 import { explainFormula } from "./explainCall.js";
 import { parseProvenanceNote, provenanceNote } from "./provenanceNote.js";
 import { restorableFormula } from "./restorableFormula.js";
@@ -129,12 +129,13 @@ function setupThaw(): void {
       const { sheet, cells } = cellsOf(await readSelection());
       const plain = cells.filter((c) => !(typeof c.formula === "string" && c.formula.startsWith("=")));
       const notes = await readAnnotations(sheet, plain.map((c) => c.address));
+      const sheets = await readSheetNames();
       const restoring: Restoring[] = [];
       const refused: { address: string; reason: string }[] = [];
       for (const [address, text] of notes) {
         const provenance = parseProvenanceNote(text);
         if (!provenance) continue;
-        const verdict = restorableFormula(provenance.formula, { singleCell: true });
+        const verdict = restorableFormula(provenance.formula, { singleCell: true, sheets });
         if (verdict.ok) restoring.push({ address, formula: verdict.formula, models: provenance.models });
         else refused.push({ address, reason: verdict.reason });
       }

@@ -63,7 +63,7 @@ export async function scanForUnboundFormulas(): Promise<void> {
   const restorable: UnboundFormula[] = [];
   const others: UnboundFormula[] = [];
   for (const f of scan.formulas) {
-    const verdict = restorableFormula(f.formula, { singleCell: false });
+    const verdict = restorableFormula(f.formula, { singleCell: false, sheets: scan.sheets });
     if (verdict.ok) restorable.push({ ...f, formula: verdict.formula });
     else others.push(f);
   }
