@@ -30,6 +30,11 @@ export interface RestoreOptions {
   sheets?: readonly string[];
 }
 
+/** A piece of the stranger's text as a reason quotes it: at most 40 characters. */
+function shown(text: string): string {
+  return text.length > 40 ? `${text.slice(0, 40)}…` : text;
+}
+
 /** Excel's own limit on a formula's length: 8,192 characters (Microsoft's "Excel specifications and limits", from memory). */
 const maxFormulaLength = 8192;
 const allowedOperators = new Set(["+", "-", "*", "/", "^", "&", "=", "<", ">", "<=", ">=", "<>", "%"]);
@@ -59,17 +64,17 @@ const columnInSheet = (letters: string) => columnNumber(letters) <= sheetColumns
 
 /** Reads a reference token against the sheet limits and the workbook's sheets. */
 function readReference(text: string, sheets: readonly string[] | undefined): ReadReference {
-  if (text.includes("[")) return { problem: `it refers to another workbook or a table (${text})` };
+  if (text.includes("[")) return { problem: `it refers to another workbook or a table (${shown(text)})` };
   const m = referencePattern.exec(text);
-  if (!m) return { problem: `it has a reference zcell cannot check (${text})` };
+  if (!m) return { problem: `it has a reference zcell cannot check (${shown(text)})` };
   const [, quoted, bare, col1, row1, col2, row2, colA, colB, rowA, rowB] = m;
   const sheet = quoted !== undefined ? quoted.replaceAll("''", "'") : bare;
-  if (sheet !== undefined && notInSheetNames.test(sheet)) return { problem: `it refers to another workbook or a file (${text})` };
-  if (sheet !== undefined && sheets && !sheets.includes(sheet)) return { problem: `it refers to a sheet this workbook does not have (${sheet})` };
+  if (sheet !== undefined && notInSheetNames.test(sheet)) return { problem: `it refers to another workbook or a file (${shown(text)})` };
+  if (sheet !== undefined && sheets && !sheets.includes(sheet)) return { problem: `it refers to a sheet this workbook does not have (${shown(sheet)})` };
   const columns = [col1, col2, colA, colB].filter((x) => x !== undefined);
   const rows = [row1, row2, rowA, rowB].filter((x) => x !== undefined);
   if (!columns.every(columnInSheet) || !rows.every(rowInSheet)) {
-    return { problem: `it uses ${text}, which lies outside Excel's sheet (XFD1048576 is the last cell), so it is a name, and a name can stand for any formula` };
+    return { problem: `it uses ${shown(text)}, which lies outside Excel's sheet (XFD1048576 is the last cell), so it is a name, and a name can stand for any formula` };
   }
   const multiCell = col1 === undefined || (col2 !== undefined && (col2.toUpperCase() !== col1.toUpperCase() || Number(row2) !== Number(row1)));
   return { sheet, multiCell };
@@ -77,11 +82,11 @@ function readReference(text: string, sheets: readonly string[] | undefined): Rea
 
 /** Our exact name of a function token, or why it is refused. */
 function functionName(token: Token, next: Token | undefined): { name: string } | { problem: string } {
-  if (!/^[A-Za-z0-9_.]+$/.test(token.text)) return { problem: `it calls ${token.text}, whose name is not plain ASCII, so it is not a zcell function` };
+  if (!/^[A-Za-z0-9_.]+$/.test(token.text)) return { problem: `it calls ${shown(token.text)}, whose name is not plain ASCII, so it is not a zcell function` };
   const name = token.text.toUpperCase();
-  if (!name.startsWith("ZC.")) return { problem: `it calls ${name}, which is not a zcell function` };
-  if (!zcNames.has(name)) return { problem: `${name} is not a zcell function` };
-  return next?.kind === "open" ? { name } : { problem: `it cannot be read near ${name}` };
+  if (!name.startsWith("ZC.")) return { problem: `it calls ${shown(name)}, which is not a zcell function` };
+  if (!zcNames.has(name)) return { problem: `${shown(name)} is not a zcell function` };
+  return next?.kind === "open" ? { name } : { problem: `it cannot be read near ${shown(name)}` };
 }
 
 /** Why a token other than a function or a reference is not allowed, or undefined when it is. */
@@ -90,13 +95,13 @@ function tokenProblem(token: Token): string | undefined {
     case "error":
       return token.text === "#" ? "it holds a spill reference (#), whose size zcell cannot check" : undefined;
     case "array":
-      return arrayConstant.test(token.text) ? undefined : `it holds an array constant zcell cannot check (${token.text.slice(0, 40)})`;
+      return arrayConstant.test(token.text) ? undefined : `it holds an array constant zcell cannot check (${shown(token.text)})`;
     case "name":
-      return `it uses the name ${token.text}, and a name can stand for any formula`;
+      return `it uses the name ${shown(token.text)}, and a name can stand for any formula`;
     case "op":
       if (token.text === "|") return "it holds a DDE link (|), which can start another program";
       if (token.text === "[" || token.text === "]") return "it refers to another workbook";
-      return allowedOperators.has(token.text) ? undefined : `it holds "${token.text}", which zcell does not restore`;
+      return allowedOperators.has(token.text) ? undefined : `it holds "${shown(token.text)}", which zcell does not restore`;
     default:
       return undefined;
   }
@@ -142,11 +147,35 @@ export function restorableFormula(formula: unknown, options: RestoreOptions): Re
     if (token.kind === "open") depth++;
     if (token.kind === "close" && --depth < 0) return { ok: false, reason: "its parentheses do not match" };
     if (options.singleCell && spills) {
-      return { ok: false, reason: `it could spill over other cells (${token.text}); enter it yourself where there is room` };
+      return { ok: false, reason: `it could spill over other cells (${shown(token.text)}); enter it yourself where there is room` };
     }
     written.push(text);
   }
   if (depth !== 0) return { ok: false, reason: "its parentheses do not match" };
   if (calls === 0) return { ok: false, reason: "it calls no zcell function" };
   return { ok: true, formula: written.join("") };
+}
+
+/** Work done between two turns given to the page while judging many formulas, ms. */
+const sliceMs = 10;
+
+/**
+ * Judges many formulas (every note of a selection, every #NAME? cell of a workbook), giving the page a
+ * turn whenever `sliceMs` of work has passed, so that a workbook full of long crafted formulas never
+ * holds the pane (and the functions sharing its runtime) for longer than that at a time.
+ * @param formulas the formulas as stored
+ * @param options as for `restorableFormula`
+ * @returns the verdicts, in the same order
+ */
+export async function restorableFormulas(formulas: readonly unknown[], options: RestoreOptions): Promise<Restorable[]> {
+  const verdicts: Restorable[] = [];
+  let since = performance.now();
+  for (const formula of formulas) {
+    if (performance.now() - since > sliceMs) {
+      await new Promise((resolve) => setTimeout(resolve, 0));
+      since = performance.now();
+    }
+    verdicts.push(restorableFormula(formula, options));
+  }
+  return verdicts;
 }

@@ -340,6 +340,12 @@ describe("stored settings: whatever they hold, a bounded reading and a plain war
     expect(message.length).toBeLessThan(300);
   });
 
+  test("two models whose names differ only in case: the one stored last is read, and the pane is told", () => {
+    const models = readWorkbookModels({ Team: "W9-ALL", OTHER: "P18-CMB; H0=70", TEAM: "P18-BAO; H0=73" });
+    expect([...models.specs]).toEqual([["TEAM", "P18-BAO; H0=73"], ["OTHER", "P18-CMB; H0=70"]]);
+    expect(models.problems).toEqual(["workbook models Team and TEAM differ only in case, and model names are read without regard to case; zcell reads the one stored last, TEAM"]);
+  });
+
   test("entries with long names, long specs, wrong types or bad specs are left out with at most five sentences", () => {
     const models = readWorkbookModels({
       ["L".repeat(5000)]: "W9-ALL",
