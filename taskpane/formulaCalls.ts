@@ -99,15 +99,20 @@ export function tokenize(formula: string): Token[] {
     else if (c === "<" && s[i + 1] === ">") push("op", "<>");
     else if ("+-*/^&=<>%:".includes(c)) push("op", c);
     else {
-      const sheet = matchAt(sheetPattern, s, i);
+      // only the patterns that can start with this character are tried
+      const code = s.charCodeAt(i);
+      const letter = (code | 32) >= 97 && (code | 32) <= 122;
+      const digit = code >= 48 && code <= 57;
+      const wordStart = letter || c === "_" || code >= 0xc0;
+      const sheet = c === "'" || wordStart ? matchAt(sheetPattern, s, i) : undefined;
       if (c === "'" && !sheet) throw new SyntaxError(`unterminated sheet name at ${i}`);
       const afterSheet = i + (sheet?.length ?? 0);
-      const range = matchAt(rangePattern, s, afterSheet);
+      const range = sheet || letter || digit || c === "$" ? matchAt(rangePattern, s, afterSheet) : undefined;
       if (range) push("ref", (sheet ?? "") + range);
       else if (sheet) push("ref", sheet + (matchAt(namePattern, s, afterSheet) ?? ""));
-      else if (/\d/.test(c) || (c === "." && /\d/.test(s[i + 1] ?? ""))) push("number", matchAt(numberPattern, s, i)!);
+      else if (digit || (c === "." && /\d/.test(s[i + 1] ?? ""))) push("number", matchAt(numberPattern, s, i)!);
       else {
-        const name = matchAt(namePattern, s, i);
+        const name = wordStart || c === "\\" ? matchAt(namePattern, s, i) : undefined;
         if (!name) {
           push("op", c);
           continue;
