@@ -104,15 +104,6 @@ export async function readActiveCell(): Promise<RangeSnapshot & { spillAnchor?: 
   });
 }
 
-/** The names of the workbook's sheets, as Excel spells them. */
-export async function readSheetNames(): Promise<string[]> {
-  return Excel.run(async (context) => {
-    const sheets = context.workbook.worksheets.load("items/name");
-    await context.sync();
-    return sheets.items.map((sheet) => sheet.name);
-  });
-}
-
 /** The selected range. */
 export function readSelection(): Promise<RangeSnapshot> {
   return snapshot((context) => context.workbook.getSelectedRange());
@@ -180,6 +171,15 @@ export async function insertChart(sheet: string | undefined, chart: ChartRequest
     added.axes.valueAxis.title.text = chart.yTitle;
     added.setPosition(chart.at);
     await context.sync();
+  });
+}
+
+/** The names of the workbook's sheets, as Excel spells them. */
+export async function readSheetNames(): Promise<string[]> {
+  return Excel.run(async (context) => {
+    const sheets = context.workbook.worksheets.load("items/name");
+    await context.sync();
+    return sheets.items.map((sheet) => sheet.name);
   });
 }
 
