@@ -45,10 +45,10 @@ const numberPattern = /(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?%?/y;
 const namePattern = /[A-Za-z_\\\u00C0-\uFFFF][\w.\u00C0-\uFFFF]*/y;
 const spacePattern = /\s+/y;
 
-/** The text a sticky pattern matches at `at`, or undefined. */
+/** The text a sticky pattern matches at `at`, or undefined (`test` moves lastIndex to the match's end without building a match array). */
 function matchAt(pattern: RegExp, s: string, at: number): string | undefined {
   pattern.lastIndex = at;
-  return pattern.exec(s)?.[0];
+  return pattern.test(s) ? s.slice(at, pattern.lastIndex) : undefined;
 }
 
 /**
@@ -119,7 +119,7 @@ export function tokenize(formula: string): Token[] {
         }
         const next = s[i + name.length];
         if (next === "(") push("func", name);
-        else if (/^(?:TRUE|FALSE)$/i.test(name)) push("bool", name);
+        else if ((name.length === 4 || name.length === 5) && /^(?:TRUE|FALSE)$/i.test(name)) push("bool", name);
         else if (next === "[") {
           // structured reference Table1[Column]
           const close = s.indexOf("]", i);
