@@ -42,7 +42,11 @@ const allowedOperators = new Set(["+", "-", "*", "/", "^", "&", "=", "<", ">", "
 const zcNames = new Set(Object.keys(definitions).map((name) => `ZC.${name}`));
 /** ZC functions that return a table of several cells whatever their arguments. */
 const tableFunctions = new Set(Object.values(definitions).filter((d) => d.table && d.name !== "VERSION").map((d) => `ZC.${d.name}`));
-/** Characters Excel forbids in a sheet name (from memory, /work/shared notes): a sheet part holding one names a file or another workbook. */
+/**
+ * Characters Excel forbids in a sheet name, \ / ? * [ ] : (spreadsheet-library documentation:
+ * DevExpress, "How to: Rename a Worksheet"; also from memory): a sheet part holding one names a file,
+ * a web address or another workbook.
+ */
 const notInSheetNames = /[\\/?*[\]:]/;
 
 const cell = String.raw`\$?([A-Za-z]{1,3})\$?(\d+)`;
