@@ -158,15 +158,15 @@ export function findCalls(formula: string): FormulaCall[] {
   const tokens = tokenize(formula);
   const solid: Token[] = [];
   const calls: Call[] = [];
-  /** Open calls (with where their current argument starts) and open groups "(" inside a call. */
-  type Frame = { call: Call; argFrom: number; solidFrom: number; opened: number } | { call: undefined };
+  /** Open calls (with where their current argument starts) and open groups "(" inside a call (no call; one shape for both). */
+  type Frame = { call: Call | undefined; argFrom: number; solidFrom: number; opened: number };
   const stack: Frame[] = [];
   let callDepth = 0;
-  const finishArg = (frame: { call: Call; argFrom: number; solidFrom: number }, endToken: number) => {
+  const finishArg = (call: Call, frame: Frame, endToken: number) => {
     const from = tokens[frame.argFrom]?.start ?? formula.length;
     const to = endToken < tokens.length ? tokens[endToken].start : formula.length;
-    frame.call.args.push(formula.slice(from, to).trim());
-    frame.call.spans.push([frame.solidFrom, solid.length]);
+    call.args.push(formula.slice(from, to).trim());
+    call.spans.push([frame.solidFrom, solid.length]);
   };
   for (let i = 0; i < tokens.length; i++) {
     const t = tokens[i];
@@ -180,17 +180,18 @@ export function findCalls(formula: string): FormulaCall[] {
       i++;
       continue;
     }
-    if (t.kind === "open" && top) stack.push({ call: undefined });
+    if (t.kind === "open" && top) stack.push({ call: undefined, argFrom: 0, solidFrom: 0, opened: 0 });
     else if (t.kind === "close" && top) {
-      if (top.call) {
+      const call = top.call;
+      if (call) {
         // a call with no argument at all ("ZC.AGE()") has none; "ZC.AGE( )" has one blank
-        if (top.call.args.length > 0 || solid.length > top.solidFrom || top.opened + 1 !== i) finishArg(top, i);
-        top.call.text = formula.slice(tokens[top.opened - 1].start, t.start + 1);
+        if (call.args.length > 0 || solid.length > top.solidFrom || top.opened + 1 !== i) finishArg(call, top, i);
+        call.text = formula.slice(tokens[top.opened - 1].start, t.start + 1);
         callDepth--;
       }
       stack.pop();
     } else if (t.kind === "sep" && top?.call) {
-      finishArg(top, i);
+      finishArg(top.call, top, i);
       top.argFrom = i + 1;
       top.solidFrom = solid.length + 1;
     }
@@ -198,9 +199,10 @@ export function findCalls(formula: string): FormulaCall[] {
   }
   // calls left open run to the end of the formula
   for (const frame of stack.reverse()) {
-    if (!frame.call) continue;
-    finishArg(frame, tokens.length);
-    frame.call.text = formula.slice(tokens[frame.opened - 1].start);
+    const call = frame.call;
+    if (!call) continue;
+    finishArg(call, frame, tokens.length);
+    call.text = formula.slice(tokens[frame.opened - 1].start);
   }
   return calls;
 }
