@@ -44,7 +44,8 @@ const problemsListedAtMost = 5;
  * Reads the stored value (as the settings return it). Each entry must be a valid name whose spec
  * text (at most `maxSpecLength` characters) parses on the built-in presets alone (a workbook model
  * does not build on another); at most `maxWorkbookModels` entries are read, the others are left out
- * and counted in `problems`.
+ * and counted in `problems`. Two names that differ only in case name one model: the one stored last
+ * is read, and `problems` says so.
  * @param stored the settings value: an object of name → spec text, or undefined
  */
 export function readWorkbookModels(stored: unknown): WorkbookModels {
@@ -54,6 +55,8 @@ export function readWorkbookModels(stored: unknown): WorkbookModels {
   }
   const specs = new Map<string, string>();
   const parameters = new Map<string, ModelParameters>();
+  /** Each name read, as stored, by its upper-case form: names are read without regard to case. */
+  const storedNames = new Map<string, string>();
   const problems: string[] = [];
   let unread = 0;
   let bad = 0;
@@ -71,8 +74,14 @@ export function readWorkbookModels(stored: unknown): WorkbookModels {
     else if (spec.length > maxSpecLength) why = `workbook model ${name}: its spec is longer than ${maxSpecLength} characters`;
     else {
       try {
-        parameters.set(name.toUpperCase(), parseModelSpec(spec));
-        specs.set(name.toUpperCase(), spec);
+        const upper = name.toUpperCase();
+        parameters.set(upper, parseModelSpec(spec));
+        const earlier = storedNames.get(upper);
+        if (earlier !== undefined) {
+          why = `workbook models ${earlier} and ${name} differ only in case, and model names are read without regard to case; zcell reads the one stored last, ${name}`;
+        }
+        specs.set(upper, spec);
+        storedNames.set(upper, name);
       } catch (e) {
         why = `workbook model ${name}: ${(e as Error).message}`;
       }

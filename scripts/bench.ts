@@ -1,15 +1,17 @@
 /**
  * Benchmark (not a test): ns per value over 1e6 random redshifts in [0, 10] for the main quantities,
  * model build time, and the same workload through astropy where /usr/bin/python3 has it; then the
- * worksheet path through the built bundle (scripts/benchWorksheet.ts). Run with `npm run bench`
- * (`npm run bench -- --worksheet` for the worksheet path alone, `-- --steps` for the catalogue steps
- * (dust, two-band indices, brightness temperature, f_λ) alone, `-- --positions` for the rows of the
- * positions, velocities and rest-frame functions alone).
+ * worksheet path through the built bundle (scripts/benchWorksheet.ts), then crafted formulas through
+ * the pane's formula readers (scripts/benchTokenizer.ts). Run with `npm run bench`
+ * (`npm run bench -- --worksheet` or `-- --tokenizer` for one section alone, `-- --steps` for the
+ * catalogue steps (dust, two-band indices, brightness temperature, f_λ) alone, `-- --positions` for the
+ * rows of the positions, velocities and rest-frame functions alone).
  */
 import { execFileSync, spawnSync } from "node:child_process";
 import { fileURLToPath } from "node:url";
 import { Cosmology } from "../core/distances/Cosmology.js";
 import { fermiDiracDensityFactor } from "../core/model/fermiDirac.js";
+import { benchTokenizer } from "./benchTokenizer.js";
 import { benchCatalogueSteps, benchPositions, benchWorksheet } from "./benchWorksheet.js";
 
 const n = 1_000_000;
@@ -97,6 +99,11 @@ if (process.argv.includes("--steps")) {
   process.exit(0);
 }
 
+if (process.argv.includes("--tokenizer")) {
+  benchTokenizer();
+  process.exit(0);
+}
+
 const specs = (process.env.ZC_BENCH_SPECS ?? "P18-BAO,CONCORDANCE").split(",");
 const rows: Record<string, Record<string, number>> = {};
 for (const spec of specs) {
@@ -136,3 +143,4 @@ for (const spec of specs) {
 }
 if (!reference) console.log("(astropy not found at /usr/bin/python3: no reference timings)");
 await benchWorksheet();
+benchTokenizer();

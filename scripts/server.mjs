@@ -3,11 +3,12 @@
 // Any web page the developer visits can send requests to localhost, so the server answers a
 // malformed request with 400 and keeps serving, serves only regular files inside the folder (no
 // symbolic link out of it), sends nosniff and each page's own Content-Security-Policy as headers,
-// closes idle and half-open connections, and allows cross-origin reads only of the custom functions'
+// closes idle connections and connections slow to send their request, answers a client that
+// half-closes its side after its request, and allows cross-origin reads only of the custom functions'
 // metadata, the one file Excel on the web fetches from another origin (learn.microsoft.com,
 // "Custom functions metadata": the server hosting the JSON file must have CORS enabled).
 // Usage: node scripts/server.mjs <key.pem> <cert.pem> <port> <folder>
-import { createReadStream, readFileSync, realpathSync, statSync } from "node:fs";
+import { readFileSync, realpathSync, statSync } from "node:fs";
 import { createServer } from "node:https";
 import { extname, join, normalize, sep } from "node:path";
 
@@ -22,6 +23,13 @@ const types = {
 const crossOrigin = new Set(["/functions.json"]);
 /** Seconds a connection may stay idle, or take to finish its TLS handshake or its request headers (ZCELL_IDLE_SECONDS). */
 const idleSeconds = Number(process.env.ZCELL_IDLE_SECONDS) > 0 ? Number(process.env.ZCELL_IDLE_SECONDS) : 10;
+/**
+ * How often Node looks for requests past their headers or request timeout: it checks them only on this
+ * interval, 30 s unless set (nodejs.org/api/http.html, http.createServer options:
+ * connectionsCheckingInterval), which kept a slow-header client ~30 s past the timeout. A tenth of the
+ * idle time closes it within 10% of it.
+ */
+const checkingMs = idleSeconds * 100;
 
 /** The Content-Security-Policy a page declares in its meta tag, to send as a header too. */
 function pagePolicy(file) {
@@ -46,7 +54,15 @@ function answer(res, status, text) {
   res.end(text);
 }
 
-const server = createServer({ key: readFileSync(keyFile), cert: readFileSync(certFile), handshakeTimeout: idleSeconds * 1000 }, (req, res) => {
+const options = {
+  key: readFileSync(keyFile),
+  cert: readFileSync(certFile),
+  handshakeTimeout: idleSeconds * 1000,
+  headersTimeout: idleSeconds * 1000,
+  requestTimeout: 2 * idleSeconds * 1000,
+  connectionsCheckingInterval: checkingMs,
+};
+const server = createServer(options, (req, res) => {
   let path;
   try {
     path = normalize(decodeURIComponent(new URL(req.url ?? "/", "https://localhost").pathname)).replace(/^(\.\.[/\\])+/, "");
@@ -68,16 +84,24 @@ const server = createServer({ key: readFileSync(keyFile), cert: readFileSync(cer
   };
   if (extname(file) === ".html") headers["content-security-policy"] = pagePolicy(file);
   if (crossOrigin.has(path)) headers["access-control-allow-origin"] = "*";
-  res.writeHead(200, headers);
-  if (req.method === "HEAD") return res.end();
-  createReadStream(file).on("error", () => res.destroy()).pipe(res);
+  // read and answered at once, before the socket's end is seen: a client that half-closes its side
+  // after its request ends the socket as soon as the request is handled, and a response still being
+  // read from disk then was lost (Node's HTTP server does not keep a half-closed connection open)
+  let body;
+  try {
+    body = readFileSync(file);
+  } catch {
+    return answer(res, 404, "not found");
+  }
+  res.writeHead(200, { ...headers, "content-length": body.length });
+  res.end(req.method === "HEAD" ? undefined : body);
 });
-server.headersTimeout = idleSeconds * 1000;
-server.requestTimeout = 2 * idleSeconds * 1000;
 server.keepAliveTimeout = idleSeconds * 1000;
 server.setTimeout(idleSeconds * 1000, (socket) => socket.destroy());
-server.on("clientError", (_error, socket) => {
-  if (socket.writable) socket.end("HTTP/1.1 400 Bad Request\r\nConnection: close\r\n\r\n");
+server.on("clientError", (error, socket) => {
+  // headers or request too slow (Node's ERR_HTTP_REQUEST_TIMEOUT): 408; anything malformed: 400
+  const status = error.code === "ERR_HTTP_REQUEST_TIMEOUT" ? "408 Request Timeout" : "400 Bad Request";
+  if (socket.writable) socket.end(`HTTP/1.1 ${status}\r\nConnection: close\r\n\r\n`);
   else socket.destroy();
 });
 server.on("tlsClientError", (_error, socket) => socket.destroy());

@@ -3,6 +3,15 @@
  * addresses split and built, the top-left cell of a range.
  */
 
+/**
+ * A worksheet's size: 1,048,576 rows by 16,384 columns, the last column XFD (Microsoft, "Excel
+ * specifications and limits"). A reference-shaped name beyond it (XFE1, A1048577) is not a cell
+ * (observed by spreadsheet-library authors: only names inside rows 1–1,048,576 and columns A–XFD
+ * read as cells; jmcnamara/XlsxWriter issue 1078).
+ */
+export const sheetRows = 1_048_576;
+export const sheetColumns = 16_384;
+
 /** Column letters of a 1-based column number (1 → "A", 27 → "AA"). */
 export function columnName(n: number): string {
   let s = "";

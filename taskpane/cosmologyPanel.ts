@@ -9,7 +9,7 @@ import { defaultModelSpec, readActiveModel } from "../functions/activeModel.js";
 import { modelNameProblem, noWorkbookModels, type WorkbookModels } from "../functions/workbookModels.js";
 import { $, el, plural } from "./dom.js";
 import { countCellsNaming, readModelSetting, recalculateWorkbook, writeModelSetting, writeWorkbookModels } from "./excelHost.js";
-import { changedFields, derivedValues, formFields, formFromSpec, formGroups, modelFromForm, shownText, type FormValues } from "./modelForm.js";
+import { changedFields, derivedValues, formFields, formFromSpec, formGroups, modelFromForm, shownText, unusableReason, type FormValues } from "./modelForm.js";
 
 const fieldLabels: Record<(typeof formFields)[number], string> = {
   H0: "H0 (km/s/Mpc)", Om: "Om (matter incl. ν)", OL: "OL (or “flat”)", w0: "w0", wa: "wa",
@@ -28,9 +28,12 @@ function readForm(): FormValues {
   return v;
 }
 
+/** The choice of "Start from" the form shows (a choice that cannot be shown is undone to it). */
+let shownPreset = "";
+
 /** Shows a model in the form: each number as a person would type it, the exact value kept behind. */
 function fillForm(v: FormValues): void {
-  $<HTMLSelectElement>("preset").value = v.preset;
+  $<HTMLSelectElement>("preset").value = shownPreset = v.preset;
   for (const f of formFields) {
     const input = $<HTMLInputElement>(`f-${f}`);
     input.value = input.dataset.shown = shownText(v[f]);
@@ -116,8 +119,25 @@ export function setupCosmology(): void {
     fields.append(box);
   }
   preset.addEventListener("change", () => {
-    if (preset.value) fillForm(formFromSpec(preset.value, workbookModels.named));
-    else refreshForm();
+    if (preset.value) {
+      // a stored model that cannot be built is not selectable; should it be chosen all the same, the
+      // form keeps the model it shows (Apply applies only what the form shows) and says why
+      let form: FormValues;
+      try {
+        form = formFromSpec(preset.value, workbookModels.named);
+      } catch (e) {
+        const refusedChoice = preset.value;
+        preset.value = shownPreset;
+        const modelError = $("model-error");
+        modelError.textContent = `${refusedChoice} cannot be used: ${(e as Error).message}. The form still shows ${shownPreset || "its parameters"}.`;
+        modelError.hidden = false;
+        return;
+      }
+      fillForm(form);
+    } else {
+      shownPreset = "";
+      refreshForm();
+    }
     describeChoice();
   });
 
@@ -195,12 +215,16 @@ function showModelChoices(): void {
     const own = document.createElement("optgroup");
     own.label = "Defined in this workbook";
     for (const [name, spec] of workbookModels.specs) {
-      own.append(new Option(name, name));
+      // each model is built before it is offered: one that cannot be built is listed with the reason, not selectable
+      const unusable = unusableReason(spec);
+      const option = new Option(unusable ? `${name} (cannot be used)` : name, name);
+      option.disabled = unusable !== undefined;
+      own.append(option);
       const item = el("li");
       const remove = el("fluent-button", "Delete");
       remove.append(el("span", ` ${name}`, "visually-hidden")); // its accessible name says which model
       remove.addEventListener("click", () => void askToDelete(name));
-      item.append(el("span", `${name}: ${spec}`), remove);
+      item.append(el("span", unusable ? `${name}: ${spec} — cannot be used: ${unusable}` : `${name}: ${spec}`), remove);
       list.append(item);
     }
     preset.append(own);

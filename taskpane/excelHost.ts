@@ -211,6 +211,15 @@ export async function insertChart(sheet: string | undefined, chart: ChartRequest
   });
 }
 
+/** The names of the workbook's sheets, as Excel spells them. */
+export async function readSheetNames(): Promise<string[]> {
+  return Excel.run(async (context) => {
+    const sheets = context.workbook.worksheets.load("items/name");
+    await context.sync();
+    return sheets.items.map((sheet) => sheet.name);
+  });
+}
+
 /** Whether ExcelApi 1.18 cell notes exist here (else threaded comments, ExcelApi 1.10, carry the provenance). */
 export function notesSupported(): boolean {
   return Office.context.requirements.isSetSupported("ExcelApi", "1.18");
@@ -370,7 +379,7 @@ const yieldToPage = () => new Promise<void>((resolve) => setTimeout(resolve, 0))
 async function scanUsedCells(
   visit: (sheet: string, address: string, formula: unknown, value: unknown) => void,
   control: ScanControl = { cancelled: false },
-): Promise<{ locked: Set<string>; gaps: ScanGap[] }> {
+): Promise<{ locked: Set<string>; gaps: ScanGap[]; sheets: string[] }> {
   return Excel.run(async (context) => {
     const sheets = context.workbook.worksheets;
     sheets.load("items/name");
@@ -417,7 +426,7 @@ async function scanUsedCells(
         });
       }
     }
-    return { locked, gaps };
+    return { locked, gaps, sheets: sheets.items.map((sheet) => sheet.name) };
   });
 }
 
@@ -426,15 +435,17 @@ async function scanUsedCells(
  * stored spelling) and whose value is #NAME?.
  * @param control set `cancelled` to stop between two requests
  * @returns the cells, the sheets among theirs that are protected (nothing can be re-entered there),
- *   and where the scan did not look
+ *   where the scan did not look, and every sheet of the workbook (as Excel spells its name)
  */
-export async function findUnboundFormulas(control?: ScanControl): Promise<{ formulas: UnboundFormula[]; protectedSheets: string[]; gaps: ScanGap[] }> {
+export async function findUnboundFormulas(
+  control?: ScanControl,
+): Promise<{ formulas: UnboundFormula[]; protectedSheets: string[]; gaps: ScanGap[]; sheets: string[] }> {
   const formulas: UnboundFormula[] = [];
-  const { locked, gaps } = await scanUsedCells((sheet, address, formula, value) => {
+  const { locked, gaps, sheets } = await scanUsedCells((sheet, address, formula, value) => {
     if (value === "#NAME?" && callsZcFunction(formula)) formulas.push({ sheet, address, formula: String(formula) });
   }, control);
   const protectedSheets = [...new Set(formulas.map((f) => f.sheet))].filter((sheet) => locked.has(sheet));
-  return { formulas, protectedSheets, gaps };
+  return { formulas, protectedSheets, gaps, sheets };
 }
 
 /**

@@ -29,39 +29,50 @@ export interface FormulaCall {
   text: string;
 }
 
-const errorLiterals = ["#NULL!", "#DIV/0!", "#VALUE!", "#REF!", "#NAME?", "#NUM!", "#N/A", "#GETTING_DATA", "#SPILL!", "#CALC!", "#FIELD!", "#BUSY!", "#CONNECT!", "#BLOCKED!", "#UNKNOWN!"];
+/**
+ * Excel's error literals, in any case of ASCII letters only: a letter beyond ASCII that upper-cases to
+ * one (ſ → S) does not make one (the `i` flag without `u` never folds across ASCII, ECMA-262 Canonicalize).
+ */
+const errorPattern = /#(?:NULL!|DIV\/0!|VALUE!|REF!|NAME\?|NUM!|N\/A|GETTING_DATA|SPILL!|CALC!|FIELD!|BUSY!|CONNECT!|BLOCKED!|UNKNOWN!)/iy;
 const cellPart = String.raw`\$?[A-Za-z]{1,3}\$?\d+`;
 const columnPart = String.raw`\$?[A-Za-z]{1,3}`;
 const rowPart = String.raw`\$?\d+`;
-const rangePattern = new RegExp(
-  String.raw`^(?:${cellPart}(?::${cellPart})?|${columnPart}:${columnPart}|${rowPart}:${rowPart})(?![A-Za-z0-9_.(])`,
-);
-const sheetPattern = /^(?:'(?:[^']|'')+'|[A-Za-z_\u00C0-\uFFFF][\w.\u00C0-\uFFFF]*)!/;
-const numberPattern = /^(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?%?/;
-const namePattern = /^[A-Za-z_\\\u00C0-\uFFFF][\w.\u00C0-\uFFFF]*/;
+// Each pattern is sticky (y): it is tried at one place of the formula, never on a copy of the rest of it,
+// and each reads only as far as the token it finds (or one word past it), so tokenizing is linear.
+const rangePattern = new RegExp(String.raw`(?:${cellPart}(?::${cellPart})?|${columnPart}:${columnPart}|${rowPart}:${rowPart})(?![A-Za-z0-9_.(])`, "y");
+const sheetPattern = /(?:'(?:[^']|'')+'|[A-Za-z_\u00C0-\uFFFF][\w.\u00C0-\uFFFF]*)!/y;
+const numberPattern = /(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?%?/y;
+const namePattern = /[A-Za-z_\\\u00C0-\uFFFF][\w.\u00C0-\uFFFF]*/y;
+const spacePattern = /\s+/y;
+
+/** The text a sticky pattern matches at `at`, or undefined (`test` moves lastIndex to the match's end without building a match array). */
+function matchAt(pattern: RegExp, s: string, at: number): string | undefined {
+  pattern.lastIndex = at;
+  return pattern.test(s) ? s.slice(at, pattern.lastIndex) : undefined;
+}
 
 /**
- * Splits a formula into tokens.
+ * Splits a formula into tokens, in time linear in its length (a crafted formula of 8,192 characters
+ * takes a few milliseconds at most, the first time; scripts/benchTokenizer.ts).
  * @param formula the formula, with or without its leading "="
  * @returns the tokens in order
  * @throws SyntaxError for an unterminated string, sheet name or array constant
  */
 export function tokenize(formula: string): Token[] {
-  const s = formula.startsWith("=") ? formula.slice(1) : formula;
-  const offset = formula.length - s.length;
+  const offset = formula.startsWith("=") ? 1 : 0;
+  const s = formula;
   const tokens: Token[] = [];
-  let i = 0;
+  let i = offset;
   const push = (kind: TokenKind, text: string) => {
-    tokens.push({ kind, text, start: i + offset });
+    tokens.push({ kind, text, start: i });
     i += text.length;
   };
   while (i < s.length) {
-    const rest = s.slice(i);
     const c = s[i];
     if (c === '"') {
       let j = i + 1;
       for (;;) {
-        if (j >= s.length) throw new SyntaxError(`unterminated string at ${i + offset}`);
+        if (j >= s.length) throw new SyntaxError(`unterminated string at ${i}`);
         if (s[j] === '"') {
           if (s[j + 1] === '"') j += 2;
           else break;
@@ -75,116 +86,123 @@ export function tokenize(formula: string): Token[] {
         if (s[j] === '"') inString = !inString;
         j++;
       }
-      if (j >= s.length) throw new SyntaxError(`unterminated array constant at ${i + offset}`);
+      if (j >= s.length) throw new SyntaxError(`unterminated array constant at ${i}`);
       push("array", s.slice(i, j + 1));
     } else if (c === " " || c === "\n" || c === "\r" || c === "\t") {
-      push("space", /^\s+/.exec(rest)![0]);
+      push("space", matchAt(spacePattern, s, i)!);
     } else if (c === "(") push("open", c);
     else if (c === ")") push("close", c);
     else if (c === "," || c === ";") push("sep", c);
     else if (c === "#") {
-      const e = errorLiterals.find((x) => rest.toUpperCase().startsWith(x));
-      push("error", e ? rest.slice(0, e.length) : c);
-    } else if (/^[<>]=|^<>/.test(rest)) push("op", rest.slice(0, 2));
+      push("error", matchAt(errorPattern, s, i) ?? c);
+    } else if ((c === "<" || c === ">") && s[i + 1] === "=") push("op", c + "=");
+    else if (c === "<" && s[i + 1] === ">") push("op", "<>");
     else if ("+-*/^&=<>%:".includes(c)) push("op", c);
     else {
-      const sheet = sheetPattern.exec(rest);
-      const afterSheet = sheet ? rest.slice(sheet[0].length) : rest;
-      const range = rangePattern.exec(afterSheet);
-      if (c === "'" && !sheet) throw new SyntaxError(`unterminated sheet name at ${i + offset}`);
-      if (range) push("ref", (sheet?.[0] ?? "") + range[0]);
-      else if (sheet) {
-        const name = namePattern.exec(afterSheet);
-        push("ref", sheet[0] + (name?.[0] ?? ""));
-      } else if (/^\d|^\.\d/.test(rest)) push("number", numberPattern.exec(rest)![0]);
+      // only the patterns that can start with this character are tried
+      const code = s.charCodeAt(i);
+      const letter = (code | 32) >= 97 && (code | 32) <= 122;
+      const digit = code >= 48 && code <= 57;
+      const wordStart = letter || c === "_" || code >= 0xc0;
+      const sheet = c === "'" || wordStart ? matchAt(sheetPattern, s, i) : undefined;
+      if (c === "'" && !sheet) throw new SyntaxError(`unterminated sheet name at ${i}`);
+      const afterSheet = i + (sheet?.length ?? 0);
+      const range = sheet || letter || digit || c === "$" ? matchAt(rangePattern, s, afterSheet) : undefined;
+      if (range) push("ref", (sheet ?? "") + range);
+      else if (sheet) push("ref", sheet + (matchAt(namePattern, s, afterSheet) ?? ""));
+      else if (digit || (c === "." && /\d/.test(s[i + 1] ?? ""))) push("number", matchAt(numberPattern, s, i)!);
       else {
-        const name = namePattern.exec(rest);
+        const name = wordStart || c === "\\" ? matchAt(namePattern, s, i) : undefined;
         if (!name) {
           push("op", c);
           continue;
         }
-        const upper = name[0].toUpperCase();
-        const next = s[i + name[0].length];
-        if (next === "(") push("func", name[0]);
-        else if (upper === "TRUE" || upper === "FALSE") push("bool", name[0]);
+        const next = s[i + name.length];
+        if (next === "(") push("func", name);
+        else if ((name.length === 4 || name.length === 5) && /^(?:TRUE|FALSE)$/i.test(name)) push("bool", name);
         else if (next === "[") {
           // structured reference Table1[Column]
           const close = s.indexOf("]", i);
           push("ref", s.slice(i, close < 0 ? s.length : close + 1));
-        } else push("name", name[0]);
+        } else push("name", name);
       }
     }
   }
   return tokens;
 }
 
+/** A call found in a formula; its arguments' tokens are sliced when first read (a deeply nested formula would otherwise copy them at every level). */
+class Call implements FormulaCall {
+  args: string[] = [];
+  text = "";
+  /** Each argument's place in the formula's tokens without spaces: [first, end). */
+  readonly spans: [number, number][] = [];
+  private sliced?: Token[][];
+  constructor(
+    readonly name: string,
+    readonly depth: number,
+    private readonly solid: Token[],
+  ) {}
+  get argTokens(): Token[][] {
+    return (this.sliced ??= this.spans.map(([from, to]) => this.solid.slice(from, to)));
+  }
+}
+
 /**
  * Every function call in a formula, outermost first, with its arguments split at top-level
- * separators.
+ * separators. One pass over the tokens with a stack of the open calls and parenthesised groups.
  * @param formula the formula text, e.g. '=ZC.DIST_LUM(A2, "P18-BAO; H0=73")'
  * @returns the calls found (nested ones too)
  */
 export function findCalls(formula: string): FormulaCall[] {
   const tokens = tokenize(formula);
-  const calls: FormulaCall[] = [];
-  const source = formula;
-  const parse = (start: number, depth: number): number => {
-    // tokens[start] is a func token, tokens[start + 1] its "("
-    const call: FormulaCall = { name: tokens[start].text.toUpperCase(), args: [], argTokens: [], depth, text: "" };
-    calls.push(call);
-    let i = start + 2;
-    let argStart = i;
-    let current: Token[] = [];
-    const finishArg = (endIndex: number) => {
-      const from = tokens[argStart]?.start ?? source.length;
-      const to = endIndex < tokens.length ? tokens[endIndex].start : source.length;
-      call.args.push(source.slice(from, to).trim());
-      call.argTokens.push(current);
-      current = [];
-    };
-    while (i < tokens.length) {
-      const t = tokens[i];
-      if (t.kind === "func" && tokens[i + 1]?.kind === "open") {
-        const end = parse(i, depth + 1);
-        current.push(...tokens.slice(i, end + 1).filter((x) => x.kind !== "space"));
-        i = end + 1;
-        continue;
-      }
-      if (t.kind === "open") {
-        // a parenthesised sub-expression: keep it whole inside this argument
-        let level = 0;
-        let j = i;
-        for (; j < tokens.length; j++) {
-          if (tokens[j].kind === "open") level++;
-          else if (tokens[j].kind === "close" && --level === 0) break;
-          else if (tokens[j].kind === "func" && tokens[j + 1]?.kind === "open") {
-            j = parse(j, depth + 1);
-          }
-        }
-        current.push(...tokens.slice(i, j + 1).filter((x) => x.kind !== "space"));
-        i = j + 1;
-        continue;
-      }
-      if (t.kind === "close") {
-        if (call.args.length > 0 || current.length > 0 || tokens[start + 2] !== t) finishArg(i);
-        call.text = source.slice(tokens[start].start, t.start + 1);
-        return i;
-      }
-      if (t.kind === "sep") {
-        finishArg(i);
-        argStart = i + 1;
-        i++;
-        continue;
-      }
-      if (t.kind !== "space") current.push(t);
-      i++;
-    }
-    finishArg(tokens.length);
-    call.text = source.slice(tokens[start].start);
-    return tokens.length;
+  const solid: Token[] = [];
+  const calls: Call[] = [];
+  /** Open calls (with where their current argument starts) and open groups "(" inside a call (no call; one shape for both). */
+  type Frame = { call: Call | undefined; argFrom: number; solidFrom: number; opened: number };
+  const stack: Frame[] = [];
+  let callDepth = 0;
+  const finishArg = (call: Call, frame: Frame, endToken: number) => {
+    const from = tokens[frame.argFrom]?.start ?? formula.length;
+    const to = endToken < tokens.length ? tokens[endToken].start : formula.length;
+    call.args.push(formula.slice(from, to).trim());
+    call.spans.push([frame.solidFrom, solid.length]);
   };
   for (let i = 0; i < tokens.length; i++) {
-    if (tokens[i].kind === "func" && tokens[i + 1]?.kind === "open") i = parse(i, 0);
+    const t = tokens[i];
+    const top = stack[stack.length - 1];
+    if (t.kind === "func" && tokens[i + 1]?.kind === "open") {
+      const call = new Call(t.text.toUpperCase(), callDepth, solid);
+      calls.push(call);
+      solid.push(t, tokens[i + 1]);
+      stack.push({ call, argFrom: i + 2, solidFrom: solid.length, opened: i + 1 });
+      callDepth++;
+      i++;
+      continue;
+    }
+    if (t.kind === "open" && top) stack.push({ call: undefined, argFrom: 0, solidFrom: 0, opened: 0 });
+    else if (t.kind === "close" && top) {
+      const call = top.call;
+      if (call) {
+        // a call with no argument at all ("ZC.AGE()") has none; "ZC.AGE( )" has one blank
+        if (call.args.length > 0 || solid.length > top.solidFrom || top.opened + 1 !== i) finishArg(call, top, i);
+        call.text = formula.slice(tokens[top.opened - 1].start, t.start + 1);
+        callDepth--;
+      }
+      stack.pop();
+    } else if (t.kind === "sep" && top?.call) {
+      finishArg(top.call, top, i);
+      top.argFrom = i + 1;
+      top.solidFrom = solid.length + 1;
+    }
+    if (t.kind !== "space") solid.push(t);
+  }
+  // calls left open run to the end of the formula
+  for (const frame of stack.reverse()) {
+    const call = frame.call;
+    if (!call) continue;
+    finishArg(call, frame, tokens.length);
+    call.text = formula.slice(tokens[frame.opened - 1].start);
   }
   return calls;
 }

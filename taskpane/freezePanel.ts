@@ -10,10 +10,10 @@ import { zcellVersion } from "../functions/describeModel.js";
 import { callsZcFunction } from "../functions/storedFormula.js";
 import { columnName, splitAddress, topLeft } from "./cellAddress.js";
 import { $, el, plural } from "./dom.js";
-import { freezeCells, readAnnotations, readReference, readSelection, thawCells, undoGroupSupported, type FreezeCell } from "./excelHost.js";
+import { freezeCells, readAnnotations, readReference, readSelection, readSheetNames, thawCells, undoGroupSupported, type FreezeCell } from "./excelHost.js";
 import { explainFormula } from "./explainCall.js";
 import { parseProvenanceNote, provenanceNote } from "./provenanceNote.js";
-import { restorableFormula } from "./restorableFormula.js";
+import { restorableFormulas } from "./restorableFormula.js";
 
 /** Every cell of a selection with its address, formula and value. */
 function cellsOf(selection: { address: string; formulas: unknown[][]; values: unknown[][] }) {
@@ -97,8 +97,14 @@ export function setupFreeze(): void {
 /** A cell Thaw may restore: its address, the formula to write and the models its note names. */
 type Restoring = { address: string; formula: string; models: string[] };
 
-/** How many of the formulas to restore the confirmation shows. */
+/** How many of the formulas to restore the confirmation shows, and how much of each. */
 const previewCount = 5;
+const previewLength = 300;
+
+/** A formula as the confirmation shows it: whole, or its start and its length when it is long. */
+function preview(formula: string): string {
+  return formula.length > previewLength ? `${formula.slice(0, previewLength)}… (${formula.length} characters in all)` : formula;
+}
 
 /** A list item: the cell's address and a text (a formula in code, or a reason). */
 function listItem(address: string, text: string, asCode: boolean): HTMLElement {
@@ -109,9 +115,10 @@ function listItem(address: string, text: string, asCode: boolean): HTMLElement {
 
 /**
  * Wires Thaw. A note is only a claim: each formula it names goes through `restorableFormula` (ZC
- * calls and their arguments only, nothing that could spill), the pane shows how many it will restore
- * and the first few, and writes them on one confirmation, only into the selected cells. Every refused
- * cell is listed with its address and the reason.
+ * calls and their arguments only, references only to sheets the workbook has, nothing that could
+ * spill; judged a slice at a time, so crafted notes never freeze the pane), the pane shows how many
+ * it will restore and the start of the first few, and writes them on one confirmation, only into the
+ * selected cells. Every refused cell is listed with its address and the reason.
  */
 function setupThaw(): void {
   const thawStatus = $("thaw-status");
@@ -122,7 +129,10 @@ function setupThaw(): void {
     $("thaw-confirm").hidden = true;
   };
 
+  let checking = false; // notes are being read and judged: a second click waits for the answer
   $("thaw").addEventListener("click", async () => {
+    if (checking) return;
+    checking = true;
     hideConfirm();
     thawStatus.textContent = "";
     refusedList.replaceChildren();
@@ -130,15 +140,19 @@ function setupThaw(): void {
       const { sheet, cells } = cellsOf(await readSelection());
       const plain = cells.filter((c) => !(typeof c.formula === "string" && c.formula.startsWith("=")));
       const notes = await readAnnotations(sheet, plain.map((c) => c.address));
+      const sheets = await readSheetNames();
+      const claims = [...notes].flatMap(([address, text]) => {
+        const provenance = parseProvenanceNote(text);
+        return provenance ? [{ address, ...provenance }] : [];
+      });
+      const verdicts = await restorableFormulas(claims.map((c) => c.formula), { singleCell: true, sheets });
       const restoring: Restoring[] = [];
       const refused: { address: string; reason: string }[] = [];
-      for (const [address, text] of notes) {
-        const provenance = parseProvenanceNote(text);
-        if (!provenance) continue;
-        const verdict = restorableFormula(provenance.formula, { singleCell: true });
-        if (verdict.ok) restoring.push({ address, formula: verdict.formula, models: provenance.models });
+      claims.forEach(({ address, models }, k) => {
+        const verdict = verdicts[k];
+        if (verdict.ok) restoring.push({ address, formula: verdict.formula, models });
         else refused.push({ address, reason: verdict.reason });
-      }
+      });
       for (const r of refused) refusedList.append(listItem(r.address, `not restored: ${r.reason}`, false));
       const refusedText = refused.length ? ` ${plural(refused.length, "cell")} not restored, listed below.` : "";
       if (restoring.length === 0) {
@@ -152,11 +166,13 @@ function setupThaw(): void {
         `Restore ${plural(restoring.length, "ZC formula")} in the selection` +
         (restoring.length > previewCount ? ` (the first ${previewCount} below)?` : "?") +
         refusedText;
-      $("thaw-preview").replaceChildren(...restoring.slice(0, previewCount).map((c) => listItem(c.address, c.formula, true)));
+      $("thaw-preview").replaceChildren(...restoring.slice(0, previewCount).map((c) => listItem(c.address, preview(c.formula), true)));
       $("thaw-confirm").hidden = false;
       $("thaw-go").focus();
     } catch (e) {
       thawStatus.textContent = `Not restored: ${(e as Error).message}`;
+    } finally {
+      checking = false;
     }
   });
 

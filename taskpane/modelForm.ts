@@ -68,6 +68,21 @@ export function formFromSpec(spec: string, named: NamedModels = noNamed): FormVa
 }
 
 /**
+ * Why a stored model cannot be used, or undefined when it can: its spec may parse and still fail to
+ * build (H0=1e999 overflows to infinity), as the functions would find on their first cell.
+ * @param spec the stored spec text, e.g. "P18-BAO; H0=1e999"
+ * @param named the workbook's own models
+ */
+export function unusableReason(spec: string, named: NamedModels = noNamed): string | undefined {
+  try {
+    new Cosmology(parseModelSpec(spec, named));
+    return undefined;
+  } catch (e) {
+    return (e as Error).message;
+  }
+}
+
+/**
  * A field's text as a person would type it: each number to at most 6 significant digits
  * ("0.048974681618696" → "0.0489747"), a list item by item, other text ("flat", "") as it is.
  */

@@ -8,7 +8,7 @@
  */
 import { $, el, plural } from "./dom.js";
 import { findUnboundFormulas, reenterFormulas, type ScanControl, type ScanGap, type UnboundFormula } from "./excelHost.js";
-import { restorableFormula } from "./restorableFormula.js";
+import { restorableFormulas } from "./restorableFormula.js";
 
 /** Addresses listed at most in the banner; the rest are counted. */
 const listedAtMost = 20;
@@ -62,11 +62,12 @@ export async function scanForUnboundFormulas(): Promise<void> {
   }
   const restorable: UnboundFormula[] = [];
   const others: UnboundFormula[] = [];
-  for (const f of scan.formulas) {
-    const verdict = restorableFormula(f.formula, { singleCell: false });
+  const verdicts = await restorableFormulas(scan.formulas.map((f) => f.formula), { singleCell: false, sheets: scan.sheets });
+  scan.formulas.forEach((f, k) => {
+    const verdict = verdicts[k];
     if (verdict.ok) restorable.push({ ...f, formula: verdict.formula });
     else others.push(f);
-  }
+  });
   found = restorable;
   const list = $("repair-others");
   list.replaceChildren();

@@ -120,6 +120,65 @@ function rawRequest(port: number, target: string): Promise<{ status: number; hea
   });
 }
 
+/** A TLS client that sends a request and then half-closes its side: the status code and the body it still gets. */
+function halfClosedRequest(port: number, target: string): Promise<{ status: number; body: string }> {
+  return new Promise((resolve, reject) => {
+    const socket = tlsConnect({ host: "127.0.0.1", port, rejectUnauthorized: false }, () => {
+      socket.end(`GET ${target} HTTP/1.1\r\nHost: localhost\r\n\r\n`);
+    });
+    const chunks: Buffer[] = [];
+    socket.on("data", (d: Buffer) => chunks.push(d));
+    socket.on("error", reject);
+    socket.on("close", () => {
+      const bytes = Buffer.concat(chunks);
+      const split = bytes.indexOf("\r\n\r\n");
+      const head = bytes.subarray(0, split < 0 ? bytes.length : split).toString("latin1");
+      let body = split < 0 ? Buffer.alloc(0) : bytes.subarray(split + 4);
+      if (/\r\ntransfer-encoding: chunked/i.test(head)) {
+        // RFC 9112 §7.1: chunks, each its size in hexadecimal bytes, ended by a chunk of size 0
+        const parts: Buffer[] = [];
+        for (let at = 0; ; ) {
+          const eol = body.indexOf("\r\n", at);
+          const size = eol < 0 ? 0 : parseInt(body.subarray(at, eol).toString("latin1"), 16);
+          if (!size) break;
+          parts.push(body.subarray(eol + 2, eol + 2 + size));
+          at = eol + 2 + size + 2;
+        }
+        body = Buffer.concat(parts);
+      }
+      resolve({ status: Number(head.split(" ")[1]) || 0, body: body.toString("utf8") });
+    });
+  });
+}
+
+/**
+ * A client that starts a request and sends one header line every 200 ms, never finishing: ms until the
+ * server closes it (at most `waitMs`, then Infinity) and what it answered.
+ */
+function slowHeaders(port: number, waitMs: number): Promise<{ closedAfterMs: number; answer: string }> {
+  return new Promise((resolve) => {
+    const t0 = Date.now();
+    let answer = "";
+    let drip: NodeJS.Timeout | undefined;
+    const done = (closedAfterMs: number) => {
+      clearInterval(drip);
+      clearTimeout(giveUp);
+      socket.destroy();
+      resolve({ closedAfterMs, answer });
+    };
+    const socket = tlsConnect({ host: "127.0.0.1", port, rejectUnauthorized: false }, () => {
+      socket.write("GET /taskpane.html HTTP/1.1\r\nHost: localhost\r\n");
+      let n = 0;
+      drip = setInterval(() => socket.write(`X-Slow-${n++}: still sending\r\n`), 200);
+    });
+    socket.setEncoding("utf8");
+    socket.on("data", (d) => (answer += d));
+    socket.on("error", () => undefined);
+    socket.on("close", () => done(Date.now() - t0));
+    const giveUp = setTimeout(() => done(Number.POSITIVE_INFINITY), waitMs);
+  });
+}
+
 describe("the dev server treats every request as a stranger's", () => {
   const served = mkdtempSync(join(tmpdir(), "zcell-served-"));
   const outside = mkdtempSync(join(tmpdir(), "zcell-outside-"));
@@ -170,5 +229,24 @@ describe("the dev server treats every request as a stranger's", () => {
       setTimeout(() => resolve(Number.POSITIVE_INFINITY), 8000);
     });
     expect(closedAfter).toBeLessThan(5000);
+  });
+
+  test("a client sending its headers slowly is closed after the idle time (here 1 s), not the runtime's 30 s check", async () => {
+    // Node checks headersTimeout only every connectionsCheckingInterval (30 s unless set; nodejs.org,
+    // http.createServer options), so a header every 200 ms kept a connection open ~30 s past it
+    const { closedAfterMs, answer } = await slowHeaders(hostilePort, 8000);
+    console.log(`slow-header client closed after ${closedAfterMs} ms (idle time 1 s)`);
+    expect(closedAfterMs).toBeGreaterThanOrEqual(1000);
+    expect(closedAfterMs).toBeLessThan(2500);
+    expect(answer).toMatch(/^HTTP\/1\.1 408 /);
+  });
+
+  test("a client that half-closes its side of the TLS connection after its request still gets the file", async () => {
+    for (const file of ["functions.json", "functions.js"]) {
+      const content = readFileSync(join(served, file), "utf8");
+      expect(await halfClosedRequest(hostilePort, `/${file}`)).toEqual({ status: 200, body: content });
+    }
+    expect((await halfClosedRequest(hostilePort, "/%")).status).toBe(400);
+    expect((await halfClosedRequest(hostilePort, "/missing.txt")).status).toBe(404);
   });
 });

@@ -8,6 +8,7 @@
  */
 import { readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
+import fc from "fast-check";
 import { describe, expect, test } from "vitest";
 import { parseModelSpec } from "../core/index.js";
 import { readActiveModel } from "../functions/activeModel.js";
@@ -16,6 +17,7 @@ import { definitions } from "../functions/definitions.js";
 import { evaluate } from "../functions/evaluate.js";
 import { maxSpecLength, maxWorkbookModels, readWorkbookModels } from "../functions/workbookModels.js";
 import { findUnboundFormulas, scanCellLimit, scanChunkCells } from "../taskpane/excelHost.js";
+import { tokenize } from "../taskpane/formulaCalls.js";
 import { parseProvenanceNote, provenanceNote } from "../taskpane/provenanceNote.js";
 import { restorableFormula } from "../taskpane/restorableFormula.js";
 
@@ -58,6 +60,88 @@ describe("what the pane may write back into a workbook", () => {
     }
   });
 
+  // Second pass of the review: text that only becomes ours after a case change, names shaped like
+  // cells beyond the sheet, sheet parts that are paths, array constants that hold more than constants.
+  // formula | the reason given (a fragment) — each was accepted before and written as it stood
+  const lookAlikes: [string, RegExp][] = [
+    ["=ZC.DIſT_LUM(A1)", /ZC\.DIſT_LUM, whose name is not plain ASCII/], // long s (U+017F) upper-cases to S
+    ["=zc.dıst_lum(A1)", /zc\.dıst_lum, whose name is not plain ASCII/], // Turkish dotless i (U+0131) upper-cases to I
+    ["=ZC.KCORRECTıON(A1, -0.5)", /not plain ASCII/],
+    ["=ZC.ﬂUX(1, A1)", /ZC\.ﬂUX, whose name is not plain ASCII/], // the ligature ﬂ (U+FB02) upper-cases to FL
+    ["=ZC.DIﬆ_LUM(A1)", /not plain ASCII/], // the ligature ﬆ (U+FB06) upper-cases to ST
+    ["=_xldudf_ZC_DIſT_LUM(A1)", /_xldudf_ZC_DIſT_LUM, whose name is not plain ASCII/],
+    ["=ZC.DIST_LUM(#ſPILL!)", /spill reference|uses the name/], // an error literal only after upper-casing
+  ];
+  const beyondTheSheet: [string, RegExp][] = [
+    ["=ZC.DIST_LUM(ZZZ1)", /ZZZ1, which lies outside Excel's sheet/],
+    ["=ZC.DIST_LUM(XFE1)", /XFE1, which lies outside Excel's sheet/],
+    ["=ZC.DIST_LUM(A1048577)", /A1048577, which lies outside/],
+    ["=ZC.DIST_LUM(A99999999)", /A99999999, which lies outside/],
+    ["=ZC.DIST_LUM($XFE$1)", /outside Excel's sheet/],
+    ["=ZC.DIST_LUM(A0)", /outside Excel's sheet/],
+    ["=ZC.DIST_LUM(A01)", /outside Excel's sheet/],
+    ["=ZC.DIST_LUM(Sheet1!XFE1)", /Sheet1!XFE1, which lies outside/],
+    ["=ZC.DIST_LUM('My data'!A1048577)", /'My data'!A1048577, which lies outside/],
+    ["=ZC.DIST_LUM(A1:XFE2)", /outside Excel's sheet/],
+    ["=ZC.DIST_LUM(A:XFE)", /outside Excel's sheet/],
+    ["=ZC.DIST_LUM(1:1048577)", /outside Excel's sheet/],
+    ["=ZC.DIST_LUM(0:3)", /outside Excel's sheet/],
+  ];
+  const pathLike: [string, RegExp][] = [
+    ["=ZC.DIST_LUM('C:\\data\\catalogue'!A1)", /another workbook or a file/],
+    ["=ZC.DIST_LUM('D:'!A1)", /another workbook or a file/],
+    ["=ZC.DIST_LUM('\\\\server\\share\\book.xlsx'!A1)", /another workbook or a file/],
+    ["=ZC.DIST_LUM('https://example.invalid/book.xlsx'!A1)", /another workbook or a file/],
+    ["=ZC.DIST_LUM('file:///tmp/x'!A1)", /another workbook or a file/],
+    ["=ZC.DIST_LUM('a/b'!A1)", /another workbook or a file/],
+    ["=ZC.DIST_LUM('what?'!A1)", /another workbook or a file/],
+    ["=ZC.DIST_LUM('all*'!A1)", /another workbook or a file/],
+    ["=ZC.DIST_LUM('Sheet1:Sheet3'!A1)", /another workbook or a file/],
+  ];
+  const arrays: [string, RegExp][] = [
+    ['=ZC.DIST_LUM({1,WEBSERVICE("https://example.invalid")})', /array constant zcell cannot check/],
+    ["=ZC.DIST_LUM({Hidden})", /array constant zcell cannot check/],
+    ["=ZC.DIST_LUM({A1})", /array constant zcell cannot check/],
+  ];
+  test.each([...lookAlikes, ...beyondTheSheet, ...pathLike, ...arrays])("refuses %s (second pass)", (formula, reason) => {
+    for (const singleCell of [true, false]) {
+      const verdict = restorableFormula(formula, { singleCell });
+      expect(verdict.ok).toBe(false);
+      if (!verdict.ok) expect(verdict.reason).toMatch(reason);
+    }
+  });
+
+  test("with the workbook's sheets at hand, a reference to any other sheet is refused; the sheets it has are accepted", () => {
+    const sheets = ["Sheet1", "My data", "It's", "Données"];
+    const verdict = (formula: string) => restorableFormula(formula, { singleCell: false, sheets });
+    expect(verdict("=ZC.DIST_LUM(Other!A1)")).toEqual({ ok: false, reason: "it refers to a sheet this workbook does not have (Other)" });
+    expect(verdict("=ZC.DIST_LUM('My Data'!A1)")).toEqual({ ok: false, reason: "it refers to a sheet this workbook does not have (My Data)" });
+    expect(verdict("=ZC.DIST_LUM(Book2.xlsx!A1)")).toEqual({ ok: false, reason: "it refers to a sheet this workbook does not have (Book2.xlsx)" });
+    for (const formula of ["=ZC.DIST_LUM(Sheet1!A1)", "=ZC.DIST_LUM('My data'!B7)", "=ZC.DIST_LUM('It''s'!$B$2:B9)", "=ZC.DIST_LUM(Données!A1)", "=ZC.DIST_LUM(A1)"]) {
+      expect(verdict(formula)).toEqual({ ok: true, formula });
+    }
+  });
+
+  // honest formulas that must still pass, whatever the pane knows of the sheets
+  const honest = [
+    "=ZC.DIST_LUM('My data'!B7)",
+    "=ZC.DIST_LUM(XFD1048576)",
+    "=ZC.DIST_LUM($XFD$1048576)",
+    "=ZC.DIST_LUM(Sheet1!A1:XFD1048576)",
+    "=ZC.DIST_LUM(A:XFD)",
+    "=ZC.DIST_LUM(1:1048576)",
+    "=ZC.DIST_LUM($A$2:$A$40, B$1)",
+    "=ZC.DIST_LUM({0.1,-2.5e-3;\"a\"\"b\",TRUE})",
+    "=ZC.DIST_LUM(#N/A)",
+  ];
+  test.each(honest)("still re-enters %s", (formula) => {
+    expect(restorableFormula(formula, { singleCell: false, sheets: ["Sheet1", "My data"] })).toEqual({ ok: true, formula });
+  });
+
+  test("a ZC name typed in lower case is written with our exact name", () => {
+    expect(restorableFormula("=zc.dist_lum(a2)*2", { singleCell: true })).toEqual({ ok: true, formula: "=ZC.DIST_LUM(a2)*2" });
+  });
+
   // formula | restored for Thaw (one cell) | re-entered by the repair banner | written as
   const allowed: [string, boolean, boolean, string][] = [
     ['=ZC.DIST_LUM(A2, "P18-BAO; H0=73")', true, true, '=ZC.DIST_LUM(A2, "P18-BAO; H0=73")'],
@@ -77,6 +161,126 @@ describe("what the pane may write back into a workbook", () => {
     expect(one.ok).toBe(thaw);
     if (!one.ok) expect(one.reason).toMatch(/could spill over other cells/);
     expect(any).toEqual(repair ? { ok: true, formula: written } : expect.objectContaining({ ok: false }));
+  });
+});
+
+describe("whatever a stranger writes, what the pane writes back holds only our calls and cells of this workbook", () => {
+  // Formulas built from honest pieces and hostile ones alike: our names in any case, look-alike letters,
+  // other functions, cells inside and beyond the sheet, sheets this workbook has, paths, names, array
+  // constants, any operator. The check of what comes out is written here on its own (not the allow-list's code).
+  const ours = Object.keys(definitions);
+  const lastColumn = 16_384; // XFD; rows up to 1,048,576 (Microsoft, "Excel specifications and limits")
+  const lastRow = 1_048_576;
+  const letters = (n: number) => {
+    let s = "";
+    for (let k = n; k > 0; k = Math.floor((k - 1) / 26)) s = String.fromCharCode(65 + ((k - 1) % 26)) + s;
+    return s;
+  };
+  const number = (col: string) => [...col.toUpperCase()].reduce((n, c) => n * 26 + c.charCodeAt(0) - 64, 0);
+  const sheets = ["Sheet1", "My data", "It's", "Données"];
+
+  const lookAlike = (name: string) => name.replace("I", "ı").replace("S", "ſ").replace("FL", "ﬂ").replace("ST", "ﬆ");
+  const caseOf = (text: string, lower: boolean) => (lower ? text.toLowerCase() : text);
+  const functionName = fc.oneof(
+    fc.tuple(fc.constantFrom(...ours), fc.boolean()).map(([n, lower]) => caseOf(`ZC.${n}`, lower)),
+    fc.constantFrom(...ours).map((n) => `_xldudf_ZC_${n}`),
+    fc.constantFrom(...ours).map((n) => `ZC.${lookAlike(n)}`),
+    fc.constantFrom("WEBSERVICE", "IF", "HYPERLINK", "LAMBDA", "ZC.NOT_OURS", "SUM", "ZC.__proto__", "_xlfn.ZC.AGE"),
+  );
+  const column = fc.oneof(fc.integer({ min: 1, max: lastColumn }).map(letters), fc.integer({ min: lastColumn + 1, max: 18_278 }).map(letters), fc.stringMatching(/^[A-Za-zı]{1,4}$/));
+  const row = fc.oneof(fc.integer({ min: 1, max: lastRow }).map(String), fc.integer({ min: lastRow + 1, max: 2e9 }).map(String), fc.constantFrom("0", "01", "1048576", "1048577"));
+  const dollar = fc.constantFrom("", "$");
+  const cell = fc.tuple(dollar, column, dollar, row).map((p) => p.join(""));
+  const area = fc.oneof(
+    cell,
+    fc.tuple(cell, cell).map(([a, b]) => `${a}:${b}`),
+    fc.tuple(dollar, column, dollar, column).map(([d1, a, d2, b]) => `${d1}${a}:${d2}${b}`),
+    fc.tuple(dollar, row, dollar, row).map(([d1, a, d2, b]) => `${d1}${a}:${d2}${b}`),
+  );
+  const sheetName = fc.constantFrom(...sheets, "Other", "C:\\data", "\\\\server\\share\\b.xlsx", "https://example.invalid/b.xlsx", "a/b", "Book2.xlsx", "[Book1]Sheet1", "Sheet1:Sheet3", "ı");
+  const sheetPart = fc.oneof(
+    fc.constant(""),
+    sheetName.map((n) => `'${n.replaceAll("'", "''")}'!`),
+    sheetName.filter((n) => /^[A-Za-z_][\w.]*$/.test(n)).map((n) => `${n}!`),
+  );
+  const reference = fc.tuple(sheetPart, area).map(([s, a]) => s + a);
+  const literal = fc.oneof(
+    fc.double({ min: -1e6, max: 1e6, noNaN: true }).map((x) => String(Math.abs(x))),
+    fc.string({ maxLength: 12 }).map((t) => `"${t.replaceAll('"', '""')}"`),
+    fc.constantFrom("TRUE", "false", "#N/A", "#REF!", "#ſPILL!", "#", "{1,2;3,4}", '{"a",TRUE}', "{Hidden}", '{1,IF("x")}', "Hidden", "Table1[z]", "A1#"),
+    fc.stringMatching(/^[A-Za-z_][A-Za-z0-9_.]{0,6}$/),
+  );
+  const operator = fc.constantFrom("+", "-", "*", "/", "^", "&", "=", "<>", "<=", ">=", "<", ">", "%", " ", "|", ":", "@", "!", "#", " ");
+  const { expression } = fc.letrec<{ expression: string; call: string; leaf: string }>((tie) => ({
+    expression: fc.oneof(
+      { depthSize: "small", maxDepth: 4 },
+      tie("leaf"),
+      tie("call"),
+      fc.tuple(tie("expression"), operator, tie("expression")).map((p) => p.join("")),
+      tie("expression").map((e) => `(${e})`),
+    ),
+    call: fc.tuple(functionName, fc.array(tie("expression"), { maxLength: 3 }), fc.constantFrom(",", ";", ", ")).map(([name, args, sep]) => `${name}(${args.join(sep)})`),
+    leaf: fc.oneof(reference, literal),
+  }));
+
+  /** Why a written token is not one of ours, or undefined: checked without the allow-list's code. */
+  function foreign(kind: string, text: string, knownSheets: readonly string[] | undefined): string | undefined {
+    if (kind === "func") return ours.some((n) => text === `ZC.${n}`) ? undefined : "a function not spelled as ours";
+    if (kind === "name") return "a name";
+    if (kind === "op" && ["|", ":", "@", "!", "[", "]"].includes(text)) return `the operator ${text}`;
+    if (kind === "error" && text === "#") return "a spill reference";
+    if (kind !== "ref") return undefined;
+    const m = /^(?:(?:'((?:[^']|'')+)'|([^'!]+))!)?(.*)$/.exec(text)!;
+    const sheet = m[1]?.replaceAll("''", "'") ?? m[2];
+    if (sheet !== undefined && (/[\\/?*[\]:]/.test(sheet) || (knownSheets && !knownSheets.includes(sheet)))) return `the sheet ${sheet}`;
+    for (const part of m[3].replaceAll("$", "").split(":")) {
+      const p = /^([A-Za-z]*)(\d*)$/.exec(part);
+      if (!p || (!p[1] && !p[2])) return `the reference ${text}`;
+      if (p[1] && number(p[1]) > lastColumn) return `the column ${p[1]}`;
+      if (p[2] && (p[2].startsWith("0") || Number(p[2]) > lastRow)) return `the row ${p[2]}`;
+    }
+    return undefined;
+  }
+
+  test("every formula the allow-list accepts, tokenized again, holds only ZC calls of our exact names and references inside the sheet", () => {
+    let accepted = 0;
+    fc.assert(
+      fc.property(expression, fc.boolean(), fc.boolean(), (body, singleCell, withSheets) => {
+        const knownSheets = withSheets ? sheets : undefined;
+        const verdict = restorableFormula(`=${body}`, { singleCell, sheets: knownSheets });
+        if (!verdict.ok) return;
+        accepted++;
+        for (const t of tokenize(verdict.formula)) expect(foreign(t.kind, t.text, knownSheets), `${t.text} in ${verdict.formula}`).toBeUndefined();
+        // what is written is accepted again as it stands
+        expect(restorableFormula(verdict.formula, { singleCell, sheets: knownSheets })).toEqual(verdict);
+      }),
+      { numRuns: 3000 },
+    );
+    // the generator must reach accepted formulas, or the property says nothing (about 190 of 3,000 here)
+    expect(accepted).toBeGreaterThan(100);
+  });
+
+  test("an honest formula (our calls, cells inside the sheet, sheets the workbook has, constants) is always accepted as it stands", () => {
+    const honestCell = fc.tuple(dollar, fc.integer({ min: 1, max: lastColumn }).map(letters), dollar, fc.integer({ min: 1, max: lastRow })).map((p) => p.join(""));
+    const honestSheet = fc.oneof(fc.constant(""), fc.constantFrom(...sheets).map((n) => `'${n.replaceAll("'", "''")}'!`), fc.constantFrom("Sheet1!", "Données!"));
+    const honestReference = fc.tuple(honestSheet, honestCell, fc.option(honestCell)).map(([s, a, b]) => `${s}${a}${b ? `:${b}` : ""}`);
+    const honestLiteral = fc.oneof(fc.integer({ min: 0, max: 1e6 }).map(String), fc.string({ maxLength: 8 }).map((t) => `"${t.replaceAll('"', '""')}"`), fc.constantFrom("TRUE", "#N/A", "{0.1,0.2;0.3,0.4}"));
+    const { honest } = fc.letrec<{ honest: string }>((tie) => ({
+      honest: fc.oneof(
+        { depthSize: "small", maxDepth: 3 },
+        honestReference,
+        honestLiteral,
+        fc.tuple(fc.constantFrom(...ours), fc.array(tie("honest"), { maxLength: 3 })).map(([n, args]) => `ZC.${n}(${args.join(", ")})`),
+        fc.tuple(tie("honest"), fc.constantFrom("+", "-", "*", "/", "^", "&", "<>"), tie("honest")).map((p) => p.join(" ")),
+      ),
+    }));
+    fc.assert(
+      fc.property(fc.constantFrom(...ours), honest, (name, inner) => {
+        const formula = `=ZC.${name}(${inner})`;
+        expect(restorableFormula(formula, { singleCell: false, sheets })).toEqual({ ok: true, formula });
+      }),
+      { numRuns: 1000 },
+    );
   });
 });
 
@@ -134,6 +338,12 @@ describe("stored settings: whatever they hold, a bounded reading and a plain war
     }
     expect(message).toMatch(/unknown preset "UNKNOWN": use one of .* … and \d+ more$/);
     expect(message.length).toBeLessThan(300);
+  });
+
+  test("two models whose names differ only in case: the one stored last is read, and the pane is told", () => {
+    const models = readWorkbookModels({ Team: "W9-ALL", OTHER: "P18-CMB; H0=70", TEAM: "P18-BAO; H0=73" });
+    expect([...models.specs]).toEqual([["TEAM", "P18-BAO; H0=73"], ["OTHER", "P18-CMB; H0=70"]]);
+    expect(models.problems).toEqual(["workbook models Team and TEAM differ only in case, and model names are read without regard to case; zcell reads the one stored last, TEAM"]);
   });
 
   test("entries with long names, long specs, wrong types or bad specs are left out with at most five sentences", () => {

