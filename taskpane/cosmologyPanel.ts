@@ -8,7 +8,8 @@ import { presets } from "../core/index.js";
 import { defaultModelSpec, readActiveModel } from "../functions/activeModel.js";
 import { modelNameProblem, noWorkbookModels, type WorkbookModels } from "../functions/workbookModels.js";
 import { $, el, plural } from "./dom.js";
-import { countCellsNaming, readModelSetting, recalculateWorkbook, writeModelSetting, writeWorkbookModels } from "./excelHost.js";
+import { readModelSetting, recalculateWorkbook, writeModelSetting, writeWorkbookModels } from "./excelHost.js";
+import { countCellsNaming } from "./workbookScan.js";
 import { changedFields, derivedValues, formFields, formFromSpec, formGroups, modelFromForm, shownText, unusableReason, type FormValues } from "./modelForm.js";
 
 const fieldLabels: Record<(typeof formFields)[number], string> = {

@@ -7,7 +7,7 @@
  * left alone. The scan is bounded per sheet, can be stopped, and says where it did not look.
  */
 import { $, el, plural } from "./dom.js";
-import { findUnboundFormulas, reenterFormulas, type ScanControl, type ScanGap, type UnboundFormula } from "./excelHost.js";
+import { findUnboundFormulas, reenterFormulas, type ScanControl, type ScanGap, type UnboundFormula } from "./workbookScan.js";
 import { restorableFormulas } from "./restorableFormula.js";
 
 /** Addresses listed at most in the banner; the rest are counted. */

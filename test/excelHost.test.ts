@@ -7,12 +7,10 @@ import { readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import { beforeEach, describe, expect, test } from "vitest";
 import { readActiveModel } from "../functions/activeModel.js";
+import { findUnboundFormulas, reenterFormulas, scanChunkCells } from "../taskpane/workbookScan.js";
 import {
-  findUnboundFormulas,
   freezeCells,
   readAnnotations,
-  reenterFormulas,
-  scanChunkCells,
   thawCells,
   readActiveCell,
   readModelSetting,

@@ -16,7 +16,7 @@ import { CellError } from "../functions/cellError.js";
 import { definitions } from "../functions/definitions.js";
 import { evaluate } from "../functions/evaluate.js";
 import { maxSpecLength, maxWorkbookModels, readWorkbookModels } from "../functions/workbookModels.js";
-import { findUnboundFormulas, scanCellLimit, scanChunkCells } from "../taskpane/excelHost.js";
+import { findUnboundFormulas, scanCellLimit, scanChunkCells } from "../taskpane/workbookScan.js";
 import { tokenize } from "../taskpane/formulaCalls.js";
 import { parseProvenanceNote, provenanceNote } from "../taskpane/provenanceNote.js";
 import { restorableFormula } from "../taskpane/restorableFormula.js";

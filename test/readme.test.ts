@@ -56,7 +56,7 @@ describe("README", () => {
 describe("README: Security", () => {
   test("its limits are the ones the code enforces", async () => {
     const { maxWorkbookModels, maxSpecLength } = await import("../functions/workbookModels.js");
-    const { scanCellLimit } = await import("../taskpane/excelHost.js");
+    const { scanCellLimit } = await import("../taskpane/workbookScan.js");
     const { inspectorReadLimit } = await import("../taskpane/explainCall.js");
     const text = readme().replace(/\s+/g, " ");
     expect(text).toContain(`${maxWorkbookModels} workbook models (specs of up to ${maxSpecLength} characters)`);
