@@ -10,6 +10,7 @@
  * matrix (a single value as a 1×1 one), a scalar argument as its value, an omitted one as null.
  */
 import { readFileSync } from "node:fs";
+import { columnName, columnNumber } from "../taskpane/cellAddress.js";
 import { tokenize, type Token } from "../taskpane/formulaCalls.js";
 import { loadBundle, type Registered } from "./reference/hostBundle.js";
 import { testBuildDir } from "./testBuild.js";
@@ -39,9 +40,6 @@ export async function sheetRuntime(): Promise<SheetRuntime> {
   const rangeParameters = new Map(metadata.functions.map((f) => [f.id, f.parameters.map((p) => p.dimensionality === "matrix")]));
   return { fns, rangeParameters };
 }
-
-const columnNumber = (letters: string) => [...letters.toUpperCase()].reduce((n, c) => n * 26 + c.charCodeAt(0) - 64, 0);
-const columnLetters = (n: number): string => (n > 26 ? columnLetters(Math.floor((n - 1) / 26)) : "") + String.fromCharCode(65 + ((n - 1) % 26));
 
 /**
  * The value of a formula, as its cell shows it (the first cell of a matrix).
@@ -76,7 +74,7 @@ export async function evaluateFormula(runtime: SheetRuntime, formula: string, ce
     const rows: SheetValue[][] = [];
     for (let r = Number(r1); r <= Number(r2); r++) {
       const row: SheetValue[] = [];
-      for (let c = columnNumber(c1); c <= columnNumber(c2); c++) row.push(cell(`${columnLetters(c)}${r}`));
+      for (let c = columnNumber(c1); c <= columnNumber(c2); c++) row.push(cell(`${columnName(c)}${r}`));
       rows.push(row);
     }
     return rows;
