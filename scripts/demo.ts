@@ -149,7 +149,8 @@ catalogue.forEach(([name, z, flux, m, angle, ra, dec, ebv], i) => {
     zc(`ZC.KCORRECTION(B${r},-0.5)`, "KCORRECTION", z, -0.5),
     zc(`ZC.MAG_ABS(K${r},B${r},P${r})`, "MAG_ABS", dereddened, z, value("KCORRECTION", z, -0.5)),
   ]);
-  // the positions stay text when a reader edits them: the Text number format, "@" (Microsoft support, "Number format codes")
+  // the positions are text, and their cells say so: the Text number format "@" (built-in format 49 of
+  // ECMA-376 Part 1 §18.8.30, from memory; exceljs's table of built-in formats maps 49 to "@" too)
   for (const column of ["F", "G"]) sheet.getCell(`${column}${r}`).numFmt = "@";
 });
 sheet.addRow([]);

@@ -339,7 +339,8 @@ describe("demo catalogue: positions, dust and velocities", () => {
       expect(cells.get(`F${r}`)!.type, `F${r}`).toBe("s");
       expect(ra, `F${r}`).toMatch(/^([01]\d|2[0-3]):[0-5]\d:[0-5]\d\.\d$/);
       expect(dec, `G${r}`).toMatch(/^[+-][0-8]\d:[0-5]\d:[0-5]\d$/);
-      // number format 49 is the built-in Text format "@" (ECMA-376 Part 1, §18.8.30, the built-in formats): an edited position stays text
+      // number format 49 is the built-in Text format "@" (ECMA-376 Part 1 §18.8.30, from memory; exceljs's
+      // lib/xlsx/defaultnumformats.js maps 49 to "@")
       for (const column of ["F", "G"]) expect(cells.get(`${column}${r}`)!.numFmtId, `${column}${r}`).toBe(49);
       expect(cells.get(`I${r}`)!.formula).toBe(storedFormula(`ZC.COORD_CONVERT(F${r},G${r},"equatorial","galactic","lat")`));
       expect(cells.get(`J${r}`)!.formula).toBe(storedFormula(`ZC.VELOCITY(B${r})`));
