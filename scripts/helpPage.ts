@@ -29,7 +29,7 @@ const root = fileURLToPath(new URL("..", import.meta.url));
 const declarationFiles = JSON.parse(readFileSync(`${root}functions/declarationFiles.json`, "utf8")) as string[];
 
 /** The README sections a user reads, in the order the page shows them, around the function entries. */
-export const guideSections = { before: ["Model spec", "Models of this workbook", "Presets", "Units", "Conventions", "Errors"], after: ["Sharing workbooks", "Security"] };
+export const guideSections = { before: ["From a raw catalogue to luminosities", "Model spec", "Models of this workbook", "Presets", "Units", "Conventions", "Errors"], after: ["Sharing workbooks", "Security"] };
 
 /** What the page says about one worksheet function. */
 export interface FunctionEntry {

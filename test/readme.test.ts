@@ -6,6 +6,7 @@ import { readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import { describe, expect, test } from "vitest";
 import { functionReference, readmePath, withReference } from "../scripts/functionReference.js";
+import { evaluateFormula, sheetRuntime, type SheetValue } from "./sheetFormula.js";
 import { testBuildDir } from "./testBuild.js";
 
 const root = fileURLToPath(new URL("..", import.meta.url));
@@ -91,5 +92,44 @@ describe("README: comparing with astropy", () => {
     const check = file("test/astropy.test.ts");
     expect(check).toContain("Om0: p.Om - m.OnuMassive");
     expect(check).toContain("const tol = massive ? (looser ? 3e-5 : 1e-5) : 1e-9;");
+  });
+});
+
+describe("README: From a raw catalogue to luminosities", () => {
+  const recipe = () => {
+    const text = readme();
+    return text.slice(text.indexOf("## From a raw catalogue to luminosities"), text.indexOf("<!-- raw-catalogue:end"));
+  };
+  /** The table's rows: cell, formula as typed (without "="), value as shown. */
+  const steps = () => [...recipe().matchAll(/^\|.*?\| (B\d+) \| `=([^`]+)` \| ([^|]+) \|$/gm)].map(([, cell, formula, shown]) => ({ cell, formula, shown: shown.trim() }));
+
+  test("every step's value is what its formula gives in a sheet, to the digits shown: through the built add-in, the model the default (P18-CMB), earlier steps' cells read by later ones", async () => {
+    const rows = steps();
+    expect(rows.map((r) => r.cell)).toEqual(Array.from({ length: 11 }, (_, i) => `B${i + 2}`));
+    const runtime = await sheetRuntime(); // a workbook with no model applied: the default model
+    const cells = new Map<string, SheetValue>();
+    for (const { cell, formula, shown } of rows) {
+      const value = await evaluateFormula(runtime, formula, (address) => cells.get(address) ?? null);
+      expect(typeof value, `${cell} =${formula} gives ${String(value)}`).toBe("number");
+      // the number shown, and one unit of its last digit: 19.760 → 0.001, 5.741E+23 → 1e20
+      const [, mantissa, exponent = "0"] = /^([-−]?\d+(?:\.\d+)?)(?:E([+-]\d+))?/.exec(shown)!;
+      const decimals = mantissa.split(".")[1]?.length ?? 0;
+      const unit = 10 ** (Number(exponent) - decimals);
+      const number = Number(mantissa.replace("−", "-")) * 10 ** Number(exponent);
+      expect(Math.abs((value as number) - number), `${cell} =${formula} gives ${String(value)}, shown ${shown}`).toBeLessThanOrEqual(unit / 2 + Math.abs(number) * 1e-15);
+      cells.set(cell, value as number);
+    }
+  });
+
+  test("it starts from sexagesimal text, uses the same invented positions as its opening names, and each step's function in turn", () => {
+    const text = recipe();
+    const opening = text.slice(0, text.indexOf("<!-- raw-catalogue:start"));
+    const quoted = new Set([...opening.matchAll(/`"([^"`]+)"`/g)].map((m) => m[1]));
+    expect([...quoted]).toEqual(["10:27:36.21", "+05:48:12.9", "10:27:36.26", "+05:48:13.6"]);
+    for (const { formula } of steps()) for (const [, position] of formula.matchAll(/"([+-]?\d\d:[^"]+)"/g)) expect(quoted, formula).toContain(position);
+    const called = steps().map(({ formula }) => /ZC\.(\w+)/.exec(formula)![1]);
+    expect(called).toEqual(["COORD_DEG", "COORD_DEG", "SEPARATION", "COORD_CONVERT", "EXTINCTION", "Z_FROM_VELOCITY", "REDSHIFT_CMB", "INDEX_BETWEEN", "LUMINOSITY_NU", "DIST_LUM", "MAG_ABS"]);
+    expect(opening.replace(/\s+/g, " ")).toContain("8–10 are under P18-CMB, the default model");
+    expect(opening).toMatch(/\*\*invented\*\* source/);
   });
 });
