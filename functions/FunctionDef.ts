@@ -50,8 +50,14 @@ export type ArgSpec =
       choices?: readonly string[];
       /** Scalar: read once, not broadcast. */
       scalar?: boolean;
-      /** May be omitted or blank: read as "" when scalar, as absent otherwise (no blank result). */
+      /** May be omitted or blank: read as "" when scalar, as absent otherwise (no blank result); otherwise required. */
       optional?: boolean;
+      /**
+       * A unit that compute converts itself (its meaning depends on other arguments): the text must
+       * parse, or the call is #VALUE! naming this argument; the number arguments in `applies` are
+       * quoted in it (or in `shown` when it is blank) by the messages of their domain.
+       */
+      unit?: { shown?: string; applies?: readonly string[] };
     }
   | {
       /** A number or text, passed through (e.g. mnu as "0.05,0.01"). */
@@ -72,7 +78,10 @@ export type ArgSpec =
       applies: string | readonly string[];
     };
 
-/** The resolved arguments of one cell, by name (units already applied). */
+/**
+ * The resolved arguments of one cell, by name (units already applied). A unit argument's own name
+ * holds the unit as the user gave it (or its default), for a message in that unit.
+ */
 export type Args = Record<string, number | string | Cosmology | undefined>;
 
 /** A worksheet function as data: its arguments and what it computes for one cell. */

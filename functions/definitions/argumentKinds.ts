@@ -3,7 +3,7 @@
  * a 1σ error, a unit, the model …), and the two accessors every `compute` uses. Each family of
  * definitions in this folder builds its arguments from these, so one kind reads alike everywhere.
  */
-import { conversionFactor, sexagesimalDegrees, type AnglePart, type Cosmology } from "../../core/index.js";
+import { conversionFactor, isNumberText, sexagesimalDegrees, type AnglePart, type Cosmology } from "../../core/index.js";
 import type { Args, ArgSpec } from "../FunctionDef.js";
 import { messages } from "../messages.js";
 
@@ -38,7 +38,17 @@ export const area = num("area", { default: 4 * Math.PI, blankMeansDefault: true,
 /** A survey's sky area, required (a blank would silently mean the whole sky). */
 export const requiredArea = num("area", { min: 0, max: { value: 4 * Math.PI, what: "the whole sky" } });
 export const angle = num("angle", { min: 0, max: { value: Math.PI, what: "180°" } });
-export const optionalText = (name: string): ArgSpec => ({ kind: "text", name, scalar: true, optional: true });
+/**
+ * An optional unit that compute converts itself (its meaning depends on other arguments): checked
+ * when the call is read; `shown` is what a blank means, `applies` the number arguments given in it.
+ */
+export const textUnit = (name: string, shown?: string, applies: readonly string[] = []): ArgSpec => ({
+  kind: "text",
+  name,
+  scalar: true,
+  optional: true,
+  unit: { shown, applies },
+});
 /** A right ascension (or another longitude): a number in degrees, or sexagesimal text (hours for a right ascension). */
 export const longitude = (name: string) => num(name, { sexagesimal: "ra" });
 /** A declination (or another latitude): a number in degrees within ±90°, or sexagesimal text. */
@@ -51,11 +61,17 @@ export const n = (a: Args, name: string) => a[name] as number;
 
 /**
  * A position argument whose part another argument names (`sexagesimal: "either"`), in degrees: a
- * number as read, or text read as a sexagesimal angle of the part given ("ra": hours unless marked).
+ * number as read, or text read as a sexagesimal angle of the part given ("ra": hours unless marked;
+ * a bare number as text is then refused, as it could be hours or degrees), or as a number of degrees.
  */
 export function degreesOf(a: Args, name: string, part: AnglePart): number {
   const x = a[name];
-  return typeof x === "number" ? x : sexagesimalDegrees(x as string, part, name);
+  if (typeof x === "number") return x;
+  const text = (x as string).trim();
+  if (part === "ra" || !isNumberText(text)) return sexagesimalDegrees(text, part, name);
+  const degrees = Number(text);
+  if (!Number.isFinite(degrees)) throw new RangeError(messages.notFinite(name));
+  return degrees;
 }
 
 /** A unit given as text whose meaning depends on other arguments (blank: `shown`), as a factor into `reference`. */

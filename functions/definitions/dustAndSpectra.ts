@@ -22,7 +22,7 @@ import {
 } from "../../core/index.js";
 import type { Args, FunctionDef } from "../FunctionDef.js";
 import { messages } from "../messages.js";
-import { amount, err, num, n, optionalText, unit } from "./argumentKinds.js";
+import { amount, err, num, n, textUnit, unit } from "./argumentKinds.js";
 
 const positive = (name: string) => num(name, { min: 0, minExclusive: true });
 
@@ -73,6 +73,9 @@ function angstromConverter(unitText: string): (value: number) => number {
   return convert;
 }
 
+/** Units a wavelength is commonly given in (common practice): far outside a law's range, the one that would put the same number inside it is named. */
+const likelyWavelengthUnits = ["um", "nm", "Angstrom"];
+
 /** A_λ of one cell for a given E(B−V): the wavelength in its unit (Angstrom, nm, um, or a frequency or energy); outside the law's range, the range in that unit. */
 function extinction(a: Args, ebv: number): number {
   const law = lawOf(a.law as string | undefined);
@@ -82,7 +85,10 @@ function extinction(a: Args, ebv: number): number {
   if (!inRange(angstrom, law)) {
     const { min, max } = extinctionRangeAngstrom(law);
     const [low, high] = [bandInUnit(frequencyHz(min, "Angstrom", "min"), unitText), bandInUnit(frequencyHz(max, "Angstrom", "max"), unitText)].sort((p, q) => p - q);
-    throw new NoSolutionError(messages.outsideLawRange("wavelength", given, unitText.trim(), law, low, high));
+    // far outside (a factor 2: not a value just past an edge), the unit in which the same number is inside
+    const far = angstrom < min / 2 || angstrom > 2 * max;
+    const likely = far ? likelyWavelengthUnits.find((u) => u !== unitText.trim() && inRange(angstromConverter(u)(given), law)) : undefined;
+    throw new NoSolutionError(messages.outsideLawRange("wavelength", given, unitText.trim(), law, low, high, likely ? { unit: likely, arg: "wavelength_unit (5th argument)" } : undefined));
   }
   return extinctionMag(angstrom, ebv, law, n(a, "r_v"));
 }
@@ -93,7 +99,7 @@ export const dustAndSpectra: FunctionDef[] = [
     name: "EXTINCTION",
     args: [
       positive("wavelength"), amount("ebv"), { kind: "text", name: "law", optional: true },
-      num("r_v", { default: Number.NaN, blankMeansDefault: true, min: 0, minExclusive: true }), optionalText("wavelength_unit"),
+      num("r_v", { default: Number.NaN, blankMeansDefault: true, min: 0, minExclusive: true }), textUnit("wavelength_unit", "Angstrom", ["wavelength"]),
     ],
     compute: (a) => extinction(a, n(a, "ebv")),
     // the common range: a column of E(B−V), one per source, at one band
@@ -101,12 +107,12 @@ export const dustAndSpectra: FunctionDef[] = [
   },
   {
     name: "INDEX_BETWEEN",
-    args: [positive("flux_density1"), positive("band1"), positive("flux_density2"), positive("band2"), optionalText("band_unit")],
+    args: [positive("flux_density1"), positive("band1"), positive("flux_density2"), positive("band2"), textUnit("band_unit", "GHz", ["band1", "band2"])],
     compute: (a) => spectralIndexBetween(n(a, "flux_density1"), bandHz(a, "band1", "band_unit", "GHz"), n(a, "flux_density2"), bandHz(a, "band2", "band_unit", "GHz")),
   },
   {
     name: "INDEX_BETWEEN_ERR",
-    args: [positive("flux_density1"), positive("band1"), positive("flux_density2"), positive("band2"), err("err1"), err("err2"), optionalText("band_unit")],
+    args: [positive("flux_density1"), positive("band1"), positive("flux_density2"), positive("band2"), err("err1"), err("err2"), textUnit("band_unit", "GHz", ["band1", "band2"])],
     compute: (a) =>
       spectralIndexBetweenError(
         n(a, "flux_density1"), bandHz(a, "band1", "band_unit", "GHz"), n(a, "flux_density2"), bandHz(a, "band2", "band_unit", "GHz"), n(a, "err1"), n(a, "err2"),
@@ -116,7 +122,7 @@ export const dustAndSpectra: FunctionDef[] = [
     name: "BRIGHTNESS_TEMP",
     args: [
       amount("flux_density"), positive("frequency"), positive("major"), positive("minor"), num("z", { default: 0, blankMeansDefault: true }),
-      unit("flux_unit", "Jy", "Jy", "flux_density"), optionalText("band_unit"), unit("angle_unit", "rad", "arcsec", ["major", "minor"]),
+      unit("flux_unit", "Jy", "Jy", "flux_density"), textUnit("band_unit", "GHz", ["frequency"]), unit("angle_unit", "rad", "arcsec", ["major", "minor"]),
     ],
     compute: (a) => brightnessTemperatureK(n(a, "flux_density") * janskySI, bandHz(a, "frequency", "band_unit", "GHz"), n(a, "major"), n(a, "minor"), n(a, "z")),
   },

@@ -14,7 +14,7 @@ import {
   spectralLuminosityErrorWHz,
 } from "../../core/index.js";
 import type { FunctionDef } from "../FunctionDef.js";
-import { num, amount, model, unit, z, err, magErr, angle, optionalAlpha, optionalText, m, n, inSpectralOrPowerUnit } from "./argumentKinds.js";
+import { num, amount, model, unit, z, err, magErr, angle, optionalAlpha, textUnit, m, n, inSpectralOrPowerUnit } from "./argumentKinds.js";
 
 /** Uncertainties functions, in the order of their declarations. */
 export const errors: FunctionDef[] = [
@@ -53,7 +53,7 @@ export const errors: FunctionDef[] = [
     name: "LUMINOSITY_REST_ERR",
     args: [
       amount("flux_density"), err("flux_density_err"), z, err("z_err"), num("alpha"), err("alpha_err"), num("observed"), num("rest"), model,
-      optionalText("band_unit"), unit("in_unit", "Jy", "Jy", ["flux_density", "flux_density_err"]), optionalText("out_unit"),
+      textUnit("band_unit", "GHz", ["observed", "rest"]), unit("in_unit", "Jy", "Jy", ["flux_density", "flux_density_err"]), textUnit("out_unit", "W/Hz"),
     ],
     compute: (a) => {
       const band = (a.band_unit as string) || "GHz";

@@ -29,7 +29,7 @@ import {
 import { CellError } from "../cellError.js";
 import type { Args, FunctionDef } from "../FunctionDef.js";
 import { messages } from "../messages.js";
-import { num, amount, mag, model, unit, z, optionalAlpha, isGiven, optionalText, m, n, inSpectralOrPowerUnit } from "./argumentKinds.js";
+import { num, amount, mag, model, unit, z, optionalAlpha, isGiven, textUnit, m, n, inSpectralOrPowerUnit } from "./argumentKinds.js";
 
 /** The optional wavelength [Å] of a per-wavelength flux density (MAG_AB, FLUX_AB): NaN when not given. */
 const fluxDensityWavelength = num("wavelength", { default: Number.NaN, blankMeansDefault: true, min: 0, minExclusive: true });
@@ -91,13 +91,13 @@ export const photometry: FunctionDef[] = [
   },
   {
     name: "MAG_AB",
-    args: [num("flux_density", { min: 0, minExclusive: true }), optionalText("unit"), fluxDensityWavelength],
+    args: [num("flux_density", { min: 0, minExclusive: true }), textUnit("unit", "Jy", ["flux_density"]), fluxDensityWavelength],
     compute: (a) => abMagnitude(n(a, "flux_density") * unitFactorJy(a)),
     kernel: { arg: "flux_density", of: (a, x) => abMagnitude(x * unitFactorJy(a)) },
   },
   {
     name: "FLUX_AB",
-    args: [mag("m_ab"), optionalText("unit"), fluxDensityWavelength],
+    args: [mag("m_ab"), textUnit("unit", "Jy"), fluxDensityWavelength],
     compute: (a) => abFluxDensityJy(n(a, "m_ab")) / unitFactorJy(a),
     kernel: { arg: "m_ab", of: (a, x) => abFluxDensityJy(x) / unitFactorJy(a) },
   },
@@ -105,7 +105,7 @@ export const photometry: FunctionDef[] = [
     name: "LUMINOSITY_REST",
     args: [
       amount("flux_density"), z, num("alpha"), num("observed"), num("rest"), model,
-      optionalText("band_unit"), unit("in_unit", "Jy", "Jy", "flux_density"), optionalText("out_unit"),
+      textUnit("band_unit", "GHz", ["observed", "rest"]), unit("in_unit", "Jy", "Jy", "flux_density"), textUnit("out_unit", "W/Hz"),
     ],
     compute: (a) => {
       const band = (a.band_unit as string) || "GHz";

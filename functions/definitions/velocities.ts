@@ -20,7 +20,7 @@ import {
 } from "../../core/index.js";
 import type { Args, ArgSpec, FunctionDef } from "../FunctionDef.js";
 import { messages } from "../messages.js";
-import { n, num, optionalText, unit } from "./argumentKinds.js";
+import { n, num, textUnit, unit } from "./argumentKinds.js";
 
 /** A redshift of a source that may be blueshifted: > −1. */
 const anyRedshift = (name: string) => num(name, { min: -1, minExclusive: true });
@@ -54,7 +54,7 @@ function checkUnit(a: Args): RestFrameQuantity {
   return quantity;
 }
 
-const restFrameArgs: ArgSpec[] = [num("value"), anyRedshift("z"), { kind: "text", name: "quantity", choices: restFrameQuantities }, optionalText("unit")];
+const restFrameArgs: ArgSpec[] = [num("value"), anyRedshift("z"), { kind: "text", name: "quantity", choices: restFrameQuantities }, textUnit("unit", undefined, ["value"])];
 
 /** Velocity and rest-frame functions, in the order of their declarations. */
 export const velocities: FunctionDef[] = [
