@@ -128,11 +128,10 @@ function readArg(
         return spec.default;
       }
       if (typeof value === "string") {
-        // text that reads as a number is one (as Excel's own functions read it), except in a right
-        // ascension, where a bare number could be hours or degrees: the position reader refuses it
+        // text that reads as a number is one (as Excel's own functions read it), in a position too:
+        // degrees, or the angle unit given ("12" in a right ascension is 12°, "12h" is 12 hours)
         const text = value.trim();
-        const readsAsNumber = isNumberText(text) && spec.sexagesimal !== "either" && !(spec.sexagesimal && positionPart(spec, conversion?.part) === "ra");
-        if (readsAsNumber) return readNumber(spec, Number(text), conversion);
+        if (isNumberText(text)) return readNumber(spec, Number(text), conversion);
         if (spec.sexagesimal) return readPosition(spec, value, conversion?.part);
       }
       return new CellError("value", messages.notANumber(spec.name, value));

@@ -35,8 +35,7 @@ export function positionPart(spec: NumberSpec, decided: AnglePart | undefined): 
 /**
  * A text's degrees when it reads as a position of the part, else NaN: the quick way for a column
  * of positions, where only a cell that does not read goes the long way (an error's words, and number
- * text, which is a number in the argument's angle unit as one cell alone reads it, or refused in a
- * right ascension).
+ * text, which is a number in the argument's angle unit, as one cell alone reads it).
  */
 export function positionOrNaN(text: string, part: AnglePart): number {
   if (isNumberText(text.trim())) return Number.NaN;

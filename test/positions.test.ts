@@ -47,6 +47,7 @@ describe("sexagesimal text is read as the trade writes it", () => {
     ["187d42m21s",      "ra",   187 + 42 / 60 + 21 / 3600,         "an RA marked in degrees stays degrees"],
     ["12.5d",           "ra",   12.5,                              "a single number marked d is degrees"],
     ["12.5h",           "ra",   187.5,                             "a single number marked h is hours"],
+    ["12.5",            "ra",   12.5,                              "a single unmarked number is decimal degrees, in a right ascension too"],
     ["12.5",            "dec",  12.5,                              "a single unmarked number is decimal degrees"],
     ["12:30",           "ra",   187.5,                             "hours and minutes"],
     ["+12:23:28",       "dec",  12 + 23 / 60 + 28 / 3600,          "degrees, arcminutes, arcseconds"],
@@ -82,8 +83,6 @@ describe("sexagesimal text is read as the trade writes it", () => {
     ["abc",            "dec",  'has "a" where a number belongs; write degrees as +12:23:28, -05d07m or −05°07′'],
     ["",               "ra",   '"" is not an angle'],
     ["400d",           "ra",   "is 400°: a right ascension is below 360°"],
-    ["12",             "ra",   'ra: "12" could be hours or degrees: in a right ascension write "12h" for hours or "12d" for degrees (a number that is not text is degrees)'],
-    ["187.5",          "ra",   'ra: "187.5" could be hours or degrees: in a right ascension write "187.5h" for hours or "187.5d" for degrees'],
   ] as const)("%s (%s) is refused: %s", (text, part, message) => {
     expect(() => sexagesimalDegrees(text, part)).toThrow(TypeError);
     expect(() => sexagesimalDegrees(text, part)).toThrow(message);
@@ -296,8 +295,6 @@ describe("the sheet: text in every position argument, ranges, blanks and errors"
     [["REDSHIFT_CMB", 0.1, 10, 95],                     "num",   "ZC.REDSHIFT_CMB: dec = 95° is beyond ±90°: a declination is −90° … +90°"],
     [["REDSHIFT_CMB", 0.1, 10, -2, "rad"],              "num",   "ZC.REDSHIFT_CMB: dec = -2 rad is beyond ±90°: a declination is −90° … +90°"],
     [["COORD_CONVERT", 10, -91, "galactic", "equatorial", "lon"], "num", "ZC.COORD_CONVERT: lat = -91° is beyond ±90°: a latitude is −90° … +90°"],
-    [["COORD_DEG", "12", "ra"],                         "value", 'ZC.COORD_DEG: text: "12" could be hours or degrees: in a right ascension write "12h" for hours or "12d" for degrees (a number that is not text is degrees)'],
-    [["SEPARATION", "12", 0, 0, 0],                     "value", 'ZC.SEPARATION: ra1: "12" could be hours or degrees: in a right ascension write "12h" for hours or "12d" for degrees (a number that is not text is degrees)'],
     [["REDSHIFT_CMB", 0.1, "25:00:00", 10],             "value", 'ZC.REDSHIFT_CMB: ra: "25:00:00" has hours 25: a right ascension is below 24h (mark degrees with d or °)'],
     [["COORD_CONVERT", 10, 10, "fk5", "galactic", "lon"], "value", 'ZC.COORD_CONVERT: from_frame: "fk5" is not one of equatorial, galactic, supergalactic, ecliptic'],
     [["COORD_TEXT", 10, "dec", 12],                     "num",   "ZC.COORD_TEXT: decimals = 12 is above 9 (nine decimals)"],

@@ -8,11 +8,11 @@
  * (U+2212). A right ascension is hours unless its first field is marked d or ° (degrees); a
  * declination is always degrees. Minutes and seconds must be below 60, hours of right ascension below
  * 24, degrees of longitude below 360 and a latitude within ±90°. A single unmarked field is a decimal
- * number of degrees, except in a right ascension, where it could be hours as well as degrees and is
- * refused: "12h" or "12d" says which. Writing rounds once, on the last digit, so it never shows 60 seconds.
+ * number of degrees, in a right ascension too (as a number there is degrees): "12h" is 12 hours.
+ * Writing rounds once, on the last digit, so it never shows 60 seconds.
  */
 import { requireFiniteNumber } from "../checks/numberChecks.js";
-import { quoted, quotedText } from "../checks/quoted.js";
+import { quoted } from "../checks/quoted.js";
 
 /**
  * What an angle is: "ra" (right ascension: hours unless marked in degrees, 0 … 24h), "dec"
@@ -88,8 +88,7 @@ function hint(part: AnglePart): string {
  * @param name the argument's name for messages (default: the part)
  * @returns the angle [deg]: a right ascension or longitude in [0, 360), a declination or latitude in [−90, 90]
  * @throws TypeError naming the field at fault: text that is not an angle, two signs, minutes or
- *   seconds ≥ 60, hours ≥ 24, a signed right ascension, a right ascension that is a bare number
- *   ("12": hours or degrees?); RangeError for a declination or latitude beyond ±90°
+ *   seconds ≥ 60, hours ≥ 24, a signed right ascension; RangeError for a declination or latitude beyond ±90°
  * @example sexagesimalDegrees("12:30:49.4", "ra") // ≈ 187.7058333333
  * @example sexagesimalDegrees("−05°07′", "dec") // ≈ -5.1166666667
  */
@@ -180,11 +179,6 @@ export function sexagesimalDegrees(text: string, part: AnglePart, name: string =
     inHours = false;
   }
   if (part === "ra" && signed) fail(name, text, "has a sign: a right ascension is 0h … 24h with no sign");
-  if (part === "ra" && count === 1 && !marked) {
-    // catalogues print hours ("12 30 49.4"), so a lone "12" among them is as likely 12h as 12°
-    const number = quotedText(text.trim());
-    fail(name, text, `could be hours or degrees: in a right ascension write "${number}h" for hours or "${number}d" for degrees (a number that is not text is degrees)`);
-  }
   if (f1 >= 60) fail(name, text, `has ${inHours ? "minutes" : "arcminutes"} ${f1}: minutes and seconds must be below 60`);
   if (f2 >= 60) fail(name, text, `has ${inHours ? "seconds" : "arcseconds"} ${f2}: minutes and seconds must be below 60`);
   // in seconds first (an exact whole number plus the seconds, rounded once), then one division

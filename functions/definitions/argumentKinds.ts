@@ -3,7 +3,7 @@
  * a 1σ error, a unit, the model …), and the two accessors every `compute` uses. Each family of
  * definitions in this folder builds its arguments from these, so one kind reads alike everywhere.
  */
-import { conversionFactor, isNumberText, sexagesimalDegrees, type AnglePart, type Cosmology } from "../../core/index.js";
+import { conversionFactor, sexagesimalDegrees, type AnglePart, type Cosmology } from "../../core/index.js";
 import type { Args, ArgSpec } from "../FunctionDef.js";
 import { messages } from "../messages.js";
 
@@ -61,17 +61,12 @@ export const n = (a: Args, name: string) => a[name] as number;
 
 /**
  * A position argument whose part another argument names (`sexagesimal: "either"`), in degrees: a
- * number as read, or text read as a sexagesimal angle of the part given ("ra": hours unless marked;
- * a bare number as text is then refused, as it could be hours or degrees), or as a number of degrees.
+ * number as read (number text too), or text read as a sexagesimal angle of the part given ("ra":
+ * hours unless marked).
  */
 export function degreesOf(a: Args, name: string, part: AnglePart): number {
   const x = a[name];
-  if (typeof x === "number") return x;
-  const text = (x as string).trim();
-  if (part === "ra" || !isNumberText(text)) return sexagesimalDegrees(text, part, name);
-  const degrees = Number(text);
-  if (!Number.isFinite(degrees)) throw new RangeError(messages.notFinite(name));
-  return degrees;
+  return typeof x === "number" ? x : sexagesimalDegrees(x as string, part, name);
 }
 
 /** A unit given as text whose meaning depends on other arguments (blank: `shown`), as a factor into `reference`. */
