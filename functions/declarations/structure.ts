@@ -36,7 +36,7 @@ export function DIST_VOLUME(z: any[][], model?: any[][], unit?: string): any[][]
 }
 
 /**
- * Sound horizon at the drag epoch r_d: the fit of Aubourg et al. 2015 (eq. 16) in ω_b = Ω_b h², ω_cb and ω_ν, made for Neff = 3.046 and Tcmb = 2.7255 K; another Neff (or Tcmb within 2.72–2.73 K) scales it by the direct integral of the sound speed. Needs Ob in the model. r_d follows ω_b and ω_cb, not the fractions: "P18-CMB; H0=73" (same Ωb, Ωm) has r_d 6% smaller. #N/A outside ω_b 0.015–0.03, ω_cb 0.08–0.22, Neff 2–5, Σm_ν ≤ 1 eV. D_M/r_d, D_H/r_d and D_V/r_d are then ratios of cells.
+ * Sound horizon at the drag epoch r_d: the fit of Aubourg et al. 2015 (eq. 16) in ω_b = Ω_b h², ω_cb and ω_ν, made for Neff = 3.046 and Tcmb = 2.7255 K; another Neff (or Tcmb within 2.72–2.73 K) scales it by the direct integral of the sound speed, for another Tcmb to a drag redshift moved as 1/Tcmb (Tcmb = 2.72 K: −0.013%). Needs Ob in the model. r_d follows ω_b and ω_cb, not the fractions: "P18-CMB; H0=73" (same Ωb, Ωm) has r_d 6% smaller. #N/A outside ω_b 0.015–0.03, ω_cb 0.08–0.22, Neff 2–5, Σm_ν ≤ 1 eV. D_M/r_d, D_H/r_d and D_V/r_d are then ratios of cells.
  * @customfunction SOUND_HORIZON SOUND_HORIZON
  * @helpurl https://localhost:3000/help.html#SOUND_HORIZON
  * @example =ZC.SOUND_HORIZON()
