@@ -170,9 +170,13 @@ describe("what the help says (the recorded metadata, equal to the build's: test/
     expect(help("SPECTRAL_INDEX").description).toContain("alpha = −value, whatever its sign: a negative radio index, a rising spectrum, gives a positive alpha");
   });
 
-  test("SIGMA_CRIT says physical, and the comoving one is smaller by (1+z_l)²; GROWTH names both neutrino limits; SOUND_HORIZON its dependence on ω_b and ω_cb", () => {
+  test("SIGMA_CRIT says physical, and the comoving one is smaller by (1+z_l)²; GROWTH names both neutrino limits, its limits early on and where dark energy stops it; SOUND_HORIZON its dependence on ω_b and ω_cb", () => {
     expect(help("SIGMA_CRIT").description).toContain("mass per physical area at the lens (the default), or per comoving area, smaller by (1+z_l)²");
     expect(help("GROWTH").description).toContain('"smooth" (blank) keeps them out of the source');
+    // before the drag epoch baryons are held by the photons; the equation counts them in the source
+    expect(help("GROWTH").description).toContain("above z ≈ 1000, before the drag epoch, when they are held by the photons and do not cluster, the value is the formal solution of this equation");
+    expect(help("GROWTH_RATE").description).toContain("above z ≈ 1000 the formal solution with baryons in the source");
+    expect(help("GROWTH").description).toContain("w0 + wa above about 0.22 with radiation (P18-CMB's densities), above about −0.07 without (Tcmb = 0)");
     expect(help("SOUND_HORIZON").description).toContain('r_d follows ω_b and ω_cb, not the fractions: "P18-CMB; H0=73" (same Ωb, Ωm) has r_d 6% smaller');
     expect(param("RESCALE", "unit")).toContain("needed when it holds h = H0/100");
   });
