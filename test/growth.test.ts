@@ -173,6 +173,15 @@ describe("independence from where the integration starts", () => {
     expect(num("GROWTH_RATE", 0, "H0=70; Om=0.001; OL=0")).toBeLessThan(0.01);
   });
 
+  test("without matter nothing grows, whatever dark energy does: D = 1 and f = 0 (the equation's source is 0)", () => {
+    for (const spec of ["H0=70; Om=0; OL=0.5; w0=-0.2", "H0=70; Om=0; OL=1; w0=0.5; Tcmb=2.7255"]) {
+      for (const z of [0, 3, 1000]) {
+        expect(num("GROWTH", z, spec), spec).toBe(1);
+        expect(num("GROWTH_RATE", z, spec), spec).toBe(0);
+      }
+    }
+  });
+
   test("the start is a = 1e-8 wherever dark energy is below 1e-6 of H² there (P18-CMB and every preset: results as before, bit for bit), else the first power of ten below where it is", () => {
     // P18-CMB; w0=0: Ω_DE/Ω_r = 0.685/9.1e-5 a (ρ_DE ∝ a⁻³, ρ_r ∝ a⁻⁴) is 7.4e-5 at 1e-8, 7.4e-7 at 1e-10
     const m = Cosmology.fromSpec("P18-CMB; w0=0");

@@ -86,9 +86,10 @@ function darkEnergyShare(model: Cosmology, a: number): number {
 
 /**
  * ln a where the integration starts: 1e-8, or the first power of ten below it where dark energy is at
- * most 1e-6 of E², or 1e-30 (buildTable then refuses the model with the reason).
+ * most 1e-6 of E², or 1e-30 (buildTable then refuses the model with the reason); 1e-8 without matter.
  */
 function startLnA(model: Cosmology): number {
+  if (model.expansion.coldMatter === 0) return Math.log(Number(`1e-${latestStartPower}`)); // no source: D is constant
   for (let k = latestStartPower; k < earliestStartPower; k++) {
     const a = Number(`1e-${k}`);
     if (darkEnergyShare(model, a) <= largestDarkEnergyShareAtStart) return Math.log(a);
@@ -96,18 +97,21 @@ function startLnA(model: Cosmology): number {
   return Math.log(Number(`1e-${earliestStartPower}`));
 }
 
-/** Why a model whose dark energy is still `share` of E² at scale factor a0 has no growing mode to start on. */
+/**
+ * Why a model whose dark energy is still `share` of E² at scale factor a0 has no growing mode to start
+ * on, naming what should dominate early on (radiation, or matter in a model without radiation) and
+ * its w (1/3, 0) against w0 + wa, dark energy's w in the far past.
+ */
 function earlyDarkEnergyMessage(model: Cosmology, share: number, a0: number): string {
-  const x = model.expansion;
   const w = model.w0 + model.wa;
-  const dominant = x.Or + x.OnuMassive > 0 ? { name: "radiation", w: 1 / 3, text: "1/3" } : x.coldMatter > 0 ? { name: "matter", w: 0, text: "0" } : { name: "curvature", w: -1 / 3, text: "−1/3" };
-  const needs =
-    dominant.name === "radiation"
-      ? "linear growth needs matter and radiation to dominate H² early on, but in this model dark energy"
-      : `linear growth needs ${dominant.name} to dominate H² early on (this model has no radiation), but its dark energy`;
-  const wText = `w0 + wa = ${Number(w.toPrecision(6))} (${dominant.name}: ${dominant.text})`;
-  if (w >= dominant.w) return `${needs} grows into the past as fast as ${dominant.name} or faster: ${wText}`;
-  return `${needs} fades into the past too slowly: ${wText}, and it is still ${Number((share * 100).toPrecision(3))}% of H² at a = ${Number(a0.toPrecision(3))}`;
+  const withRadiation = model.expansion.Or + model.expansion.OnuMassive > 0;
+  const [dominant, wDominant, wText] = withRadiation ? ["radiation", 1 / 3, "1/3"] : ["matter", 0, "0"];
+  const needs = withRadiation
+    ? "linear growth needs matter and radiation to dominate H² early on, but in this model dark energy"
+    : "linear growth needs matter to dominate H² early on (this model has no radiation), but its dark energy";
+  const ws = `w0 + wa = ${Number(w.toPrecision(6))} (${dominant}: ${wText})`;
+  if (w >= wDominant) return `${needs} grows into the past as fast as ${dominant} or faster: ${ws}`;
+  return `${needs} fades into the past too slowly: ${ws}, and it is still ${Number((share * 100).toPrecision(3))}% of H² at a = ${Number(a0.toPrecision(3))}`;
 }
 
 function buildTable(model: Cosmology, neutrinos: GrowthNeutrinos, lnA0: number): GrowthTable {
@@ -127,9 +131,10 @@ function buildTable(model: Cosmology, neutrinos: GrowthNeutrinos, lnA0: number):
   const a0 = Math.exp(lnA0);
   const cold = expansion.coldMatter;
   const radiation = expansion.Ogamma + 3 * expansion.neutrinoSpeciesDensity;
-  // dark energy's share (curvature's, Ω_k a/Ω_m at most, only shrinks into the past)
+  // dark energy's share (curvature's, Ω_k a/Ω_m at most, only shrinks into the past); a model without
+  // matter has no source, and D stays constant whatever dark energy does
   const share = darkEnergyShare(model, a0);
-  if (share > largestDarkEnergyShareAtStart) throw new RangeError(earlyDarkEnergyMessage(model, share, a0));
+  if (share > largestDarkEnergyShareAtStart && cold > 0) throw new RangeError(earlyDarkEnergyMessage(model, share, a0));
   let y = cold * a0 + (2 / 3) * radiation;
   let v = cold * a0;
   if (y === 0) [y, v] = [1, 0];
