@@ -61,7 +61,7 @@ const tabled =
   "quintic Hermite tables in ln(1+z) built once per model from Gauss–Legendre panels of the exact integrals " +
   "(direct quadrature below z ≈ 0.065 and above z = 1e8); relative error ≤ 1e-10 for z ≤ 1e4, ≤ 1e-8 to 1e7";
 const closedForm = "closed form, exact to rounding";
-const growthMethod = "fourth-order Runge–Kutta in ln a from a = 1e-8 on the Mészáros growing mode, cubic Hermite between steps; relative error ≤ 1e-7";
+const growthMethod = "fourth-order Runge–Kutta in ln a from a = 1e-8 (or a power of ten below, while dark energy is above 1e-6 of H²) on the Mészáros growing mode, cubic Hermite between steps; relative error ≤ 1e-7";
 const inverse = "Newton's method on the same tables, bracketed by bisection; |Δz| ≤ 1e-9 (1+z)";
 const firstOrder = "first-order propagation of independent errors with the exact derivative dD_C/dz = D_H/E(z) (no covariances)";
 const firstCrossing = "scan upward in ln(1+z), then Newton with the exact derivative on the first crossing";
@@ -119,13 +119,13 @@ const about: Record<string, { summary: string; equation: string; method: string;
   REDSHIFT_LIMIT_MAG: { summary: "largest z at which a source stays brighter than a magnitude limit", equation: "first z with M + μ(z) + K(z) = m_lim, K = −2.5(1+α)log10(1+z)", method: firstCrossing },
   VOLUME_MAX: { summary: "V_max of the 1/V_max estimator", equation: "V_C between max(z_lo, z_min) and min(z_max, z_hi) over the area, 0 if that range is empty", method: tabled },
   LUMINOSITY_FUNCTION: { summary: "binned luminosity function by 1/V_max", equation: "Φ = Σ(1/V_max)/Δbin, σ_Φ = √Σ(1/V_max²)/Δbin (Schmidt 1968; Felten 1976)", method: closedForm },
-  CHI2_MODULUS: { summary: "χ² of a Hubble diagram against the model", equation: "Σ((μ − μ_model(z) − offset)/σ)²; free offset: A − B²/C (Goliath et al. 2001)", method: tabled },
+  CHI2_MODULUS: { summary: "χ² of a Hubble diagram against the model", equation: "Σ((μ − μ_model(z) − offset)/σ)²; free offset: Σw(Δ − Δ̄)², Δ̄ the weighted mean of Δ = μ − μ_model (= A − B²/C, Goliath et al. 2001)", method: tabled },
   REDSHIFT_CMB: { summary: "redshift in the CMB frame", equation: "1+z_cmb = (1+z_helio)/(γ(1 − β·cos θ)), v = 369.82 km/s to (l, b) = (264.021°, 48.253°)", method: closedForm },
   SPECTRAL_INDEX: { summary: "a spectral index as α of S_ν ∝ ν^α", equation: "photon: α = 1 − Γ; lambda: α = −2 − β (f_λ ∝ λ^β); radio: α = −value", method: closedForm },
   DIMMING: { summary: "surface-brightness dimming", equation: "10·log10(1+z) bolometric; 2.5·(3 − α)·log10(1+z) per unit frequency", method: closedForm },
   DIST_HUBBLE: { summary: "Hubble distance at z (radial BAO distance)", equation: "D_H(z) = c/H(z)", method: closedForm },
   DIST_VOLUME: { summary: "volume-averaged distance (isotropic BAO distance)", equation: "D_V = [z·D_M²·c/H(z)]^(1/3) (Eisenstein et al. 2005)", method: tabled },
-  SOUND_HORIZON: { summary: "sound horizon at the drag epoch", equation: "r_d = 55.154·exp(−72.3(ω_ν + 0.0006)²)/(ω_cb^0.25351·ω_b^0.12807) Mpc (Aubourg et al. 2015 eq. 16), × ∫c_s dz/H of the model over that with Neff = 3.046, Tcmb = 2.7255 K (same z_d)", method: "fit to a Boltzmann code, about 0.02% for the standard Neff; another Neff through the direct integral" },
+  SOUND_HORIZON: { summary: "sound horizon at the drag epoch", equation: "r_d = 55.154·exp(−72.3(ω_ν + 0.0006)²)/(ω_cb^0.25351·ω_b^0.12807) Mpc (Aubourg et al. 2015 eq. 16), × ∫c_s dz/H of the model over that with Neff = 3.046, Tcmb = 2.7255 K (z_d moved as 1/Tcmb)", method: "fit to a Boltzmann code, about 0.02% for the standard Neff; another Neff or Tcmb through the direct integral" },
   SIGMA_CRIT: { summary: "critical surface density of a thin lens", equation: "Σ_cr = c²·D_s/(4πG·D_l·D_ls), angular-diameter distances, per physical area; comoving: Σ_cr/(1+z_l)²", method: tabled },
   OVERDENSITY: { summary: "overdensity of a halo definition relative to ρ_crit(z)", equation: "Δ = N (Nc), N·Ωm(z) (Nm), 18π² + 82x − 39x², x = Ωm(z) − 1 (vir, Bryan & Norman 1998)", method: closedForm },
   HALO_RADIUS: { summary: "halo radius at mean density Δ·ρ_crit(z)", equation: "R = (3M/(4π·Δ·ρ_crit(z)))^(1/3)", method: closedForm },
