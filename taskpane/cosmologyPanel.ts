@@ -14,7 +14,7 @@ import { changedFields, derivedValues, formFields, formFromSpec, formGroups, mod
 
 const fieldLabels: Record<(typeof formFields)[number], string> = {
   H0: "H0 (km/s/Mpc)", Om: "Om (matter incl. ν)", OL: "OL (or “flat”)", w0: "w0", wa: "wa",
-  Tcmb: "Tcmb (K; 0 = no radiation)", Neff: "Neff", mnu: "mnu (eV, or list)", Ob: "Ob (optional)",
+  Tcmb: "Tcmb (K; 0 = no radiation)", Neff: "Neff", mnu: "mnu (eV, or list)", Ob: "Ob (optional; used by SOUND_HORIZON only)",
 };
 
 let currentSpec: string | undefined;

@@ -29,7 +29,7 @@ function cellsOf(selection: { address: string; formulas: unknown[][]; values: un
 function undoSentence(): string {
   return undoGroupSupported()
     ? "Undo: Excel's Undo (Ctrl+Z / ⌘Z) reverts a replacement in one step here; Restore formulas below works at any time, in any Excel."
-    : "Undo: this Excel cannot record an add-in's changes as one undo step (that needs ExcelApi 1.20), so do not count on Ctrl+Z; Restore formulas below brings the formulas back.";
+    : "Undo: this version of Excel cannot record an add-in's changes as one undo step (newer versions can), so do not count on Ctrl+Z; Restore formulas below brings the formulas back.";
 }
 
 /** Wires Freeze (with its confirmation) and Thaw. */
@@ -158,7 +158,7 @@ function setupThaw(): void {
       if (restoring.length === 0) {
         thawStatus.textContent = refused.length
           ? `Nothing to restore:${refusedText}`
-          : "The selection has no cells that zcell replaced with values (cells with the note zcell writes then).";
+          : "The selection has no cells that zcell replaced with values: such a cell carries a note that begins \"Replaced with its value by zcell\" (or \"Frozen by zcell\" from zcell 0.1 and 0.2).";
         return;
       }
       pending = { sheet, cells: restoring };

@@ -124,6 +124,56 @@ describe("cell inspector", () => {
     }
   });
 
+  test("a restatement between two models shows each: From model and To model, and its result is under the To model", async () => {
+    const active = { spec: "P18-CMB", stored: false };
+    const [call] = await explainFormula('=ZC.RESCALE(3.2E44,0.84,"luminosity","W9-ALL","EDS")', async () => [[""]], active);
+    expect(call.model).toBeUndefined(); // no one model computed it
+    expect(call.modelArgs!.map((m) => [m.label, m.argument, m.model!.spec, m.model!.source])).toEqual([
+      ["From model", "from_model", "W9-ALL", "given in the formula"],
+      ["To model", "to_model", "EDS", "given in the formula"],
+    ]);
+    expect(call.modelArgs![1].model!.description).toMatch(/^flat: matter only; H0 = 70 km\/s\/Mpc/);
+    expect(call.conventions).toContain("Radiation off (Tcmb = 0): no photons, no neutrinos."); // EDS's, the model the result is under
+    // (D_L,EDS / D_L,W9-ALL)² at z = 0.84: EDS from its closed form (Hogg 1999 eq. 16, Ωm = 1), W9-ALL from the independent slow path (Hinshaw et al. 2013 Table 4)
+    const eds = (1 + 0.84) * 2 * (299_792.458 / 70) * (1 - 1 / Math.sqrt(1.84));
+    const w9 = new SlowCosmology(publishedModels["W9-ALL"]).luminosityDistanceMpc(0.84);
+    expectRelative(Number((call.exact ?? call.result).split(" ")[0]), 3.2e44 * (eds / w9) ** 2, 1e-9, "RESCALE luminosity");
+    // a blank to_model is the workbook's, said so
+    const [blank] = await explainFormula('=ZC.RESCALE(3.2E44,0.84,"luminosity","W9-ALL")', async () => [[""]], active);
+    expect(blank.modelArgs![1].model).toMatchObject({ spec: "P18-CMB", source: "the workbook's model" });
+  });
+
+  test.each([
+    // formula                                              the result's unit, as the pane shows it
+    ["=ZC.CMB_TEMP(1100)",                                  "K"],
+    ["=ZC.MODULUS(0.1)",                                    "mag"],
+    ["=ZC.EXTINCTION(5500,0.1)",                            "mag"],
+    ["=ZC.COORD_DEG(\"14:05:12.3\",\"ra\")",                "deg"],
+    ["=ZC.PARAM(\"age_today\")",                            "Gyr"],
+    ["=ZC.PARAM(\"H0\")",                                   "km/s/Mpc"],
+    ["=ZC.PARAM(\"Om\")",                                   ""],
+    ["=ZC.OBSERVED_FRAME(1.4,0.05,\"frequency\",\"GHz\")",  "GHz"],
+    ["=ZC.REST_FRAME(7200,0.1,\"wavelength\")",             "(in the value's own unit)"],
+    ["=ZC.LUMINOSITY_REST(2.5,1.1,-0.7,3,1.4,,,\"mJy\")",     "W/Hz"],
+    ["=ZC.LUMINOSITY_REST(2.5,1.1,-0.7,3,1.4,,,\"mJy\",\"Lsun\")", "Lsun"],
+    ["=ZC.FLUX_AB(20)",                                     "Jy"],
+    ["=ZC.CONVERT(1,\"Mpc\",\"Gly\")",                        "Gly"],
+    ["=ZC.RESCALE(-21,0.5,\"magnitude\",\"W9-ALL\")",         "mag"],
+    ["=ZC.BRIGHTNESS_TEMP(50,8.4,2,1,,\"mJy\",,\"mas\")",     "K"],
+    ["=ZC.INDEX_BETWEEN(12.4,1.4,3.1,5)",                   ""],
+  ])("%s: the Result row shows the unit %s", async (formula, unit) => {
+    const [call] = await explainFormula(formula, async () => [[""]], { spec: "P18-CMB", stored: false });
+    expect(call.isError, call.result).toBe(false);
+    expect(call.result).toMatch(new RegExp(`^-?[\\d.]+(?:e[+-]\\d+)?${unit ? ` ${unit.replace(/[()/]/g, "\\$&")}` : ""}$`));
+  });
+
+  test("an omitted text argument shows the default it stands for, as the help does", async () => {
+    const [call] = await explainFormula("=ZC.INDEX_BETWEEN(12.4,1.4,3.1,5)", async () => [[""]], { spec: "P18-CMB", stored: false });
+    expect(call.args.find((a) => a.name === "band_unit")!.value).toBe('default "GHz"');
+    const [dimming] = await explainFormula("=ZC.DIMMING(1)", async () => [[""]], { spec: "P18-CMB", stored: false });
+    expect(dimming.args.find((a) => a.name === "alpha")!.value).toBe("left out: bolometric");
+  });
+
   test("a unit that applies to a value and its error is shown beside both", async () => {
     const [call] = await explainFormula('=ZC.SIZE_ERR(2,0.1,1,0.01)', async () => [[""]], { spec: "P18-BAO", stored: false });
     expect(call.args.filter((a) => a.unit === "arcsec").map((a) => a.name)).toEqual(["angle", "angle_err"]);
@@ -233,7 +283,9 @@ describe("the inspector at one cell of a spilled result: the model and the argum
   ] as const)("a what-if table at row %i, column %i: z = %s under %s", async (row, col, z, model, modelCell) => {
     const [call] = await explainFormula(table, sheet1(cells), active, undefined, { row, col });
     expect(call.model).toMatchObject({ spec: model, source: "given in the formula", where: `${modelCell} for this cell` });
-    expect(call.model!.description.startsWith(`${model}: `)).toBe(true);
+    // the description follows the name the row shows already, without repeating it
+    expect(call.model!.description).toMatch(/^flat: matter/);
+    expect(call.model!.description.startsWith(model)).toBe(false);
     expect(call.models).toEqual(["EDS", "W9-ALL"]);
     expect(call.args[0].value).toBe(`${z} (Sheet1!A${2 + row} for this cell)`);
     expect(call.args[1].value).toBe(`"${model}" (${modelCell} for this cell)`);

@@ -266,9 +266,9 @@ describe("the sound horizon", () => {
     expectRelative(num("SOUND_HORIZON", "H0=70; Om=0.3; Ob=0.045; Tcmb=2.7255; mnu=0.06", "Mpc/h"), expected * h, 1e-14, "in Mpc/h");
   });
 
-  test("a model without Ob is #N/A saying so", () => {
+  test("a model without Ob is #N/A saying so, with that model and Ob as the way out", () => {
     const cell = failure("SOUND_HORIZON", "H0=70; Om=0.3");
     expect(cell.kind).toBe("na");
-    expect(cell.message).toBe("ZC.SOUND_HORIZON: the sound horizon needs the baryon density: give Ob in the model (e.g. P18-CMB; Ob=0.049)");
+    expect(cell.message).toBe('ZC.SOUND_HORIZON: the sound horizon needs the baryon density: add Ob to the model, e.g. "H0=70; Om=0.3; Ob=0.049"');
   });
 });

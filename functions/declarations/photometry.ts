@@ -134,7 +134,7 @@ export function FLUX_AB(m_ab: any[][], unit?: string, wavelength?: any[][]): any
  * @customfunction LUMINOSITY_REST LUMINOSITY_REST
  * @helpurl https://localhost:3000/help.html#LUMINOSITY_REST
  * @example =ZC.LUMINOSITY_REST(2.5, 1.1, -0.7, 3, 1.4, , , "mJy")
- * @param flux_density Flux density observed at `observed`, ≥ 0 (value or range), in Jy unless in_unit says otherwise (catalogues in mJy: give "mJy").
+ * @param flux_density Flux density at the observed band (the argument observed), ≥ 0 (value or range), in Jy unless in_unit says otherwise (catalogues in mJy: give "mJy").
  * @param z Redshift, > 0 (value or range).
  * @param alpha Spectral index: S_ν ∝ ν^alpha; synchrotron ≈ −0.7; other conventions via ZC.SPECTRAL_INDEX (value or range).
  * @param observed Observed frequency, wavelength or energy, > 0, in band_unit (value or range).

@@ -20,13 +20,13 @@ import {
 } from "../../core/index.js";
 import type { Args, ArgSpec, FunctionDef } from "../FunctionDef.js";
 import { messages } from "../messages.js";
-import { n, num, optionalText, unit } from "./argumentKinds.js";
+import { n, num, optionalText, textOr, textWithDefault, unit } from "./argumentKinds.js";
 
 /** A redshift of a source that may be blueshifted: > −1. */
 const anyRedshift = (name: string) => num(name, { min: -1, minExclusive: true });
 /** The Doppler convention: blank means "optical" (cz). */
-const convention: ArgSpec = { kind: "text", name: "convention", choices: dopplerConventions, optional: true };
-const conventionOf = (a: Args) => (a.convention as DopplerConvention | undefined) ?? "optical";
+const convention = textWithDefault("convention", "optical", { choices: dopplerConventions });
+const conventionOf = (a: Args) => textOr(a, convention) as DopplerConvention;
 
 /**
  * Each rest-frame quantity's units of reference (any unit of the same kind as one of them may be given)
@@ -71,7 +71,7 @@ function checkUnit(a: Args): RestFrameQuantity {
   return quantity;
 }
 
-const restFrameArgs: ArgSpec[] = [num("value"), anyRedshift("z"), { kind: "text", name: "quantity", choices: restFrameQuantities }, optionalText("unit")];
+const restFrameArgs: ArgSpec[] = [num("value"), anyRedshift("z"), { kind: "text", name: "quantity", choices: restFrameQuantities }, optionalText("unit", { words: "not checked: the value keeps its own unit" })];
 
 /** Velocity and rest-frame functions, in the order of their declarations. */
 export const velocities: FunctionDef[] = [
