@@ -176,9 +176,9 @@ describe("an OL or Ok that is only the rounding of the others' sum is 0 (|value|
 
   test.each([
     // spec                         | geometry and contents in words
-    ["H0=70; Om=1.2; Ok=-0.2",        "closed: matter only; H0 = 70 km/s/Mpc; Om = 1.2 (matter incl. massive ν); OL = 0; Ok = -0.2;"],
-    ["H0=70; Om=2.2; Ok=-1.2",        "closed: matter only; H0 = 70 km/s/Mpc; Om = 2.2 (matter incl. massive ν); OL = 0; Ok = -1.2;"],
-    ["H0=70; Om=0.7; OL=0.3",         "flat: matter + Λ; H0 = 70 km/s/Mpc; Om = 0.7 (matter incl. massive ν); OL = 0.3; Ok = 0;"],
+    ["H0=70; Om=1.2; Ok=-0.2",        "closed: matter only; H0 = 70 km/s/Mpc; Om = 1.2 (matter); OL = 0; Ok = -0.2;"],
+    ["H0=70; Om=2.2; Ok=-1.2",        "closed: matter only; H0 = 70 km/s/Mpc; Om = 2.2 (matter); OL = 0; Ok = -1.2;"],
+    ["H0=70; Om=0.7; OL=0.3",         "flat: matter + Λ; H0 = 70 km/s/Mpc; Om = 0.7 (matter); OL = 0.3; Ok = 0;"],
   ])("ZC.DESCRIBE of %s says %s", (spec, words) => {
     expect(describeModel(Cosmology.fromSpec(spec))).toContain(`${spec}: ${words}`);
   });
