@@ -340,6 +340,22 @@ describe("stored settings: whatever they hold, a bounded reading and a plain war
     expect(message.length).toBeLessThan(300);
   });
 
+  test(`the first ${maxWorkbookModels} stored entries are read, usable or not: 5,000 valid names with specs that do not parse cost ${maxWorkbookModels} readings`, () => {
+    const entries: Record<string, string> = {};
+    for (let i = 0; i < 5_000; i++) entries[`M${i}`] = `H0=${"1".repeat(480)}x; Om=0.3`;
+    let specsRead = 0;
+    const stored = new Proxy(entries, {
+      get: (target, key, receiver) => {
+        if (typeof key === "string") specsRead++;
+        return Reflect.get(target, key, receiver);
+      },
+    });
+    const models = readWorkbookModels(stored);
+    expect(specsRead).toBe(maxWorkbookModels); // was 5,000: only usable entries counted toward the cap
+    expect(models.specs.size).toBe(0);
+    expect(models.problems.at(-1)).toBe(`only the first ${maxWorkbookModels} workbook models are read; 4900 more are left out`);
+  });
+
   test("two models whose names differ only in case: the one stored last is read, and the pane is told", () => {
     const models = readWorkbookModels({ Team: "W9-ALL", OTHER: "P18-CMB; H0=70", TEAM: "P18-BAO; H0=73" });
     expect([...models.specs]).toEqual([["TEAM", "P18-BAO; H0=73"], ["OTHER", "P18-CMB; H0=70"]]);
@@ -423,7 +439,7 @@ describe("the inspector on a long formula", () => {
     const before = cachedModelCount();
     const reads: string[] = [];
     const t0 = performance.now();
-    const calls = await explainFormula(formula, async (reference) => (reads.push(reference), [[0.5]]), { spec: "P18-BAO", stored: false });
+    const calls = await explainFormula(formula, async (reference) => (reads.push(reference), { cells: 1, values: [[0.5]] }), { spec: "P18-BAO", stored: false });
     const ms = performance.now() - t0;
     console.log(`inspector: ${calls.length} calls explained in ${ms.toFixed(0)} ms`);
     expect(calls.length).toBe(154);
