@@ -18,10 +18,10 @@ import { resolvedSpec } from "../functions/workbookModels.js";
 import { formatValue } from "../functions/messages.js";
 import { parentsOf, placeIn, placeWords, within, type CellPlace } from "./broadcastPlace.js";
 import { findCalls, type FormulaCall } from "./formulaCalls.js";
-import { cellName, cut, firstOf, inspectorReadLimit, matrixOf, readArgument, showValue, type ReadArgument, type ReferenceRead } from "./readArgument.js";
+import { cellName, cut, firstOf, inspectorReadLimit, matrixOf, readArgument, showValue, type ReadArgument, type ReferenceRead, type ReferenceReader } from "./readArgument.js";
 
 export { inspectorReadLimit } from "./readArgument.js";
-export type { ReferenceRead } from "./readArgument.js";
+export type { ReferenceRead, ReferenceReader } from "./readArgument.js";
 
 /** One explained call, for the selected cell: the arguments' values and the model of that cell. */
 export interface CallExplanation {
@@ -50,12 +50,6 @@ export interface CallExplanation {
   /** For an error: the argument its message is about (its formula text and value), and how to fix it. */
   fault?: { argument?: string; text?: string; value?: string; fix: string };
 }
-
-/**
- * Reads the values behind a reference written in a formula (e.g. "B2", "'Sheet 2'!A1:A9", a defined
- * name), or only its size when it holds more than `maxCells` cells (a bare matrix stands for values).
- */
-export type ReferenceReader = (reference: string, maxCells: number) => Promise<unknown[][] | ReferenceRead>;
 
 const tabled =
   "quintic Hermite tables in ln(1+z) built once per model from Gauss–Legendre panels of the exact integrals " +
@@ -302,7 +296,7 @@ export async function explainFormula(
   const readOnce = new Map<string, Promise<ReferenceRead>>(); // a reference named by several calls is read once
   const read = (reference: string) => {
     let got = readOnce.get(reference);
-    if (!got) readOnce.set(reference, (got = readReference(reference, inspectorReadLimit).then((r) => (Array.isArray(r) ? { values: r } : r))));
+    if (!got) readOnce.set(reference, (got = readReference(reference, inspectorReadLimit)));
     return got;
   };
   const nested = new Map<string, Cell[][]>();

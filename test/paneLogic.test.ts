@@ -110,11 +110,14 @@ describe("provenance and contrast", () => {
   });
 });
 
+/** A reader for which every reference is one blank cell. */
+const blanks: ReferenceReader = async () => ({ cells: 1, values: [[""]] });
+
 describe("cell inspector", () => {
   test("explains every worksheet function: a summary, an equation and a method for each", async () => {
     const active = { spec: "P18-BAO", stored: false };
     for (const name of Object.keys(definitions)) {
-      const [call] = await explainFormula(`=ZC.${name}()`, async () => [[""]], active);
+      const [call] = await explainFormula(`=ZC.${name}()`, blanks, active);
       expect(call.summary, name).not.toBe("");
       expect(call.equation, name).not.toBe("");
       expect(call.method, name).not.toBe("");
@@ -125,7 +128,7 @@ describe("cell inspector", () => {
   });
 
   test("a unit that applies to a value and its error is shown beside both", async () => {
-    const [call] = await explainFormula('=ZC.SIZE_ERR(2,0.1,1,0.01)', async () => [[""]], { spec: "P18-BAO", stored: false });
+    const [call] = await explainFormula('=ZC.SIZE_ERR(2,0.1,1,0.01)', blanks, { spec: "P18-BAO", stored: false });
     expect(call.args.filter((a) => a.unit === "arcsec").map((a) => a.name)).toEqual(["angle", "angle_err"]);
     expect(call.result).toMatch(/ kpc$/);
   });
@@ -148,7 +151,7 @@ describe("an error explained: the argument at fault and how to fix it", () => {
     ['=ZC.REDSHIFT(1E5,"DIST_ANG")',                         undefined, undefined,    /^No value answers these arguments in this model/],
   ];
   test.each(cases)("%s", async (formula, argument, text, fix) => {
-    const [call] = await explainFormula(formula, async () => [[""]], active);
+    const [call] = await explainFormula(formula, blanks, active);
     expect(call.isError).toBe(true);
     expect(call.fault?.argument).toBe(argument);
     expect(call.fault?.text).toBe(text);
@@ -156,28 +159,28 @@ describe("an error explained: the argument at fault and how to fix it", () => {
   });
 
   test("a cell whose arguments only Excel computes gets the advice of its error kind", async () => {
-    const [call] = await explainFormula("=ZC.DIST_LUM(SUM(A1:A3))", async () => [[""]], active, "#NUM!");
+    const [call] = await explainFormula("=ZC.DIST_LUM(SUM(A1:A3))", blanks, active, "#NUM!");
     expect(call.fault).toEqual({ fix: "A value lies outside its physical domain, or the result does: the message says which." });
   });
 
   test("a cell's shown value is a stranger's text: only Excel's own error values get advice", async () => {
     // hostile values a workbook can hold in a cell (object-property names, look-alikes, a huge text)
     for (const shown of ["constructor", "__proto__", "toString", "#num!", "#NUM! ", "#N/A".repeat(10_000)]) {
-      const [call] = await explainFormula("=ZC.DIST_LUM(SUM(A1:A3))", async () => [[""]], active, shown);
+      const [call] = await explainFormula("=ZC.DIST_LUM(SUM(A1:A3))", blanks, active, shown);
       expect(call.fault, JSON.stringify(shown).slice(0, 20)).toBeUndefined();
     }
   });
 
   test("a hostile model text in the formula is quoted, cut, and still named as the argument at fault", async () => {
     const hostile = `${"(((((a+)+)+)+".repeat(5_000)}; H0=model:`;
-    const [call] = await explainFormula(`=ZC.DIST_LUM(1,"${hostile}")`, async () => [[""]], active);
+    const [call] = await explainFormula(`=ZC.DIST_LUM(1,"${hostile}")`, blanks, active);
     expect(call.isError).toBe(true);
     expect(call.fault?.argument).toBe("model");
     expect(call.result.length).toBeLessThan(400); // the message quotes at most 40 characters of it
   });
 
   test("a value that is not an error has no advice", async () => {
-    const [call] = await explainFormula("=ZC.DIST_LUM(1)", async () => [[""]], active);
+    const [call] = await explainFormula("=ZC.DIST_LUM(1)", blanks, active);
     expect(call.fault).toBeUndefined();
   });
 });
@@ -208,7 +211,8 @@ function sheet1(cells: Record<string, unknown[][]>, reads: [string, number][] = 
   return async (reference, maxCells) => {
     reads.push([reference, maxCells]);
     if (!(reference in cells)) throw new Error(`no reference ${reference}`);
-    return { address: `Sheet1!${reference.replaceAll("$", "")}`, values: cells[reference] };
+    const values = cells[reference];
+    return { address: `Sheet1!${reference.replaceAll("$", "")}`, cells: values.length * values[0].length, values };
   };
 }
 
