@@ -78,7 +78,7 @@ function oneCell(def: FunctionDef, call: CallArguments): Cell {
 /** Every cell of a call over ranges: the single-cell arguments fixed in `args`, the ranges broadcast. */
 function allCells(def: FunctionDef, call: CallArguments, seen: { error: boolean }): Cell[][] {
   const { rows, cols, args, problem, ranges, resultFactor, h } = call;
-  let named: Map<CellError, CellError> | undefined;
+  let named: Map<string, CellError> | undefined;
   const shown = (cell: Cell): Cell => {
     if (!(cell instanceof CellError)) return cell;
     seen.error = true;
@@ -107,6 +107,7 @@ function allCells(def: FunctionDef, call: CallArguments, seen: { error: boolean 
     const of = kernel.of;
     const column = ranges[0];
     const numbers = column.numbers!;
+    let notFinite: CellError | undefined; // one for every cell whose result is not a finite number
     for (let r = 0; r < rows; r++) {
       const x = numbers[r];
       const value = x === x ? x : column.others.get(r);
@@ -118,7 +119,7 @@ function allCells(def: FunctionDef, call: CallArguments, seen: { error: boolean 
           out[r] = [shown(classify(e, def.name))];
           continue;
         }
-        out[r] = [v - v === 0 ? (v === 0 ? 0 : v) : shown(new CellError("num", messages.notFiniteResult(def.name)))];
+        out[r] = [v - v === 0 ? (v === 0 ? 0 : v) : shown((notFinite ??= new CellError("num", messages.notFiniteResult(def.name))))];
       } else if (value instanceof CellError || value === blank) {
         out[r] = [shown(value)];
       } else {
@@ -212,10 +213,20 @@ function cleanNumber(x: number, fn: string): number | CellError {
   return x === 0 ? 0 : x;
 }
 
-/** Cells as Excel takes them: CellErrors become the host's error values. */
+/**
+ * Cells as Excel takes them: CellErrors become the host's error values, one for each CellError (the
+ * cells that show one error share its value: each still reads that error's code and message).
+ */
 function forHost(cells: unknown[][]): unknown[][] {
+  const converted = new Map<CellError, unknown>();
   for (const row of cells) {
-    for (let c = 0; c < row.length; c++) if (row[c] instanceof CellError) row[c] = toHostError(row[c] as CellError);
+    for (let c = 0; c < row.length; c++) {
+      const cell = row[c];
+      if (!(cell instanceof CellError)) continue;
+      let value = converted.get(cell);
+      if (value === undefined) converted.set(cell, (value = toHostError(cell)));
+      row[c] = value;
+    }
   }
   return cells;
 }

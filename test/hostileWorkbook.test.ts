@@ -448,3 +448,26 @@ describe("the inspector on a long formula", () => {
     expect(reads.sort()).toEqual(["A1", "A2"]);
   });
 });
+
+describe("a column of errors costs one error value per distinct message, not one a cell", () => {
+  const active = { spec: "P18-CMB", stored: false };
+  const column = (n: number, f: (i: number) => unknown) => Array.from({ length: n }, (_, i) => [f(i)]);
+  const distinctErrors = (cells: unknown[][]) => new Set(cells.flat().filter((c) => c instanceof CellError)).size;
+  const n = 20_000;
+  // function      the column holds                 arguments (the column first)                                   distinct messages
+  test.each([
+    ["DIST_LUM",   "text",                           [column(n, () => "abc")],                                      1],
+    ["DIST_LUM",   "two texts",                      [column(n, (i) => (i % 2 ? "abc" : "def"))],                   2],
+    ["DIST_LUM",   "a blueshift",                    [column(n, () => -2)],                                         1],
+    ["SIGMA_CRIT", "text",                           [column(n, () => "abc"), column(n, () => "abc")],              1],
+    ["EXTINCTION", "text",                           [column(n, () => "abc"), 0.1],                                 1],
+    ["COORD_DEG",  "text that is no angle",          [column(n, () => "abc"), "ra"],                                1],
+    ["MAG_AB",     "zero flux densities",            [column(n, () => 0)],                                          1],
+  ] as const)("%s over 20,000 rows of %s: every cell shows the error, one object for each distinct message", (name, _what, args, messages) => {
+    const cells = evaluate(definitions[name], args as readonly unknown[], active);
+    expect(cells.length).toBe(n);
+    expect(cells.every(([c]) => c instanceof CellError)).toBe(true);
+    expect(new Set(cells.map(([c]) => (c as CellError).message)).size).toBe(messages);
+    expect(distinctErrors(cells)).toBe(messages); // was one a cell: n
+  });
+});
