@@ -47,13 +47,13 @@ const numberOf = (text: string) => Number(text.replace("%", "")) * (text.endsWit
  * @param tokens the argument's tokens (spaces dropped)
  * @param text the argument's source text (a nested call's, as its key in `nested`)
  * @param read reads a reference, or gives only its size when it holds more than `inspectorReadLimit` cells
- * @param nested the results of the nested ZC calls already computed, by their source text
+ * @param nested the results of the nested ZC calls already computed, by their source text (or why one is not)
  */
 export async function readArgument(
   tokens: Token[],
   text: string,
   read: (reference: string) => Promise<ReferenceRead>,
-  nested: Map<string, Cell[][]>,
+  nested: Map<string, Cell[][] | string>,
 ): Promise<ReadArgument> {
   if (tokens.length === 0) return { known: true, value: undefined };
   const only = tokens.length === 1 ? tokens[0] : undefined;
@@ -61,7 +61,9 @@ export async function readArgument(
   if (negative) return { known: true, value: -numberOf(tokens[1].text) };
   if (!only) {
     const cells = nested.get(text);
-    return cells ? { known: true, value: cells, source: { kind: "call", name: tokens[0].text.toUpperCase() } } : { known: false, value: undefined };
+    const source: ArgumentSource = { kind: "call", name: tokens[0].text.toUpperCase() };
+    if (typeof cells === "string") return { known: false, value: undefined, note: cells, source };
+    return cells ? { known: true, value: cells, source } : { known: false, value: undefined };
   }
   switch (only.kind) {
     case "number":

@@ -5,7 +5,7 @@ import { definitions } from "../functions/definitions.js";
 import { evaluate } from "../functions/evaluate.js";
 import { readWorkbookModels } from "../functions/workbookModels.js";
 import { parentsOf, placeIn } from "../taskpane/broadcastPlace.js";
-import { explainFormula, inspectorReadLimit, type ReferenceReader } from "../taskpane/explainCall.js";
+import { explainFormula, inspectorNestedCellLimit, inspectorReadLimit, type ReferenceReader } from "../taskpane/explainCall.js";
 import { findCalls } from "../taskpane/formulaCalls.js";
 import { publishedModels } from "./fixtures.js";
 import { expectRelative } from "./helpers.js";
@@ -420,5 +420,67 @@ describe("the inspector reads no reference larger than its limit", () => {
     expect(call.models!.at(-1)).toBe("… and 1,992 more");
     expect(Math.max(...call.models!.map((m) => m.length))).toBeLessThanOrEqual(101);
     expect(call.isError).toBe(true);
+  });
+});
+
+describe("the inspector computes the cell it explains, not the whole result", () => {
+  const active = { spec: "P18-CMB", stored: false };
+  const column = (n: number, f: (i: number) => unknown) => Array.from({ length: n }, (_, i) => [f(i)]);
+
+  /** Counts the calls of a definition's compute (and its kernel) while `run` runs. */
+  async function computesOf<T>(name: string, run: () => Promise<T>): Promise<{ got: T; computes: number }> {
+    const def = definitions[name];
+    const { compute, kernel } = def;
+    let computes = 0;
+    def.compute = (a) => (computes++, compute!(a));
+    if (kernel) def.kernel = { arg: kernel.arg, of: (a, x) => (computes++, kernel.of(a, x)) };
+    try {
+      return { got: await run(), computes };
+    } finally {
+      def.compute = compute;
+      def.kernel = kernel;
+    }
+  }
+
+  test("20,000 distinct model texts that do not parse: the model of the selected cell is resolved, not 20,000", async () => {
+    const models = readWorkbookModels({ TEAM: "P18-BAO; H0=70" }); // a workbook model, so that each resolution asks for its name
+    const specs = models.specs as Map<string, string>;
+    let resolved = 0;
+    const has = specs.has.bind(specs);
+    specs.has = (name) => (resolved++, has(name));
+    const cells = { "$A$1:$A$20000": column(20_000, (i) => 0.01 + i * 1e-5), "$C$1:$C$20000": column(20_000, (i) => `H0=${i}x; Om=0.3`) };
+    const [call] = await explainFormula("=ZC.DIST_LUM($A$1:$A$20000,$C$1:$C$20000)", sheet1(cells), { ...active, models }, undefined, { row: 5, col: 0 });
+    expect(call.isError).toBe(true);
+    expect(call.result).toMatch(/H0: "5x"/);
+    expect(call.result).toMatch(/\(row 6 of 20000×1 values: this cell\)$/);
+    expect(resolved).toBeLessThanOrEqual(3); // was 20,000 and more: every cell's model was resolved
+  });
+
+  test("a what-if grid of 2,000 redshifts × 40 models that Excel never computes (IF(FALSE, …)): one cell computed, not 80,000", async () => {
+    const cells = { "$A$1:$A$2000": column(2_000, (i) => 0.01 + i * 1e-3), "$B$1:$AO$1": [Array.from({ length: 40 }, (_, c) => `P18-CMB; H0=${60 + c / 4}`)] };
+    for (const formula of ["=IF(FALSE,ZC.DIST_LUM($A$1:$A$2000,$B$1:$AO$1))", "=ZC.DIST_LUM($A$1:$A$2000,$B$1:$AO$1)"]) {
+      const { got, computes } = await computesOf("DIST_LUM", () => explainFormula(formula, sheet1(cells), active, undefined, { row: 1999, col: 39 }));
+      const [call] = got;
+      // inside IF the selected cell's place in this call is not known: its first cell is shown, as before
+      const shown = formula.startsWith("=IF") ? "the first of 2000×40 values" : "row 2000, column 40 of 2000×40 values: this cell";
+      expect(call.result, formula).toContain(shown);
+      expect(computes, formula).toBeLessThanOrEqual(2); // was 80,000
+    }
+  });
+
+  test("a call inside another is computed whole only up to the limit; beyond it the caller says so and the call is computed at one cell", async () => {
+    const cells = { "$A$1:$A$2000": column(2_000, (i) => 1 + i * 1e-3), "$A$1:$A$500": column(500, (i) => 1 + i * 1e-3) };
+    const big = await computesOf("AGE", () => explainFormula("=ZC.DIST_LUM(ZC.REDSHIFT(ZC.AGE($A$1:$A$2000),\"AGE\"))", sheet1(cells), active, undefined, { row: 7, col: 0 }));
+    const [, middle, inner] = big.got;
+    expect(middle.args[0].value).toBe(`the result of ZC.AGE, 2,000×1 cells, not computed here (the inspector computes at most ${inspectorNestedCellLimit.toLocaleString("en-US")} cells of calls inside another)`);
+    // the innermost call is computed at one cell: its first, as its caller's cell is not known
+    expect(inner.result).toContain("the first of 2000×1 values");
+    expect(exactOf(inner)).toBe(evaluate(definitions.AGE, [1], active)[0][0]);
+    expect(big.computes).toBeLessThanOrEqual(2); // was 2,000
+    // 500 rows: within the limit, computed whole, and the caller explained at the cell
+    const small = await computesOf("AGE", () => explainFormula("=ZC.REDSHIFT(ZC.AGE($A$1:$A$500),\"AGE\")", sheet1(cells), active, undefined, { row: 7, col: 0 }));
+    expect(small.got[0].args[0].value).toMatch(/^[\d.]+ \(row 8 of the result of ZC\.AGE for this cell\)$/);
+    expectRelative(exactOf(small.got[0]), 1.007, 1e-9, "REDSHIFT of AGE");
+    expect(small.computes).toBe(500);
   });
 });
