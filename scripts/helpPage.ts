@@ -119,7 +119,7 @@ function exampleCells(example: string, name: string): Cell[][] | undefined {
 
 /** What the inspector says of a model alone (its conventions), through a call with no other argument. */
 async function modelOnly(spec: string): Promise<CallExplanation> {
-  const [call] = await explainFormula(`=ZC.HUBBLE(, "${spec.replaceAll('"', '""')}")`, async () => [], { spec: defaultModelSpec, stored: false });
+  const [call] = await explainFormula(`=ZC.HUBBLE(, "${spec.replaceAll('"', '""')}")`, async () => ({ cells: 0, values: [] }), { spec: defaultModelSpec, stored: false });
   return call;
 }
 
@@ -130,7 +130,7 @@ export async function functionEntries(): Promise<FunctionEntry[]> {
   const metadata = JSON.parse(result.metadataJson) as Metadata;
   const families = declarationFiles.map(jsdocTags);
   const active = { spec: defaultModelSpec, stored: false };
-  const noReferences = async (): Promise<unknown[][]> => {
+  const noReferences = async (): Promise<never> => {
     throw new Error("an example names no cells");
   };
   const entries: FunctionEntry[] = [];
@@ -290,7 +290,7 @@ export async function helpPage(): Promise<{ html: string; css: string }> {
   // the README's opening: what zcell computes and that every number depends on the model (its title is the page's)
   const intro = sectionHtml(readme.split(/^(?=## )/m)[0].replace(/^# .*\n/, ""));
   const defaultModel = Cosmology.fromSpec(defaultModelSpec);
-  const [reference] = await explainFormula("=ZC.HUBBLE()", async () => [], { spec: defaultModelSpec, stored: false });
+  const [reference] = await explainFormula("=ZC.HUBBLE()", async () => ({ cells: 0 }), { spec: defaultModelSpec, stored: false });
   const entries = await functionEntries();
   const families = [...new Set(entries.map((e) => e.family))];
   const familyId = (family: string) => `family-${slug(family)}`;

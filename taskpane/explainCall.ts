@@ -11,17 +11,17 @@ import { CellError, type ErrorKind } from "../functions/cellError.js";
 import { adviseOnError } from "./errorAdvice.js";
 import { definitions } from "../functions/definitions.js";
 import { describeModel } from "../functions/describeModel.js";
-import { evaluate, type ArgSpec, type Cell, type FunctionDef } from "../functions/evaluate.js";
+import { evaluateLazily, type ArgSpec, type CallResult, type Cell, type FunctionDef } from "../functions/evaluate.js";
 import { isBlank, keyValueBlockSpec } from "../functions/modelArgument.js";
 import { modelFor } from "../functions/modelCache.js";
 import { resolvedSpec } from "../functions/workbookModels.js";
 import { formatValue } from "../functions/messages.js";
 import { parentsOf, placeIn, placeWords, within, type CellPlace } from "./broadcastPlace.js";
 import { findCalls, type FormulaCall } from "./formulaCalls.js";
-import { cellName, cut, firstOf, inspectorReadLimit, matrixOf, readArgument, showValue, type ReadArgument, type ReferenceRead } from "./readArgument.js";
+import { cellName, cut, firstOf, inspectorReadLimit, matrixOf, readArgument, showValue, type ReadArgument, type ReferenceRead, type ReferenceReader } from "./readArgument.js";
 
 export { inspectorReadLimit } from "./readArgument.js";
-export type { ReferenceRead } from "./readArgument.js";
+export type { ReferenceRead, ReferenceReader } from "./readArgument.js";
 
 /** One explained call, for the selected cell: the arguments' values and the model of that cell. */
 export interface CallExplanation {
@@ -58,12 +58,6 @@ export interface CallExplanation {
   /** For an error: the argument its message is about (its formula text and value), and how to fix it. */
   fault?: { argument?: string; text?: string; value?: string; fix: string };
 }
-
-/**
- * Reads the values behind a reference written in a formula (e.g. "B2", "'Sheet 2'!A1:A9", a defined
- * name), or only its size when it holds more than `maxCells` cells (a bare matrix stands for values).
- */
-export type ReferenceReader = (reference: string, maxCells: number) => Promise<unknown[][] | ReferenceRead>;
 
 const tabled =
   "quintic Hermite tables in ln(1+z) built once per model from Gauss–Legendre panels of the exact integrals " +
@@ -197,12 +191,22 @@ const modelsListed = 8;
 /** Characters of a model's text shown at most (a cell may hold 32,767: a stranger's text is cut). */
 const modelTextShown = 100;
 
-/** A call with its arguments read and, when every one is known, its whole result as the worksheet function returns it. */
+/**
+ * Cells of the results of calls written as another ZC call's argument, computed whole at most for
+ * one formula (the caller reads such a result whole); the calls themselves are computed only at the
+ * cell explained.
+ */
+export const inspectorNestedCellLimit = 1_000;
+
+/**
+ * A call with its arguments read and, when every one is known, its result as the worksheet function
+ * returns it: its shape, and its cells computed one at a time when asked for.
+ */
 interface EvaluatedCall {
   call: FormulaCall;
   def: FunctionDef;
   args: ReadArgument[];
-  cells?: Cell[][];
+  result?: CallResult;
 }
 
 /** A model argument that is a key/value block: the spec it spells, or why it spells none. */
@@ -337,24 +341,28 @@ export async function explainFormula(
   const readOnce = new Map<string, Promise<ReferenceRead>>(); // a reference named by several calls is read once
   const read = (reference: string) => {
     let got = readOnce.get(reference);
-    if (!got) readOnce.set(reference, (got = readReference(reference, inspectorReadLimit).then((r) => (Array.isArray(r) ? { values: r } : r))));
+    if (!got) readOnce.set(reference, (got = readReference(reference, inspectorReadLimit)));
     return got;
   };
-  const nested = new Map<string, Cell[][]>();
+  const nested = new Map<string, Cell[][] | string>();
+  const budget = { cells: inspectorNestedCellLimit };
   const evaluated = new Map<number, EvaluatedCall>();
   // innermost first, so that a nested call's result is known to its caller
   for (const i of [...ours].sort((a, b) => calls[b].depth - calls[a].depth)) {
-    evaluated.set(i, await evaluateCall(calls[i], read, active, nested));
+    const e = await evaluateCall(calls[i], read, active, nested);
+    evaluated.set(i, e);
+    const caller = parents[i] >= 0 && ours.includes(parents[i]) ? calls[parents[i]] : undefined;
+    if (e.result && caller?.args.includes(calls[i].text)) nested.set(calls[i].text, wholeResult(e, budget));
   }
   // outermost first (findCalls lists a call before those inside it): the cell of each result the selected cell reads
   const whole = formula.replace(/^=/, "").trim();
   const places = new Map<number, CellPlace | undefined>();
   for (const i of ours) {
-    const { cells } = evaluated.get(i)!;
+    const { result } = evaluated.get(i)!;
     let place: CellPlace | undefined;
-    if (cells && cells.length * cells[0].length === 1) place = { row: 0, col: 0 };
-    else if (parents[i] < 0) place = calls[i].text !== whole ? undefined : cells ? within(at, cells.length, cells[0].length) : at;
-    else place = placeInCaller(evaluated.get(parents[i]), places.get(parents[i]), calls[i].text, cells);
+    if (result && result.rows * result.cols === 1) place = { row: 0, col: 0 };
+    else if (parents[i] < 0) place = calls[i].text !== whole ? undefined : result ? within(at, result.rows, result.cols) : at;
+    else place = placeInCaller(evaluated.get(parents[i]), places.get(parents[i]), calls[i].text, result);
     places.set(i, place);
   }
   return ours.map((i) => explainAt(evaluated.get(i)!, places.get(i), active, cellValue));
@@ -365,29 +373,42 @@ export async function explainFormula(
  * broadcast for a cell argument, the first for a unit or a scalar text (read once), none known for a
  * key/value block or a function of whole columns (every cell is read).
  */
-function placeInCaller(caller: EvaluatedCall | undefined, outer: CellPlace | undefined, text: string, cells: Cell[][] | undefined): CellPlace | undefined {
+function placeInCaller(caller: EvaluatedCall | undefined, outer: CellPlace | undefined, text: string, result: CallResult | undefined): CellPlace | undefined {
   const k = caller ? caller.call.args.indexOf(text) : -1;
-  if (!caller || !outer || !cells || k < 0 || k >= caller.def.args.length) return undefined;
+  if (!caller || !outer || !result || k < 0 || k >= caller.def.args.length) return undefined;
   const spec = caller.def.args[k];
   if (spec.kind === "unit" || (spec.kind === "text" && spec.scalar)) return { row: 0, col: 0 };
   if (caller.def.over || caller.def.table || (spec.kind === "model" && blockOf(caller.args[k]))) return undefined;
-  if (caller.cells && caller.cells.length * caller.cells[0].length === 1) return undefined; // the caller's one cell is an error of the whole call (shapes that do not broadcast)
-  return placeIn(outer, cells.length, cells[0].length);
+  if (caller.result && caller.result.rows * caller.result.cols === 1) return undefined; // the caller's one cell is an error of the whole call (shapes that do not broadcast)
+  return placeIn(outer, result.rows, result.cols);
+}
+
+/**
+ * A nested call's whole result, for its caller to read as an argument: every cell computed while
+ * the formula's `budget` of cells lasts, else why it is not.
+ */
+function wholeResult(e: EvaluatedCall, budget: { cells: number }): Cell[][] | string {
+  const { rows, cols } = e.result!;
+  if (rows * cols > budget.cells) {
+    return `the result of ${e.call.name}, ${rows.toLocaleString("en-US")}×${cols.toLocaleString("en-US")} cells, not computed here (the inspector computes at most ${inspectorNestedCellLimit.toLocaleString("en-US")} cells of calls inside another)`;
+  }
+  budget.cells -= rows * cols;
+  const cells = Array.from({ length: rows }, (_, r) => Array.from({ length: cols }, (_, c) => e.result!.cell(r, c)));
+  e.result = { rows, cols, cell: (r, c) => cells[r][c] }; // the cell explained is read from these, not computed again
+  return cells;
 }
 
 async function evaluateCall(
   call: FormulaCall,
   read: (reference: string) => Promise<ReferenceRead>,
   active: ActiveModelSetting,
-  nested: Map<string, Cell[][]>,
+  nested: Map<string, Cell[][] | string>,
 ): Promise<EvaluatedCall> {
   const def = definitions[call.name.slice(3)];
   const args: ReadArgument[] = [];
   for (let i = 0; i < def.args.length; i++) args.push(await readArgument(call.argTokens[i] ?? [], call.args[i] ?? "", read, nested));
   if (!args.every((a) => a.known)) return { call, def, args };
-  const cells = evaluate(def, args.map((a) => a.value), active);
-  nested.set(call.text, cells);
-  return { call, def, args, cells };
+  return { call, def, args, result: evaluateLazily(def, args.map((a) => a.value), active) };
 }
 
 /** The row label of a model argument of a function of two models: "from_model" → "From model". */
@@ -428,7 +449,7 @@ function resultUnitOf(
 function explainAt(e: EvaluatedCall, at: CellPlace | undefined, active: ActiveModelSetting, cellValue: unknown): CallExplanation {
   const { call, def } = e;
   // a single cell from ranges of several is an error of the whole call (shapes that do not broadcast): no cell of theirs computed it
-  const place = !e.cells || e.cells.length * e.cells[0].length > 1 ? at : undefined;
+  const place = !e.result || e.result.rows * e.result.cols > 1 ? at : undefined;
   const info = about[def.name];
   const modelIndexes = def.args.flatMap((a, i) => (a.kind === "model" ? [i] : []));
   // arguments broadcast cell by cell, except units and scalar texts (read once), key/value blocks and whole columns
@@ -462,12 +483,11 @@ function explainAt(e: EvaluatedCall, at: CellPlace | undefined, active: ActiveMo
   let exact: string | undefined;
   let isError = false;
   let fault: CallExplanation["fault"];
-  if (e.cells) {
-    const rows = e.cells.length;
-    const cols = e.cells[0].length;
+  if (e.result) {
+    const { rows, cols } = e.result;
     const several = rows * cols > 1;
     const q = several ? within(at, rows, cols) : { row: 0, col: 0 };
-    const cell = q ? e.cells[q.row][q.col] : e.cells[0][0];
+    const cell = q ? e.result.cell(q.row, q.col) : e.result.cell(0, 0);
     const which = !several ? "" : q ? ` (${placeWords(q, rows, cols)} of ${rows}×${cols} values: this cell)` : ` (the first of ${rows}×${cols} values; which one this cell shows is not known here)`;
     if (cell instanceof CellError) {
       isError = true;

@@ -60,9 +60,14 @@ describe("README", () => {
 describe("README: Security", () => {
   test("its limits are the ones the code enforces", async () => {
     const { maxWorkbookModels, maxSpecLength } = await import("../functions/workbookModels.js");
-    const { scanCellLimit } = await import("../taskpane/workbookScan.js");
-    const { inspectorReadLimit } = await import("../taskpane/explainCall.js");
+    const { scanCellLimit, scanChunkCells } = await import("../taskpane/workbookScan.js");
+    const { inspectorNestedCellLimit, inspectorReadLimit } = await import("../taskpane/explainCall.js");
+    const { commentsLookedAtMost } = await import("../taskpane/excelHost.js");
     const text = readme().replace(/\s+/g, " ");
+    expect(text).toContain(`The first ${maxWorkbookModels} workbook models`);
+    expect(text).toContain(`${commentsLookedAtMost.toLocaleString("en-US")} comments of a sheet`);
+    expect(text).toContain(`requests of at most ${scanChunkCells.toLocaleString("en-US")} cells`);
+    expect(text).toContain(`up to ${inspectorNestedCellLimit.toLocaleString("en-US")} cells a formula`);
     expect(text).toContain(`${maxWorkbookModels} workbook models (specs of up to ${maxSpecLength} characters)`);
     expect(text).toContain(`${scanCellLimit.toLocaleString("en-US")} cells a sheet when it looks`);
     expect(text).toContain(`${inspectorReadLimit.toLocaleString("en-US")} cells of a reference`);
