@@ -297,11 +297,13 @@ function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): Fixed
     args[spec.name] = read;
     if (spec.unit) {
       if (read !== "") checkTextUnit(spec.name, read, def, raw);
-      const shown = read || spec.unit.shown;
+      const shown = read || (spec.blank && "typed" in spec.blank ? spec.blank.typed : undefined);
       if (shown) for (const name of spec.unit.applies ?? []) conversions[name] = { factor: 1, hPower: 0, unit: shown };
     }
   }
   for (const [name, part] of positionParts(def, args)) conversions[name] = { ...(conversions[name] ?? { factor: 1, hPower: 0, unit: "" }), part };
+  // a number in a fixed unit (MAG_AB's wavelength in Angstrom): its messages quote it in that unit
+  for (const spec of def.args) if (spec.kind === "number" && spec.unit !== undefined) conversions[spec.name] ??= { factor: 1, hPower: 0, unit: spec.unit };
   return { conversions, resultFactor, args, h };
 }
 

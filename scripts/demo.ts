@@ -120,6 +120,17 @@ function printSetup(ws: ExcelJS.Worksheet, headerRow: number, models: string, la
   const text = (t: string) => t.replaceAll("&", "&&");
   ws.headerFooter = { oddHeader: `&L&A&R${text(`computed under ${models} by zcell ${zcellVersion}`)}`, oddFooter: "&RPage &P of &N" };
 }
+/**
+ * Row 1 of a sheet that prints several pages wide with column A repeated: "INVENTED (made up)" in A1,
+ * on two lines so that the repeated column shows all of it on every page, and what is invented in B1.
+ */
+function banner(ws: ExcelJS.Worksheet, what: string): void {
+  ws.getCell("A1").value = "INVENTED (made up)";
+  ws.getCell("A1").alignment = { wrapText: true, vertical: "top" };
+  ws.getCell("B1").value = what;
+  ws.getCell("B1").alignment = { vertical: "top" };
+  ws.getRow(1).height = 30;
+}
 /** Formats by quantity (common practice): redshift, distance, time, luminosity, magnitude, angle, small numbers. */
 const fmt = { z: "0.000", zErr: "0.0000", dist: "0.0", time: "0.000", sci: "0.00E+00", mag: "0.00", angle: "0.00", deg: "0.0", ratio: "0.000", ebv: "0.000", velocity: "#,##0" };
 
@@ -127,7 +138,7 @@ const workbook = new ExcelJS.Workbook();
 workbook.creator = "zcell demo (invented data)";
 
 const sheet = workbook.addWorksheet("Catalogue (invented)");
-sheet.addRow(["INVENTED demo catalogue: names, positions and values are made up for the zcell tour; they are not measurements."]);
+banner(sheet, "demo catalogue: names, positions and values are made up for the zcell tour; they are not measurements.");
 sheet.addRow([
   "source", "z", "F_bol [erg/s/cm2]", "m (r, AB) [mag]", "angle [arcsec]", "RA (ICRS) [hh:mm:ss.s]", "Dec (ICRS) [±dd:mm:ss]", "E(B−V) [mag]",
   "b (Galactic) [deg]", "cz [km/s], optical", "m − A_r (r, AB) [mag]", "D_L [Mpc]", "look-back [Gyr]", "L_bol [Lsun]", "proper size [kpc]",
@@ -244,7 +255,7 @@ const recipeSources: [string, ...number[]][] = [
 const survey = { fluxLimit: 8e-16, zLo: 0.05, zHi: 3, areaDeg2: 50, magLimit: 24.5 };
 
 const recipes = workbook.addWorksheet("Recipes (invented)");
-recipes.addRow(["INVENTED sample and survey for the catalogue recipes: made up, not measurements."]);
+banner(recipes, "sample and survey for the catalogue recipes: made up, not measurements.");
 recipes.addRow([
   "source", "z (heliocentric)", "z_err", "RA (ICRS) [deg]", "Dec (ICRS) [deg]", "S_3GHz [mJy]", "S_err [mJy]", "α (S_ν ∝ ν^α)",
   "F_bol [erg/s/cm2]", "F_bol err [erg/s/cm2]", "m (r, AB) [mag]", "m err [mag]", "angle [arcsec]", "angle err [arcsec]",
@@ -373,14 +384,18 @@ populations.getCell("H2").value = "edges [log10 erg/s]";
 edges.forEach((edge, i) => (populations.getCell(`H${i + 3}`).value = edge));
 const tableHeaders = ["low [log10 erg/s]", "high [log10 erg/s]", "N (sources)", "Φ [Mpc-3 dex-1]", "σ_Φ [Mpc-3 dex-1]"];
 tableHeaders.forEach((header, i) => (populations.getCell(2, 10 + i).value = header)); // J2:N2
+// the table prints on a page of its own (columns I–N): a title above it and a label for each row
+populations.getCell("I1").value = "Luminosity function of the INVENTED sample by 1/V_max (C and D), binned by the edges in H: no model needed";
+populations.getCell("I2").value = "bin";
 const column = (k: number) => sample.map((row) => [row[k]]);
 const lfFormula = `ZC.LUMINOSITY_FUNCTION($C$3:$C$${lastSample},$D$3:$D$${lastSample},$H$3:$H$${2 + edges.length})`;
 const lf = evaluate(definitions.LUMINOSITY_FUNCTION, [column(2), column(3), edges.map((e) => [e])], active) as number[][];
-lf.forEach((row, i) =>
+lf.forEach((row, i) => {
+  populations.getCell(3 + i, 9).value = `bin ${i + 1}`;
   row.forEach((value, j) => {
     populations.getCell(3 + i, 10 + j).value = { formula: storedFormula(`INDEX(${lfFormula},${i + 1},${j + 1})`), result: value, date1904: false };
-  }),
-);
+  });
+});
 const chiRow = lastSample + 3;
 const chi2Models = ["P18-CMB", "W9-ALL", "EDS"];
 populations.getCell(`A${chiRow - 1}`).value = "χ² of the Hubble diagram (offset minimised), by model";
@@ -403,7 +418,7 @@ formatColumns(populations, 2, { J: "0.0", K: "0.0", L: "0", M: fmt.sci, N: fmt.s
 populations.getColumn("A").width = 12;
 populations.getCell(`A${chiRow + chi2Models.length + 1}`).value =
   "Cached values: each χ² under the model in its row; the luminosity function needs no model (V_max is given).";
-printSetup(populations, 2, "the model in column A for each χ² (P18-CMB, W9-ALL, EDS)", false);
+printSetup(populations, 2, "each χ²'s model in column A (none for the luminosity function)", false);
 
 const out = fileURLToPath(new URL("../demo/", import.meta.url));
 mkdirSync(out, { recursive: true });

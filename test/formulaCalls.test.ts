@@ -1,5 +1,6 @@
 /** The cell inspector's formula tokenizer against tricky formulas (Excel formula grammar, common practice). */
 import { describe, expect, test } from "vitest";
+import { callsZcFunction, typedFormula } from "../functions/storedFormula.js";
 import { findCalls, parseArrayConstant, tokenize } from "../taskpane/formulaCalls.js";
 import { restorableFormula } from "../taskpane/restorableFormula.js";
 import { craftedFamilies } from "./craftedFormulas.js";
@@ -55,6 +56,8 @@ describe("reading a crafted formula takes time linear in its length", () => {
     ["tokenize", tokenize],
     ["findCalls", findCalls],
     ["restorableFormula", (f) => restorableFormula(f, { singleCell: true })],
+    ["typedFormula", typedFormula],
+    ["callsZcFunction", callsZcFunction],
   ];
   const elapsed = (read: (f: string) => unknown, formula: string, times: number) => {
     const t0 = performance.now();

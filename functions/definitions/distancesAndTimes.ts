@@ -125,7 +125,7 @@ export const distancesAndTimes: FunctionDef[] = [
   ofRedshift("VOLUME_ELEMENT", "Mpc3/sr", (x, zz) => x.comovingVolumeElementMpc3Sr(zz)),
   {
     name: "REDSHIFT",
-    args: [num("value"), { kind: "text", name: "quantity", choices: Object.keys(inverses), scalar: true }, model, textUnit("unit", undefined, ["value"])],
+    args: [num("value"), { kind: "text", name: "quantity", choices: Object.keys(inverses), scalar: true }, model, textUnit("unit", { words: "the quantity's default unit (Mpc, Gyr, Mpc3 for VOLUME)" }, ["value"])],
     compute: (a) => invert(m(a), a.quantity as string, n(a, "value"), a.unit as string),
   },
   {
