@@ -4,11 +4,15 @@
  * text quoted at most 40 characters with its length. The messages are our own; the unit spellings
  * follow the FITS Standard 4.0 (Pence et al. 2010, A&A 524, A42), §4.3 and Tables 3–5.
  */
+import { readFileSync } from "node:fs";
 import { describe, expect, test } from "vitest";
 import { CellError } from "../functions/cellError.js";
 import { definitions } from "../functions/definitions.js";
 import { evaluate, type Cell } from "../functions/evaluate.js";
 import { choiceKey } from "../functions/readArguments.js";
+
+type Metadata = { functions: { name: string; parameters: { name: string; description: string }[] }[] };
+const metadata = JSON.parse(readFileSync(new URL("./fixtures/functions.metadata.json", import.meta.url), "utf8")) as Metadata;
 
 const active = { spec: "P18-CMB", stored: false };
 const one = (name: string, ...args: unknown[]): Cell => evaluate(definitions[name], args, active)[0][0];
@@ -145,6 +149,15 @@ describe("positions: a right ascension as a bare number in text, and the pole", 
     expect(one("SEPARATION", "12", 0, 0, 0)).toBe(one("SEPARATION", 12, 0, 0, 0));
     expect(one("COORD_DEG", "12", "dec")).toBe(12);
     expect(one("COORD_CONVERT", "120", 10, "galactic", "equatorial", "lon")).toBe(one("COORD_CONVERT", 120, 10, "galactic", "equatorial", "lon"));
+  });
+
+  test("the help of every right-ascension argument says so (the metadata Excel shows, test/fixtures/functions.metadata.json)", () => {
+    const raArguments: [fn: string, arg: string][] = [["COORD_DEG", "text"], ["SEPARATION", "ra1"], ["REDSHIFT_CMB", "ra"], ["COORD_CONVERT", "lon"]];
+    for (const [fn, arg] of raArguments) {
+      const help = metadata.functions.find((f) => f.name === fn)?.parameters.find((p) => p.name === arg)?.description ?? "";
+      expect(help, `${fn} ${arg}`).toMatch(/text that is only a number/);
+      expect(help, `${fn} ${arg}`).toContain('"12h"');
+    }
   });
 
   test("a column of text numbers reads as each cell alone: in the angle unit given", () => {
