@@ -7,7 +7,7 @@ import { fileURLToPath } from "node:url";
 import { describe, expect, test } from "vitest";
 import { functionReference, readmePath, withReference } from "../scripts/functionReference.js";
 import { definitions } from "../functions/definitions.js";
-import { fixedResultUnit } from "../taskpane/explainCall.js";
+import { fixedResultUnit } from "../taskpane/functionAbout.js";
 import { HostError } from "./reference/hostBundle.js";
 import { evaluateFormula, sheetRuntime, type SheetValue } from "./sheetFormula.js";
 import { testBuildDir } from "./testBuild.js";
