@@ -24,7 +24,7 @@ export function isNumberText(text: string): boolean {
 /**
  * How to write text that is almost a number, or undefined.
  * @param text a cell's text, trimmed
- * @returns e.g. "use a point for decimals, 0.5", "it is a percentage, write 0.05"
+ * @returns how to write it (with a point for a decimal comma, as a fraction for a percentage), or undefined
  * @example numberTextHint("0,5") // "use a point for decimals, 0.5"
  */
 export function numberTextHint(text: string): string | undefined {

@@ -35,20 +35,22 @@ const forHours: TradeSpelling = { reads: "is not a FITS unit: write h for hours 
  * Symbols astronomers type that FITS does not read (FITS Standard 4.0 §4.3, Table 3: "A" is the
  * ampere, the ångström is "Angstrom", the micrometre "um", the hour "h"), with what to write instead.
  */
-const tradeSpellings: Readonly<Record<string, TradeSpelling>> = {
-  A: { reads: "is the ampere in FITS, not the ångström", write: "Angstrom" },
-  AA: forAngstrom,
-  "\u00c5": forAngstrom, // Å, Latin capital A with ring above
-  "\u212b": forAngstrom, // Å, the ångström sign
-  Angstroms: forAngstrom,
-  angstroms: forAngstrom,
-  micron: forMicrometre,
-  microns: forMicrometre,
-  hour: forHours,
-  hours: forHours,
-  hr: forHours,
-  hrs: forHours,
-};
+const tradeSpellings: ReadonlyMap<string, TradeSpelling> = new Map([
+  ["A", { reads: "is the ampere in FITS, not the ångström", write: "Angstrom" }],
+  ["AA", forAngstrom],
+  // a Map of strings, not an object's keys: a minifier writes a key as a bare identifier, and a
+  // non-ASCII identifier is a syntax error in a bundle a host reads in another encoding than UTF-8
+  ["\u00c5", forAngstrom], // Å, Latin capital A with ring above
+  ["\u212b", forAngstrom], // Å, the ångström sign
+  ["Angstroms", forAngstrom],
+  ["angstroms", forAngstrom],
+  ["micron", forMicrometre],
+  ["microns", forMicrometre],
+  ["hour", forHours],
+  ["hours", forHours],
+  ["hr", forHours],
+  ["hrs", forHours],
+]);
 
 /**
  * What a symbol that FITS does not read was meant to be, when it is a spelling of the trade.
@@ -57,7 +59,7 @@ const tradeSpellings: Readonly<Record<string, TradeSpelling>> = {
  * @example tradeSpelling("micron")?.write // "um"
  */
 export function tradeSpelling(symbol: string): TradeSpelling | undefined {
-  return Object.hasOwn(tradeSpellings, symbol) ? tradeSpellings[symbol] : undefined;
+  return tradeSpellings.get(symbol);
 }
 
 /** Whole units as astronomers write them, in the order a suggestion prefers them (common practice). */
