@@ -6,24 +6,10 @@
 // Prints one line a case: min and median of 7 calls, ms. Usage: node scripts/benchStrangerText.mjs <functions.js>
 import { readFileSync } from "node:fs";
 import vm from "node:vm";
+import { HostError, installStubHost } from "./stubHost.mjs";
 
 const [bundle] = process.argv.slice(2);
-const registered = new Map();
-class HostError {
-  constructor(code, message) {
-    this.code = code;
-    this.message = message;
-  }
-}
-globalThis.CustomFunctions = {
-  associate: (id, fn) => registered.set(id, fn),
-  Error: HostError,
-  ErrorCode: { invalidValue: "#VALUE!", notAvailable: "#N/A", invalidNumber: "#NUM!" },
-};
-globalThis.Office = {
-  onReady: () => Promise.resolve({ host: "Excel" }),
-  context: { document: { settings: { get: () => null } } },
-};
+const registered = installStubHost();
 vm.runInThisContext(readFileSync(bundle, "utf8"), { filename: "functions.js" });
 await Promise.resolve();
 
