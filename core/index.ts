@@ -46,7 +46,9 @@ export { ExpansionRate, type DensityComponent } from "./model/ExpansionRate.js";
 export { fermiDiracDensityFactor } from "./model/fermiDirac.js";
 export { limitingRedshift, limitingRedshiftMag, maxVolumeMpc3 } from "./observables/fluxLimit.js";
 export { type ModelParameters, parameterKeys, type ParameterKey } from "./model/ModelParameters.js";
-export { formatModelSpec, MissingParameterError, parseModelSpec, quotedText, withChanges, type NamedModels } from "./model/modelSpec.js";
+export { formatModelSpec, keySuggestion, MissingParameterError, parseModelSpec, withChanges, type NamedModels } from "./model/modelSpec.js";
+export { quoted, quotedText } from "./checks/quoted.js";
+export { isNumberText, numberTextHint } from "./checks/numberText.js";
 export { NoSolutionError } from "./checks/NoSolutionError.js";
 export {
   abFluxDensityJy,

@@ -61,10 +61,16 @@ export type ArgSpec =
       choices?: readonly string[];
       /** Scalar: read once, not broadcast. */
       scalar?: boolean;
-      /** May be omitted or blank: read as "" when scalar, as absent otherwise (no blank result). */
+      /** May be omitted or blank: read as "" when scalar, as absent otherwise (no blank result); otherwise required. */
       optional?: boolean;
       /** What an omitted or blank one means (an optional text has one: the help and the pane show it). */
       blank?: BlankMeaning;
+      /**
+       * A unit that compute converts itself (its kind depends on other arguments): the text must
+       * parse, or the call is #VALUE! naming this argument; the number arguments in `applies` are
+       * quoted in it (or in the `blank` unit typed when it is blank) by the messages of their domain.
+       */
+      unit?: { applies?: readonly string[] };
     }
   | {
       /** A number or text, passed through (e.g. mnu as "0.05,0.01"). */
@@ -87,7 +93,10 @@ export type ArgSpec =
       applies: string | readonly string[];
     };
 
-/** The resolved arguments of one cell, by name (units already applied). */
+/**
+ * The resolved arguments of one cell, by name (units already applied). A unit argument's own name
+ * holds the unit as the user gave it (or its default), for a message in that unit.
+ */
 export type Args = Record<string, number | string | Cosmology | undefined>;
 
 /** A worksheet function as data: its arguments and what it computes for one cell. */

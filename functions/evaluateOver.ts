@@ -9,7 +9,8 @@ import { CellError, isIncomingError } from "./cellError.js";
 import type { Args, Cell, ColumnCells, FunctionDef } from "./FunctionDef.js";
 import { messages } from "./messages.js";
 import { isBlank } from "./modelArgument.js";
-import { numberText, readCall, toMatrix } from "./readArguments.js";
+import { isNumberText } from "../core/index.js";
+import { readCall, toMatrix } from "./readArguments.js";
 
 /**
  * Evaluates a function of whole columns.
@@ -76,7 +77,7 @@ function readColumnCells(name: string, raw: unknown): ColumnCells {
         numbers[i] = value;
         continue;
       }
-      const isNumber = typeof value === "number" || (typeof value === "string" && numberText.test(value.trim()));
+      const isNumber = typeof value === "number" || (typeof value === "string" && isNumberText(value.trim()));
       const x = isNumber ? Number(typeof value === "string" ? value.trim() : value) : Number.NaN;
       if (x - x === 0) numbers[i] = x;
       else if (isBlank(value)) numbers[i] = Number.NaN;

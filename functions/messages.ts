@@ -2,7 +2,7 @@
  * Every message the worksheet functions show (Excel shows it with the error value). Core errors keep
  * their own words; these add what only the adapter knows: which argument, which cell, which shape.
  */
-import { defaultPresetName, quotedText } from "../core/index.js";
+import { defaultPresetName, keySuggestion, numberTextHint, quoted, quotedText } from "../core/index.js";
 
 export const messages = {
   /** The message as the sheet shows it: the ZC function first. */
@@ -14,9 +14,15 @@ export const messages = {
   aboveMax: (arg: string, value: number, unit: string, max: number, what: string) =>
     `${arg} = ${withUnit(value, unit)} is above ${withUnit(max, unit)} (${what})`,
   blockKey: (key: string, valid: readonly string[]) =>
-    `model: unknown key "${key}" in the key/value block: use ${valid.join(", ")}`,
+    `model: unknown key ${quoted(key)} in the key/value block: ${keySuggestion(key, valid)}`,
   pairWithoutKey: (index: number) => `value${index} is given but key${index} is blank`,
-  notANumber: (arg: string, value: unknown) => `${arg}: ${describeValue(value)} where a number belongs`,
+  notANumber: (arg: string, value: unknown) => {
+    const hint = typeof value === "string" ? numberTextHint(value.trim()) : undefined;
+    return hint ? `${arg}: ${describeValue(value)} is not a number: ${hint}` : `${arg}: ${describeValue(value)} where a number belongs`;
+  },
+  /** A declination or another latitude beyond the pole, given as a number (in `unit`: degrees when blank). */
+  beyondPole: (arg: string, value: number, unit: string, part: "dec" | "lat") =>
+    `${arg} = ${unit === "" || unit === "deg" ? `${formatValue(value)}°` : withUnit(value, unit)} is beyond ±90°: a ${part === "dec" ? "declination" : "latitude"} is −90° … +90°`,
   notFinite: (arg: string) => `${arg}: not a finite number`,
   notText: (arg: string, value: unknown) => `${arg}: ${describeValue(value)} where text belongs`,
   inputError: (arg: string) => `${arg}: the input cell holds an error`,
@@ -45,22 +51,29 @@ export const messages = {
   otherKindFunctions: (fn: string): string | undefined => (Object.hasOwn(otherKindFunctions, fn) ? otherKindFunctions[fn] : undefined),
   otherKind: (detail: string, kind: string, use: string) => `${detail}: for ${kind} use ${use}`,
   choice: (arg: string, value: string, choices: readonly string[]) =>
-    `${arg}: "${value}" is not one of ${choices.join(", ")}`,
-  outsideLawRange: (arg: string, value: number, unit: string, law: string, low: number, high: number) =>
-    `${arg} = ${withUnit(value, unit)} is outside ${law}'s range, ${formatValue(low)} to ${withUnit(high, unit)}: the law is not defined there`,
+    `${arg}: ${quoted(value)} is not one of ${choices.join(", ")}`,
+  /** A wavelength outside an extinction law's range; `likely`: another unit in which the same number falls inside it, and that unit's argument. */
+  outsideLawRange: (arg: string, value: number, unit: string, law: string, low: number, high: number, likely?: { unit: string; arg: string }) =>
+    `${arg} = ${withUnit(value, unit)} is outside ${law}'s range, ${formatValue(low)} to ${withUnit(high, unit)}: the law is not defined there` +
+    (likely ? `; if ${formatValue(value)} is in ${likely.unit}, give "${likely.unit}" as ${likely.arg}` : ""),
+  /** ANGLE of a size larger than π D_A: in the size's unit. */
+  angleAbove180: (size: number, unit: string, z: number, limit: number) =>
+    `size = ${withUnit(size, unit)} at z = ${formatValue(z)} would subtend more than 180°: at most ${withUnit(limit, unit)} (π D_A) there`,
+  /** An angle unit given hours of time: the hour angle is what a right ascension in hours needs. */
+  hoursForAngle: (text: string) => `${quoted(text)} is hours of time, not an angle: for a right ascension in hours use "hourangle"`,
   notFiniteResult: (fn: string) => `${fn}: the result is not a finite number for these arguments`,
   model: (detail: string) => `model: ${detail}`,
   /** A spec without H0 or Om: the same changes on the workbook's model, as a ZC.MODEL call (when it can take them all). */
   missingParameter: (detail: string, given: readonly (readonly [string, string])[], most: number) =>
-    given.length === 0 || given.length > most
+    given.length === 0 || given.length > most || given.some(([, value]) => value.length > 40)
       ? detail
       : `${detail}; to change the workbook's model instead, use ZC.MODEL(, ${given.map(([key, value]) => `"${key}", ${formulaValue(value)}`).join(", ")})`,
   unitInModelSlot: (text: string) =>
-    `model: "${quotedText(text)}" is a unit, not a model: units come after the model; leave the model blank for the workbook's model (two commas: …, , "${quotedText(text)}")`,
+    `model: ${quoted(text)} is a unit, not a model: units come after the model; leave the model blank for the workbook's model (two commas: …, , ${quoted(text)})`,
   modelInUnitSlot: (arg: string, text: string) =>
-    `${arg}: "${quotedText(text)}" is a model, not a unit: the model comes before the units (check the order of the arguments)`,
+    `${arg}: ${quoted(text)} is a model, not a unit: the model comes before the units (check the order of the arguments)`,
   megajansky: (arg: string, text: string) =>
-    `${arg}: "${quotedText(text)}" is megajansky (10⁹ mJy), not a likely flux density for a source: did you mean mJy? (units are case-sensitive)`,
+    `${arg}: ${quoted(text)} is megajansky (10⁹ mJy), not a likely flux density for a source: did you mean mJy? (units are case-sensitive)`,
   hScaledWithoutModel: "units in h = H0/100 (such as Mpc/h) need a model, and this function takes none",
   notGiven: (what: string) => `${what} is not given in this model`,
   /** SOUND_HORIZON of a model without Ob: the user's own model with Ob added (0.049, Planck 2018's Ωb), not a preset that has one already. */
@@ -98,7 +111,8 @@ function formulaValue(text: string): string {
 }
 
 function describeValue(value: unknown): string {
-  if (typeof value === "string") return `text "${value.length > 40 ? `${value.slice(0, 40)}…` : value}"`;
+  if (typeof value === "string") return `text ${quoted(value)}`;
   if (typeof value === "boolean") return value ? "TRUE" : "FALSE";
-  return String(value);
+  if (value === undefined || value === null) return "a blank";
+  return typeof value === "number" ? formatValue(value) : "a value";
 }

@@ -4,7 +4,7 @@
  * their reference unit with the domain checked in the unit the user gave, text numbers too; texts;
  * models resolved; errors and blanks as they will show). `evaluate.ts` then only computes.
  */
-import { Cosmology, MissingParameterError, parseUnit } from "../core/index.js";
+import { Cosmology, isNumberText, MissingParameterError, parseUnit } from "../core/index.js";
 import type { ActiveModelSetting } from "./activeModel.js";
 import { CellError, classify, isIncomingError } from "./cellError.js";
 import { modelPairs } from "./definitions/argumentKinds.js";
@@ -73,9 +73,6 @@ export interface CallArguments {
 /** What a blank input gives: a blank result. */
 export const blank = "";
 
-/** Text that Excel's own functions would read as a number (CSV and archive pastes). */
-export const numberText = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
-
 /** Normalises a raw argument to a matrix (undefined when omitted). */
 export function toMatrix(raw: unknown): unknown[][] | undefined {
   if (raw === undefined || raw === null) return undefined;
@@ -130,13 +127,18 @@ function readArg(
         if (spec.default === undefined) return blank;
         return spec.default;
       }
-      if (typeof value === "string" && numberText.test(value.trim())) return readNumber(spec, Number(value.trim()), conversion);
-      if (spec.sexagesimal && typeof value === "string") return readPosition(spec, value, conversion?.part);
+      if (typeof value === "string") {
+        // text that reads as a number is one (as Excel's own functions read it), in a position too:
+        // degrees, or the angle unit given ("12" in a right ascension is 12°, "12h" is 12 hours)
+        const text = value.trim();
+        if (isNumberText(text)) return readNumber(spec, Number(text), conversion);
+        if (spec.sexagesimal) return readPosition(spec, value, conversion?.part);
+      }
       return new CellError("value", messages.notANumber(spec.name, value));
     }
     case "numberOrText": {
       if (isBlank(value)) return spec.default;
-      if (typeof value === "string" && numberText.test(value.trim())) return Number(value.trim());
+      if (typeof value === "string" && isNumberText(value.trim())) return Number(value.trim());
       if (typeof value === "number" || typeof value === "string") return value;
       return new CellError("value", messages.notANumber(spec.name, value));
     }
@@ -159,6 +161,8 @@ function readNumber(spec: Extract<ArgSpec, { kind: "number" }>, x: number, conve
   if (spec.magnitude && Math.abs(x) >= 50) return new CellError("na", messages.missingMagnitude(spec.name, x));
   const factor = conversion === undefined ? 1 : conversion.factor;
   const reference = x * factor;
+  const pole = spec.sexagesimal === "dec" || spec.sexagesimal === "lat" ? spec.sexagesimal : undefined;
+  if (pole && !(reference >= -90 && reference <= 90)) return new CellError("num", messages.beyondPole(spec.name, x, conversion?.unit ?? "", pole));
   if (spec.min !== undefined && (spec.minExclusive ? !(reference > spec.min) : !(reference >= spec.min))) {
     return new CellError("num", messages.belowMin(spec.name, x, conversion?.unit ?? "", spec.min / factor, spec.minExclusive === true));
   }
@@ -168,18 +172,29 @@ function readNumber(spec: Extract<ArgSpec, { kind: "number" }>, x: number, conve
   return reference;
 }
 
+/**
+ * A choice as compared: case, spaces, "_" and "-" aside ("dark energy" is darkenergy, as model keys
+ * ignore spaces). No two choices of a function read alike (test/sheetMessages.test.ts).
+ */
+export function choiceKey(text: string): string {
+  return text.toLowerCase().replace(/[\s_-]/g, "");
+}
+
 function readText(spec: Extract<ArgSpec, { kind: "text" }>, value: unknown): string {
   if (typeof value !== "string") throw new CellError("value", messages.notText(spec.name, value));
   const text = value.trim();
   if (!spec.choices) return text;
-  const match = spec.choices.find((c) => c.toLowerCase() === text.toLowerCase());
+  const key = choiceKey(text);
+  const match = spec.choices.find((c) => choiceKey(c) === key);
   if (!match) throw new CellError("value", messages.choice(spec.name, text, spec.choices));
   return match;
 }
 
-/** An argument that may not be left out: a number without a default, a model marked required. */
+/** An argument that may not be left out: a number without a default, text not marked optional, a model marked required. */
 function isRequired(spec: ArgSpec): boolean {
-  return (spec.kind === "number" && spec.default === undefined) || (spec.kind === "model" && spec.required === true);
+  return (
+    (spec.kind === "number" && spec.default === undefined) || (spec.kind === "text" && spec.optional !== true) || (spec.kind === "model" && spec.required === true)
+  );
 }
 
 /** Which arguments of a function are units, scalar texts and cell values: worked out once per function. */
@@ -261,6 +276,7 @@ function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): Fixed
     } catch (e) {
       throw unitInModelSlot(def, raw) ?? e;
     }
+    args[spec.name] = conversion.unit; // the unit as the user gave it, for a message in it
     if (conversion.hPower !== 0) h ??= { args: [], result: 0 };
     if (spec.applies === "result") {
       resultFactor *= conversion.factor;
@@ -276,10 +292,31 @@ function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): Fixed
     const spec = def.args[i] as Extract<ArgSpec, { kind: "text" }>;
     if (singleCell(raw[i]) === several) throw new CellError("value", messages.oneValueOnly(spec.name));
     const text = toMatrix(raw[i])?.[0]?.[0];
-    args[spec.name] = spec.optional && isBlank(text) ? "" : readText(spec, text);
+    if (isBlank(text) && !spec.optional) throw new CellError("value", messages.required(spec.name));
+    const read = isBlank(text) ? "" : readText(spec, text);
+    args[spec.name] = read;
+    if (spec.unit) {
+      if (read !== "") checkTextUnit(spec.name, read, def, raw);
+      const shown = read || (spec.blank && "typed" in spec.blank ? spec.blank.typed : undefined);
+      if (shown) for (const name of spec.unit.applies ?? []) conversions[name] = { factor: 1, hPower: 0, unit: shown };
+    }
   }
   for (const [name, part] of positionParts(def, args)) conversions[name] = { ...(conversions[name] ?? { factor: 1, hPower: 0, unit: "" }), part };
+  // a number in a fixed unit (MAG_AB's wavelength in Angstrom): its messages quote it in that unit
+  for (const spec of def.args) if (spec.kind === "number" && spec.unit !== undefined) conversions[spec.name] ??= { factor: 1, hPower: 0, unit: spec.unit };
   return { conversions, resultFactor, args, h };
+}
+
+/**
+ * A unit that compute converts itself (`unit` on a text argument): it must parse, or the call is
+ * #VALUE! naming the argument (a model typed one place late, or a unit one place early, said so).
+ */
+function checkTextUnit(name: string, text: string, def: FunctionDef, raw: readonly unknown[]): void {
+  try {
+    parseUnit(text);
+  } catch (e) {
+    throw unitInModelSlot(def, raw) ?? new CellError("value", isModelText(text) ? messages.modelInUnitSlot(name, text) : messages.unitArgument(name, (e as Error).message));
+  }
 }
 
 /** Model resolution for single cells, made again only when the settings are read anew. */

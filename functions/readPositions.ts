@@ -6,7 +6,7 @@
  * otherwise passed to compute as text. Reading it here, not in compute, keeps a column of text
  * positions a column of numbers (no text in the per-cell loop).
  */
-import { sexagesimalDegrees, type AnglePart } from "../core/index.js";
+import { isNumberText, sexagesimalDegrees, type AnglePart } from "../core/index.js";
 import { CellError, classify } from "./cellError.js";
 import type { Args, ArgSpec, FunctionDef } from "./FunctionDef.js";
 
@@ -34,9 +34,11 @@ export function positionPart(spec: NumberSpec, decided: AnglePart | undefined): 
 
 /**
  * A text's degrees when it reads as a position of the part, else NaN: the quick way for a column
- * of positions, where only a cell that does not read goes the long way (number text, an error's words).
+ * of positions, where only a cell that does not read goes the long way (an error's words, and number
+ * text, which is a number in the argument's angle unit, as one cell alone reads it).
  */
 export function positionOrNaN(text: string, part: AnglePart): number {
+  if (isNumberText(text.trim())) return Number.NaN;
   try {
     return sexagesimalDegrees(text, part);
   } catch {

@@ -36,6 +36,10 @@ function unitProblem(fn: string, spec: Extract<ArgSpec, { kind: "unit" }>, text:
   } catch (shown) {
     detail = (shown as Error).message;
   }
+  if ((spec.unit === "rad" || spec.unit === "deg") && spec.applies !== "result" && /^(h|hr|hrs|hour|hours)$/i.test(text.trim())) {
+    // hours of time given for an angle: a right ascension in hours is the hour angle (15°)
+    detail = messages.hoursForAngle(text.trim());
+  }
   const use = messages.otherKindFunctions(fn);
   const other = otherKindUnit[spec.unit];
   if (use && other && spec.applies !== "result") {

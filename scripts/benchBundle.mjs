@@ -26,28 +26,13 @@
 //                    against 8 edges: ms, extra RSS (MiB) and what the call returned (rows, or its error)
 import { readFileSync } from "node:fs";
 import vm from "node:vm";
+import { installStubHost } from "./stubHost.mjs";
 
 const [bundle, figure] = process.argv.slice(2);
 const n = 100_000;
 const preset = process.env.ZC_BENCH_PRESET ?? "P18-BAO"; // another name only to time an older build
 const settings = { "zcell.activeModel": preset };
-const registered = new Map();
-
-class HostError {
-  constructor(code, message) {
-    this.code = code;
-    this.message = message;
-  }
-}
-globalThis.CustomFunctions = {
-  associate: (id, fn) => registered.set(id, fn),
-  Error: HostError,
-  ErrorCode: { invalidValue: "#VALUE!", notAvailable: "#N/A", invalidNumber: "#NUM!" },
-};
-globalThis.Office = {
-  onReady: () => Promise.resolve({ host: "Excel" }),
-  context: { document: { settings: { get: (key) => settings[key] ?? null } } },
-};
+const registered = installStubHost(settings);
 
 /** Redshifts uniform in [0.01, 10] from a fixed seed (mulberry32). */
 function redshifts(count) {

@@ -86,5 +86,5 @@ test("β = v/c of the dipole speed is 0.0012336 (369.82 km/s, Planck 2018 I, fro
 
 test("a declination beyond ±90° is #NUM! quoted in degrees", () => {
   const cell = one("REDSHIFT_CMB", 0.01, 10, 95) as { message: string };
-  expect(cell.message).toBe("ZC.REDSHIFT_CMB: dec = 95 deg is above 90 deg (90°)");
+  expect(cell.message).toBe("ZC.REDSHIFT_CMB: dec = 95° is beyond ±90°: a declination is −90° … +90°");
 });

@@ -101,7 +101,7 @@ describe("ranges and errors, in the sheet's words", () => {
     // arguments                                 kind     message
     [[5000, 0.1, "Cardeli 1989"],               "value", 'ZC.EXTINCTION: law: "Cardeli 1989" is not one of Fitzpatrick 1999, Cardelli 1989, ODonnell 1994, Calzetti 2000 (case and an apostrophe are ignored)'],
     [[5000, -0.1],                              "num",   "ZC.EXTINCTION: ebv = -0.1 must be ≥ 0"],
-    [[-5000, 0.1],                              "num",   "ZC.EXTINCTION: wavelength = -5000 must be > 0"],
+    [[-5000, 0.1],                              "num",   "ZC.EXTINCTION: wavelength = -5000 Angstrom must be > 0 Angstrom"],
     [[5000, 0.1, "", 0],                        "num",   "ZC.EXTINCTION: r_v = 0 must be > 0"],
     [[5000, 0.1, "", "", "kg"],                 "value", 'ZC.EXTINCTION: wavelength_unit: "kg" is a mass; use a frequency (GHz), a wavelength (Angstrom, um) or an energy (eV)'],
     [[5000, "E(B-V)"],                          "value", 'ZC.EXTINCTION: ebv: text "E(B-V)" where a number belongs'],

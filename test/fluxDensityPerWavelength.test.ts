@@ -62,13 +62,13 @@ describe("per wavelength: f_ν = f_λ λ²/c", () => {
 describe("errors that name the fix", () => {
   test.each([
     // function  arguments                                      kind     message
-    ["MAG_AB",   [1e-17, "erg/s/cm2/Angstrom"],                 "value", 'ZC.MAG_AB: wavelength is needed with "erg/s/cm2/Angstrom", a flux density per wavelength (f_λ): give it in Angstrom (the last argument) to turn f_λ into f_ν'],
-    ["FLUX_AB",  [20, "W/m2/um", ""],                           "value", 'ZC.FLUX_AB: wavelength is needed with "W/m2/um", a flux density per wavelength (f_λ): give it in Angstrom (the last argument) to turn f_λ into f_ν'],
-    ["MAG_AB",   [1e-17, "erg/s/cm2/Angstrom", -5],             "num",   "ZC.MAG_AB: wavelength = -5 must be > 0"],
+    ["MAG_AB",   [1e-17, "erg/s/cm2/Angstrom"],                 "value", 'ZC.MAG_AB: wavelength is needed with "erg/s/cm2/Angstrom", a flux density per wavelength (f_λ): give it in Angstrom (the last argument), for f_ν = f_λ λ²/c'],
+    ["FLUX_AB",  [20, "W/m2/um", ""],                           "value", 'ZC.FLUX_AB: wavelength is needed with "W/m2/um", a flux density per wavelength (f_λ): give it in Angstrom (the last argument), for f_ν = f_λ λ²/c'],
+    ["MAG_AB",   [1e-17, "erg/s/cm2/Angstrom", -5],             "num",   "ZC.MAG_AB: wavelength = -5 Angstrom must be > 0 Angstrom"],
     ["MAG_AB",   [1e-17, "erg/s/cm2"],                          "value", 'ZC.MAG_AB: unit: "erg/s/cm2" is not a flux density: use one per frequency (Jy, mJy, erg/s/cm2/Hz) or per wavelength (erg/s/cm2/Angstrom, W/m2/um)'],
     ["MAG_AB",   [5, "MJy"],                                    "value", 'ZC.MAG_AB: unit: "MJy" is megajansky (10⁹ mJy), not a likely flux density for a source: did you mean mJy? (units are case-sensitive)'],
-    ["FLUX_AB",  [20, "furlong"],                               "value", 'ZC.FLUX_AB: unit: unknown unit "furlong" in "furlong"'],
-    ["MAG_AB",   [0, "Jy"],                                     "num",   "ZC.MAG_AB: flux_density = 0 must be > 0"],
+    ["FLUX_AB",  [20, "furlong"],                               "value", 'ZC.FLUX_AB: unit: unknown unit "furlong"'],
+    ["MAG_AB",   [0, "Jy"],                                     "num",   "ZC.MAG_AB: flux_density = 0 Jy must be > 0 Jy"],
     // our range for an f_λ wavelength, 100 Å … 1e7 Å (1 mm): a value outside it is almost surely in another unit
     ["MAG_AB",   [1e-17, "erg/s/cm2/Angstrom", 0.5],            "num",   "ZC.MAG_AB: wavelength = 0.5 Angstrom is outside 100 … 1e7 Angstrom (1 mm), where zcell takes the wavelength of a flux density per wavelength: it is read in Angstrom (0.5 um is 5000 Angstrom)"],
     ["FLUX_AB",  [20, "W/m2/um", 2.2],                          "num",   "ZC.FLUX_AB: wavelength = 2.2 Angstrom is outside 100 … 1e7 Angstrom (1 mm), where zcell takes the wavelength of a flux density per wavelength: it is read in Angstrom (2.2 um is 22000 Angstrom)"],

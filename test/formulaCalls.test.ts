@@ -4,6 +4,7 @@ import { callsZcFunction, typedFormula } from "../functions/storedFormula.js";
 import { findCalls, parseArrayConstant, tokenize } from "../taskpane/formulaCalls.js";
 import { restorableFormula } from "../taskpane/restorableFormula.js";
 import { craftedFamilies } from "./craftedFormulas.js";
+import { longOverEightShort } from "./linearity.js";
 
 const zc = (formula: string) => findCalls(formula).filter((c) => c.name.startsWith("ZC."));
 
@@ -59,33 +60,13 @@ describe("reading a crafted formula takes time linear in its length", () => {
     ["typedFormula", typedFormula],
     ["callsZcFunction", callsZcFunction],
   ];
-  const elapsed = (read: (f: string) => unknown, formula: string, times: number) => {
-    const t0 = performance.now();
-    for (let k = 0; k < times; k++) {
-      try {
-        read(formula);
-      } catch {
-        // an unreadable formula is read just as far before it throws
-      }
-    }
-    return performance.now() - t0;
-  };
   test.each(readers)("%s: 8 × 1,024 characters against 1 × 8,192, every crafted family", (_name, read) => {
     const ratios: string[] = [];
     for (const family of craftedFamilies) {
       const short = family.formula(1024);
       const long = family.formula(8192);
-      elapsed(read, short, 8); // warm-up: the first calls compile the code
-      let repeats = 1;
-      while (elapsed(read, long, repeats) < 5 && repeats < 4096) repeats *= 2;
-      let shortBest = Number.POSITIVE_INFINITY;
-      let longBest = Number.POSITIVE_INFINITY;
-      for (let sample = 0; sample < 9; sample++) {
-        shortBest = Math.min(shortBest, elapsed(read, short, 8 * repeats));
-        longBest = Math.min(longBest, elapsed(read, long, repeats));
-      }
       const lengthRatio = (long.length - 1) / (short.length - 1);
-      const ratio = longBest / shortBest / (lengthRatio / 8);
+      const ratio = longOverEightShort(read, short, long) / (lengthRatio / 8);
       if (ratio >= 3) ratios.push(`${family.name}: ${ratio.toFixed(1)}`);
     }
     expect(ratios).toEqual([]);

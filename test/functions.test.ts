@@ -172,7 +172,7 @@ describe("inverse and text functions", () => {
     expect(one("MODEL", [["H0", 70], ["Om", 0.3]], "OL", 0.7)).toBe("H0=70; Om=0.3; OL=0.7"); // a key/value block as base
     expect(run("MODEL", "P18-BAO", "H0", [[70], [73]])).toEqual([["P18-BAO; H0=70"], ["P18-BAO; H0=73"]]);
     expectError(one("MODEL", "P18-BAO", "H0", -70), "num", /H0 must be a positive number/);
-    expectError(one("MODEL", "P18-BAO", "Omm", 0.3), "value", /unknown key "Omm": use H0, Om/);
+    expectError(one("MODEL", "P18-BAO", "Omm", 0.3), "value", /unknown key "Omm": did you mean Om\? \(the keys are H0, Om/);
     expectError(one("MODEL", "P18-BAO", "H0", 70, "H0", 71), "value", /H0 is given twice/);
     expectError(one("MODEL", "P18-BAO", "H0", 70, null, 0.3), "value", /value2 is given but key2 is blank/);
   });

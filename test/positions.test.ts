@@ -45,7 +45,10 @@ describe("sexagesimal text is read as the trade writes it", () => {
     ["00:00:00",        "ra",   0,                                 "the equinox"],
     ["23:59:59.999",    "ra",   360 - 0.001 / 240,                 "the last thousandth of a second"],
     ["187d42m21s",      "ra",   187 + 42 / 60 + 21 / 3600,         "an RA marked in degrees stays degrees"],
-    ["12.5",            "ra",   12.5,                              "a single unmarked number is decimal degrees"],
+    ["12.5d",           "ra",   12.5,                              "a single number marked d is degrees"],
+    ["12.5h",           "ra",   187.5,                             "a single number marked h is hours"],
+    ["12.5",            "ra",   12.5,                              "a single unmarked number is decimal degrees, in a right ascension too"],
+    ["12.5",            "dec",  12.5,                              "a single unmarked number is decimal degrees"],
     ["12:30",           "ra",   187.5,                             "hours and minutes"],
     ["+12:23:28",       "dec",  12 + 23 / 60 + 28 / 3600,          "degrees, arcminutes, arcseconds"],
     ["-05d07m",         "dec",  -(5 + 7 / 60),                     "d and m marks"],
@@ -69,8 +72,6 @@ describe("sexagesimal text is read as the trade writes it", () => {
     ["+-12:30",        "dec",  'dec: "+-12:30" has two signs: give one + or − before the first field'],
     ["−-05°07′",       "dec",  'dec: "−-05°07′" has two signs: give one + or − before the first field'],
     ["12 -30",         "dec",  'dec: "12 -30" has a sign inside it: give one + or − before the first field'],
-    ["+95:00:00",      "dec",  'dec: "+95:00:00" is beyond ±90°: a declination is −90° … +90°'],
-    ["90:00:00.1",     "dec",  'dec: "90:00:00.1" is beyond ±90°: a declination is −90° … +90°'],
     ["24:00:00",       "ra",   'ra: "24:00:00" has hours 24: a right ascension is below 24h (mark degrees with d or °)'],
     ["-01:00:00",      "ra",   'ra: "-01:00:00" has a sign: a right ascension is 0h … 24h with no sign'],
     ["12h30m",         "dec",  'dec: "12h30m" is in hours: a declination is in degrees (use d or °, or colons)'],
@@ -85,6 +86,15 @@ describe("sexagesimal text is read as the trade writes it", () => {
   ] as const)("%s (%s) is refused: %s", (text, part, message) => {
     expect(() => sexagesimalDegrees(text, part)).toThrow(TypeError);
     expect(() => sexagesimalDegrees(text, part)).toThrow(message);
+  });
+
+  test.each([
+    // text             part    whole message: a well-written angle beyond the pole is out of the domain (RangeError, #NUM!), as a number there is
+    ["+95:00:00",      "dec",  'dec: "+95:00:00" is beyond ±90°: a declination is −90° … +90°'],
+    ["90:00:00.1",     "dec",  'dec: "90:00:00.1" is beyond ±90°: a declination is −90° … +90°'],
+    ["-95d",           "lat",  'lat: "-95d" is beyond ±90°: a latitude is −90° … +90°'],
+  ] as const)("%s (%s) is refused: %s", (text, part, message) => {
+    expect(() => sexagesimalDegrees(text, part)).toThrow(new RangeError(message));
   });
 });
 
@@ -276,11 +286,15 @@ describe("the sheet: text in every position argument, ranges, blanks and errors"
     // call                                             kind     message
     [["COORD_DEG", "+12:63:28", "dec"],                 "value", 'ZC.COORD_DEG: text: "+12:63:28" has arcminutes 63: minutes and seconds must be below 60'],
     [["COORD_DEG", "+-12:30", "dec"],                   "value", 'ZC.COORD_DEG: text: "+-12:30" has two signs: give one + or − before the first field'],
-    [["COORD_DEG", "+95:00:00", "dec"],                 "value", 'ZC.COORD_DEG: text: "+95:00:00" is beyond ±90°: a declination is −90° … +90°'],
-    [["COORD_DEG", 95, "dec"],                          "num",   "ZC.COORD_DEG: text = 95° is beyond ±90°: a declination is −90 … 90"],
+    [["COORD_DEG", "+95:00:00", "dec"],                 "num",   'ZC.COORD_DEG: text: "+95:00:00" is beyond ±90°: a declination is −90° … +90°'],
+    [["COORD_DEG", 95, "dec"],                          "num",   "ZC.COORD_DEG: text = 95° is beyond ±90°: a declination is −90° … +90°"],
     [["COORD_DEG", "12:30", "az"],                      "value", 'ZC.COORD_DEG: part: "az" is not one of ra, dec'],
     [["SEPARATION", "12:30:49.4", "+12:75:00", 0, 0],   "value", 'ZC.SEPARATION: dec1: "+12:75:00" has arcminutes 75: minutes and seconds must be below 60'],
-    [["SEPARATION", 0, 95, 0, 0],                       "num",   "ZC.SEPARATION: dec1 = 95 is above 90 (the pole, 90°)"],
+    [["SEPARATION", 0, 95, 0, 0],                       "num",   "ZC.SEPARATION: dec1 = 95° is beyond ±90°: a declination is −90° … +90°"],
+    [["SEPARATION", 0, "+95:00:00", 0, 0],              "num",   'ZC.SEPARATION: dec1: "+95:00:00" is beyond ±90°: a declination is −90° … +90°'],
+    [["REDSHIFT_CMB", 0.1, 10, 95],                     "num",   "ZC.REDSHIFT_CMB: dec = 95° is beyond ±90°: a declination is −90° … +90°"],
+    [["REDSHIFT_CMB", 0.1, 10, -2, "rad"],              "num",   "ZC.REDSHIFT_CMB: dec = -2 rad is beyond ±90°: a declination is −90° … +90°"],
+    [["COORD_CONVERT", 10, -91, "galactic", "equatorial", "lon"], "num", "ZC.COORD_CONVERT: lat = -91° is beyond ±90°: a latitude is −90° … +90°"],
     [["REDSHIFT_CMB", 0.1, "25:00:00", 10],             "value", 'ZC.REDSHIFT_CMB: ra: "25:00:00" has hours 25: a right ascension is below 24h (mark degrees with d or °)'],
     [["COORD_CONVERT", 10, 10, "fk5", "galactic", "lon"], "value", 'ZC.COORD_CONVERT: from_frame: "fk5" is not one of equatorial, galactic, supergalactic, ecliptic'],
     [["COORD_TEXT", 10, "dec", 12],                     "num",   "ZC.COORD_TEXT: decimals = 12 is above 9 (nine decimals)"],

@@ -52,7 +52,7 @@ describe("input a catalogue user pastes", () => {
     expect(one("DIST_LUM", "0.5")).toBe(one("DIST_LUM", 0.5));
     expect(one("DIST_LUM", " 1.2e-3 ")).toBe(one("DIST_LUM", 1.2e-3));
     expect(run("DIST_LUM", [["0.5"], [" 2 "]])).toEqual(run("DIST_LUM", [[0.5], [2]]));
-    expect(errorOf(one("DIST_LUM", "0,5")).message).toBe('ZC.DIST_LUM: z: text "0,5" where a number belongs');
+    expect(errorOf(one("DIST_LUM", "0,5")).message).toBe('ZC.DIST_LUM: z: text "0,5" is not a number: use a point for decimals, 0.5');
   });
 
   test("a key/value block with a header row is one model; a misspelt key is one error naming it", () => {
@@ -63,7 +63,7 @@ describe("input a catalogue user pastes", () => {
     expect(out).toHaveLength(1);
     expect(errorOf(out[0][0])).toEqual({
       kind: "value",
-      message: 'ZC.DIST_LUM: model: unknown key "Omm" in the key/value block: use H0, Om, OL, Ok, Ob, w0, wa, Tcmb, Neff, mnu, preset',
+      message: 'ZC.DIST_LUM: model: unknown key "Omm" in the key/value block: did you mean Om? (the keys are H0, Om, OL, Ok, Ob, w0, wa, Tcmb, Neff, mnu, preset)',
     });
     // two model names side by side are two models, not a block
     expect(run("DIST_LUM", 1, [["P18-BAO", "W9-ALL"]])[0]).toHaveLength(2);
@@ -204,7 +204,7 @@ describe("models defined in the workbook", () => {
     expect([...bad.specs.keys()]).toEqual(["GOOD"]);
     expect(bad.problems).toEqual([
       'workbook model "P18-BAO" is a built-in preset: choose another name',
-      'workbook model BROKEN: H0: "abc" is not a number (use \'.\' as the decimal point)',
+      'workbook model BROKEN: H0: "abc" is not a number',
     ]);
   });
 });

@@ -100,7 +100,9 @@ describe("unit conversion", () => {
   });
 
   test("a unit nothing is near gets no invented suggestion", () => {
-    expect(() => parseUnit("qqqqqq")).toThrow(/^unknown unit "qqqqqq" in "qqqqqq"$/);
+    expect(() => parseUnit("qqqqqq")).toThrow(/^unknown unit "qqqqqq"$/);
+    // a spelling one whole unit shorter is not near: "erg/s/cm2" would drop the per-X
+    expect(() => parseUnit("erg/s/cm2/X")).toThrow(/^unknown unit "X" in "erg\/s\/cm2\/X"$/);
   });
 });
 
@@ -130,11 +132,11 @@ describe("what a wrong unit is told, whole", () => {
 
   test.each([
     // text        message
-    ["m**(2",      'unit "m**(2": missing ) after the power'],
-    ["m)",         'unit "m)": unexpected ")"'],
-    ["m/",         'unit "m/": a unit is missing'],
-    ["/s",         'unit "/s": unexpected "/"'],
-    ["m^(2/",      'unit "m^(2/": a whole-number power is expected'],
+    ["m**(2",      '"m**(2": missing ) after the power'],
+    ["m)",         '"m)": unexpected ")"'],
+    ["m/",         '"m/": a unit is missing'],
+    ["/s",         '"/s": unexpected "/"'],
+    ["m^(2/",      '"m^(2/": a whole-number power is expected'],
     ["",           "empty unit"],
   ])("%j", (text, message) => {
     expect(() => parseUnit(text)).toThrow(message);
@@ -174,8 +176,8 @@ describe("the FITS unit syntax, piece by piece (FITS Standard 4.0 §4.3)", () =>
 
   test.each([
     // text     whole message (our own)
-    ["m2s",     'unit "m2s": unexpected "s"'],                       // no space, no '.': not a product
-    ["m^x2",    'unit "m^x2": a whole-number power is expected'],
+    ["m2s",     '"m2s": put a space after the power, as in "m2 s"'],  // no space, no '.': not a product
+    ["m^x2",    '"m^x2": a whole-number power is expected'],
   ])("%j is refused: %s", (text, message) => {
     expect(() => parseUnit(text)).toThrow(new TypeError(message));
   });

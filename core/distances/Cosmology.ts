@@ -436,9 +436,11 @@ export class Cosmology {
     if (!(sizeMpc >= 0 && sizeMpc < Number.POSITIVE_INFINITY)) throw new RangeError(`size = ${sizeMpc} must be ≥ 0 and finite`);
     const da = this.angularDiameterDistanceMpc(z);
     if (sizeMpc === 0) return 0;
+    if (z === 0) throw new RangeError("z = 0 puts the source at zero distance: give z > 0");
     const theta = sizeMpc / da;
     if (!(da > 0) || !(theta <= Math.PI)) {
-      throw new RangeError(`size ${sizeMpc} Mpc at z = ${z} would subtend more than 180° (D_A = ${da.toPrecision(4)} Mpc)`);
+      const shown = (x: number) => Number(x.toPrecision(6));
+      throw new RangeError(`size = ${shown(sizeMpc)} Mpc at z = ${shown(z)} would subtend more than 180°: at most ${shown(Math.PI * da)} Mpc (π D_A) there`);
     }
     return theta;
   }

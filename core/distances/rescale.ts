@@ -9,6 +9,7 @@
  * h = H0/100: the physical value is value × h^p under the model it was computed in. It is restated
  * in physical units with h of `from`, rescaled, and given back in the same h-scaled unit with h of `to`.
  */
+import { quoted } from "../checks/quoted.js";
 import { checkSourceRedshift } from "../checks/redshift.js";
 import { parseUnit, type Unit } from "../units/units.js";
 import type { Cosmology } from "./Cosmology.js";
@@ -29,15 +30,20 @@ const unitDimensions: Record<Exclude<RescaleQuantity, "magnitude">, { dims: numb
 function hPowerOf(unitText: string, quantity: RescaleQuantity): number {
   if (quantity === "magnitude") {
     if (unitText.trim() === "mag") return 0;
-    throw new TypeError(`a magnitude takes no unit (got "${unitText}"); for M − 5 log10 h add 5 log10 h of from_model first`);
+    throw new TypeError(`a magnitude takes no unit (got ${quoted(unitText)}); for M − 5 log10 h add 5 log10 h of from_model first`);
   }
   const expected = unitDimensions[quantity];
   if (!expected) return 0;
-  const unit: Unit = parseUnit(unitText);
+  let unit: Unit;
+  try {
+    unit = parseUnit(unitText);
+  } catch (e) {
+    throw new TypeError(`unit: ${(e as Error).message}`); // the argument named, as every unit message does
+  }
   if (!expected.dims.some((d) => d.every((x, i) => Math.abs(x - unit.dimensions[i]) < 1e-12))) {
     const hour = /(^|[\s.*/(])h(?![A-Za-z])/.test(unitText) && unit.hPower === 0;
     const hint = hour ? `; h next to units without pc or a solar unit is the hour: write e.g. "${expected.example}"` : ` (e.g. "${expected.example}")`;
-    throw new TypeError(`unit "${unitText}" does not measure ${expected.what}, as a ${quantity} needs${hint}`);
+    throw new TypeError(`unit ${quoted(unitText)} does not measure ${expected.what}, as a ${quantity} needs${hint}`);
   }
   return unit.hPower;
 }

@@ -15,6 +15,7 @@
  * astrolib FM_UNRED documents it); Calzetti 2000, its eq. 4 (0.12–2.2 µm).
  */
 import { NoSolutionError } from "../checks/NoSolutionError.js";
+import { quoted } from "../checks/quoted.js";
 import { requireFiniteNumber, requireNonNegative } from "../checks/numberChecks.js";
 import { calzettiAttenuationPerEbv } from "./calzetti2000.js";
 import { cardelliExtinctionPerEbv } from "./cardelli1989.js";
@@ -58,7 +59,7 @@ const byComparableName = new Map(extinctionLaws.map((law) => [comparable(law), l
 export function extinctionLawNamed(text: string): ExtinctionLaw {
   const law = byComparableName.get(comparable(text));
   if (law === undefined) {
-    throw new TypeError(`law: "${text.length > 40 ? `${text.slice(0, 40)}…` : text}" is not one of ${extinctionLaws.join(", ")} (case and an apostrophe are ignored)`);
+    throw new TypeError(`law: ${quoted(text)} is not one of ${extinctionLaws.join(", ")} (case and an apostrophe are ignored)`);
   }
   return law;
 }

@@ -10,22 +10,75 @@
  * H0 and Om are required and Tcmb = 0 (no radiation) unless given, Neff = 3.046, mnu = 0, w0 = −1,
  * wa = 0; a model with neither OL nor Ok is flat.
  */
+import { isNumberText } from "../checks/numberText.js";
+import { quoted, quotedText } from "../checks/quoted.js";
 import { parameterKeys, specDefaults, type ModelParameters, type ParameterKey } from "./ModelParameters.js";
 import { defaultPresetName, findPreset, presets } from "./presets.js";
 
-const numberPattern = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
-const percentPattern = /^[+-]?(?:\d+\.?\d*|\.\d+)%$/;
+/** A percentage (linear: no part of the pattern can match the same digits in two ways). */
+const percentPattern = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)%$/;
+/** A number followed by more text that starts with a letter or "/": a number with its unit ("70km/s/Mpc"). */
+const numberThenWord = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?[A-Za-zµμ/°]/;
 /** Keys whose value is a fraction of the critical density (a percentage of it is a slip). */
 const densityKeys: ReadonlySet<string> = new Set(["Om", "OL", "Ok", "Ob"]);
+/** The unit each key with one is read in (ModelParameters). */
+const keyUnits: Readonly<Partial<Record<string, string>>> = { H0: "km/s/Mpc", Tcmb: "K", mnu: "eV" };
 
-function parseNumber(key: string, text: string): number {
+/**
+ * A key's value as a number.
+ * @param key the key, as the spec names it
+ * @param text the value without spaces
+ * @param typed the value as typed (spaces kept), for the message
+ */
+function parseNumber(key: string, text: string, typed = text): number {
+  if (isNumberText(text)) {
+    const x = Number(text);
+    if (!Number.isFinite(x)) throw new TypeError(`${key}: ${quoted(typed)} is too large a number`);
+    return x;
+  }
   if (percentPattern.test(text)) {
     const fraction = Number((Number(text.slice(0, -1)) / 100).toPrecision(6));
     const fix = densityKeys.has(key) ? `write the fraction, ${key}=${fraction}` : `write ${key} as a plain number`;
-    throw new TypeError(`${key}: "${quotedText(text)}" is a percentage: ${fix}`);
+    throw new TypeError(`${key}: ${quoted(typed)} is a percentage: ${fix}`);
   }
-  if (!numberPattern.test(text)) throw new TypeError(`${key}: "${quotedText(text)}" is not a number (use '.' as the decimal point)`);
-  return Number(text);
+  if (numberThenWord.test(text)) {
+    const unit = keyUnits[key];
+    throw new TypeError(`${key}: ${quoted(typed)}: give the number alone${unit ? ` (${key} is in ${unit})` : ""}`);
+  }
+  const pointed = text.replaceAll(",", ".");
+  if (pointed !== text && (isNumberText(pointed) || percentPattern.test(pointed))) {
+    throw new TypeError(`${key}: ${quoted(typed)} is not a number: use a point for decimals, ${quotedText(pointed)}`);
+  }
+  throw new TypeError(`${key}: ${quoted(typed)} is not a number`);
+}
+
+/** Spellings of the keys in other programs and papers (lower case, without "_", "omega" as "o", a final 0 dropped), by key (common practice). */
+const keySpellings: Readonly<Record<string, ParameterKey>> = {
+  om: "Om", omm: "Om", omatter: "Om", m: "Om",
+  ol: "OL", ode: "OL", olambda: "OL", olam: "OL", ox: "OL", de: "OL", lambda: "OL",
+  ok: "Ok", ocurv: "Ok", k: "Ok",
+  ob: "Ob", obaryon: "Ob",
+  w: "w0",
+  wa: "wa",
+  h: "H0", hubble: "H0",
+  tcmb: "Tcmb",
+  neff: "Neff", nnu: "Neff",
+  mnu: "mnu", summnu: "mnu", mnusum: "mnu",
+};
+
+/**
+ * What to tell of a key that is not one: the key it is probably another spelling of, and the keys.
+ * @param typed the key as typed, e.g. "Om0"
+ * @param keys the keys that are valid here
+ * @returns e.g. "did you mean Om? (the keys are H0, Om, …)", or "use H0, Om, …" when none is near
+ * @example keySuggestion("w", ["H0", "w0"]) // "did you mean w0? (the keys are H0, w0)"
+ */
+export function keySuggestion(typed: string, keys: readonly string[]): string {
+  const loose = typed.toLowerCase().replace(/[\s_\-]/g, "").replace(/^omega/, "o").replace(/^(.+?)0$/, "$1");
+  const meant = Object.hasOwn(keySpellings, loose) ? keySpellings[loose] : undefined;
+  if (meant === undefined || !keys.includes(meant)) return `use ${keys.join(", ")}`;
+  const note = meant === "H0" && loose === "h" ? " (in km/s/Mpc: H0 = 100 h)" : "";
+  return `did you mean ${meant}${note}? (the keys are ${keys.join(", ")})`;
 }
 
 /**
@@ -43,11 +96,15 @@ function withSemicolons(part: string): string | undefined {
   return pieces.length > 1 ? pieces.join("; ") : undefined;
 }
 
-function parseMasses(text: string): number[] {
+function parseMasses(text: string, typed = text): number[] {
   const items = text.split(",");
   if (items.length > 3) throw new TypeError(`mnu: at most three masses, got ${items.length}`);
+  if (items.length === 2 && items[0] === "0" && /^\d+$/.test(items[1])) {
+    // a list starts from its heaviest mass: "0,06" is 0.06 eV with a decimal comma, not 0 and 6 eV
+    throw new TypeError(`mnu: ${quoted(typed)} reads as two masses, 0 and ${quotedText(items[1])} eV: for one mass write mnu=0.${quotedText(items[1])} (a list is written heaviest first, "0.05,0.01")`);
+  }
   return items
-    .map((item) => parseNumber("mnu", item))
+    .map((item) => parseNumber("mnu", item, items.length === 1 ? typed : item))
     .filter((m) => m !== 0)
     .sort((a, b) => b - a);
 }
@@ -84,16 +141,6 @@ export class MissingParameterError extends TypeError {
 }
 
 /**
- * Text from a workbook as a message quotes it: at most 40 characters (a stored spec or name may be huge).
- * @param text any text, e.g. a spec part or a model name
- * @returns the text, cut to 39 characters and "…" when longer than 40
- * @example quotedText("x".repeat(50)).length // 40
- */
-export function quotedText(text: string): string {
-  return text.length > 40 ? `${text.slice(0, 39)}…` : text;
-}
-
-/**
  * Parses model spec text into parameters (syntax only; physical checks happen when the model is built).
  *
  * @param text spec text, e.g. "P18-CMB; H0=73"
@@ -105,44 +152,52 @@ export function quotedText(text: string): string {
  */
 export function parseModelSpec(text: string, named?: NamedModels): ModelParameters {
   if (typeof text !== "string") throw new TypeError("model spec must be text");
+  // each part as typed (for the messages) and without spaces (spaces inside a key or value are ignored)
   const parts = text
     .split(";")
-    .map((part) => part.replace(/\s+/g, ""))
-    .filter((part) => part !== "");
+    .map((typed) => ({ typed: typed.trim(), part: typed.replace(/\s+/g, "") }))
+    .filter(({ part }) => part !== "");
   if (parts.length === 0) throw new TypeError("empty model spec: give a preset name or key=value pairs");
   let base: ModelParameters | undefined;
   const given = new Map<ParameterKey, string>();
-  parts.forEach((part, index) => {
+  const typedValues = new Map<ParameterKey, string>();
+  parts.forEach(({ typed, part }, index) => {
     const rewritten = withSemicolons(part);
-    if (rewritten !== undefined) throw new TypeError(`"${quotedText(part)}": separate the parts with ';', e.g. "${quotedText(rewritten)}"`);
+    if (rewritten !== undefined) throw new TypeError(`${quoted(part)}: separate the parts with ';', e.g. ${quoted(rewritten)}`);
     const eq = part.indexOf("=");
     if (eq < 0) {
-      if (index > 0) throw new TypeError(`"${quotedText(part)}" is not key=value (a preset name may only come first)`);
+      const colon = part.indexOf(":");
+      if (colon > 0 && keyByLowerCase.has(part.slice(0, colon).toLowerCase())) {
+        const key = keyByLowerCase.get(part.slice(0, colon).toLowerCase())!;
+        throw new TypeError(`${quoted(typed)}: write each key as key=value, e.g. ${quoted(`${key}=${part.slice(colon + 1)}`)}`);
+      }
+      if (index > 0) throw new TypeError(`${quoted(part)} is not key=value (a preset name may only come first)`);
       const preset = findPreset(part)?.parameters ?? named?.find(part);
       if (!preset) {
         const known = [...presets.map((p) => p.name), ...(named?.names ?? [])];
         const listed = known.slice(0, namesListedAtMost).join(", ") + (known.length > namesListedAtMost ? ` … and ${known.length - namesListedAtMost} more` : "");
-        throw new TypeError(`unknown preset "${quotedText(part)}": use one of ${listed}`);
+        throw new TypeError(`unknown preset ${quoted(part)}: use one of ${listed}`);
       }
       base = preset;
       return;
     }
     if (part.indexOf("=", eq + 1) >= 0) {
-      throw new TypeError(`"${quotedText(part)}" holds several keys: separate keys with ';', e.g. "H0=70; Om=0.3; OL=0.7"`);
+      throw new TypeError(`${quoted(part)} holds several keys: separate keys with ';', e.g. "H0=70; Om=0.3; OL=0.7"`);
     }
     const rawKey = part.slice(0, eq);
     const key = keyByLowerCase.get(rawKey.toLowerCase());
-    if (!key) throw new TypeError(`unknown key "${quotedText(rawKey)}": use ${parameterKeys.join(", ")}`);
+    if (!key) throw new TypeError(`unknown key ${quoted(rawKey)}: ${keySuggestion(rawKey, parameterKeys)}`);
     if (given.has(key)) throw new TypeError(`${key} is given twice`);
     given.set(key, part.slice(eq + 1));
+    typedValues.set(key, typed.slice(typed.indexOf("=") + 1).trim());
   });
   if (given.has("OL") && given.has("Ok")) throw new TypeError("give OL or Ok, not both");
   const p: ModelParameters = base
     ? { ...base, mnu: [...base.mnu] }
     : { ...specDefaults, mnu: [], H0: Number.NaN, Om: Number.NaN };
   for (const [key, value] of given) {
-    if (key === "mnu") p.mnu = parseMasses(value);
-    else p[key] = parseNumber(key, value);
+    if (key === "mnu") p.mnu = parseMasses(value, typedValues.get(key));
+    else p[key] = parseNumber(key, value, typedValues.get(key));
   }
   if (!base) {
     for (const key of ["H0", "Om"] as const) {
@@ -169,12 +224,13 @@ export function withChanges(p: ModelParameters, changes: readonly (readonly [str
   const seen = new Set<ParameterKey>();
   for (const [rawKey, value] of changes) {
     const key = keyByLowerCase.get(rawKey.trim().toLowerCase());
-    if (!key) throw new TypeError(`unknown key "${quotedText(rawKey)}": use ${parameterKeys.join(", ")}`);
+    if (!key) throw new TypeError(`unknown key ${quoted(rawKey.trim())}: ${keySuggestion(rawKey.trim(), parameterKeys)}`);
     if (seen.has(key)) throw new TypeError(`${key} is given twice`);
     seen.add(key);
-    const text = String(value).replace(/\s+/g, "");
-    if (key === "mnu") out.mnu = parseMasses(text);
-    else out[key] = parseNumber(key, text);
+    const typed = String(value).trim();
+    const text = typed.replace(/\s+/g, "");
+    if (key === "mnu") out.mnu = parseMasses(text, typed);
+    else out[key] = parseNumber(key, text, typed);
     if (key === "OL") delete out.Ok;
     if (key === "Ok") delete out.OL;
   }

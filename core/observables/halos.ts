@@ -9,6 +9,7 @@
  */
 import { megaparsecM, solarMassKg } from "../units/constants.js";
 import { NoSolutionError } from "../checks/NoSolutionError.js";
+import { quoted } from "../checks/quoted.js";
 import { requireNonNegative } from "../checks/numberChecks.js";
 import type { Cosmology } from "../distances/Cosmology.js";
 
@@ -36,7 +37,7 @@ export function haloOverdensity(model: Cosmology, z: number, definition: string)
     );
   }
   const m = halo.exec(text);
-  if (!m || !(Number(m[1]) > 0)) throw new TypeError(`unknown halo definition "${text.slice(0, 40)}": use vir, 200c, 500c, 200m or any <N>c, <N>m`);
+  if (!m || !(Number(m[1]) > 0)) throw new TypeError(`unknown halo definition ${quoted(text)}: use vir, 200c, 500c, 200m or any <N>c, <N>m`);
   const n = Number(m[1]);
   return m[2].toLowerCase() === "c" ? n : n * model.densityParameter("matter", z);
 }

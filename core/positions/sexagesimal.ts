@@ -8,9 +8,11 @@
  * (U+2212). A right ascension is hours unless its first field is marked d or ° (degrees); a
  * declination is always degrees. Minutes and seconds must be below 60, hours of right ascension below
  * 24, degrees of longitude below 360 and a latitude within ±90°. A single unmarked field is a decimal
- * number of degrees. Writing rounds once, on the last digit, so it never shows 60 seconds.
+ * number of degrees, in a right ascension too (as a number there is degrees): "12h" is 12 hours.
+ * Writing rounds once, on the last digit, so it never shows 60 seconds.
  */
 import { requireFiniteNumber } from "../checks/numberChecks.js";
+import { quoted } from "../checks/quoted.js";
 
 /**
  * What an angle is: "ra" (right ascension: hours unless marked in degrees, 0 … 24h), "dec"
@@ -59,17 +61,12 @@ function skipSpaces(text: string, i: number): number {
 }
 
 function fail(name: string, text: string, what: string): never {
-  throw new TypeError(`${name}: "${shown(text.trim())}" ${what}`);
+  throw new TypeError(`${name}: ${quoted(text.trim())} ${what}`);
 }
 
 /** The character at `i` as a person sees it (both halves of a surrogate pair). */
 function characterAt(text: string, i: number): string {
   return String.fromCodePoint(text.codePointAt(i)!);
-}
-
-/** The text as quoted in a message (at most 40 characters). */
-function shown(text: string): string {
-  return text.length > 40 ? `${text.slice(0, 39)}…` : text;
 }
 
 function hint(part: AnglePart): string {
@@ -91,7 +88,7 @@ function hint(part: AnglePart): string {
  * @param name the argument's name for messages (default: the part)
  * @returns the angle [deg]: a right ascension or longitude in [0, 360), a declination or latitude in [−90, 90]
  * @throws TypeError naming the field at fault: text that is not an angle, two signs, minutes or
- *   seconds ≥ 60, hours ≥ 24, a signed right ascension, a declination beyond ±90°
+ *   seconds ≥ 60, hours ≥ 24, a signed right ascension; RangeError for a declination or latitude beyond ±90°
  * @example sexagesimalDegrees("12:30:49.4", "ra") // ≈ 187.7058333333
  * @example sexagesimalDegrees("−05°07′", "dec") // ≈ -5.1166666667
  */
@@ -194,7 +191,7 @@ export function sexagesimalDegrees(text: string, part: AnglePart, name: string =
     return degrees;
   }
   const magnitude = seconds / 3600;
-  if (magnitude > 90) fail(name, text, `is beyond ±90°: a ${part === "dec" ? "declination" : "latitude"} is −90° … +90°`);
+  if (magnitude > 90) throw new RangeError(`${name}: ${quoted(text.trim())} is beyond ±90°: a ${part === "dec" ? "declination" : "latitude"} is −90° … +90°`);
   return negative ? -magnitude : magnitude;
 }
 

@@ -4,6 +4,7 @@
  * measured at: f_ν = f_λ λ²/c (from f_ν |dν| = f_λ |dλ| with ν = c/λ; common practice).
  */
 import { requireNonNegative } from "../checks/numberChecks.js";
+import { quoted } from "../checks/quoted.js";
 import { angstromM, janskySI, speedOfLightMPerS } from "./constants.js";
 import { conversionFactor, parseUnit } from "./units.js";
 
@@ -40,7 +41,7 @@ function readUnit(unit: string): FluxDensityUnit {
       return { factorSI: conversionFactor(text, "W/m2/m"), perWavelength: true };
     } catch {
       throw new TypeError(
-        `"${text}" is not a flux density: use one per frequency (Jy, mJy, erg/s/cm2/Hz) or per wavelength (erg/s/cm2/Angstrom, W/m2/um)`,
+        `${quoted(text)} is not a flux density: use one per frequency (Jy, mJy, erg/s/cm2/Hz) or per wavelength (erg/s/cm2/Angstrom, W/m2/um)`,
       );
     }
   }
@@ -68,7 +69,7 @@ export function fluxDensityFactorJy(unit: string, wavelengthAngstrom = Number.Na
   }
   if (!read.perWavelength) return read.factorSI / janskySI;
   if (Number.isNaN(wavelengthAngstrom)) {
-    throw new TypeError(`wavelength is needed with "${unit.trim()}", a flux density per wavelength (f_λ): give it in Angstrom (the last argument) to turn f_λ into f_ν`);
+    throw new TypeError(`wavelength is needed with ${quoted(unit.trim())}, a flux density per wavelength (f_λ): give it in Angstrom (the last argument), for f_ν = f_λ λ²/c`);
   }
   requireNonNegative("wavelength", wavelengthAngstrom, "Angstrom", true);
   checkFLambdaWavelength(wavelengthAngstrom);

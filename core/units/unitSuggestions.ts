@@ -2,8 +2,9 @@
  * What a mistyped unit was probably meant to be. Units are case-sensitive (FITS Standard 4.0, §4.3:
  * "mpc" is a milliparsec), so a spelling of a common astronomical unit in the wrong case that still
  * parses would silently scale a result by huge factors: those few are refused outright (`caseSlip`).
- * Any other unit that does not parse gets the nearest spellings astronomers use (`nearestUnits`), or
- * the same with "/" where the word "per" was typed (`slashForPer`).
+ * Spellings the trade uses that FITS does not ("micron", "AA", "A" for the ångström) are refused with
+ * the FITS symbol (`tradeSpelling`). Any other unit that does not parse gets the nearest spellings
+ * astronomers use (`nearestUnits`), or the same with "/" where the word "per" was typed (`slashForPer`).
  */
 
 /** Symbols that parse but are almost surely a trade unit in the wrong case: symbol → what was meant. */
@@ -21,6 +22,44 @@ const caseSlips: Readonly<Record<string, { meant: string; reads: string }>> = {
  */
 export function caseSlip(symbol: string): { meant: string; reads: string } | undefined {
   return Object.hasOwn(caseSlips, symbol) ? caseSlips[symbol] : undefined;
+}
+
+/** What a trade spelling that FITS does not read is, and the FITS symbol to write (none when it depends on what was meant). */
+type TradeSpelling = { reads: string; write?: string };
+
+const forAngstrom: TradeSpelling = { reads: "is not FITS for the ångström", write: "Angstrom" };
+const forMicrometre: TradeSpelling = { reads: "is not FITS for the micrometre", write: "um" };
+const forHours: TradeSpelling = { reads: "is not a FITS unit: write h for hours of time, or hourangle for hours of right ascension" };
+
+/**
+ * Symbols astronomers type that FITS does not read (FITS Standard 4.0 §4.3, Table 3: "A" is the
+ * ampere, the ångström is "Angstrom", the micrometre "um", the hour "h"), with what to write instead.
+ */
+const tradeSpellings: ReadonlyMap<string, TradeSpelling> = new Map([
+  ["A", { reads: "is the ampere in FITS, not the ångström", write: "Angstrom" }],
+  ["AA", forAngstrom],
+  // a Map of strings, not an object's keys: a minifier writes a key as a bare identifier, and a
+  // non-ASCII identifier is a syntax error in a bundle a host reads in another encoding than UTF-8
+  ["\u00c5", forAngstrom], // Å, Latin capital A with ring above
+  ["\u212b", forAngstrom], // Å, the ångström sign
+  ["Angstroms", forAngstrom],
+  ["angstroms", forAngstrom],
+  ["micron", forMicrometre],
+  ["microns", forMicrometre],
+  ["hour", forHours],
+  ["hours", forHours],
+  ["hr", forHours],
+  ["hrs", forHours],
+]);
+
+/**
+ * What a symbol that FITS does not read was meant to be, when it is a spelling of the trade.
+ * @param symbol one unit symbol as typed, e.g. "micron"
+ * @returns what it is (words that follow the quoted symbol) and the FITS symbol to write, or undefined
+ * @example tradeSpelling("micron")?.write // "um"
+ */
+export function tradeSpelling(symbol: string): TradeSpelling | undefined {
+  return tradeSpellings.get(symbol);
 }
 
 /** Whole units as astronomers write them, in the order a suggestion prefers them (common practice). */
@@ -49,19 +88,30 @@ function editDistance(a: string, b: string): number {
   return previous[b.length];
 }
 
+/** How many times "/" occurs in a text. */
+function slashes(text: string): number {
+  let count = 0;
+  for (let i = text.indexOf("/"); i >= 0; i = text.indexOf("/", i + 1)) count++;
+  return count;
+}
+
 /**
  * The known spellings nearest to a unit that does not parse: first those equal to it up to case,
  * spaces, underscores and "ergs", then those within two edits; at most two, with a FITS synonym.
+ * A spelling with another number of "/" is never offered: it would drop or add a whole unit
+ * ("erg/s/cm2/X" is not near "erg/s/cm2").
  * @param text the unit as typed, e.g. "ergs/s/cm2"
  * @returns suggestions, best first (empty when nothing is near)
  * @example nearestUnits("L_sun") // ["Lsun", "solLum"]
  */
 export function nearestUnits(text: string): string[] {
+  if (text.length > 100) return []; // no unit is that long: not searched (nor loosened)
   const typed = loose(text.trim());
   if (typed === "" || typed.length > 40) return [];
-  let found = commonUnits.filter((u) => loose(u) === typed);
+  const candidates = commonUnits.filter((u) => slashes(u) === slashes(text));
+  let found = candidates.filter((u) => loose(u) === typed);
   if (found.length === 0) {
-    const scored = commonUnits
+    const scored = candidates
       .map((u) => ({ u, d: editDistance(typed, loose(u)) }))
       .filter(({ d }) => d <= Math.min(2, Math.floor(typed.length / 2)));
     const best = Math.min(...scored.map(({ d }) => d));
@@ -79,6 +129,8 @@ export function nearestUnits(text: string): string[] {
  * @example slashForPer("kpc per arcsec") // "kpc/arcsec"
  */
 export function slashForPer(text: string): string | undefined {
-  const slashed = text.replace(/\s*\bper\b\s*/gi, "/");
-  return slashed === text ? undefined : slashed.trim();
+  // split on the word alone, then trim the pieces: spaces around it are dropped in one pass (a
+  // pattern with \s* on both sides of the word retries every run of spaces from each of its places)
+  const pieces = text.split(/\bper\b/i);
+  return pieces.length === 1 ? undefined : pieces.map((piece) => piece.trim()).join("/");
 }

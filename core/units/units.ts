@@ -11,6 +11,7 @@
  * h-3 Mpc3, h-1 Msun, h3 Mpc-3), `h` is the dimensionless h = H0/(100 km/s/Mpc) of a model, as survey
  * work writes it; everywhere else `h` is the hour (FITS). Converting such a unit needs the model's h.
  */
+import { quoted, quotedText } from "../checks/quoted.js";
 import {
   angstromM,
   auM,
@@ -26,26 +27,34 @@ import {
   speedOfLightMPerS,
 } from "./constants.js";
 import { dimensionsOf, dimensionWords, sameDimensions, type Dimensions } from "./dimensionWords.js";
-import { caseSlip, nearestUnits, slashForPer } from "./unitSuggestions.js";
+import { caseSlip, nearestUnits, slashForPer, tradeSpelling } from "./unitSuggestions.js";
 
 /** A parsed unit: value in SI base units = value in this unit × factor. */
 export interface Unit {
   /** The text as given. */
   readonly text: string;
-  /** SI factor: 1 of this unit = factor × the SI base combination. */
+  /** SI factor: 1 of this unit = factor × the SI base combination (angles in radians). */
   readonly factor: number;
+  /**
+   * The same factor with angles counted in degrees (1 rad = 180/π): equal to `factor` for a unit
+   * without angles. Conversions use it, so that the ratio of two angle units defined in degrees is
+   * exact (hourangle/deg = 15, deg/arcsec = 3600).
+   */
+  readonly factorDeg: number;
   /** Exponents of m, kg, s, K, rad. */
   readonly dimensions: Dimensions;
   /** Power of h = H0/100 the unit carries (Mpc/h: −1; h3 Mpc-3: 3); 0 for an ordinary unit. */
   readonly hPower: number;
 }
 
+/** A unit's definition: its factor into the base units, with angles in degrees (1 rad = 180/π deg). */
 type Definition = { factor: number; dimensions: Dimensions; prefixable: boolean };
 
 const none: Dimensions = [0, 0, 0, 0, 0];
 const d = dimensionsOf;
 
-const degree = Math.PI / 180;
+/** One radian in degrees. */
+const radianDeg = 180 / Math.PI;
 const definitions: Record<string, Definition> = {
   m: { factor: 1, dimensions: d(1, 0, 0), prefixable: true },
   g: { factor: 1e-3, dimensions: d(0, 1, 0), prefixable: true },
@@ -69,13 +78,14 @@ const definitions: Record<string, Definition> = {
   solLum: { factor: solarLuminosityW, dimensions: d(2, 1, -3), prefixable: false },
   solMass: { factor: solarMassKg, dimensions: d(0, 1, 0), prefixable: false },
   K: { factor: 1, dimensions: d(0, 0, 0, 1), prefixable: true },
-  rad: { factor: 1, dimensions: d(0, 0, 0, 0, 1), prefixable: true },
-  deg: { factor: degree, dimensions: d(0, 0, 0, 0, 1), prefixable: false },
-  hourangle: { factor: 15 * degree, dimensions: d(0, 0, 0, 0, 1), prefixable: false }, // 1h of right ascension = 15°
-  arcmin: { factor: degree / 60, dimensions: d(0, 0, 0, 0, 1), prefixable: false },
-  arcsec: { factor: degree / 3600, dimensions: d(0, 0, 0, 0, 1), prefixable: false },
-  mas: { factor: degree / 3.6e6, dimensions: d(0, 0, 0, 0, 1), prefixable: false },
-  sr: { factor: 1, dimensions: d(0, 0, 0, 0, 2), prefixable: false },
+  // angles in degrees (FITS 4.0 Table 5: deg, arcmin, arcsec, mas; the hour angle is 15°)
+  rad: { factor: radianDeg, dimensions: d(0, 0, 0, 0, 1), prefixable: true },
+  deg: { factor: 1, dimensions: d(0, 0, 0, 0, 1), prefixable: false },
+  hourangle: { factor: 15, dimensions: d(0, 0, 0, 0, 1), prefixable: false }, // 1h of right ascension = 15°
+  arcmin: { factor: 1 / 60, dimensions: d(0, 0, 0, 0, 1), prefixable: false },
+  arcsec: { factor: 1 / 3600, dimensions: d(0, 0, 0, 0, 1), prefixable: false },
+  mas: { factor: 1 / 3.6e6, dimensions: d(0, 0, 0, 0, 1), prefixable: false },
+  sr: { factor: radianDeg * radianDeg, dimensions: d(0, 0, 0, 0, 2), prefixable: false },
 };
 
 /** Spellings astronomers type, mapped to FITS symbols. */
@@ -95,44 +105,58 @@ const prefixes: Record<string, number> = {
   Y: 1e24, Z: 1e21, E: 1e18, P: 1e15, T: 1e12, G: 1e9, M: 1e6, k: 1e3, h: 1e2, da: 1e1,
   d: 1e-1, c: 1e-2, m: 1e-3, u: 1e-6, n: 1e-9, p: 1e-12, f: 1e-15, a: 1e-18, z: 1e-21, y: 1e-24,
 };
+/** The prefixes, longest first ("da" before "d"). */
+const prefixesLongestFirst = Object.keys(prefixes).sort((x, y) => y.length - x.length);
 
-function resolveSymbol(symbol: string, whole: string): { factor: number; dimensions: Dimensions } {
-  const slip = caseSlip(symbol);
-  if (slip) {
-    const meant = whole.replace(new RegExp(`(^|[^A-Za-z])${symbol}(?![A-Za-z])`), `$1${slip.meant}`);
-    throw new TypeError(`"${whole}" would be ${slip.reads} (units are case-sensitive): did you mean ${meant}?`);
-  }
-  const name = aliases[symbol] ?? symbol;
-  const exact = definitions[name];
-  if (exact) return exact;
-  for (const prefix of Object.keys(prefixes).sort((x, y) => y.length - x.length)) {
-    if (name.startsWith(prefix) && name.length > prefix.length) {
-      const def = definitions[name.slice(prefix.length)];
-      if (def?.prefixable) return { factor: prefixes[prefix] * def.factor, dimensions: def.dimensions };
-    }
-  }
-  if (symbol === "mag") throw new TypeError(`"${whole}": magnitudes are logarithmic, not a unit to convert`);
-  throw new TypeError(`unknown unit "${symbol}" in "${whole}"`);
-}
+/** Parentheses a unit may nest (FITS sets no limit; (Mpc/h)3 needs one). */
+const maxNesting = 16;
+/** Digits a power or a scale factor's exponent may have (10**-26 has two). */
+const maxPowerDigits = 3;
+/** The power of h = H0/100 a unit carries at most (h3 Mpc-3, a number density). */
+const maxHPower = 3;
 
 /** Parsed dimensions: m, kg, s, K, rad, then the power of the symbol `h` (hour or little h, decided at the end). */
 type Parsed = { factor: number; dimensions: number[] };
 const hSymbol = 5;
 
+/** A letter of a unit symbol: ASCII letters, the micro sign and Greek mu, and Å (read to be refused with its fix). */
+function isSymbolLetter(code: number): boolean {
+  return (code >= 65 && code <= 90) || (code >= 97 && code <= 122) || code === 0xb5 || code === 0x3bc || code === 0xc5 || code === 0x212b;
+}
+
+function isDigit(code: number): boolean {
+  return code >= 48 && code <= 57;
+}
+
 class UnitParser {
   private i = 0;
+  private depth = 0;
   /** The unit holds a parsec or solar unit: `h` is then h = H0/100, not the hour. */
   astronomical = false;
+  /** The message thrown already says how to write the unit: no suggestion is added to it. */
+  fixed = false;
   constructor(private readonly s: string) {}
 
   parse(): Parsed {
     const result = this.expression();
-    if (this.i < this.s.length) this.fail(`unexpected "${this.s[this.i]}"`);
+    if (this.i < this.s.length) this.unexpected();
     return result;
   }
 
-  private fail(what: string): never {
-    throw new TypeError(`unit "${this.s}": ${what}`);
+  private fail(what: string, fixed = false): never {
+    this.fixed = fixed;
+    throw new TypeError(`${quoted(this.s)}: ${what}`);
+  }
+
+  /** The character at the parser's place is not what the syntax allows there. */
+  private unexpected(): never {
+    const c = this.s.codePointAt(this.i)!;
+    if (this.i > 0 && isDigit(this.s.charCodeAt(this.i - 1)) && (isSymbolLetter(c) || c === 40)) {
+      // FITS 4.0 §4.3: a power ends its factor, so a symbol glued to it ("h-1Msun") needs a separator
+      const spaced = `${this.s.slice(0, this.i)} ${this.s.slice(this.i)}`;
+      this.fail(`put a space after the power, as in ${quoted(spaced)}`, true);
+    }
+    this.fail(`unexpected "${String.fromCodePoint(c)}"`);
   }
 
   private peek(): string {
@@ -141,7 +165,7 @@ class UnitParser {
 
   private skipSpaces(): boolean {
     const start = this.i;
-    while (this.peek() === " ") this.i++;
+    while (this.s.charCodeAt(this.i) === 32) this.i++;
     return this.i > start;
   }
 
@@ -171,24 +195,31 @@ class UnitParser {
     const c = this.peek();
     let base: Parsed;
     if (c === "(") {
+      if (++this.depth > maxNesting) this.fail(`parentheses nested more than ${maxNesting} deep`);
       this.i++;
       base = this.expression();
       this.skipSpaces();
       if (this.peek() !== ")") this.fail("missing )");
       this.i++;
+      this.depth--;
     } else if (this.s.startsWith("10**", this.i) || this.s.startsWith("10^", this.i)) {
       this.i += this.s.startsWith("10**", this.i) ? 4 : 3;
       const k = this.integer();
       return { factor: 10 ** k, dimensions: [...none, 0] };
     } else {
-      const m = /^[A-Za-zµμ]+/.exec(this.s.slice(this.i));
-      if (!m) this.fail(c === "" ? "a unit is missing" : `unexpected "${c}"`);
-      this.i += m[0].length;
-      const symbol = m[0].replace(/^[µμ]/, "u");
+      const start = this.i;
+      while (this.i < this.s.length && isSymbolLetter(this.s.charCodeAt(this.i))) this.i++;
+      if (this.i === start) {
+        if (c === "") this.fail("a unit is missing");
+        this.unexpected();
+      }
+      const typed = this.s.slice(start, this.i);
+      const symbol = typed.replace(/^[µμ]/, "u");
       if (symbol === "h") {
+        if (isDigit(this.s.charCodeAt(this.i))) this.hWithDigits(start);
         base = { factor: 1, dimensions: [...none, 1] };
       } else {
-        const def = resolveSymbol(symbol, this.s);
+        const def = this.resolve(symbol, typed, start);
         if (/pc$|^sol/.test(aliases[symbol] ?? symbol)) this.astronomical = true;
         base = { factor: def.factor, dimensions: [...def.dimensions, 0] };
       }
@@ -197,11 +228,62 @@ class UnitParser {
     return power === 1 ? base : { factor: base.factor ** power, dimensions: base.dimensions.map((x) => x * power) };
   }
 
+  /** `h` followed at once by digits: a power of h up to 3 ("h3 Mpc-3"); h70 or h100 is the survey notation H0/70, H0/100, which zcell does not read as such. */
+  private hWithDigits(start: number): void {
+    let end = this.i;
+    while (isDigit(this.s.charCodeAt(end))) end++;
+    const digits = this.s.slice(this.i, end);
+    if (Number(digits) <= maxHPower) return;
+    const written = `h${quotedText(digits)}`;
+    if (digits === "100") {
+      const meant = `${this.s.slice(0, start)}h${this.s.slice(end)}`;
+      this.fail(`zcell's h is already H0/100, and "h100" would be h to the power 100: write ${quoted(meant)}`, true);
+    }
+    this.fail(
+      `zcell's h is H0/100 (as in Mpc/h), and "${written}" would be h to the power ${quotedText(digits)}; ${written} = H0/${quotedText(digits)} is not a unit zcell reads: give the values in a unit without h (e.g. Mpc) and the model`,
+      true,
+    );
+  }
+
+  /** A symbol's definition (with a prefix, an alias), or the reason it has none: a case slip, a trade spelling, a magnitude, unknown. */
+  private resolve(symbol: string, typed: string, start: number): { factor: number; dimensions: Dimensions } {
+    const whole = this.s;
+    const replaced = (by: string) => `${whole.slice(0, start)}${by}${whole.slice(start + typed.length)}`;
+    const slip = caseSlip(symbol);
+    if (slip) {
+      this.fixed = true;
+      throw new TypeError(`${quoted(whole)} would be ${slip.reads} (units are case-sensitive): did you mean ${quotedText(replaced(slip.meant))}?`);
+    }
+    const name = aliases[symbol] ?? symbol;
+    const exact = definitions[name];
+    if (exact) return exact;
+    for (const prefix of prefixesLongestFirst) {
+      if (name.startsWith(prefix) && name.length > prefix.length) {
+        const def = definitions[name.slice(prefix.length)];
+        if (def?.prefixable) return { factor: prefixes[prefix] * def.factor, dimensions: def.dimensions };
+      }
+    }
+    const trade = tradeSpelling(typed);
+    if (trade) {
+      this.fixed = true;
+      const what = `${quoted(typed)} ${trade.reads}${trade.write === undefined ? "" : `: write ${quoted(replaced(trade.write))}`}`;
+      throw new TypeError(typed === whole ? what : `${quoted(whole)}: ${what}`);
+    }
+    if (symbol === "mag") {
+      this.fixed = true;
+      throw new TypeError(`${quoted(whole)}: magnitudes are logarithmic, not a unit to convert`);
+    }
+    throw new TypeError(typed === whole ? `unknown unit ${quoted(typed)}` : `unknown unit ${quoted(typed)} in ${quoted(whole)}`);
+  }
+
   private integer(): number {
-    const m = /^[+-]?\d+/.exec(this.s.slice(this.i));
-    if (!m) this.fail("a whole-number power is expected");
-    this.i += m[0].length;
-    return Number(m[0]);
+    const start = this.i;
+    if (this.peek() === "+" || this.peek() === "-") this.i++;
+    const digitsFrom = this.i;
+    while (isDigit(this.s.charCodeAt(this.i))) this.i++;
+    if (this.i === digitsFrom) this.fail("a whole-number power is expected");
+    if (this.i - digitsFrom > maxPowerDigits) this.fail(`a power has at most ${maxPowerDigits} digits`);
+    return Number(this.s.slice(start, this.i));
   }
 
   private power(): number {
@@ -245,7 +327,9 @@ function suggestions(text: string): string[] {
  *
  * @param text unit text, e.g. "Mpc", "erg/s/cm2", "kpc/arcsec", "km s-1 Mpc-1"
  * @returns the unit with its SI factor and dimensions
- * @throws TypeError for unknown symbols or malformed text
+ * @throws TypeError for unknown symbols or malformed text, quoting it (at most 40 characters) with
+ *   the fix when one is known (a case slip, a trade spelling such as "micron", h70, a power glued to
+ *   the next symbol) or the nearest spellings
  * @example parseUnit("Mpc").factor // 3.0856775814913673e22
  */
 export function parseUnit(text: string): Unit {
@@ -259,20 +343,25 @@ export function parseUnit(text: string): Unit {
   try {
     parsed = parser.parse();
   } catch (e) {
-    const near = e instanceof TypeError && !/did you mean|magnitudes/.test(e.message) ? suggestions(trimmed) : [];
+    const near = e instanceof TypeError && !parser.fixed ? suggestions(trimmed) : [];
     if (near.length === 0) throw e;
     throw new TypeError(`${(e as Error).message}: did you mean ${near.join(" or ")}?`);
   }
   const dims = parsed.dimensions;
   const hPower = dims[hSymbol];
-  let factor = parsed.factor;
+  let factorDeg = parsed.factor;
   if (hPower !== 0 && !parser.astronomical) {
-    factor *= 3600 ** hPower; // the hour
+    factorDeg *= 3600 ** hPower; // the hour
     dims[2] += hPower;
   }
+  if (parser.astronomical && Math.abs(hPower) > maxHPower) {
+    throw new TypeError(`${quoted(trimmed)}: h to the power ${hPower}: h-scaled units carry h to a power from -${maxHPower} to ${maxHPower} (h3 Mpc-3)`);
+  }
+  const angles = dims[4];
   const unit: Unit = {
     text: trimmed,
-    factor,
+    factor: angles === 0 ? factorDeg : factorDeg * (Math.PI / 180) ** angles,
+    factorDeg,
     dimensions: dims.slice(0, hSymbol) as unknown as Dimensions,
     hPower: parser.astronomical ? hPower : 0,
   };
@@ -308,10 +397,10 @@ export function scaledConversion(from: string, to: string): { factor: number; hP
   const b = parseUnit(to);
   if (!sameDimensions(a.dimensions, b.dimensions)) {
     throw new TypeError(
-      `cannot convert "${a.text}" (${dimensionWords(a.dimensions, a.text)}) to "${b.text}" (${dimensionWords(b.dimensions, b.text)})`,
+      `cannot convert ${quoted(a.text)} (${dimensionWords(a.dimensions, a.text)}) to ${quoted(b.text)} (${dimensionWords(b.dimensions, b.text)})`,
     );
   }
-  return { factor: a.factor / b.factor, hPower: a.hPower - b.hPower };
+  return { factor: a.factorDeg / b.factorDeg, hPower: a.hPower - b.hPower };
 }
 
 /**
@@ -331,7 +420,7 @@ export function conversionFactor(from: string, to: string, h?: number): number {
   if (hPower === 0) return factor;
   if (h === undefined) {
     const scaled = parseUnit(from).hPower !== 0 ? from : to;
-    throw new TypeError(`"${scaled.trim()}" is in units of h = H0/100: give a model`);
+    throw new TypeError(`${quoted(scaled.trim())} is in units of h = H0/100: give a model`);
   }
   return factor * h ** hPower;
 }
@@ -362,13 +451,13 @@ export function convertUnit(value: number, from: string, to: string, h?: number)
  * @example frequencyHz(5100, "Angstrom", "rest") // 5.878e14
  */
 export function frequencyHz(value: number, unit: string, name: string): number {
-  if (!(value > 0 && value < Number.POSITIVE_INFINITY)) throw new RangeError(`${name} = ${value} ${unit.trim()} must be > 0`);
+  if (!(value > 0 && value < Number.POSITIVE_INFINITY)) throw new RangeError(`${name} = ${value} ${quotedText(unit.trim())} must be > 0`);
   const u = parseUnit(unit);
   const x = value * u.factor;
   if (sameDimensions(u.dimensions, d(0, 0, -1))) return x;
   if (sameDimensions(u.dimensions, d(1, 0, 0))) return speedOfLightMPerS / x;
   if (sameDimensions(u.dimensions, d(2, 1, -2))) return x / planckConstantJs;
-  throw new TypeError(`${name}: "${u.text}" is ${dimensionWords(u.dimensions, u.text)}; use a frequency (GHz), a wavelength (Angstrom, um) or an energy (eV)`);
+  throw new TypeError(`${name}: ${quoted(u.text)} is ${dimensionWords(u.dimensions, u.text)}; use a frequency (GHz), a wavelength (Angstrom, um) or an energy (eV)`);
 }
 
 /**

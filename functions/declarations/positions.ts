@@ -9,11 +9,11 @@ import { definitions as d } from "../definitions.js";
 import { callFromSheet } from "../evaluate.js";
 
 /**
- * An angle in degrees from sexagesimal text: a right ascension "12:30:49.4", "12h30m49.4s" or "12 30 49.4" is hours (× 15°; marked d or ° it is degrees), a declination "+12:23:28", "-05d07m" or "−05°07′" is degrees; a number is already degrees (an RA is wrapped into 0–360°). Minutes and seconds ≥ 60, two signs or a declination beyond ±90° are #VALUE! naming the part. Keep positions as text in cells (format the column as Text before pasting, or type an apostrophe first): Excel may read 12:30:49.4 typed into a cell as a time of day, which is a number, and a number is read as degrees.
+ * An angle in degrees from sexagesimal text: a right ascension "12:30:49.4", "12h30m49.4s" or "12 30 49.4" is hours (× 15°; marked d or ° it is degrees), a declination "+12:23:28", "-05d07m" or "−05°07′" is degrees; a number is already degrees (an RA is wrapped into 0–360°), and so is text that is only a number: "12" is 12°, write "12h" for 12 hours. Minutes and seconds ≥ 60 or two signs are #VALUE! naming the part, a declination beyond ±90° #NUM!. Keep positions as text in cells (format the column as Text before pasting, or type an apostrophe first): Excel may read 12:30:49.4 typed into a cell as a time of day, which is a number, and a number is read as degrees.
  * @customfunction COORD_DEG COORD_DEG
  * @helpurl https://localhost:3000/help.html#COORD_DEG
  * @example =ZC.COORD_DEG("14:05:12.3", "ra")
- * @param text Position as sexagesimal text, or a number in degrees (value or range).
+ * @param text Position as sexagesimal text, or a number in degrees; text that is only a number ("12") is degrees too, so write "12h" for 12 hours of right ascension (value or range).
  * @param part "ra" (right ascension, hours) or "dec" (declination, degrees) (value or range).
  * @returns Degrees: 0 … 360 for ra, −90 … 90 for dec.
  */
@@ -40,7 +40,7 @@ export function COORD_TEXT(degrees: any[][], part: any[][], decimals?: any[][]):
  * @customfunction SEPARATION SEPARATION
  * @helpurl https://localhost:3000/help.html#SEPARATION
  * @example =ZC.SEPARATION("14:05:12.3", "-03:21:45", "14:05:12.4", "-03:21:46")
- * @param ra1 Right ascension of the first position: degrees, or text such as "12:30:49.4" (hours) (value or range).
+ * @param ra1 Right ascension of the first position: degrees, or text such as "12:30:49.4" (hours); text that is only a number ("12") is degrees, "12h" is 12 hours (value or range).
  * @param dec1 Declination of the first position: degrees (−90 … 90), or text such as "+12:23:28" (value or range).
  * @param ra2 Right ascension of the second position (value or range).
  * @param dec2 Declination of the second position (value or range).
@@ -56,7 +56,7 @@ export function SEPARATION(ra1: any[][], dec1: any[][], ra2: any[][], dec2: any[
  * @customfunction COORD_CONVERT COORD_CONVERT
  * @helpurl https://localhost:3000/help.html#COORD_CONVERT
  * @example =ZC.COORD_CONVERT("14:05:12.3", "-03:21:45", "equatorial", "galactic", "lat")
- * @param lon Longitude in from_frame, degrees (an equatorial RA may be text in hours, "12:30:49.4") (value or range).
+ * @param lon Longitude in from_frame, degrees (an equatorial RA may be text in hours, "12:30:49.4" or "12h"; text that is only a number is degrees) (value or range).
  * @param lat Latitude in from_frame, degrees −90 … 90 (or text, "+12:23:28") (value or range).
  * @param from_frame "equatorial", "galactic", "supergalactic" or "ecliptic".
  * @param to_frame The frame wanted, one of the same.

@@ -38,8 +38,6 @@ export const area = num("area", { default: 4 * Math.PI, blankMeansDefault: true,
 /** A survey's sky area, required (a blank would silently mean the whole sky). */
 export const requiredArea = num("area", { min: 0, max: { value: 4 * Math.PI, what: "the whole sky" } });
 export const angle = num("angle", { min: 0, max: { value: Math.PI, what: "180°" } });
-/** An optional text read once (a unit given as text, a convention): `blank` is what leaving it out means. */
-export const optionalText = (name: string, blank: BlankMeaning): ArgSpec => ({ kind: "text", name, scalar: true, optional: true, blank });
 /** An optional text with a default value one could type (`typed`): blank means that value. */
 export const textWithDefault = (name: string, typed: string, extra: { choices?: readonly string[]; scalar?: boolean } = { scalar: true }): ArgSpec => ({
   kind: "text",
@@ -55,11 +53,29 @@ export function textOr(a: Args, spec: ArgSpec): string {
   if (spec.kind !== "text" || !spec.blank || !("typed" in spec.blank)) throw new Error(`${spec.name} has no default`);
   return spec.blank.typed;
 }
+/**
+ * An optional unit given as text that compute converts itself (its kind depends on other arguments):
+ * checked once when the call is read, #VALUE! naming the argument; `blank` is what leaving it out
+ * means, `applies` the number arguments given in it (their messages quote them in it).
+ */
+export const textUnit = (name: string, blank: BlankMeaning, applies: readonly string[] = []): ArgSpec => ({
+  kind: "text",
+  name,
+  scalar: true,
+  optional: true,
+  blank,
+  unit: { applies },
+});
+/** The same text unit, with the number arguments given in it in this function. */
+export function givenIn(spec: ArgSpec, ...applies: string[]): ArgSpec {
+  if (spec.kind !== "text" || !spec.unit) throw new Error(`${spec.name} is not a text unit`);
+  return { ...spec, unit: { applies } };
+}
 /** The flux-density unit of MAG_AB and FLUX_AB, the band unit of the two-band and rest-frame functions: text (its kind depends on other arguments), with the default shown. */
-export const fluxDensityUnit = textWithDefault("unit", "Jy");
-export const bandUnit = textWithDefault("band_unit", "GHz");
+export const fluxDensityUnit = textUnit("unit", { typed: "Jy" });
+export const bandUnit = textUnit("band_unit", { typed: "GHz" });
 /** The unit of a rest-frame spectral luminosity: W/Hz gives L_ν, a power unit ν L_ν. */
-export const spectralOutUnit = textWithDefault("out_unit", "W/Hz");
+export const spectralOutUnit = textUnit("out_unit", { typed: "W/Hz" });
 /** A right ascension (or another longitude): a number in degrees, or sexagesimal text (hours for a right ascension). */
 export const longitude = (name: string) => num(name, { sexagesimal: "ra" });
 /** A declination (or another latitude): a number in degrees within ±90°, or sexagesimal text. */
@@ -72,7 +88,8 @@ export const n = (a: Args, name: string) => a[name] as number;
 
 /**
  * A position argument whose part another argument names (`sexagesimal: "either"`), in degrees: a
- * number as read, or text read as a sexagesimal angle of the part given ("ra": hours unless marked).
+ * number as read (number text too), or text read as a sexagesimal angle of the part given ("ra":
+ * hours unless marked).
  */
 export function degreesOf(a: Args, name: string, part: AnglePart): number {
   const x = a[name];

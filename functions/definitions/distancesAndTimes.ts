@@ -11,9 +11,9 @@ import {
   type DensityComponent,
   type InvertibleQuantity,
 } from "../../core/index.js";
-import { formatValue } from "../messages.js";
-import type { FunctionDef } from "../FunctionDef.js";
-import { num, amount, model, unit, z, zToday, area, angle, m, n } from "./argumentKinds.js";
+import { formatValue, messages } from "../messages.js";
+import type { Args, FunctionDef } from "../FunctionDef.js";
+import { num, amount, model, unit, z, zToday, area, angle, latitude, m, n, textUnit } from "./argumentKinds.js";
 
 /** A function of z and the model only, with an optional output unit. */
 function ofRedshift(
@@ -60,6 +60,23 @@ function invert(model: Cosmology, name: string, value: number, given: string): n
   });
 }
 
+/** ZC.ANGLE: θ = size / D_A; a size above π D_A, or any size at z = 0, is refused in the size's own unit. */
+function angleOf(a: Args): number {
+  const model = m(a);
+  const size = n(a, "size");
+  const zz = n(a, "z");
+  if (size > 0) {
+    checkSourceRedshift(zz); // z = 0 puts the source at zero distance
+    const limitMpc = Math.PI * model.angularDiameterDistanceMpc(zz);
+    if (!(size <= limitMpc)) {
+      const unit = a.size_unit as string;
+      const toUnit = conversionFactor("Mpc", unit, model.h);
+      throw new RangeError(messages.angleAbove180(size * toUnit, unit, zz, limitMpc * toUnit));
+    }
+  }
+  return model.angleRad(size, zz);
+}
+
 const components: readonly DensityComponent[] = ["matter", "cold", "darkenergy", "curvature", "radiation", "photons", "neutrinos"];
 
 /** Distances, times, volumes and the state of the universe at a redshift, and the inverse (ZC.REDSHIFT). functions, in the order of their declarations. */
@@ -97,7 +114,7 @@ export const distancesAndTimes: FunctionDef[] = [
   {
     name: "ANGLE",
     args: [amount("size"), z, model, unit("size_unit", "Mpc", "kpc", "size"), unit("angle_unit", "rad", "arcsec")],
-    compute: (a) => m(a).angleRad(n(a, "size"), n(a, "z")),
+    compute: angleOf,
   },
   ofRedshift("VOLUME", "Mpc3", (x, zz) => x.comovingVolumeMpc3(zz)),
   {
@@ -108,7 +125,7 @@ export const distancesAndTimes: FunctionDef[] = [
   ofRedshift("VOLUME_ELEMENT", "Mpc3/sr", (x, zz) => x.comovingVolumeElementMpc3Sr(zz)),
   {
     name: "REDSHIFT",
-    args: [num("value"), { kind: "text", name: "quantity", choices: Object.keys(inverses), scalar: true }, model, { kind: "text", name: "unit", scalar: true, optional: true, blank: { words: "the quantity's default unit (Mpc, Gyr, Mpc3 for VOLUME)" } }],
+    args: [num("value"), { kind: "text", name: "quantity", choices: Object.keys(inverses), scalar: true }, model, textUnit("unit", { words: "the quantity's default unit (Mpc, Gyr, Mpc3 for VOLUME)" }, ["value"])],
     compute: (a) => invert(m(a), a.quantity as string, n(a, "value"), a.unit as string),
   },
   {
@@ -116,7 +133,7 @@ export const distancesAndTimes: FunctionDef[] = [
     args: [
       num("z_helio", { min: -1, minExclusive: true }),
       num("ra", { sexagesimal: "ra" }),
-      num("dec", { sexagesimal: "dec", min: -90, max: { value: 90, what: "90°" } }),
+      latitude("dec"),
       unit("angle_unit", "deg", "deg", ["ra", "dec"]),
     ],
     // in degrees, the reference unit of every position (sexagesimal text is read into degrees)

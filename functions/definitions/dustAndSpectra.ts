@@ -22,7 +22,7 @@ import {
 } from "../../core/index.js";
 import type { Args, FunctionDef } from "../FunctionDef.js";
 import { messages } from "../messages.js";
-import { amount, bandUnit, err, num, n, textOr, textWithDefault, unit } from "./argumentKinds.js";
+import { amount, bandUnit, err, givenIn, num, n, textOr, textUnit, textWithDefault, unit } from "./argumentKinds.js";
 
 const positive = (name: string) => num(name, { min: 0, minExclusive: true });
 
@@ -48,7 +48,7 @@ const bandHz = (a: Args, name: string) => toHz(textOr(a, bandUnit), bandUnit.nam
 /** The extinction law: blank is Fitzpatrick 1999. */
 const law = textWithDefault("law", "Fitzpatrick 1999", {});
 /** The unit of EXTINCTION's wavelength: blank is Angstrom. */
-const wavelengthUnit = textWithDefault("wavelength_unit", "Angstrom");
+const wavelengthUnit = textUnit("wavelength_unit", { typed: "Angstrom" });
 
 /** The law of a cell; the last name read is kept (a column of one law). */
 let lastLaw: { text: string; law: ExtinctionLaw } | undefined;
@@ -78,6 +78,9 @@ function angstromConverter(unitText: string): (value: number) => number {
   return convert;
 }
 
+/** Units a wavelength is commonly given in (common practice): far outside a law's range, the one that would put the same number inside it is named. */
+const likelyWavelengthUnits = ["um", "nm", "Angstrom"];
+
 /** A_λ of one cell for a given E(B−V): the wavelength in its unit (Angstrom, nm, um, or a frequency or energy); outside the law's range, the range in that unit. */
 function extinction(a: Args, ebv: number): number {
   const law = lawOf(a);
@@ -87,7 +90,10 @@ function extinction(a: Args, ebv: number): number {
   if (!inRange(angstrom, law)) {
     const { min, max } = extinctionRangeAngstrom(law);
     const [low, high] = [bandInUnit(frequencyHz(min, "Angstrom", "min"), unitText), bandInUnit(frequencyHz(max, "Angstrom", "max"), unitText)].sort((p, q) => p - q);
-    throw new NoSolutionError(messages.outsideLawRange("wavelength", given, unitText.trim(), law, low, high));
+    // far outside (a factor 2: not a value just past an edge), the unit in which the same number is inside
+    const far = angstrom < min / 2 || angstrom > 2 * max;
+    const likely = far ? likelyWavelengthUnits.find((u) => u !== unitText.trim() && inRange(angstromConverter(u)(given), law)) : undefined;
+    throw new NoSolutionError(messages.outsideLawRange("wavelength", given, unitText.trim(), law, low, high, likely ? { unit: likely, arg: "wavelength_unit (5th argument)" } : undefined));
   }
   return extinctionMag(angstrom, ebv, law, n(a, "r_v"));
 }
@@ -98,7 +104,7 @@ export const dustAndSpectra: FunctionDef[] = [
     name: "EXTINCTION",
     args: [
       positive("wavelength"), amount("ebv"), law,
-      num("r_v", { default: Number.NaN, blankMeansDefault: true, min: 0, minExclusive: true, blank: { words: "3.1, or 4.05 (R′_V) for Calzetti 2000" } }), wavelengthUnit,
+      num("r_v", { default: Number.NaN, blankMeansDefault: true, min: 0, minExclusive: true, blank: { words: "3.1, or 4.05 (R′_V) for Calzetti 2000" } }), givenIn(wavelengthUnit, "wavelength"),
     ],
     compute: (a) => extinction(a, n(a, "ebv")),
     // the common range: a column of E(B−V), one per source, at one band
@@ -106,19 +112,19 @@ export const dustAndSpectra: FunctionDef[] = [
   },
   {
     name: "INDEX_BETWEEN",
-    args: [positive("flux_density1"), positive("band1"), positive("flux_density2"), positive("band2"), bandUnit],
+    args: [positive("flux_density1"), positive("band1"), positive("flux_density2"), positive("band2"), givenIn(bandUnit, "band1", "band2")],
     compute: (a) => spectralIndexBetween(n(a, "flux_density1"), bandHz(a, "band1"), n(a, "flux_density2"), bandHz(a, "band2")),
   },
   {
     name: "INDEX_BETWEEN_ERR",
-    args: [positive("flux_density1"), positive("band1"), positive("flux_density2"), positive("band2"), err("err1"), err("err2"), bandUnit],
+    args: [positive("flux_density1"), positive("band1"), positive("flux_density2"), positive("band2"), err("err1"), err("err2"), givenIn(bandUnit, "band1", "band2")],
     compute: (a) => spectralIndexBetweenError(n(a, "flux_density1"), bandHz(a, "band1"), n(a, "flux_density2"), bandHz(a, "band2"), n(a, "err1"), n(a, "err2")),
   },
   {
     name: "BRIGHTNESS_TEMP",
     args: [
       amount("flux_density"), positive("frequency"), positive("major"), positive("minor"), num("z", { default: 0, blankMeansDefault: true }),
-      unit("flux_unit", "Jy", "Jy", "flux_density"), bandUnit, unit("angle_unit", "rad", "arcsec", ["major", "minor"]),
+      unit("flux_unit", "Jy", "Jy", "flux_density"), givenIn(bandUnit, "frequency"), unit("angle_unit", "rad", "arcsec", ["major", "minor"]),
     ],
     compute: (a) => brightnessTemperatureK(n(a, "flux_density") * janskySI, bandHz(a, "frequency"), n(a, "major"), n(a, "minor"), n(a, "z")),
   },

@@ -14,7 +14,7 @@ import {
   spectralLuminosityErrorWHz,
 } from "../../core/index.js";
 import type { FunctionDef } from "../FunctionDef.js";
-import { num, amount, model, unit, z, err, magErr, angle, m, n, inSpectralOrPowerUnit, bandUnit, spectralOutUnit, textOr } from "./argumentKinds.js";
+import { num, amount, model, unit, z, err, magErr, angle, m, n, inSpectralOrPowerUnit, bandUnit, givenIn, spectralOutUnit, textOr } from "./argumentKinds.js";
 
 /** Uncertainties functions, in the order of their declarations. */
 export const errors: FunctionDef[] = [
@@ -53,7 +53,7 @@ export const errors: FunctionDef[] = [
     name: "LUMINOSITY_REST_ERR",
     args: [
       amount("flux_density"), err("flux_density_err"), z, err("z_err"), num("alpha"), err("alpha_err"), num("observed"), num("rest"), model,
-      bandUnit, unit("in_unit", "Jy", "Jy", ["flux_density", "flux_density_err"]), spectralOutUnit,
+      givenIn(bandUnit, "observed", "rest"), unit("in_unit", "Jy", "Jy", ["flux_density", "flux_density_err"]), spectralOutUnit,
     ],
     compute: (a) => {
       const band = textOr(a, bandUnit);

@@ -8,6 +8,7 @@ import {
   Cosmology,
   formatModelSpec,
   presets,
+  quoted,
   rescaledValue,
   rescaleQuantities,
   withChanges,
@@ -50,7 +51,12 @@ const parameters: Record<string, (model: Cosmology) => number> = {
 export const modelsAndUtilities: FunctionDef[] = [
   {
     name: "CONVERT",
-    args: [num("value"), { kind: "text", name: "from", scalar: true }, { kind: "text", name: "to", scalar: true }, model],
+    args: [
+      num("value"),
+      { kind: "text", name: "from", scalar: true, unit: { applies: ["value"] } },
+      { kind: "text", name: "to", scalar: true, unit: {} },
+      model,
+    ],
     compute: (a) => convertUnit(n(a, "value"), a.from as string, a.to as string, m(a).h),
   },
   {
@@ -71,7 +77,7 @@ export const modelsAndUtilities: FunctionDef[] = [
           if (value !== undefined) throw new TypeError(messages.pairWithoutKey(i));
           continue;
         }
-        if (value === undefined) throw new TypeError(`key${i} "${key}" has no value${i}`);
+        if (value === undefined) throw new TypeError(`key${i} ${quoted(key)} has no value${i}`);
         changes.push([key, value]);
       }
       const p = withChanges(m(a).parameters, changes);
@@ -108,7 +114,7 @@ export const modelsAndUtilities: FunctionDef[] = [
     args: [
       num("value"), z, { kind: "text", name: "quantity", choices: rescaleQuantities },
       { kind: "model", name: "from_model", required: true }, { kind: "model", name: "to_model" },
-      { kind: "text", name: "unit", scalar: true, optional: true, blank: { words: "a unit without h" } },
+      { kind: "text", name: "unit", scalar: true, optional: true, blank: { words: "a unit without h" } }, // "mag" too: read by rescaledValue
     ],
     compute: (a) => rescaledValue(n(a, "value"), n(a, "z"), a.quantity as RescaleQuantity, a.from_model as Cosmology, a.to_model as Cosmology, a.unit as string),
   },

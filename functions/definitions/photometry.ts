@@ -29,7 +29,7 @@ import {
 import { CellError } from "../cellError.js";
 import type { Args, FunctionDef } from "../FunctionDef.js";
 import { messages } from "../messages.js";
-import { num, amount, mag, model, unit, z, optionalAlpha, isGiven, m, n, inSpectralOrPowerUnit, bandUnit, fluxDensityUnit, spectralOutUnit, textOr } from "./argumentKinds.js";
+import { num, amount, mag, model, unit, z, optionalAlpha, isGiven, m, n, inSpectralOrPowerUnit, bandUnit, fluxDensityUnit, givenIn, spectralOutUnit, textOr } from "./argumentKinds.js";
 
 /** The optional wavelength [Å] of a per-wavelength flux density (MAG_AB, FLUX_AB): NaN when not given. */
 const fluxDensityWavelength = num("wavelength", {
@@ -93,7 +93,7 @@ export const photometry: FunctionDef[] = [
   },
   {
     name: "MAG_AB",
-    args: [num("flux_density", { min: 0, minExclusive: true }), fluxDensityUnit, fluxDensityWavelength],
+    args: [num("flux_density", { min: 0, minExclusive: true }), givenIn(fluxDensityUnit, "flux_density"), fluxDensityWavelength],
     compute: (a) => abMagnitude(n(a, "flux_density") * unitFactorJy(a)),
     kernel: { arg: "flux_density", of: (a, x) => abMagnitude(x * unitFactorJy(a)) },
   },
@@ -107,7 +107,7 @@ export const photometry: FunctionDef[] = [
     name: "LUMINOSITY_REST",
     args: [
       amount("flux_density"), z, num("alpha"), num("observed"), num("rest"), model,
-      bandUnit, unit("in_unit", "Jy", "Jy", "flux_density"), spectralOutUnit,
+      givenIn(bandUnit, "observed", "rest"), unit("in_unit", "Jy", "Jy", "flux_density"), spectralOutUnit,
     ],
     compute: (a) => {
       const band = textOr(a, bandUnit);

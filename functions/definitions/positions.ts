@@ -6,6 +6,7 @@
  */
 import { angularSeparationDeg, convertSkyFrameDeg, sexagesimalText, skyFrames, type SkyFrame } from "../../core/index.js";
 import type { Args, FunctionDef } from "../FunctionDef.js";
+import { messages } from "../messages.js";
 import { degreesOf, isGiven, latitude, longitude, n, num, unit } from "./argumentKinds.js";
 
 const parts = ["ra", "dec"] as const;
@@ -15,7 +16,7 @@ function partDegrees(a: Args, name: string): number {
   const part = a.part as (typeof parts)[number];
   const x = degreesOf(a, name, part);
   if (part === "dec") {
-    if (Math.abs(x) > 90) throw new RangeError(`${name} = ${x}° is beyond ±90°: a declination is −90 … 90`);
+    if (Math.abs(x) > 90) throw new RangeError(messages.beyondPole(name, x, "", "dec"));
     return x;
   }
   const wrapped = x % 360;

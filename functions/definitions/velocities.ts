@@ -20,7 +20,7 @@ import {
 } from "../../core/index.js";
 import type { Args, ArgSpec, FunctionDef } from "../FunctionDef.js";
 import { messages } from "../messages.js";
-import { n, num, optionalText, textOr, textWithDefault, unit } from "./argumentKinds.js";
+import { n, num, textOr, textUnit, textWithDefault, unit } from "./argumentKinds.js";
 
 /** A redshift of a source that may be blueshifted: > −1. */
 const anyRedshift = (name: string) => num(name, { min: -1, minExclusive: true });
@@ -71,7 +71,7 @@ function checkUnit(a: Args): RestFrameQuantity {
   return quantity;
 }
 
-const restFrameArgs: ArgSpec[] = [num("value"), anyRedshift("z"), { kind: "text", name: "quantity", choices: restFrameQuantities }, optionalText("unit", { words: "not checked: the value keeps its own unit" })];
+const restFrameArgs: ArgSpec[] = [num("value"), anyRedshift("z"), { kind: "text", name: "quantity", choices: restFrameQuantities }, textUnit("unit", { words: "not checked: the value keeps its own unit" }, ["value"])];
 
 /** Velocity and rest-frame functions, in the order of their declarations. */
 export const velocities: FunctionDef[] = [

@@ -251,26 +251,26 @@ describe.runIf(browserAvailable())("a crafted shared workbook against the pane",
     expect(craftedRun.longest).toBeLessThan(honestRun.longest + 250);
   });
 
-  test("a stored model that parses but cannot be built (H0=1e999) is listed with its reason, cannot be chosen, and is never applied", async () => {
-    const models = { GOOD: "P18-BAO; H0=70", HUGE: "P18-BAO; H0=1e999" };
+  test("a stored model that parses but cannot be built (H0=-70) is listed with its reason, cannot be chosen, and is never applied", async () => {
+    const models = { GOOD: "P18-BAO; H0=70", NEGATIVE: "P18-BAO; H0=-70" };
     const page = await openPane(host, { settings: { "zcell.workbookModels": models }, sheets: { Sheet1: { A1: { formula: "=ZC.AGE()", value: 13.8 } } } });
     await page.locator("#apply").waitFor();
-    const huge = page.locator("#preset option[value='HUGE']");
-    expect(await huge.textContent()).toBe("HUGE (cannot be used)");
-    expect(await huge.isDisabled()).toBe(true);
+    const negative = page.locator("#preset option[value='NEGATIVE']");
+    expect(await negative.textContent()).toBe("NEGATIVE (cannot be used)");
+    expect(await negative.isDisabled()).toBe(true);
     expect(await page.locator("#preset option[value='GOOD']").isDisabled()).toBe(false);
     expect(await page.locator("#workbook-models li > span:first-child").allTextContents()).toEqual([
       "GOOD: P18-BAO; H0=70",
-      "HUGE: P18-BAO; H0=1e999 — cannot be used: H0 must be a positive number km/s/Mpc; got Infinity",
+      "NEGATIVE: P18-BAO; H0=-70 — cannot be used: H0 must be a positive number km/s/Mpc; got -70",
     ]);
     // chosen all the same (a script, an assistive tool): the form keeps the model it shows and says why
     await page.evaluate(() => {
       const select = document.getElementById("preset") as HTMLSelectElement;
-      select.value = "HUGE";
+      select.value = "NEGATIVE";
       select.dispatchEvent(new Event("change"));
     });
     expect(await page.locator("#preset").inputValue()).toBe("P18-CMB");
-    expect(await page.locator("#model-error").textContent()).toBe("HUGE cannot be used: H0 must be a positive number km/s/Mpc; got Infinity. The form still shows P18-CMB.");
+    expect(await page.locator("#model-error").textContent()).toBe("NEGATIVE cannot be used: H0 must be a positive number km/s/Mpc; got -70. The form still shows P18-CMB.");
     await page.locator("#apply").click();
     await expect.poll(() => page.locator("#apply-status").textContent()).toBe("Applied P18-CMB; 1 formula recalculated.");
     expect(((await fakeState(page, "saved")) as Record<string, unknown>)["zcell.activeModel"]).toBe("P18-CMB");
