@@ -4,7 +4,9 @@
  * excelHost against the fake host test/browser/fakeOffice.js loaded into Node). Left out: tests of the
  * built bundle (fuzz, rangeShapes, helpPage and the others below: they load test-artifacts/build/,
  * which a mutant never reaches), of the browser, of the dev server, those that start Python for their
- * expected values, and the slow-path accuracy comparison (16 s, and it covers every distance: it alone
+ * expected values, the timed linearity check of the formula readers (formulaReadingTime: beside
+ * mutants run two at a time its ratios are noise, and it takes 13 s a mutant), and the slow-path
+ * accuracy comparison (16 s, and it covers every distance: it alone
  * would make the run last hours; the closed forms, identities and published values below still check
  * the same code). The reference checks inside files that also hold ordinary tests (cmbFrame, growth,
  * extinction, …) skip themselves here: ZCELL_PYTHON names an interpreter that does not exist, as
@@ -25,6 +27,7 @@ export default defineConfig({
       "test/bundleMemory.test.ts",
       "test/demo.test.ts",
       "test/devServer.test.ts",
+      "test/formulaReadingTime.test.ts",
       "test/fuzz.test.ts",
       "test/helpPage.test.ts",
       "test/hostSimulation.test.ts",

@@ -1,8 +1,6 @@
 /** The cell inspector's formula tokenizer against tricky formulas (Excel formula grammar, common practice). */
 import { describe, expect, test } from "vitest";
 import { findCalls, parseArrayConstant, tokenize } from "../taskpane/formulaCalls.js";
-import { restorableFormula } from "../taskpane/restorableFormula.js";
-import { craftedFamilies } from "./craftedFormulas.js";
 
 const zc = (formula: string) => findCalls(formula).filter((c) => c.name.startsWith("ZC."));
 
@@ -42,49 +40,5 @@ describe("finding ZC calls", () => {
   test("array constants parse into rows", () => {
     expect(parseArrayConstant('{1,2;3,"a""b"}')).toEqual([[1, 2], [3, 'a"b']]);
     expect(parseArrayConstant("{TRUE}")).toEqual([[true]]);
-  });
-});
-
-describe("reading a crafted formula takes time linear in its length", () => {
-  // A shape test, not a speed target (those are in scripts/benchTokenizer.ts): the same number of
-  // characters read as 8 formulas of 1,024 or as 1 of 8,192 takes about the same time when reading is
-  // linear, and 8 times longer when it is quadratic. Each side is the best of 9 interleaved samples of
-  // at least 5 ms, so a busy machine slows both sides alike; a ratio under 3 leaves room for noise and
-  // still fails a quadratic reader by far (about 8).
-  const readers: [string, (formula: string) => unknown][] = [
-    ["tokenize", tokenize],
-    ["findCalls", findCalls],
-    ["restorableFormula", (f) => restorableFormula(f, { singleCell: true })],
-  ];
-  const elapsed = (read: (f: string) => unknown, formula: string, times: number) => {
-    const t0 = performance.now();
-    for (let k = 0; k < times; k++) {
-      try {
-        read(formula);
-      } catch {
-        // an unreadable formula is read just as far before it throws
-      }
-    }
-    return performance.now() - t0;
-  };
-  test.each(readers)("%s: 8 × 1,024 characters against 1 × 8,192, every crafted family", (_name, read) => {
-    const ratios: string[] = [];
-    for (const family of craftedFamilies) {
-      const short = family.formula(1024);
-      const long = family.formula(8192);
-      elapsed(read, short, 8); // warm-up: the first calls compile the code
-      let repeats = 1;
-      while (elapsed(read, long, repeats) < 5 && repeats < 4096) repeats *= 2;
-      let shortBest = Number.POSITIVE_INFINITY;
-      let longBest = Number.POSITIVE_INFINITY;
-      for (let sample = 0; sample < 9; sample++) {
-        shortBest = Math.min(shortBest, elapsed(read, short, 8 * repeats));
-        longBest = Math.min(longBest, elapsed(read, long, repeats));
-      }
-      const lengthRatio = (long.length - 1) / (short.length - 1);
-      const ratio = longBest / shortBest / (lengthRatio / 8);
-      if (ratio >= 3) ratios.push(`${family.name}: ${ratio.toFixed(1)}`);
-    }
-    expect(ratios).toEqual([]);
   });
 });
