@@ -9,6 +9,13 @@ import type { CellError } from "./cellError.js";
 /** What a worksheet cell can hold as a result. */
 export type Cell = number | string | CellError;
 
+/**
+ * What an omitted or blank argument means, as the help page and the pane show it: `typed`, the value
+ * that, written out, gives the same result ("GHz", "optical"; test/defaults.test.ts checks each), or
+ * `words` where no one value does ("3.1, or 4.05 for Calzetti 2000").
+ */
+export type BlankMeaning = { typed: string } | { words: string };
+
 /** How one argument is read. */
 export type ArgSpec =
   | {
@@ -35,6 +42,10 @@ export type ArgSpec =
        * in degrees when the angle unit is "hourangle", which is for "ra" alone (readPositions.ts).
        */
       sexagesimal?: AnglePart | "either" | ((scalars: Args) => AnglePart);
+      /** Its unit when no unit argument converts it (MAG_AB's wavelength in Angstrom), for the help. */
+      unit?: string;
+      /** What leaving it out means when `default` is NaN ("not given"): the help and the pane say this. */
+      blank?: BlankMeaning;
     }
   | {
       /** A model (or range of models): blank means the workbook's model, unless `required`. */
@@ -52,12 +63,16 @@ export type ArgSpec =
       scalar?: boolean;
       /** May be omitted or blank: read as "" when scalar, as absent otherwise (no blank result). */
       optional?: boolean;
+      /** What an omitted or blank one means (an optional text has one: the help and the pane show it). */
+      blank?: BlankMeaning;
     }
   | {
       /** A number or text, passed through (e.g. mnu as "0.05,0.01"). */
       kind: "numberOrText";
       name: string;
       default?: number | string;
+      /** What an omitted one means. */
+      blank?: BlankMeaning;
     }
   | {
       /**

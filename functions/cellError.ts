@@ -50,13 +50,16 @@ export function classify(e: unknown, fn: string): CellError {
   return new CellError("value", messages.internal(fn, e instanceof Error ? e.message : String(e)));
 }
 
-/** The error as the sheet shows it, naming the function (one object per distinct error of a call). */
-export function inFunction(e: CellError, fn: string, seen: Map<CellError, CellError>): CellError {
-  let named = seen.get(e);
-  if (!named) {
-    const message = messages.inFunction(fn, e.message);
-    named = message === e.message ? e : new CellError(e.kind, message);
-    seen.set(e, named);
-  }
-  return named;
+/**
+ * The error as the sheet shows it, naming the function: one object for each distinct message of a
+ * call, however many cells show it (a column of text where numbers belong makes one, not one a cell).
+ * @param seen the call's errors so far, by their message before the function's name was added
+ */
+export function inFunction(e: CellError, fn: string, seen: Map<string, CellError>): CellError {
+  const named = seen.get(e.message);
+  if (named?.kind === e.kind) return named;
+  const message = messages.inFunction(fn, e.message);
+  const shown = message === e.message ? e : new CellError(e.kind, message);
+  if (!named) seen.set(e.message, shown); // the same words as another kind of error (never seen): not shared
+  return shown;
 }

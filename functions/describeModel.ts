@@ -44,7 +44,8 @@ export function describeModel(m: Cosmology): string {
   return [
     `${m.spec}: ${kindOf(m)}`,
     `H0 = ${fmt(m.H0)} km/s/Mpc`,
-    `Om = ${fmt(m.Om)} (matter incl. massive ν)`,
+    // "incl. massive ν" only where there are some (Tcmb = 0 switches neutrinos off with the photons)
+    m.Tcmb > 0 && m.parameters.mnu.some((x) => x > 0) ? `Om = ${fmt(m.Om)} (matter incl. massive ν)` : `Om = ${fmt(m.Om)} (matter)`,
     `OL = ${fmt(m.OL)}`,
     `Ok = ${fmt(m.Ok)}`,
     m.Or === 0 ? "Or = 0 (no radiation)" : `Or = ${m.Or.toPrecision(4)} (photons + massless ν)`,

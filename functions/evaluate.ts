@@ -62,41 +62,64 @@ function computeCell(def: FunctionDef, args: Args, h: HScaling | undefined): num
   return typeof result === "number" ? result * model.h ** h.result : result;
 }
 
-/** The one cell of a call whose arguments are single cells. */
-function oneCell(def: FunctionDef, call: CallArguments): Cell {
-  const { problem } = call;
-  if (problem !== undefined) return problem instanceof CellError ? inFunction(problem, def.name, new Map()) : problem;
+/** The cell whose arguments are in `call.args`: compute, cleaned; an error before the function's name is added. */
+function computed(def: FunctionDef, call: CallArguments): Cell {
   try {
     const result = computeCell(def, call.args, call.h);
-    const cell = typeof result === "number" ? cleanNumber(result * call.resultFactor, def.name) : result;
-    return cell instanceof CellError ? inFunction(cell, def.name, new Map()) : cell;
+    return typeof result === "number" ? cleanNumber(result * call.resultFactor, def.name) : result;
   } catch (e) {
-    return inFunction(classify(e, def.name), def.name, new Map());
+    return classify(e, def.name);
   }
+}
+
+/** The one cell of a call whose arguments are single cells. */
+function oneCell(def: FunctionDef, call: CallArguments): Cell {
+  const cell = call.problem ?? computed(def, call);
+  return cell instanceof CellError ? inFunction(cell, def.name, new Map()) : cell;
+}
+
+/**
+ * How many of a call's ranges a cell reads: all of them, or, when a single-cell argument is an error
+ * or blank, those before it in the signature (a range's own error or blank there comes first, as for
+ * one cell; after them the single cell's shows).
+ */
+function rangesRead(call: CallArguments): number {
+  return call.problem === undefined ? call.ranges.length : call.rangesBeforeProblem;
+}
+
+/**
+ * The cell at row `r`, column `c` of a call over ranges, before the function's name is added to an
+ * error: each of the first `upTo` ranges' value there (the first error or blank decides), then compute.
+ * @param group the range of models being computed model by model, with its model resolved once
+ */
+function cellAtPosition(def: FunctionDef, call: CallArguments, upTo: number, r: number, c: number, group?: Group): Cell {
+  const { ranges, args } = call;
+  for (let k = 0; k < upTo; k++) {
+    const range = ranges[k];
+    let value: ReadCell;
+    if (range === group?.range) value = modelOfGroup(group);
+    else {
+      value = cellAt(range, (range.rows === 1 ? 0 : r) * range.cols + (range.cols === 1 ? 0 : c));
+      if (range.model !== undefined && typeof value === "string") value = range.model(value);
+    }
+    if (value instanceof CellError || value === blank) return value;
+    args[range.name] = value;
+  }
+  return call.problem ?? computed(def, call);
 }
 
 /** Every cell of a call over ranges: the single-cell arguments fixed in `args`, the ranges broadcast. */
 function allCells(def: FunctionDef, call: CallArguments, seen: { error: boolean }): Cell[][] {
   const { rows, cols, args, problem, ranges, resultFactor, h } = call;
-  let named: Map<CellError, CellError> | undefined;
+  let named: Map<string, CellError> | undefined;
   const shown = (cell: Cell): Cell => {
     if (!(cell instanceof CellError)) return cell;
     seen.error = true;
     return inFunction(cell, def.name, (named ??= new Map()));
   };
-  const cellOf = (): Cell => {
-    try {
-      const result = computeCell(def, args, h);
-      return typeof result === "number" ? cleanNumber(result * resultFactor, def.name) : result;
-    } catch (e) {
-      return classify(e, def.name);
-    }
-  };
 
   const out: Cell[][] = new Array(rows);
-  // a single-cell argument that is an error or blank shows in every cell, unless a range before it
-  // in the signature has its own error or blank in that cell (the first argument decides, as for one cell)
-  const upTo = problem === undefined ? ranges.length : call.rangesBeforeProblem;
+  const upTo = rangesRead(call);
   if (problem !== undefined && upTo === 0) {
     for (let r = 0; r < rows; r++) out[r] = new Array(cols).fill(shown(problem));
     return out;
@@ -107,6 +130,7 @@ function allCells(def: FunctionDef, call: CallArguments, seen: { error: boolean 
     const of = kernel.of;
     const column = ranges[0];
     const numbers = column.numbers!;
+    let notFinite: CellError | undefined; // one for every cell whose result is not a finite number
     for (let r = 0; r < rows; r++) {
       const x = numbers[r];
       const value = x === x ? x : column.others.get(r);
@@ -118,37 +142,22 @@ function allCells(def: FunctionDef, call: CallArguments, seen: { error: boolean 
           out[r] = [shown(classify(e, def.name))];
           continue;
         }
-        out[r] = [v - v === 0 ? (v === 0 ? 0 : v) : shown(new CellError("num", messages.notFiniteResult(def.name)))];
+        out[r] = [v - v === 0 ? (v === 0 ? 0 : v) : shown((notFinite ??= new CellError("num", messages.notFiniteResult(def.name))))];
       } else if (value instanceof CellError || value === blank) {
         out[r] = [shown(value)];
       } else {
         args[kernel.arg] = value;
-        out[r] = [shown(cellOf())];
+        out[r] = [shown(computed(def, call))];
       }
     }
     return out;
   }
   // the cell at (r, c): each range's value there (the first error or blank decides), then compute
-  let group: Group | undefined;
-  const cellAtPosition = (r: number, c: number): Cell => {
-    for (let k = 0; k < upTo; k++) {
-      const range = ranges[k];
-      let value: ReadCell;
-      if (range === group?.range) value = modelOfGroup(group);
-      else {
-        value = cellAt(range, (range.rows === 1 ? 0 : r) * range.cols + (range.cols === 1 ? 0 : c));
-        if (range.model !== undefined && typeof value === "string") value = range.model(value);
-      }
-      if (value instanceof CellError || value === blank) return value;
-      args[range.name] = value;
-    }
-    return problem ?? cellOf();
-  };
   const grouping = modelGroups(ranges, upTo);
   if (grouping === undefined) {
     for (let r = 0; r < rows; r++) {
       const row: Cell[] = new Array(cols);
-      for (let c = 0; c < cols; c++) row[c] = shown(cellAtPosition(r, c));
+      for (let c = 0; c < cols; c++) row[c] = shown(cellAtPosition(def, call, upTo, r, c));
       out[r] = row;
     }
     return out;
@@ -157,7 +166,7 @@ function allCells(def: FunctionDef, call: CallArguments, seen: { error: boolean 
   for (let r = 0; r < rows; r++) out[r] = new Array(cols);
   const { range, first, next } = grouping;
   for (const [value, head] of first) {
-    group = { range, value, model: undefined };
+    const group: Group = { range, value, model: undefined };
     for (let j = head; j >= 0; j = next[j]) {
       const r0 = range.rows === 1 ? 0 : Math.floor(j / range.cols);
       const c0 = range.cols === 1 ? 0 : j - r0 * range.cols;
@@ -166,11 +175,46 @@ function allCells(def: FunctionDef, call: CallArguments, seen: { error: boolean 
       const cTo = range.cols === 1 ? cols : c0 + 1;
       for (let r = r0; r < rTo; r++) {
         const row = out[r];
-        for (let c = c0; c < cTo; c++) row[c] = shown(cellAtPosition(r, c));
+        for (let c = c0; c < cTo; c++) row[c] = shown(cellAtPosition(def, call, upTo, r, c, group));
       }
     }
   }
   return out;
+}
+
+/** A call's result as its shape and any one of its cells, computed alone when asked for. */
+export interface CallResult {
+  rows: number;
+  cols: number;
+  /** The cell at row `r`, column `c` (0-based, inside the shape): the one `evaluate` gives there. */
+  cell(r: number, c: number): Cell;
+}
+
+/**
+ * A call's arguments read as the whole call reads them (the same shape, the same errors that spoil
+ * the whole call), and its cells computed only when asked for, each as `evaluate` computes it there:
+ * for the pane's inspector, which explains one cell of a result that may hold millions. A function
+ * of whole columns or a table is computed whole at once.
+ */
+export function evaluateLazily(def: FunctionDef, raw: readonly unknown[], active: ActiveModelSetting): CallResult {
+  const whole = (cells: Cell[][]): CallResult => ({ rows: cells.length, cols: cells[0].length, cell: (r, c) => cells[r][c] });
+  if (def.table || def.over) return whole(evaluate(def, raw, active));
+  let call: CallArguments;
+  try {
+    call = readCall(def, raw, active);
+  } catch (e) {
+    return whole([[inFunction(classify(e, def.name), def.name, new Map())]]);
+  }
+  if (call.ranges.length === 0) return whole([[oneCell(def, call)]]);
+  const upTo = rangesRead(call);
+  return {
+    rows: call.rows,
+    cols: call.cols,
+    cell: (r, c) => {
+      const cell = cellAtPosition(def, call, upTo, r, c);
+      return cell instanceof CellError ? inFunction(cell, def.name, new Map()) : cell;
+    },
+  };
 }
 
 /** The cells of a range of models that hold one model (its spec text, or one error), and that model once resolved. */
@@ -212,10 +256,20 @@ function cleanNumber(x: number, fn: string): number | CellError {
   return x === 0 ? 0 : x;
 }
 
-/** Cells as Excel takes them: CellErrors become the host's error values. */
+/**
+ * Cells as Excel takes them: CellErrors become the host's error values, one for each CellError (the
+ * cells that show one error share its value: each still reads that error's code and message).
+ */
 function forHost(cells: unknown[][]): unknown[][] {
+  const converted = new Map<CellError, unknown>();
   for (const row of cells) {
-    for (let c = 0; c < row.length; c++) if (row[c] instanceof CellError) row[c] = toHostError(row[c] as CellError);
+    for (let c = 0; c < row.length; c++) {
+      const cell = row[c];
+      if (!(cell instanceof CellError)) continue;
+      let value = converted.get(cell);
+      if (value === undefined) converted.set(cell, (value = toHostError(cell)));
+      row[c] = value;
+    }
   }
   return cells;
 }

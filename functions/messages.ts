@@ -63,6 +63,8 @@ export const messages = {
     `${arg}: "${quotedText(text)}" is megajansky (10⁹ mJy), not a likely flux density for a source: did you mean mJy? (units are case-sensitive)`,
   hScaledWithoutModel: "units in h = H0/100 (such as Mpc/h) need a model, and this function takes none",
   notGiven: (what: string) => `${what} is not given in this model`,
+  /** SOUND_HORIZON of a model without Ob: the user's own model with Ob added (0.049, Planck 2018's Ωb), not a preset that has one already. */
+  soundHorizonNeedsOb: (spec: string) => `the sound horizon needs the baryon density: add Ob to the model, e.g. "${quotedText(spec)}; Ob=0.049"`,
   noEquality: "z_eq: this model has no radiation (Tcmb = 0), so no matter–radiation equality",
   internal: (fn: string, detail: string) => `${fn}: unexpected problem (${detail}); please report it`,
   activeModelFallback: (detail: string) =>

@@ -33,7 +33,10 @@ export interface WorkbookModels {
 /** No workbook models. */
 export const noWorkbookModels: WorkbookModels = { specs: new Map(), named: { find: () => undefined, names: [] }, problems: [] };
 
-/** Models read from one workbook at most: a workbook is written by strangers, and the rest are left out with a warning. */
+/**
+ * Stored entries read from one workbook at most, usable or not (a name that is no name, a spec that
+ * does not parse): a workbook is written by strangers, and the rest are left out with a warning.
+ */
 export const maxWorkbookModels = 100;
 /** Characters of one stored spec at most (a full spec of every key is under 200). */
 export const maxSpecLength = 500;
@@ -43,8 +46,8 @@ const problemsListedAtMost = 5;
 /**
  * Reads the stored value (as the settings return it). Each entry must be a valid name whose spec
  * text (at most `maxSpecLength` characters) parses on the built-in presets alone (a workbook model
- * does not build on another); at most `maxWorkbookModels` entries are read, the others are left out
- * and counted in `problems`. Two names that differ only in case name one model: the one stored last
+ * does not build on another); the first `maxWorkbookModels` entries are read, usable or not, and the
+ * others are left out unread and counted in `problems`. Two names that differ only in case name one model: the one stored last
  * is read, and `problems` says so.
  * @param stored the settings value: an object of name → spec text, or undefined
  */
@@ -58,11 +61,12 @@ export function readWorkbookModels(stored: unknown): WorkbookModels {
   /** Each name read, as stored, by its upper-case form: names are read without regard to case. */
   const storedNames = new Map<string, string>();
   const problems: string[] = [];
+  let read = 0;
   let unread = 0;
   let bad = 0;
   for (const name in stored) {
     if (!Object.prototype.hasOwnProperty.call(stored, name)) continue;
-    if (specs.size >= maxWorkbookModels) {
+    if (read++ >= maxWorkbookModels) {
       unread++;
       continue;
     }

@@ -24,21 +24,32 @@ import { zcellVersion } from "../functions/describeModel.js";
 import { evaluate } from "../functions/evaluate.js";
 import { storedFormula } from "../functions/storedFormula.js";
 
-/** The invented catalogue: name, redshift, bolometric flux [erg/s/cm2], apparent mag, angular size [arcsec]. */
-const catalogue: [string, number, number, number, number][] = [
-  ["INV-01", 0.021, 3.2e-11, 14.8, 42.0],
-  ["INV-02", 0.087, 4.1e-12, 16.9, 18.5],
-  ["INV-03", 0.154, 9.8e-13, 17.6, 11.2],
-  ["INV-04", 0.33, 2.7e-13, 19.1, 6.4],
-  ["INV-05", 0.52, 1.1e-13, 20.3, 4.1],
-  ["INV-06", 0.78, 5.6e-14, 21.2, 2.9],
-  ["INV-07", 1.05, 2.4e-14, 22.0, 2.2],
-  ["INV-08", 1.61, 9.0e-15, 23.1, 1.6],
-  ["INV-09", 2.3, 4.3e-15, 23.9, 1.3],
-  ["INV-10", 3.4, 1.8e-15, 24.6, 0.9],
-  ["INV-11", 4.9, 7.5e-16, 25.3, 0.6],
-  ["INV-12", 6.2, 3.9e-16, 25.9, 0.45],
+/**
+ * The invented catalogue: name, redshift, bolometric flux [erg/s/cm2], apparent mag (r, AB), angular
+ * size [arcsec], and the position as a raw catalogue gives it, sexagesimal text (RA in hours, Dec in
+ * degrees, ICRS), with a colour excess E(B−V) [mag] as a dust map would give it there (positions and
+ * E(B−V) invented too; E(B−V) made larger where the invented position lies nearer the Galactic plane).
+ */
+const catalogue: [string, number, number, number, number, string, string, number][] = [
+  //  name      z      F_bol     m     angle  RA            Dec          E(B−V)
+  ["INV-01", 0.021, 3.2e-11,  14.8, 42.0,  "01:17:32.4", "+08:51:07", 0.024],
+  ["INV-02", 0.087, 4.1e-12,  16.9, 18.5,  "02:58:14.9", "-21:04:36", 0.019],
+  ["INV-03", 0.154, 9.8e-13,  17.6, 11.2,  "04:36:51.2", "-47:29:13", 0.031],
+  ["INV-04", 0.33,  2.7e-13,  19.1, 6.4,   "07:22:08.6", "+63:12:44", 0.052],
+  ["INV-05", 0.52,  1.1e-13,  20.3, 4.1,   "09:47:26.3", "+31:38:52", 0.027],
+  ["INV-06", 0.78,  5.6e-14,  21.2, 2.9,   "11:05:43.7", "-12:17:09", 0.035],
+  ["INV-07", 1.05,  2.4e-14,  22.0, 2.2,   "13:21:19.8", "+46:05:28", 0.015],
+  ["INV-08", 1.61,  9.0e-15,  23.1, 1.6,   "14:52:37.1", "-03:44:15", 0.041],
+  ["INV-09", 2.3,   4.3e-15,  23.9, 1.3,   "16:09:55.4", "+22:57:31", 0.029],
+  ["INV-10", 3.4,   1.8e-15,  24.6, 0.9,   "18:33:02.6", "+71:20:48", 0.047],
+  ["INV-11", 4.9,   7.5e-16,  25.3, 0.6,   "21:14:48.0", "-35:46:02", 0.022],
+  ["INV-12", 6.2,   3.9e-16,  25.9, 0.45,  "23:08:29.5", "+14:02:19", 0.038],
 ];
+/**
+ * The effective wavelength of SDSS r [Å] at which the catalogue's A_r is taken: 0.6165 µm, Schlafly &
+ * Finkbeiner 2011 (ApJ 737, 103), Table 6, as the IRSA DUST service lists its bandpasses.
+ */
+const rEffectiveAngstrom = 6165;
 
 const active = { spec: defaultModelSpec, stored: false };
 
@@ -109,39 +120,87 @@ function printSetup(ws: ExcelJS.Worksheet, headerRow: number, models: string, la
   const text = (t: string) => t.replaceAll("&", "&&");
   ws.headerFooter = { oddHeader: `&L&A&R${text(`computed under ${models} by zcell ${zcellVersion}`)}`, oddFooter: "&RPage &P of &N" };
 }
+/**
+ * Row 1 of a sheet that prints several pages wide with column A repeated: "INVENTED (made up)" in A1,
+ * on two lines so that the repeated column shows all of it on every page, and what is invented in B1.
+ */
+function banner(ws: ExcelJS.Worksheet, what: string): void {
+  ws.getCell("A1").value = "INVENTED (made up)";
+  ws.getCell("A1").alignment = { wrapText: true, vertical: "top" };
+  ws.getCell("B1").value = what;
+  ws.getCell("B1").alignment = { vertical: "top" };
+  ws.getRow(1).height = 30;
+}
 /** Formats by quantity (common practice): redshift, distance, time, luminosity, magnitude, angle, small numbers. */
-const fmt = { z: "0.000", zErr: "0.0000", dist: "0.0", time: "0.000", sci: "0.00E+00", mag: "0.00", angle: "0.00", deg: "0.0", ratio: "0.000" };
+const fmt = { z: "0.000", zErr: "0.0000", dist: "0.0", time: "0.000", sci: "0.00E+00", mag: "0.00", angle: "0.00", deg: "0.0", ratio: "0.000", ebv: "0.000", velocity: "#,##0" };
 
 const workbook = new ExcelJS.Workbook();
 workbook.creator = "zcell demo (invented data)";
 
 const sheet = workbook.addWorksheet("Catalogue (invented)");
-sheet.addRow(["INVENTED demo catalogue: names and values are made up for the zcell tour; they are not measurements."]);
+banner(sheet, "demo catalogue: names, positions and values are made up for the zcell tour; they are not measurements.");
 sheet.addRow([
-  "source", "z", "F_bol [erg/s/cm2]", "m (r, AB) [mag]", "angle [arcsec]", "D_L [Mpc]", "look-back [Gyr]", "L_bol [Lsun]",
-  "proper size [kpc]", "K [mag], α = −0.5", "M (r, AB) [mag]",
+  "source", "z", "F_bol [erg/s/cm2]", "m (r, AB) [mag]", "angle [arcsec]", "RA (ICRS) [hh:mm:ss.s]", "Dec (ICRS) [±dd:mm:ss]", "E(B−V) [mag]",
+  "b (Galactic) [deg]", "cz [km/s], optical", "m − A_r (r, AB) [mag]", "D_L [Mpc]", "look-back [Gyr]", "L_bol [Lsun]", "proper size [kpc]",
+  "K [mag], α = −0.5", "M (r, AB) [mag]",
 ]);
-catalogue.forEach(([name, z, flux, m, angle], i) => {
+catalogue.forEach(([name, z, flux, m, angle, ra, dec, ebv], i) => {
   const r = i + 3;
-  const k = evaluate(definitions.KCORRECTION, [z, -0.5], active)[0][0];
+  const value = (fn: string, ...args: unknown[]) => evaluate(definitions[fn], args, active)[0][0] as number;
+  const dereddened = m - value("EXTINCTION", rEffectiveAngstrom, ebv);
   sheet.addRow([
-    name, z, flux, m, angle,
+    name, z, flux, m, angle, ra, dec, ebv,
+    zc(`ZC.COORD_CONVERT(F${r},G${r},"equatorial","galactic","lat")`, "COORD_CONVERT", ra, dec, "equatorial", "galactic", "lat"),
+    zc(`ZC.VELOCITY(B${r})`, "VELOCITY", z),
+    { formula: storedFormula(`D${r}-ZC.EXTINCTION(${rEffectiveAngstrom},H${r})`), result: dereddened, date1904: false },
     zc(`ZC.DIST_LUM(B${r})`, "DIST_LUM", z),
     zc(`ZC.LOOKBACK(B${r})`, "LOOKBACK", z),
     zc(`ZC.LUMINOSITY(C${r},B${r},,"erg/s/cm2","Lsun")`, "LUMINOSITY", flux, z, null, "erg/s/cm2", "Lsun"),
     zc(`ZC.SIZE(E${r},B${r})`, "SIZE", angle, z),
     zc(`ZC.KCORRECTION(B${r},-0.5)`, "KCORRECTION", z, -0.5),
-    zc(`ZC.MAG_ABS(D${r},B${r},J${r})`, "MAG_ABS", m, z, k),
+    zc(`ZC.MAG_ABS(K${r},B${r},P${r})`, "MAG_ABS", dereddened, z, value("KCORRECTION", z, -0.5)),
   ]);
+  // the positions are text, and their cells say so: the Text number format "@" (built-in format 49 of
+  // ECMA-376 Part 1 §18.8.30, from memory; exceljs's table of built-in formats maps 49 to "@" too)
+  for (const column of ["F", "G"]) sheet.getCell(`${column}${r}`).numFmt = "@";
 });
 sheet.addRow([]);
 const describeRow = sheet.addRow(["Every value above assumes:", zc("ZC.DESCRIBE()", "DESCRIBE")]);
-// the model in words is a paragraph: wrapped over the table's width rather than running off the page
-sheet.mergeCells(`B${describeRow.number}:K${describeRow.number}`);
-describeRow.getCell(2).alignment = { wrapText: true, vertical: "top" };
+// The sheet prints two pages wide, A–I and (with A repeated) J–Q: each paragraph is wrapped within one
+// page's columns, rather than running off it or across the page break, and the model in words stands
+// under the results of each page.
+describeRow.getCell("J").value = zc("ZC.DESCRIBE()", "DESCRIBE");
+for (const [from, to] of [["B", "I"], ["J", "Q"]]) {
+  sheet.mergeCells(`${from}${describeRow.number}:${to}${describeRow.number}`);
+  describeRow.getCell(from).alignment = { wrapText: true, vertical: "top" };
+}
 describeRow.getCell(1).alignment = { vertical: "top", wrapText: true };
 describeRow.height = 48;
-formatColumns(sheet, 2, { B: fmt.z, C: fmt.sci, D: fmt.mag, E: fmt.angle, F: fmt.dist, G: fmt.time, H: fmt.sci, I: fmt.dist, J: fmt.ratio, K: fmt.mag }, [3, 14]);
+// what the columns of positions, dust and velocity hold, with the sources of their conventions, under them
+const notesRow = sheet.getRow(describeRow.number + 2);
+notesRow.getCell("B").value =
+  "Positions (F, G) and E(B−V) (H) are invented. I: the Galactic latitude of the text positions, ZC.COORD_CONVERT from equatorial (ICRS) to galactic (the IAU 1958 frame as realised in the ICRS by Hipparcos).";
+notesRow.getCell("J").value =
+  `J: cz, the optical convention's velocity: a label for z, not a speed (above z = 1 it exceeds c). K: m − A_r with A_r = ZC.EXTINCTION(${rEffectiveAngstrom}, H), ` +
+  `Fitzpatrick 1999 with R_V = 3.1 at SDSS r's effective wavelength, ${rEffectiveAngstrom} Å (Schlafly & Finkbeiner 2011, ApJ 737, 103, Table 6). Q: M of K's m − A_r.`;
+sheet.mergeCells(`B${notesRow.number}:I${notesRow.number}`);
+sheet.mergeCells(`J${notesRow.number}:Q${notesRow.number}`);
+for (const column of ["B", "J"]) notesRow.getCell(column).alignment = { wrapText: true, vertical: "top" };
+notesRow.height = 48;
+formatColumns(
+  sheet,
+  2,
+  {
+    B: fmt.z, C: fmt.sci, D: fmt.mag, E: fmt.angle, H: fmt.ebv, I: fmt.angle, J: fmt.velocity, K: fmt.mag,
+    L: fmt.dist, M: fmt.time, N: fmt.sci, O: fmt.dist, P: fmt.ratio, Q: fmt.mag,
+  },
+  [3, 14],
+);
+for (const column of ["F", "G"]) {
+  fitWidth(sheet, column, String(sheet.getCell(`${column}2`).value));
+  sheet.getCell(`${column}2`).alignment = { horizontal: "right" }; // over the positions, right-aligned as the numbers are
+  for (let r = 3; r <= 14; r++) sheet.getCell(`${column}${r}`).alignment = { horizontal: "right" };
+}
 sheet.getColumn("A").width = 18;
 printSetup(sheet, 2, defaultModelSpec);
 
@@ -196,7 +255,7 @@ const recipeSources: [string, ...number[]][] = [
 const survey = { fluxLimit: 8e-16, zLo: 0.05, zHi: 3, areaDeg2: 50, magLimit: 24.5 };
 
 const recipes = workbook.addWorksheet("Recipes (invented)");
-recipes.addRow(["INVENTED sample and survey for the catalogue recipes: made up, not measurements."]);
+banner(recipes, "sample and survey for the catalogue recipes: made up, not measurements.");
 recipes.addRow([
   "source", "z (heliocentric)", "z_err", "RA (ICRS) [deg]", "Dec (ICRS) [deg]", "S_3GHz [mJy]", "S_err [mJy]", "α (S_ν ∝ ν^α)",
   "F_bol [erg/s/cm2]", "F_bol err [erg/s/cm2]", "m (r, AB) [mag]", "m err [mag]", "angle [arcsec]", "angle err [arcsec]",
@@ -325,14 +384,18 @@ populations.getCell("H2").value = "edges [log10 erg/s]";
 edges.forEach((edge, i) => (populations.getCell(`H${i + 3}`).value = edge));
 const tableHeaders = ["low [log10 erg/s]", "high [log10 erg/s]", "N (sources)", "Φ [Mpc-3 dex-1]", "σ_Φ [Mpc-3 dex-1]"];
 tableHeaders.forEach((header, i) => (populations.getCell(2, 10 + i).value = header)); // J2:N2
+// the table prints on a page of its own (columns I–N): a title above it and a label for each row
+populations.getCell("I1").value = "Luminosity function of the INVENTED sample by 1/V_max (C and D), binned by the edges in H: no model needed";
+populations.getCell("I2").value = "bin";
 const column = (k: number) => sample.map((row) => [row[k]]);
 const lfFormula = `ZC.LUMINOSITY_FUNCTION($C$3:$C$${lastSample},$D$3:$D$${lastSample},$H$3:$H$${2 + edges.length})`;
 const lf = evaluate(definitions.LUMINOSITY_FUNCTION, [column(2), column(3), edges.map((e) => [e])], active) as number[][];
-lf.forEach((row, i) =>
+lf.forEach((row, i) => {
+  populations.getCell(3 + i, 9).value = `bin ${i + 1}`;
   row.forEach((value, j) => {
     populations.getCell(3 + i, 10 + j).value = { formula: storedFormula(`INDEX(${lfFormula},${i + 1},${j + 1})`), result: value, date1904: false };
-  }),
-);
+  });
+});
 const chiRow = lastSample + 3;
 const chi2Models = ["P18-CMB", "W9-ALL", "EDS"];
 populations.getCell(`A${chiRow - 1}`).value = "χ² of the Hubble diagram (offset minimised), by model";
@@ -355,7 +418,7 @@ formatColumns(populations, 2, { J: "0.0", K: "0.0", L: "0", M: fmt.sci, N: fmt.s
 populations.getColumn("A").width = 12;
 populations.getCell(`A${chiRow + chi2Models.length + 1}`).value =
   "Cached values: each χ² under the model in its row; the luminosity function needs no model (V_max is given).";
-printSetup(populations, 2, "the model in column A for each χ² (P18-CMB, W9-ALL, EDS)", false);
+printSetup(populations, 2, "each χ²'s model in column A (none for the luminosity function)", false);
 
 const out = fileURLToPath(new URL("../demo/", import.meta.url));
 mkdirSync(out, { recursive: true });

@@ -29,7 +29,7 @@ const root = fileURLToPath(new URL("..", import.meta.url));
 const declarationFiles = JSON.parse(readFileSync(`${root}functions/declarationFiles.json`, "utf8")) as string[];
 
 /** The README sections a user reads, in the order the page shows them, around the function entries. */
-export const guideSections = { before: ["Model spec", "Models of this workbook", "Presets", "Units", "Conventions", "Errors"], after: ["Sharing workbooks", "Security"] };
+export const guideSections = { before: ["Your first formula", "From a raw catalogue to luminosities", "Model spec", "Models of this workbook", "Presets", "Units", "Conventions", "Errors"], after: ["Sharing workbooks", "Security"] };
 
 /** What the page says about one worksheet function. */
 export interface FunctionEntry {
@@ -44,6 +44,8 @@ export interface FunctionEntry {
   explanation?: CallExplanation;
   /** The example's whole result (more than one cell for a table). */
   cells?: Cell[][];
+  /** The conventions of each model the example names (not the default's), by model: they belong to the example, not to the function. */
+  exampleModels: { spec: string; conventions: string[] }[];
 }
 
 type Metadata = { functions: { id: string; description: string; parameters: { name: string; description: string; optional?: boolean }[] }[] };
@@ -66,13 +68,16 @@ function jsdocTags(file: string): { title: string; tags: Map<string, { example: 
   return { title, tags };
 }
 
-/** What a person gets when an argument is left out, from the function's definition. */
+/** What a person gets when an argument is left out, from the function's definition (`optional`: as the declaration marks it). */
 function ifOmitted(spec: ArgSpec | undefined, optional: boolean): string {
   if (!spec) return optional ? "optional" : "required";
+  // an argument the declaration requires (one after it is required) may still be left blank: MODEL's base
+  if (!optional) return spec.kind === "model" && !spec.required ? `blank: the workbook's model (${defaultModelSpec} unless one is applied)` : "required";
+  const blank = "blank" in spec ? spec.blank : undefined;
+  if (blank) return "typed" in blank ? `"${blank.typed}"` : blank.words;
   switch (spec.kind) {
     case "number":
-      if (spec.default === undefined) return "required";
-      return Number.isNaN(spec.default) ? "not given" : spec.name === "area" && spec.default === 4 * Math.PI ? "the whole sky" : formatValue(spec.default);
+      return spec.default === undefined || Number.isNaN(spec.default) ? "required" : formatValue(spec.default);
     case "model":
       return spec.required ? "required" : `the workbook's model (${defaultModelSpec} unless one is applied)`;
     case "unit":
@@ -80,14 +85,16 @@ function ifOmitted(spec: ArgSpec | undefined, optional: boolean): string {
     case "numberOrText":
       return spec.default === undefined ? "required" : String(spec.default);
     case "text":
-      return spec.optional ? "none" : "required";
+      return "required";
   }
 }
 
-/** The argument's unit as a person types it: the default of the unit argument that applies to it, and that argument's name. */
+/** The argument's unit as a person types it: the default of the unit argument that applies to it, and that argument's name; or its fixed unit. */
 function unitOf(args: readonly ArgSpec[], name: string): string | undefined {
   const spec = args.find((a) => a.kind === "unit" && (typeof a.applies === "string" ? [a.applies] : a.applies).includes(name));
-  return spec?.kind === "unit" ? `${spec.default} (set by ${spec.name})` : undefined;
+  if (spec?.kind === "unit") return `${spec.default} (set by ${spec.name})`;
+  const own = args.find((a) => a.name === name);
+  return own?.kind === "number" ? own.unit : undefined;
 }
 
 /** The value of an argument written as a literal (number, text, array constant, omitted); undefined when it is not one. */
@@ -110,6 +117,12 @@ function exampleCells(example: string, name: string): Cell[][] | undefined {
   return evaluate(definitions[name], values.map((v) => v!.value), { spec: defaultModelSpec, stored: false });
 }
 
+/** What the inspector says of a model alone (its conventions), through a call with no other argument. */
+async function modelOnly(spec: string): Promise<CallExplanation> {
+  const [call] = await explainFormula(`=ZC.HUBBLE(, "${spec.replaceAll('"', '""')}")`, async () => ({ cells: 0, values: [] }), { spec: defaultModelSpec, stored: false });
+  return call;
+}
+
 /** Every worksheet function's entry, by family, from the declarations and the definitions. */
 export async function functionEntries(): Promise<FunctionEntry[]> {
   const result = await generateCustomFunctionsMetadata(declarationFiles.map((f) => `${root}${f}`), false);
@@ -117,7 +130,7 @@ export async function functionEntries(): Promise<FunctionEntry[]> {
   const metadata = JSON.parse(result.metadataJson) as Metadata;
   const families = declarationFiles.map(jsdocTags);
   const active = { spec: defaultModelSpec, stored: false };
-  const noReferences = async (): Promise<unknown[][]> => {
+  const noReferences = async (): Promise<never> => {
     throw new Error("an example names no cells");
   };
   const entries: FunctionEntry[] = [];
@@ -127,18 +140,21 @@ export async function functionEntries(): Promise<FunctionEntry[]> {
     const args = definitions[f.id]?.args ?? [];
     const example = tags.example[0];
     const [explanation] = example ? await explainFormula(example, noReferences, active) : [];
+    const named = (explanation?.modelArgs ?? (explanation ? [explanation] : [])).flatMap((m) => (m.model?.source === "given in the formula" ? [m.model.spec] : []));
+    const exampleModels = await Promise.all(named.map(async (spec) => ({ spec, conventions: (await modelOnly(spec)).conventions })));
     entries.push({
       name: f.id,
       family: family.title,
       description: f.description,
       returns: tags.returns,
-      parameters: f.parameters.map((p) => {
-        const spec = args.find((a) => a.name === p.name);
-        return { name: p.name, description: p.description, optional: Boolean(p.optional), ifOmitted: ifOmitted(spec, Boolean(p.optional)), unit: unitOf(args, p.name) };
+      parameters: f.parameters.map((p, i) => {
+        const spec = args[i]; // the declaration and the definition list the arguments in the same order (MODEL's "model" is declared as base)
+        return { name: p.name, description: p.description, optional: Boolean(p.optional), ifOmitted: ifOmitted(spec, Boolean(p.optional)), unit: unitOf(args, spec?.name ?? p.name) };
       }),
       example,
       explanation,
       cells: example ? exampleCells(example, f.id) : undefined,
+      exampleModels,
     });
   }
   return entries;
@@ -168,13 +184,27 @@ function shownResult(e: CallExplanation, cell: Cell | undefined): string {
   return shownNumber(cell) + e.result.slice(formatValue(cell).length);
 }
 
-/** The conventions the inspector adds for the function itself (beyond those of the model). */
-function ownConventions(entry: FunctionEntry, modelConventions: readonly string[]): string[] {
-  return (entry.explanation?.conventions ?? []).filter((c) => !modelConventions.includes(c));
+/** The conventions the inspector adds for the function itself: beyond those of any model (the default's, or the example's own). */
+function ownConventions(entry: FunctionEntry, defaultConventions: readonly string[]): string[] {
+  const ofModels = new Set([...defaultConventions, ...entry.exampleModels.flatMap((m) => m.conventions)]);
+  return (entry.explanation?.conventions ?? []).filter((c) => !ofModels.has(c));
+}
+
+/** Where the example's model comes from, in words: the workbook's (the default), one the formula names, or the two of a restatement. */
+function exampleModelWords(e: CallExplanation): string {
+  const words = (m: NonNullable<CallExplanation["model"]>) => (m.source === "the workbook's model" ? "the workbook's model" : "named in the formula");
+  if (e.modelArgs) {
+    const [to, ...from] = [...e.modelArgs].reverse();
+    if (!to.model) return "";
+    const froms = from.flatMap((f) => (f.model ? [`${code(f.model.spec)} (${f.argument})`] : []));
+    return ` under ${code(to.model.spec)} (${to.argument}: ${words(to.model)}), restated from ${froms.join(" and ")}`;
+  }
+  if (!e.model) return "";
+  return e.model.source === "the workbook's model" ? ` under ${code(e.model.spec)}, the workbook's model (the formula names none)` : ` under ${code(e.model.spec)}, ${words(e.model)}`;
 }
 
 /** One function's entry as HTML. */
-function entryHtml(entry: FunctionEntry, modelConventions: readonly string[]): string {
+function entryHtml(entry: FunctionEntry, defaultConventions: readonly string[]): string {
   const signature = `ZC.${entry.name}(${entry.parameters.map((p) => (p.optional ? `[${p.name}]` : p.name)).join(", ")})`;
   const e = entry.explanation;
   const rows = entry.parameters
@@ -185,17 +215,26 @@ function entryHtml(entry: FunctionEntry, modelConventions: readonly string[]): s
     : "<p>No arguments.</p>";
   let example = `<p class="missing">No example yet.</p>`;
   if (entry.example && e) {
-    const model = e.model ? ` under ${code(e.model.spec)}${e.model.source === "the workbook's model" ? ", the workbook's model (the formula names none)" : ""}` : "";
     const cells = entry.cells && entry.cells.length * entry.cells[0].length > 1 ? entry.cells : undefined;
+    // a text result (a spec, a description) is not computed under a model in any sense a reader needs
+    const text = typeof entry.cells?.[0][0] === "string" && !cells;
+    const model = text ? "" : exampleModelWords(e);
+    const head = cells && e.columns ? `<thead><tr>${e.columns.map((c) => `<th scope="col">${escapeHtml(c)}</th>`).join("")}</tr></thead>` : "";
     const result = cells
-      ? `<table class="result"><caption>Result of the example</caption><tbody>${cells.map((row) => `<tr>${row.map((c) => `<td>${escapeHtml(shownCell(c))}</td>`).join("")}</tr>`).join("")}</tbody></table>`
+      ? `<table class="result"><caption>Result of the example</caption>${head}<tbody>${cells.map((row) => `<tr>${row.map((c) => `<td>${escapeHtml(shownCell(c))}</td>`).join("")}</tr>`).join("")}</tbody></table>`
       : `<output>${escapeHtml(shownResult(e, entry.cells?.[0][0]))}</output>`;
+    // the conventions of a model the example names, beyond the default model's, belong to the example
+    const under = (text ? [] : entry.exampleModels)
+      .map((m) => ({ spec: m.spec, extra: m.conventions.filter((c) => !defaultConventions.includes(c)) }))
+      .filter((m) => m.extra.length)
+      .map((m) => `<p class="hint">Under ${code(m.spec)}: ${escapeHtml(m.extra.join(" "))}</p>`)
+      .join("");
     example = cells
-      ? `<div class="example"><p><strong>Example</strong> ${code(entry.example)} gives${model}:</p>${result}</div>`
-      : `<div class="example"><p><strong>Example</strong> ${code(entry.example)} gives ${result}${model}.</p></div>`;
+      ? `<div class="example"><p><strong>Example</strong> ${code(entry.example)} gives${model}:</p>${result}${under}</div>`
+      : `<div class="example"><p><strong>Example</strong> ${code(entry.example)} gives ${result}${model}.</p>${under}</div>`;
   }
   const equation = e && e.equation !== "—" ? `<p><strong>Computes</strong> ${escapeHtml(e.summary)}: <span class="equation">${escapeHtml(e.equation)}</span></p>` : e ? `<p><strong>Gives</strong> ${escapeHtml(e.summary)}.</p>` : "";
-  const conventions = ownConventions(entry, modelConventions).map((c) => `<p><strong>Convention</strong> ${escapeHtml(c)}</p>`).join("");
+  const conventions = ownConventions(entry, defaultConventions).map((c) => `<p><strong>Convention</strong> ${escapeHtml(c)}</p>`).join("");
   return `<article class="fn" id="${entry.name}" aria-labelledby="${entry.name}-title">
 <h4 id="${entry.name}-title">${code(signature)}</h4>
 <p>${escapeHtml(entry.description)}</p>
@@ -251,7 +290,7 @@ export async function helpPage(): Promise<{ html: string; css: string }> {
   // the README's opening: what zcell computes and that every number depends on the model (its title is the page's)
   const intro = sectionHtml(readme.split(/^(?=## )/m)[0].replace(/^# .*\n/, ""));
   const defaultModel = Cosmology.fromSpec(defaultModelSpec);
-  const [reference] = await explainFormula("=ZC.HUBBLE()", async () => [], { spec: defaultModelSpec, stored: false });
+  const [reference] = await explainFormula("=ZC.HUBBLE()", async () => ({ cells: 0 }), { spec: defaultModelSpec, stored: false });
   const entries = await functionEntries();
   const families = [...new Set(entries.map((e) => e.family))];
   const familyId = (family: string) => `family-${slug(family)}`;
@@ -281,7 +320,7 @@ ${intro}</section>
 <section aria-labelledby="the-default-model" class="notice"><h2 id="the-default-model">The default model</h2>
 <p>A formula that names no model uses the workbook's model, which is ${code(defaultModelSpec)} until someone applies another in the pane. In words (as <code>=ZC.DESCRIBE()</code> writes it):</p>
 <p class="model">${escapeHtml(describeModel(defaultModel))}</p>
-<p>Every example below is computed under it, by the same code as a cell.</p></section>
+<p>An example below that names no model is computed under it, by the same code as a cell; an example that names its own model says so, with that model's conventions.</p></section>
 ${contents}
 ${guide(guideSections.before)}
 <section aria-labelledby="worksheet-functions"><h2 id="worksheet-functions">Worksheet functions</h2>

@@ -22,7 +22,7 @@ export async function explainActiveCell(): Promise<void> {
       ? `${cell.address}: part of a spilled result (${where}); its formula is in ${cell.spillAnchor}.`
       : cell.place
         ? cell.address
-        : `${cell.address} (this Excel cannot say which cell of a spilled result this is: that needs ExcelApi 1.12)`;
+        : `${cell.address} (this version of Excel cannot say which cell of a spilled result this is)`;
     if (!callsZcFunction(formula)) {
       out.replaceChildren(el("p", "This cell has no ZC formula."));
       return;
@@ -43,9 +43,12 @@ function renderCall(c: CallExplanation): HTMLElement {
   const add = (term: string, value: string, cls?: string) => dl.append(el("dt", term), el("dd", value, cls));
   add("Computes", c.equation);
   for (const a of c.args) add(a.name, `${a.text} → ${a.value}${a.unit ? ` [${a.unit}]` : ""}`);
-  if (c.model) add("Model", `${c.model.spec} (${c.model.source}${c.model.where ? `: ${c.model.where}` : ""}): ${c.model.description}`);
-  else if (c.modelNote) add("Model", c.modelNote);
-  if (c.models) add("Models in this formula", c.models.map((m) => `"${m}"`).join(", "));
+  // the model used ("Model used": the argument above is "model"), or each model of a function of two (RESCALE: "From model", "To model")
+  for (const m of c.modelArgs ?? [{ label: "Model used", ...c }]) {
+    if (m.model) add(m.label, `${m.model.spec} (${m.model.source}${m.model.where ? `: ${m.model.where}` : ""}): ${m.model.description}`);
+    else if (m.modelNote) add(m.label, m.modelNote);
+    if (m.models) add(c.modelArgs ? `${m.label}s in this formula` : "Models in this formula", m.models.map((x) => `"${x}"`).join(", "));
+  }
   if (c.conventions.length) add("Conventions", c.conventions.join(" "));
   add("Method", c.methodPlain);
   if (c.methodPlain !== c.method) {

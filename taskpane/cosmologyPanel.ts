@@ -8,13 +8,13 @@ import { presets } from "../core/index.js";
 import { defaultModelSpec, readActiveModel } from "../functions/activeModel.js";
 import { modelNameProblem, noWorkbookModels, type WorkbookModels } from "../functions/workbookModels.js";
 import { $, el, plural } from "./dom.js";
-import { readModelSetting, recalculateWorkbook, writeModelSetting, writeWorkbookModels } from "./excelHost.js";
-import { countCellsNaming } from "./workbookScan.js";
+import { readModelSetting, recalculateWorkbook, writeModelSetting, writeWorkbookModels, type Recalculation } from "./excelHost.js";
+import { countCellsNaming, gapSentence } from "./workbookScan.js";
 import { changedFields, derivedValues, formFields, formFromSpec, formGroups, modelFromForm, shownText, unusableReason, type FormValues } from "./modelForm.js";
 
 const fieldLabels: Record<(typeof formFields)[number], string> = {
   H0: "H0 (km/s/Mpc)", Om: "Om (matter incl. ν)", OL: "OL (or “flat”)", w0: "w0", wa: "wa",
-  Tcmb: "Tcmb (K; 0 = no radiation)", Neff: "Neff", mnu: "mnu (eV, or list)", Ob: "Ob (optional)",
+  Tcmb: "Tcmb (K; 0 = no radiation)", Neff: "Neff", mnu: "mnu (eV, or list)", Ob: "Ob (optional; used by SOUND_HORIZON only)",
 };
 
 let currentSpec: string | undefined;
@@ -192,8 +192,7 @@ export function setupCosmology(): void {
     $("settings-warning").hidden = true;
     showBadge(spec);
     try {
-      const count = await recalculateWorkbook();
-      status.textContent = `Applied ${spec}; ${plural(count, "formula")} recalculated.`;
+      status.textContent = `Applied ${spec}; ${recalculated(await recalculateWorkbook())}`;
     } catch (e) {
       // the model is stored; only the request to recalculate failed: say exactly that
       status.textContent = `Applied ${spec}: it is stored in the workbook, but Excel did not recalculate (${(e as Error).message}). Cells show values of the previous model until the workbook recalculates.`;
@@ -235,8 +234,19 @@ function showModelChoices(): void {
   preset.value = chosen;
 }
 
+/**
+ * "4 formulas recalculated." as the status says it; where the count could not read every cell (a
+ * sheet beyond the scan's cell limit), that every formula was recalculated, the count so far and
+ * where it did not look.
+ */
+function recalculated({ count, gaps }: Recalculation): string {
+  if (count === undefined) return "the workbook recalculated.";
+  if (!gaps.length) return `${plural(count, "formula")} recalculated.`;
+  return `the workbook recalculated (${plural(count, "ZC formula")} counted).${gapSentence(gaps)}`;
+}
+
 /** Stores a new set of workbook models, re-reads them as the functions will, and recalculates. */
-async function storeWorkbookModels(specs: Map<string, string>): Promise<number> {
+async function storeWorkbookModels(specs: Map<string, string>): Promise<Recalculation> {
   await writeWorkbookModels(specs);
   workbookModels = readActiveModel().models ?? noWorkbookModels;
   showModelChoices();
@@ -260,8 +270,8 @@ function setupWorkbookModels(): void {
     const replaced = specs.has(upper);
     specs.set(upper, resolved);
     try {
-      const count = await storeWorkbookModels(specs);
-      status.textContent = `${replaced ? "Updated" : "Saved"} ${upper} = ${resolved} in this workbook; ${plural(count, "formula")} recalculated. Use it as "${upper}" in any model argument.`;
+      const done = await storeWorkbookModels(specs);
+      status.textContent = `${replaced ? "Updated" : "Saved"} ${upper} = ${resolved} in this workbook; ${recalculated(done)} Use it as "${upper}" in any model argument.`;
     } catch (e) {
       status.textContent = `Not saved: ${(e as Error).message}`;
     }
@@ -281,8 +291,7 @@ function setupWorkbookModels(): void {
     const specs = new Map(workbookModels.specs);
     specs.delete(name);
     try {
-      const count = await storeWorkbookModels(specs);
-      status.textContent = `Deleted ${name}; ${plural(count, "formula")} recalculated.`;
+      status.textContent = `Deleted ${name}; ${recalculated(await storeWorkbookModels(specs))}`;
     } catch (e) {
       status.textContent = `Not deleted: ${(e as Error).message}`;
     }

@@ -7,9 +7,9 @@
  */
 import { activeModelSettingKey } from "../functions/activeModel.js";
 import { storedWorkbookModels, workbookModelsSettingKey } from "../functions/workbookModels.js";
-import { callsZcFunction } from "../functions/storedFormula.js";
 import { qualifiedAddress, splitAddress, topLeft } from "./cellAddress.js";
 import type { ReferenceRead } from "./readArgument.js";
+import { countZcFormulas, type ScanGap } from "./workbookScan.js";
 
 /** A rectangle of cells as the pane sees it. */
 export interface RangeSnapshot {
@@ -50,27 +50,30 @@ function writeSetting(key: string, value: unknown): Promise<void> {
   );
 }
 
-/** Counts the ZC formulas in every worksheet and asks Excel for a full recalculation; returns the count. */
-export async function recalculateWorkbook(): Promise<number> {
-  return Excel.run(async (context) => {
-    const sheets = context.workbook.worksheets;
-    sheets.load("items/name");
-    await context.sync();
-    const used = sheets.items.map((sheet) => {
-      const range = sheet.getUsedRangeOrNullObject(true);
-      range.load("formulas");
-      return range;
-    });
-    await context.sync();
-    let count = 0;
-    for (const range of used) {
-      if (range.isNullObject) continue;
-      for (const row of range.formulas) for (const f of row) if (callsZcFunction(f)) count++;
-    }
+/** A full recalculation asked of Excel, and the ZC formulas counted afterwards. */
+export interface Recalculation {
+  /** ZC formulas in the cells counted; undefined when counting failed after Excel recalculated. */
+  count: number | undefined;
+  /** Where the count did not look (a sheet cut at `scanCellLimit` cells): Excel recalculated those cells too. */
+  gaps: ScanGap[];
+}
+
+/**
+ * Asks Excel for a full recalculation, then counts the ZC formulas of every sheet: formulas only, in
+ * chunks, at most `scanCellLimit` cells a sheet (`countZcFormulas`), so a sheet whose used range
+ * spans A1:XFD1048576 is never read in one request.
+ * @throws when Excel refuses the recalculation (the count is not attempted then)
+ */
+export async function recalculateWorkbook(): Promise<Recalculation> {
+  await Excel.run(async (context) => {
     context.workbook.application.calculate(Excel.CalculationType.full);
     await context.sync();
-    return count;
   });
+  try {
+    return await countZcFormulas();
+  } catch {
+    return { count: undefined, gaps: [] };
+  }
 }
 
 async function snapshot(get: (context: Excel.RequestContext) => Excel.Range): Promise<RangeSnapshot> {
@@ -123,16 +126,22 @@ export function readSelection(): Promise<RangeSnapshot> {
   return snapshot((context) => context.workbook.getSelectedRange());
 }
 
-/** The range a reference in a formula names (on `defaultSheet` when it names none); Worksheet.getRange takes a name too (@types/office-js). */
+/**
+ * The range a reference in a formula names (on `defaultSheet` when it names none); Worksheet.getRange
+ * takes a name too (@types/office-js). Only the cell part loses its `$` signs: a sheet may be called
+ * `Q$1`, and `'Q$1'!A1` is not `Q1!A1`.
+ */
 function referenceRange(context: Excel.RequestContext, reference: string, defaultSheet: string): Excel.Range {
-  const { sheet, address } = splitAddress(reference.replaceAll("$", ""));
+  const { sheet, address: written } = splitAddress(reference);
+  const address = written.replaceAll("$", "");
   if (!sheet && !/\d|:/.test(address)) return context.workbook.names.getItem(address).getRange();
   return context.workbook.worksheets.getItem(sheet ?? defaultSheet).getRange(address);
 }
 
 /**
- * Values of a reference as written in a formula (relative to `defaultSheet` when it names none).
- * @param reference e.g. "B2", "$A$2:$A$40", "'My sheet'!B2", or a defined name
+ * Formulas and values of a range the pane chose itself (the area of a table it plans), read whole.
+ * A reference written in a cell is a stranger's: read it with `readReferenceBounded`.
+ * @param reference e.g. "B2", "$A$2:$A$40", "'My sheet'!B2"
  */
 export function readReference(reference: string, defaultSheet: string): Promise<RangeSnapshot> {
   return snapshot((context) => referenceRange(context, reference, defaultSheet));
@@ -154,7 +163,7 @@ export async function readReferenceBounded(reference: string, defaultSheet: stri
     if (cells > maxCells) return { address: range.address, cells };
     range.load("values");
     await context.sync();
-    return { address: range.address, values: range.values };
+    return { address: range.address, cells, values: range.values };
   });
 }
 
@@ -279,32 +288,61 @@ export async function freezeCells(sheet: string, cells: FreezeCell[]): Promise<{
   return { carrier, oneUndoStep };
 }
 
+/** Comments of a sheet looked at, at most, where notes are missing (a crafted sheet may hold any number of them). */
+export const commentsLookedAtMost = 10_000;
+/** Comments read in one request. */
+const commentsPerRequest = 500;
+
 /**
- * The note (or, where notes are missing, the comment) on each given cell of a sheet.
+ * The comments of a sheet on the given cells, where notes are missing: the sheet's comments are read
+ * a page at a time with their cells (`$top` and `$skip`: Excel.Interfaces.CollectionLoadOptions,
+ * @types/office-js), until every cell's comment is found or `commentsLookedAtMost` were looked at.
+ * @returns address → comment, and whether every comment that could be one of them was looked at
+ */
+async function commentsOnCells(
+  context: Excel.RequestContext,
+  ws: Excel.Worksheet,
+  addresses: string[],
+): Promise<{ comments: Map<string, Excel.Comment>; complete: boolean }> {
+  const wanted = new Set(addresses);
+  const comments = new Map<string, Excel.Comment>();
+  const count = ws.comments.getCount();
+  await context.sync();
+  const toRead = Math.min(count.value, commentsLookedAtMost);
+  for (let skip = 0; skip < toRead && comments.size < wanted.size; skip += commentsPerRequest) {
+    const page = ws.comments.load({ content: true, $top: Math.min(commentsPerRequest, toRead - skip), $skip: skip });
+    await context.sync();
+    const located = page.items.map((comment) => ({ comment, where: comment.getLocation().load("address") }));
+    await context.sync();
+    for (const { comment, where } of located) {
+      const address = splitAddress(where.address).address.replaceAll("$", "");
+      if (wanted.has(address)) comments.set(address, comment);
+    }
+  }
+  return { comments, complete: comments.size === wanted.size || count.value <= commentsLookedAtMost };
+}
+
+/**
+ * The note (or, where notes are missing, the comment) on each given cell of a sheet: one note asked
+ * for each cell; comments looked at `commentsLookedAtMost` at most.
  * @param sheet worksheet name
  * @param addresses cell addresses such as "C4"
- * @returns address → annotation text, for the cells that have one
+ * @returns address → annotation text, for the cells that have one, and whether every annotation that
+ *   could be one of them was looked at (false only when the sheet has more comments than are looked at)
  */
-export async function readAnnotations(sheet: string, addresses: string[]): Promise<Map<string, string>> {
+export async function readAnnotations(sheet: string, addresses: string[]): Promise<{ annotations: Map<string, string>; complete: boolean }> {
   return Excel.run(async (context) => {
     const ws = context.workbook.worksheets.getItem(sheet);
-    const found = new Map<string, string>();
+    const annotations = new Map<string, string>();
     if (notesSupported()) {
       const notes = addresses.map((address) => ({ address, note: ws.notes.getItemOrNullObject(qualifiedAddress(sheet, address)).load("content") }));
       await context.sync();
-      for (const { address, note } of notes) if (!note.isNullObject) found.set(address, note.content);
-      return found;
+      for (const { address, note } of notes) if (!note.isNullObject) annotations.set(address, note.content);
+      return { annotations, complete: true };
     }
-    ws.comments.load("items/content");
-    await context.sync();
-    const located = ws.comments.items.map((comment) => ({ comment, where: comment.getLocation().load("address") }));
-    await context.sync();
-    const wanted = new Set(addresses);
-    for (const { comment, where } of located) {
-      const address = splitAddress(where.address).address.replaceAll("$", "");
-      if (wanted.has(address)) found.set(address, comment.content);
-    }
-    return found;
+    const { comments, complete } = await commentsOnCells(context, ws, addresses);
+    for (const [address, comment] of comments) annotations.set(address, comment.content);
+    return { annotations, complete };
   });
 }
 
@@ -323,14 +361,8 @@ export async function thawCells(sheet: string, cells: { address: string; formula
     if (notes) {
       for (const cell of cells) ws.notes.getItemOrNullObject(qualifiedAddress(sheet, cell.address)).delete();
     } else {
-      ws.comments.load("items");
-      await context.sync();
-      const located = ws.comments.items.map((comment) => ({ comment, where: comment.getLocation().load("address") }));
-      await context.sync();
-      const restored = new Set(cells.map((c) => c.address));
-      for (const { comment, where } of located) {
-        if (restored.has(splitAddress(where.address).address.replaceAll("$", ""))) comment.delete();
-      }
+      const { comments } = await commentsOnCells(context, ws, cells.map((c) => c.address));
+      for (const comment of comments.values()) comment.delete();
     }
     await context.sync();
   });

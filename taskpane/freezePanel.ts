@@ -10,8 +10,8 @@ import { zcellVersion } from "../functions/describeModel.js";
 import { callsZcFunction } from "../functions/storedFormula.js";
 import { columnName, splitAddress, topLeft } from "./cellAddress.js";
 import { $, el, plural } from "./dom.js";
-import { freezeCells, readAnnotations, readReference, readSelection, readSheetNames, thawCells, undoGroupSupported, type FreezeCell } from "./excelHost.js";
-import { explainFormula } from "./explainCall.js";
+import { commentsLookedAtMost, freezeCells, readAnnotations, readReferenceBounded, readSelection, readSheetNames, thawCells, undoGroupSupported, type FreezeCell } from "./excelHost.js";
+import { explainFormula, type ReferenceRead, type ReferenceReader } from "./explainCall.js";
 import { parseProvenanceNote, provenanceNote } from "./provenanceNote.js";
 import { restorableFormulas } from "./restorableFormula.js";
 
@@ -29,7 +29,7 @@ function cellsOf(selection: { address: string; formulas: unknown[][]; values: un
 function undoSentence(): string {
   return undoGroupSupported()
     ? "Undo: Excel's Undo (Ctrl+Z / ⌘Z) reverts a replacement in one step here; Restore formulas below works at any time, in any Excel."
-    : "Undo: this Excel cannot record an add-in's changes as one undo step (that needs ExcelApi 1.20), so do not count on Ctrl+Z; Restore formulas below brings the formulas back.";
+    : "Undo: this version of Excel cannot record an add-in's changes as one undo step (newer versions can), so do not count on Ctrl+Z; Restore formulas below brings the formulas back.";
 }
 
 /** Wires Freeze (with its confirmation) and Thaw. */
@@ -43,7 +43,15 @@ export function setupFreeze(): void {
     try {
       const { sheet, cells } = cellsOf(await readSelection());
       const active = readActiveModel();
-      const read = async (ref: string) => (await readReference(ref, sheet)).values;
+      // as the inspector reads them: each reference's size first, none larger than its limit read; one
+      // reference named by several of the selected formulas is read once
+      const reads = new Map<string, Promise<ReferenceRead>>();
+      const read: ReferenceReader = (ref, maxCells) => {
+        const key = `${maxCells} ${ref}`;
+        let got = reads.get(key);
+        if (!got) reads.set(key, (got = readReferenceBounded(ref, sheet, maxCells)));
+        return got;
+      };
       const today = new Date().toISOString().slice(0, 10);
       const frozen: FreezeCell[] = [];
       for (const cell of cells) {
@@ -139,7 +147,8 @@ function setupThaw(): void {
     try {
       const { sheet, cells } = cellsOf(await readSelection());
       const plain = cells.filter((c) => !(typeof c.formula === "string" && c.formula.startsWith("=")));
-      const notes = await readAnnotations(sheet, plain.map((c) => c.address));
+      const { annotations: notes, complete } = await readAnnotations(sheet, plain.map((c) => c.address));
+      const unread = complete ? "" : ` Only the first ${commentsLookedAtMost.toLocaleString("en-US")} comments of this sheet were looked at.`;
       const sheets = await readSheetNames();
       const claims = [...notes].flatMap(([address, text]) => {
         const provenance = parseProvenanceNote(text);
@@ -156,16 +165,18 @@ function setupThaw(): void {
       for (const r of refused) refusedList.append(listItem(r.address, `not restored: ${r.reason}`, false));
       const refusedText = refused.length ? ` ${plural(refused.length, "cell")} not restored, listed below.` : "";
       if (restoring.length === 0) {
-        thawStatus.textContent = refused.length
-          ? `Nothing to restore:${refusedText}`
-          : "The selection has no cells that zcell replaced with values (cells with the note zcell writes then).";
+        thawStatus.textContent =
+          (refused.length
+            ? `Nothing to restore:${refusedText}`
+            : "The selection has no cells that zcell replaced with values: such a cell carries a note that begins \"Replaced with its value by zcell\" (or \"Frozen by zcell\" from zcell 0.1 and 0.2).") + unread;
         return;
       }
       pending = { sheet, cells: restoring };
       $("thaw-confirm-text").textContent =
         `Restore ${plural(restoring.length, "ZC formula")} in the selection` +
         (restoring.length > previewCount ? ` (the first ${previewCount} below)?` : "?") +
-        refusedText;
+        refusedText +
+        unread;
       $("thaw-preview").replaceChildren(...restoring.slice(0, previewCount).map((c) => listItem(c.address, preview(c.formula), true)));
       $("thaw-confirm").hidden = false;
       $("thaw-go").focus();

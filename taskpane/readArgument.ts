@@ -9,8 +9,20 @@ import { placeWords, type CellPlace } from "./broadcastPlace.js";
 import { columnName, topLeft } from "./cellAddress.js";
 import { parseArrayConstant, type Token } from "./formulaCalls.js";
 
-/** What a reader gives for a reference: its values and the address Excel resolved, or only the size of a range too large to read. */
-export type ReferenceRead = { address?: string; values: unknown[][] } | { address?: string; cells: number };
+/**
+ * What a reader gives for a reference: the address Excel resolved, its size in cells (asked before its
+ * values), and its values only when that size is within the bound the reader was given. A snapshot
+ * of a range read whole (values loaded without asking the size first) has no `cells`, so TypeScript
+ * refuses it here.
+ */
+export type ReferenceRead = { address?: string; cells: number; values?: unknown[][] };
+
+/**
+ * Reads a reference written in a formula (e.g. "B2", "'Sheet 2'!A1:A9", a defined name): its size
+ * first, then its values only when it holds at most `maxCells` cells (`readReferenceBounded` in
+ * excelHost.ts for Excel).
+ */
+export type ReferenceReader = (reference: string, maxCells: number) => Promise<ReferenceRead>;
 
 /** Cells the inspector reads from one reference at most (a whole column is 1,048,576: "Excel specifications and limits", from memory). */
 export const inspectorReadLimit = 100_000;
@@ -35,13 +47,13 @@ const numberOf = (text: string) => Number(text.replace("%", "")) * (text.endsWit
  * @param tokens the argument's tokens (spaces dropped)
  * @param text the argument's source text (a nested call's, as its key in `nested`)
  * @param read reads a reference, or gives only its size when it holds more than `inspectorReadLimit` cells
- * @param nested the results of the nested ZC calls already computed, by their source text
+ * @param nested the results of the nested ZC calls already computed, by their source text (or why one is not)
  */
 export async function readArgument(
   tokens: Token[],
   text: string,
   read: (reference: string) => Promise<ReferenceRead>,
-  nested: Map<string, Cell[][]>,
+  nested: Map<string, Cell[][] | string>,
 ): Promise<ReadArgument> {
   if (tokens.length === 0) return { known: true, value: undefined };
   const only = tokens.length === 1 ? tokens[0] : undefined;
@@ -49,7 +61,9 @@ export async function readArgument(
   if (negative) return { known: true, value: -numberOf(tokens[1].text) };
   if (!only) {
     const cells = nested.get(text);
-    return cells ? { known: true, value: cells, source: { kind: "call", name: tokens[0].text.toUpperCase() } } : { known: false, value: undefined };
+    const source: ArgumentSource = { kind: "call", name: tokens[0].text.toUpperCase() };
+    if (typeof cells === "string") return { known: false, value: undefined, note: cells, source };
+    return cells ? { known: true, value: cells, source } : { known: false, value: undefined };
   }
   switch (only.kind) {
     case "number":
@@ -69,7 +83,7 @@ export async function readArgument(
         return { known: false, value: undefined, note: `not read (Excel: ${cut(String((e as Error)?.message ?? e), 100)})` };
       }
       const source: ArgumentSource = { kind: "reference", text: only.text, address: got.address };
-      if ("cells" in got) {
+      if (got.values === undefined || got.cells > inspectorReadLimit) {
         return { known: false, value: undefined, source, note: `a range of ${got.cells.toLocaleString("en-US")} cells, not read (the inspector reads at most ${inspectorReadLimit.toLocaleString("en-US")})` };
       }
       return { known: true, value: got.values, source };

@@ -7,7 +7,7 @@
  * left alone. The scan is bounded per sheet, can be stopped, and says where it did not look.
  */
 import { $, el, plural } from "./dom.js";
-import { findUnboundFormulas, reenterFormulas, type ScanControl, type ScanGap, type UnboundFormula } from "./workbookScan.js";
+import { findUnboundFormulas, gapSentence, reenterFormulas, type ScanControl, type UnboundFormula } from "./workbookScan.js";
 import { restorableFormulas } from "./restorableFormula.js";
 
 /** Addresses listed at most in the banner; the rest are counted. */
@@ -28,11 +28,6 @@ function protectedSentence(sheets: string[], counts: Map<string, number>): strin
   if (!sheets.length) return "";
   const n = sheets.reduce((sum, s) => sum + (counts.get(s) ?? 0), 0);
   return ` ${plural(n, "formula")} on protected ${sheets.length === 1 ? "sheet" : "sheets"} ${sheets.join(", ")} cannot be entered again until the protection is removed; nothing there is changed.`;
-}
-
-function gapSentence(gaps: ScanGap[]): string {
-  if (!gaps.length) return "";
-  return ` Not every cell was looked at: ${gaps.map((g) => `${g.sheet} ${g.what}`).join("; ")}.`;
 }
 
 /** Formulas the banner will enter again (typed spelling), found by the last scan. */

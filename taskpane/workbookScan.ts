@@ -37,6 +37,12 @@ export interface ScanGap {
   what: string;
 }
 
+/** " Not every cell was looked at: …." naming each gap, or "" when the scan looked everywhere. */
+export function gapSentence(gaps: ScanGap[]): string {
+  if (!gaps.length) return "";
+  return ` Not every cell was looked at: ${gaps.map((g) => `${g.sheet} ${g.what}`).join("; ")}.`;
+}
+
 /** Gives the pane's other work (clicks, other tabs) a turn between two requests of a long scan. */
 const yieldToPage = () => new Promise<void>((resolve) => setTimeout(resolve, 0));
 
@@ -44,11 +50,13 @@ const yieldToPage = () => new Promise<void>((resolve) => setTimeout(resolve, 0))
  * Visits the cells of the used range (values only: formatting does not widen it) of every sheet,
  * reading at most `scanChunkCells` cells a request and `scanCellLimit` cells a sheet, yielding to
  * the page between requests and stopping when `control.cancelled` is set.
+ * @param withValues false: only the formulas are read (`visit` gets undefined for the value)
  * @returns the sheets that are protected, and where the scan did not look
  */
 async function scanUsedCells(
   visit: (sheet: string, address: string, formula: unknown, value: unknown) => void,
   control: ScanControl = { cancelled: false },
+  withValues = true,
 ): Promise<{ locked: Set<string>; gaps: ScanGap[]; sheets: string[] }> {
   return Excel.run(async (context) => {
     const sheets = context.workbook.worksheets;
@@ -77,11 +85,11 @@ async function scanUsedCells(
       let r0 = 0;
       for (; r0 < rowsToScan && !control.cancelled; r0 += rowsPerChunk) {
         const rows = Math.min(rowsPerChunk, rowsToScan - r0);
-        const chunk = range.getCell(r0, 0).getResizedRange(rows - 1, range.columnCount - 1).load("formulas,values");
+        const chunk = range.getCell(r0, 0).getResizedRange(rows - 1, range.columnCount - 1).load(withValues ? "formulas,values" : "formulas");
         await context.sync();
-        const values = chunk.values;
+        const values = withValues ? chunk.values : undefined;
         chunk.formulas.forEach((row, i) =>
-          row.forEach((formula, j) => visit(sheet.name, `${columnName(origin.col + j)}${origin.row + r0 + i}`, formula, values[i][j])),
+          row.forEach((formula, j) => visit(sheet.name, `${columnName(origin.col + j)}${origin.row + r0 + i}`, formula, values?.[i][j])),
         );
         await yieldToPage();
       }
@@ -116,6 +124,23 @@ export async function findUnboundFormulas(
   }, control);
   const protectedSheets = [...new Set(formulas.map((f) => f.sheet))].filter((sheet) => locked.has(sheet));
   return { formulas, protectedSheets, gaps, sheets };
+}
+
+/**
+ * Counts the formulas that call a ZC function (typed or stored spelling) in every sheet, reading the
+ * formulas only, in chunks, at most `scanCellLimit` cells a sheet (as the repair scan does).
+ * @returns the count, and where the count did not look (a sheet cut at the cell limit)
+ */
+export async function countZcFormulas(): Promise<{ count: number; gaps: ScanGap[] }> {
+  let count = 0;
+  const { gaps } = await scanUsedCells(
+    (_sheet, _address, formula) => {
+      if (callsZcFunction(formula)) count++;
+    },
+    undefined,
+    false,
+  );
+  return { count, gaps };
 }
 
 /**

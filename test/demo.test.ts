@@ -27,6 +27,9 @@ import { storedFormula } from "../functions/storedFormula.js";
 import { zcellVersion } from "../functions/describeModel.js";
 import { pageTexts, renderPdf, renderToolsMissing, sheetOfPage } from "../scripts/renderDemo.mjs";
 import { expectRelative } from "./helpers.js";
+import { toolAvailable } from "./requirements.js";
+import { referenceAvailable, runPythonReference } from "./reference/python.js";
+import { evaluateFormula, sheetRuntime, type SheetValue } from "./sheetFormula.js";
 
 const root = fileURLToPath(new URL("..", import.meta.url));
 
@@ -109,12 +112,12 @@ describe("demo workbook, read as Excel reads it", () => {
 
   test("every formula calls ZC in the stored spelling, never the bare ZC. name", () => {
     const all = formulaCells();
-    expect(all.length).toBe(12 * 6 + 1 + 8 * 3 + 2 + 8 * 15 + 1 + 9 + 5 * 5 + 3);
+    expect(all.length).toBe(12 * 9 + 2 + 8 * 3 + 2 + 8 * 15 + 1 + 9 + 5 * 5 + 3);
     for (const c of all) {
       expect(c.formula, `${c.sheet}!${c.address}`).not.toMatch(/(^|[^_\w])ZC\./);
       // the one formula without ZC is the sum of the 1/V_max weights
       if (c.sheet === "Recipes (invented)" && c.address === "AB12") expect(c.formula).toBe("SUM(AB3:AB10)");
-      else expect(c.formula, `${c.sheet}!${c.address}`).toMatch(/^(1\/|INDEX\()?_xldudf_ZC_[A-Z0-9_]+\(/);
+      else expect(c.formula, `${c.sheet}!${c.address}`).toMatch(/^(1\/|INDEX\(|[A-Z]+\d+-)?_xldudf_ZC_[A-Z0-9_]+\(/);
     }
   });
 
@@ -143,7 +146,7 @@ describe("demo workbook, read as Excel reads it", () => {
     const readme = readFileSync(`${root}README.md`, "utf8");
     const table = readme.slice(readme.indexOf("<!-- demo-tour:start"), readme.indexOf("<!-- demo-tour:end"));
     const rows = [...table.matchAll(/^\| ([A-Z]) \| ([^|]+) \| `=([^`]+)` \|/gm)];
-    expect(rows.length).toBe(6);
+    expect(rows.length).toBe(9);
     const cells = sheets.get("Catalogue (invented)")!;
     for (const [, column, header, formula] of rows) {
       expect(cells.get(`${column}2`)!.value, column).toBe(header.trim());
@@ -274,8 +277,113 @@ describe("demo workbook, read as Excel reads it", () => {
     const p18 = new SlowCosmology(publishedModels["P18-CMB"]);
     const cells = sheets.get("Catalogue (invented)")!;
     for (let r = 3; r <= 14; r++) {
-      expectRelative(Number(cells.get(`F${r}`)!.value), p18.luminosityDistanceMpc(Number(cells.get(`B${r}`)!.value)), 1e-9, `F${r}`);
+      expectRelative(Number(cells.get(`L${r}`)!.value), p18.luminosityDistanceMpc(Number(cells.get(`B${r}`)!.value)), 1e-9, `L${r}`);
     }
+  });
+});
+
+/** A cell's value as the sheet holds it (its cached value for a formula): number, text, boolean, or null when blank. */
+const valueIn = (cells: Map<string, SheetCell>) => (address: string): SheetValue => {
+  const c = cells.get(address);
+  if (c?.value === undefined) return null;
+  if (c.type === "s" || c.type === "str" || c.type === "inlineStr") return c.value;
+  if (c.type === "b") return c.value === "1";
+  return Number(c.value);
+};
+
+describe("demo workbook: every cached value is what its formula gives", () => {
+  test("each formula cell of every sheet, evaluated through the built bundle on the file's own cells, gives the value cached beside it", async () => {
+    // the bundle as Excel's runtime loads it, in a workbook of no settings (the default model, P18-CMB,
+    // the model the demo computes its cached values under); cell references read the file's values
+    const runtime = await sheetRuntime();
+    const differing: string[] = [];
+    let checked = 0;
+    for (const [sheet, cells] of sheets) {
+      for (const [address, c] of cells) {
+        if (c.formula === undefined) continue;
+        const got = await evaluateFormula(runtime, c.formula, valueIn(cells));
+        const cached = valueIn(cells)(address);
+        checked++;
+        if (got !== cached) differing.push(`${sheet}!${address} ${c.formula}: cached ${String(cached)}, the bundle gives ${String(got)}`);
+      }
+    }
+    expect(checked).toBe(formulaCells().length);
+    expect(differing).toEqual([]);
+  });
+
+  test("the evaluator sees a cached value that is not the formula's", async () => {
+    const runtime = await sheetRuntime();
+    const cells = sheets.get("Catalogue (invented)")!;
+    const tampered = (address: string) => (address === "H3" ? 0.5 : valueIn(cells)(address)); // another E(B−V)
+    expect(await evaluateFormula(runtime, cells.get("K3")!.formula!, tampered)).not.toBe(valueIn(cells)("K3"));
+    await expect(evaluateFormula(runtime, "VLOOKUP(A1,B1:C2,2)", tampered)).rejects.toThrow(/the function VLOOKUP/);
+  });
+});
+
+/** The catalogue's rows 3–14: the typed positions and E(B−V), and the cached values of their formulas. */
+function catalogueRows() {
+  const cells = sheets.get("Catalogue (invented)")!;
+  const at = valueIn(cells);
+  return Array.from({ length: 12 }, (_, i) => {
+    const r = i + 3;
+    return {
+      r, z: at(`B${r}`) as number, m: at(`D${r}`) as number, ra: at(`F${r}`) as string, dec: at(`G${r}`) as string, ebv: at(`H${r}`) as number,
+      b: at(`I${r}`) as number, cz: at(`J${r}`) as number, dereddened: at(`K${r}`) as number,
+    };
+  });
+}
+
+describe("demo catalogue: positions, dust and velocities", () => {
+  test("positions are sexagesimal text (RA hh:mm:ss.s in hours, Dec ±dd:mm:ss), in the Text format, and the row's formulas read them", () => {
+    const cells = sheets.get("Catalogue (invented)")!;
+    for (const { r, ra, dec } of catalogueRows()) {
+      expect(cells.get(`F${r}`)!.type, `F${r}`).toBe("s");
+      expect(ra, `F${r}`).toMatch(/^([01]\d|2[0-3]):[0-5]\d:[0-5]\d\.\d$/);
+      expect(dec, `G${r}`).toMatch(/^[+-][0-8]\d:[0-5]\d:[0-5]\d$/);
+      // number format 49 is the built-in Text format "@" (ECMA-376 Part 1 §18.8.30, from memory; exceljs's
+      // lib/xlsx/defaultnumformats.js maps 49 to "@")
+      for (const column of ["F", "G"]) expect(cells.get(`${column}${r}`)!.numFmtId, `${column}${r}`).toBe(49);
+      expect(cells.get(`I${r}`)!.formula).toBe(storedFormula(`ZC.COORD_CONVERT(F${r},G${r},"equatorial","galactic","lat")`));
+      expect(cells.get(`J${r}`)!.formula).toBe(storedFormula(`ZC.VELOCITY(B${r})`));
+      expect(cells.get(`K${r}`)!.formula).toBe(storedFormula(`D${r}-ZC.EXTINCTION(6165,H${r})`));
+      expect(cells.get(`Q${r}`)!.formula).toBe(storedFormula(`ZC.MAG_ABS(K${r},B${r},P${r})`));
+    }
+  });
+
+  test("the notes under the table cite the band's effective wavelength and say what cz is", () => {
+    const cells = sheets.get("Catalogue (invented)")!;
+    expect(cells.get("B18")!.value).toMatch(/^Positions \(F, G\) and E\(B−V\) \(H\) are invented\. I: the Galactic latitude/);
+    expect(cells.get("J18")!.value).toMatch(/SDSS r's effective wavelength, 6165 Å \(Schlafly & Finkbeiner 2011, ApJ 737, 103, Table 6\)/);
+    expect(cells.get("J18")!.value).toMatch(/^J: cz, the optical convention's velocity: a label for z, not a speed/);
+  });
+
+  test("cz is c z (the optical convention), c = 299792.458 km/s", () => {
+    // c exact by the SI definition of the metre (BIPM SI Brochure, 9th edition, 2019)
+    for (const { r, z, cz } of catalogueRows()) expectRelative(cz, 299792.458 * z, 1e-15, `J${r}`);
+  });
+
+  describe.runIf(referenceAvailable("astropy", "python3-astropy"))("against astropy", () => {
+    test("the Galactic latitude of each typed position is astropy's, within 1 mas (its Angle reads the text; the galactic frame from the same Hipparcos pole and origin)", () => {
+      const rows = catalogueRows();
+      // astropy's Angle reads the text (RA in hours, Dec in degrees); test/reference/astropy_positions.py builds the
+      // Hipparcos galactic frame (ESA 1997 Vol. 1 §1.5.3) with astropy's own rotation matrices
+      const parsed = runPythonReference<{ parse: number[] }>("astropy_positions.py", { parse: rows.flatMap(({ ra, dec }) => [[ra, "hourangle"], [dec, "deg"]]) }).parse;
+      const points = rows.map((_, i) => [parsed[2 * i], parsed[2 * i + 1]]);
+      const [galactic] = runPythonReference<{ frames: number[][][] }>("astropy_positions.py", { frames: [{ from: "icrs", to: "hipparcos_galactic", points }] }).frames;
+      let worstMas = 0;
+      rows.forEach(({ b }, i) => (worstMas = Math.max(worstMas, Math.abs(b - galactic[i][1]) * 3.6e6)));
+      console.info(`demo catalogue: worst |Δb| against astropy: ${worstMas.toExponential(2)} mas`);
+      expect(worstMas).toBeLessThanOrEqual(1);
+    });
+  });
+
+  describe.runIf(referenceAvailable("extinction", "python3-extinction"))("against python3-extinction", () => {
+    test("m − A_r is m less Fitzpatrick 1999 (R_V = 3.1) at 6165 Å, within 6e-4 mag per mag of E(B−V) (the two sets of optical anchors; test/extinction.test.ts)", () => {
+      const rows = catalogueRows();
+      const [perEbv] = runPythonReference<{ a_per_ebv: number[][] }>("extinction_reference.py", { cases: [{ law: "fitzpatrick99", r_v: 3.1, wavelengths: [6165] }] }).a_per_ebv;
+      for (const { r, m, ebv, dereddened } of rows) expect(Math.abs(dereddened - (m - ebv * perEbv[0])), `K${r}`).toBeLessThanOrEqual(6e-4 * ebv);
+      expect(rows.some(({ m, dereddened }) => m - dereddened > 0.1)).toBe(true); // the correction is not nothing
+    });
   });
 });
 
@@ -287,7 +395,7 @@ const paper: Record<string, { models: string; headerRow: number; labelColumn: bo
   "Model in cells":         { models: "H0=70; Om=0.3; OL=0.7 (no radiation)",                     headerRow: 5, labelColumn: true },
   "Recipes (invented)":     { models: "P18-CMB",                                                  headerRow: 2, labelColumn: true },
   "Structure (invented)":   { models: "P18-CMB",                                                  headerRow: 2, labelColumn: true },
-  "Populations (invented)": { models: "the model in column A for each χ² (P18-CMB, W9-ALL, EDS)", headerRow: 2, labelColumn: false },
+  "Populations (invented)": { models: "each χ²'s model in column A (none for the luminosity function)", headerRow: 2, labelColumn: false },
 };
 
 const columnNumberOf = (letters: string) => [...letters].reduce((n, c) => n * 26 + c.charCodeAt(0) - 64, 0);
@@ -360,9 +468,15 @@ describe("demo workbook on paper", () => {
     // sheet                   cell    header: quantity, unit, and band or convention
     ["Catalogue (invented)",   "C2",   "F_bol [erg/s/cm2]"],
     ["Catalogue (invented)",   "D2",   "m (r, AB) [mag]"],
-    ["Catalogue (invented)",   "H2",   "L_bol [Lsun]"],
-    ["Catalogue (invented)",   "J2",   "K [mag], α = −0.5"],
-    ["Catalogue (invented)",   "K2",   "M (r, AB) [mag]"],
+    ["Catalogue (invented)",   "F2",   "RA (ICRS) [hh:mm:ss.s]"],
+    ["Catalogue (invented)",   "G2",   "Dec (ICRS) [±dd:mm:ss]"],
+    ["Catalogue (invented)",   "H2",   "E(B−V) [mag]"],
+    ["Catalogue (invented)",   "I2",   "b (Galactic) [deg]"],
+    ["Catalogue (invented)",   "J2",   "cz [km/s], optical"],
+    ["Catalogue (invented)",   "K2",   "m − A_r (r, AB) [mag]"],
+    ["Catalogue (invented)",   "N2",   "L_bol [Lsun]"],
+    ["Catalogue (invented)",   "P2",   "K [mag], α = −0.5"],
+    ["Catalogue (invented)",   "Q2",   "M (r, AB) [mag]"],
     ["Recipes (invented)",     "B2",   "z (heliocentric)"],
     ["Recipes (invented)",     "H2",   "α (S_ν ∝ ν^α)"],
     ["Recipes (invented)",     "J2",   "F_bol err [erg/s/cm2]"],
@@ -409,8 +523,11 @@ describe("demo workbook on paper", () => {
 
   test("each sheet says beside its results which model(s) they assume, in words", () => {
     const at = (sheet: string, address: string) => sheets.get(sheet)!.get(address)?.value ?? "";
+    // the catalogue prints two pages wide (A–I, then J–Q with A repeated): the model in words under each
     expect(at("Catalogue (invented)", "A16")).toBe("Every value above assumes:");
     expect(sheets.get("Catalogue (invented)")!.get("B16")!.formula).toBe("_xldudf_ZC_DESCRIBE()");
+    expect(sheets.get("Catalogue (invented)")!.get("J16")!.formula).toBe("_xldudf_ZC_DESCRIBE()");
+    expect(layouts.get("Catalogue (invented)")!.merged).toEqual(expect.arrayContaining(["B16:I16", "J16:Q16"]));
     // What-if: each model of row 2 in words with its source, W9-ALL too (Hinshaw et al. 2013, the preset's source)
     expect(at("What-if", "F2")).toBe("The models of row 2, in words:");
     expect(at("What-if", "F3")).toMatch(/^P18-CMB: H0 67\.36, Ωm 0\.3153 .*Planck 2018 VI/);
@@ -427,6 +544,11 @@ describe("demo workbook on paper", () => {
     for (const [row, model] of [[15, "P18-CMB"], [16, "W9-ALL"], [17, "EDS"]] as const) {
       expect(at("Populations (invented)", `C${row}`)).toMatch(new RegExp(`^${model}: H0 `));
     }
+    // the luminosity function prints on its own page (I–N): a title that says it needs no model, and a label for each row
+    expect(at("Populations (invented)", "I1")).toMatch(/^Luminosity function of the INVENTED sample .*no model needed$/);
+    expect([3, 4, 5, 6, 7].map((r) => at("Populations (invented)", `I${r}`))).toEqual(["bin 1", "bin 2", "bin 3", "bin 4", "bin 5"]);
+    // a sheet printed several pages wide with column A repeated says on every page, in column A, that its data are invented
+    for (const sheet of ["Catalogue (invented)", "Recipes (invented)"]) expect(at(sheet, "A1"), sheet).toBe("INVENTED (made up)");
   });
 
   test("the surface-brightness example names the band and system of M☉, with its source", () => {
@@ -441,11 +563,13 @@ describe("demo workbook on paper", () => {
 
 /** Where LibreOffice renders the workbook (not in CI: .ci/run does not install it). */
 const missingRenderTools = renderToolsMissing() as string[][];
-if (missingRenderTools.length) {
-  console.warn(`skipping the demo's rendering check: ${missingRenderTools.map(([tool, pkg]) => `${tool} (Debian ${pkg})`).join(", ")} not installed`);
-}
+// under CI a missing renderer fails the run (.ci/run installs both), elsewhere the check is skipped with a hint
+const renderable = toolAvailable(
+  missingRenderTools.length === 0,
+  `${missingRenderTools.map(([tool, pkg]) => `Debian ${pkg} (${tool})`).join(" and ")} for the demo's rendering check: apt-get install -y ${missingRenderTools.map(([, pkg]) => pkg).join(" ")}`,
+);
 
-describe.runIf(missingRenderTools.length === 0)("demo workbook rendered by LibreOffice, as npm run render:demo does", () => {
+describe.runIf(renderable)("demo workbook rendered by LibreOffice, as npm run render:demo does", () => {
   /** Text without spaces or line breaks, so that a header reads the same wherever the PDF breaks its words. */
   const squeezed = (text: string) => text.replace(/\s+/g, "");
   let pages: { sheet: string | undefined; text: string }[] = [];

@@ -7,14 +7,16 @@ import { readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import { beforeEach, describe, expect, test } from "vitest";
 import { readActiveModel } from "../functions/activeModel.js";
-import { findUnboundFormulas, reenterFormulas, scanChunkCells } from "../taskpane/workbookScan.js";
+import { findUnboundFormulas, reenterFormulas, scanCellLimit, scanChunkCells } from "../taskpane/workbookScan.js";
 import {
+  commentsLookedAtMost,
   freezeCells,
   readAnnotations,
   thawCells,
   readActiveCell,
   readModelSetting,
   readReference,
+  readReferenceBounded,
   recalculateWorkbook,
   writeBlock,
   writeModelSetting,
@@ -33,6 +35,7 @@ type Fake = {
   selection: string;
   runs: unknown[];
   reads: number[];
+  commentReads: number[];
 };
 const g = globalThis as unknown as { window: { __fakeInit?: unknown; __fake: Fake } };
 
@@ -85,9 +88,45 @@ describe("Excel interactions", () => {
     fake = install({ settings: {}, sheets: sheets(), selection: "Sheet1!B2" });
   });
 
-  test("recalculation counts the ZC formulas of every sheet and asks for a full recalculation", async () => {
-    expect(await recalculateWorkbook()).toBe(2);
+  test("recalculation asks for a full recalculation and counts the ZC formulas of every sheet", async () => {
+    expect(await recalculateWorkbook()).toEqual({ count: 2, gaps: [] });
     expect(fake.calculations).toEqual(["Full"]);
+  });
+
+  test("recalculation counts a sheet whose used range spans A1:XFD200 in chunks, never all of it at once, and says where it did not count", async () => {
+    // the used range holds 200 × 16,384 = 3,276,800 cells; read in one request before
+    fake = install({ settings: {}, sheets: { Big: { A1: { value: 1 }, XFD200: { value: "far" } }, Sheet1: { A1: { formula: "=ZC.AGE()", value: 13.8 } } } });
+    const { count, gaps } = await recalculateWorkbook();
+    expect(fake.calculations).toEqual(["Full"]);
+    expect(count).toBe(1);
+    expect(Math.max(...fake.reads)).toBeLessThanOrEqual(scanChunkCells);
+    expect(fake.reads.reduce((a, b) => a + b, 0)).toBeLessThanOrEqual(scanCellLimit + 1);
+    expect(gaps).toEqual([{ sheet: "Big", what: "scanned rows 1–64 of A1:XFD200 only (the first 1,048,576 cells)" }]);
+  });
+
+  test("a sheet whose name holds $ is read as named: 'Q$1'!A1 is not Q1!A1", async () => {
+    install({ settings: {}, sheets: { "Q$1": { A1: { value: 0.5 } }, Q1: { A1: { value: 3 } }, Sheet1: {} } });
+    expect(await readReferenceBounded("'Q$1'!$A$1", "Sheet1", 10)).toEqual({ address: "'Q$1'!A1", cells: 1, values: [[0.5]] });
+    expect(await readReferenceBounded("Q1!A$1", "Sheet1", 10)).toEqual({ address: "Q1!A1", cells: 1, values: [[3]] });
+  });
+
+  test("where notes are missing, Restore formulas looks at 10,000 comments of a sheet at most, and stops once each cell's is found", async () => {
+    // 20,000 comments a stranger left on a sheet, none of them zcell's
+    const comments = Array.from({ length: 20_000 }, (_, i) => ({ address: `'Sheet1'!Z${i + 1}`, text: "spam" }));
+    fake = install({ settings: {}, sheets: sheets(), excelApi: "1.17", comments: [{ address: "'Sheet1'!B2", text: "ours" }, ...comments] });
+    const found = await readAnnotations("Sheet1", ["B2"]);
+    expect([...found.annotations]).toEqual([["B2", "ours"]]);
+    expect(fake.commentReads.reduce((a, b) => a + b, 0)).toBeLessThanOrEqual(500); // the first page held it
+    fake.commentReads.length = 0;
+    const missing = await readAnnotations("Sheet1", ["A1", "B2"]);
+    expect(missing.complete).toBe(false);
+    expect(fake.commentReads.reduce((a, b) => a + b, 0)).toBe(commentsLookedAtMost);
+    expect(Math.max(...fake.commentReads)).toBeLessThanOrEqual(500);
+    fake.commentReads.length = 0;
+    await thawCells("Sheet1", [{ address: "B2", formula: "=ZC.DIST_LUM(A2)" }]);
+    expect(fake.comments.length).toBe(20_000);
+    expect(fake.comments.some((c) => c.text === "ours")).toBe(false);
+    expect(fake.commentReads.reduce((a, b) => a + b, 0)).toBeLessThanOrEqual(500);
   });
 
   test("reads the active cell's formula and the values behind references", async () => {
@@ -141,7 +180,8 @@ describe("Excel interactions", () => {
     fake = install({ settings: {}, sheets: sheets(), excelApi });
     await freezeCells("Other sheet", [{ address: "C4", value: 13.8, note: "Frozen by zcell 0.1.0 on 2026-12-01.\nFormula: =zc.age()\nModel: W9-ALL" }]);
     expect(fake.sheets["Other sheet"].C4).toEqual({ value: 13.8 });
-    const found = await readAnnotations("Other sheet", ["C4", "C5"]);
+    const { annotations: found, complete } = await readAnnotations("Other sheet", ["C4", "C5"]);
+    expect(complete).toBe(true);
     expect([...found.keys()]).toEqual(["C4"]);
     expect(found.get("C4")).toMatch(/^Frozen by zcell/);
     await thawCells("Other sheet", [{ address: "C4", formula: "=zc.age()" }]);

@@ -45,6 +45,11 @@ describe("per wavelength: f_ν = f_λ λ²/c", () => {
     expectRelative(num("MAG_AB", 1, "uJy"), 23.9, 1e-3, "1 µJy is m_AB 23.90 (Oke & Gunn 1983 zero point 3630.78 Jy)");
   });
 
+  test("the range of an f_λ wavelength, 100 … 1e7 Angstrom, holds its ends; a per-frequency unit does not look at the wavelength", () => {
+    for (const angstrom of [100, 1e7]) expect(Number.isFinite(num("MAG_AB", 1e-17, "erg/s/cm2/Angstrom", angstrom)), `${angstrom} Å`).toBe(true);
+    expect(one("MAG_AB", 12, "uJy", 0.5)).toBe(one("MAG_AB", 12, "uJy"));
+  });
+
   test("a column of flux densities, each at its own wavelength", () => {
     const out = run("MAG_AB", [[1e-17], [1e-17], [""]], "erg/s/cm2/Angstrom", [[4000], [8000], [6000]]);
     expect(out[0][0]).toBe(one("MAG_AB", 1e-17, "erg/s/cm2/Angstrom", 4000));
@@ -64,6 +69,10 @@ describe("errors that name the fix", () => {
     ["MAG_AB",   [5, "MJy"],                                    "value", 'ZC.MAG_AB: unit: "MJy" is megajansky (10⁹ mJy), not a likely flux density for a source: did you mean mJy? (units are case-sensitive)'],
     ["FLUX_AB",  [20, "furlong"],                               "value", 'ZC.FLUX_AB: unit: unknown unit "furlong" in "furlong"'],
     ["MAG_AB",   [0, "Jy"],                                     "num",   "ZC.MAG_AB: flux_density = 0 must be > 0"],
+    // our range for an f_λ wavelength, 100 Å … 1e7 Å (1 mm): a value outside it is almost surely in another unit
+    ["MAG_AB",   [1e-17, "erg/s/cm2/Angstrom", 0.5],            "num",   "ZC.MAG_AB: wavelength = 0.5 Angstrom is outside 100 … 1e7 Angstrom (1 mm), where zcell takes the wavelength of a flux density per wavelength: it is read in Angstrom (0.5 um is 5000 Angstrom)"],
+    ["FLUX_AB",  [20, "W/m2/um", 2.2],                          "num",   "ZC.FLUX_AB: wavelength = 2.2 Angstrom is outside 100 … 1e7 Angstrom (1 mm), where zcell takes the wavelength of a flux density per wavelength: it is read in Angstrom (2.2 um is 22000 Angstrom)"],
+    ["FLUX_AB",  [20, "W/m2/um", 5e14],                         "num",   "ZC.FLUX_AB: wavelength = 500000000000000 Angstrom is outside 100 … 1e7 Angstrom (1 mm), where zcell takes the wavelength of a flux density per wavelength: it is read in Angstrom"],
   ] as const)("%s(%j) is %s", (name, args, kind, message) => {
     expect(failure(name, ...args)).toEqual({ kind, message });
   });

@@ -4,6 +4,7 @@
  * (vitest.mutation.config.ts): there a mutant shares the machine with others and the ratios are noise.
  */
 import { describe, expect, test } from "vitest";
+import { callsZcFunction, typedFormula } from "../functions/storedFormula.js";
 import { findCalls, tokenize } from "../taskpane/formulaCalls.js";
 import { restorableFormula } from "../taskpane/restorableFormula.js";
 import { craftedFamilies } from "./craftedFormulas.js";
@@ -18,6 +19,8 @@ describe("reading a crafted formula takes time linear in its length", () => {
     ["tokenize", tokenize],
     ["findCalls", findCalls],
     ["restorableFormula", (f) => restorableFormula(f, { singleCell: true })],
+    ["typedFormula", typedFormula],
+    ["callsZcFunction", callsZcFunction],
   ];
   const elapsed = (read: (f: string) => unknown, formula: string, times: number) => {
     const t0 = performance.now();

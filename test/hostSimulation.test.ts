@@ -92,6 +92,20 @@ describe("the built functions.js in a bare host", () => {
     expect(result.length).toBe(n);
     for (const i of [0, 1, 777, 50_000, n - 1]) expectRelative(result[i][0] as number, p18.luminosityDistanceMpc(column[i][0]), 1e-9, `row ${i}`);
   });
+
+  test("a 100k-row column of texts where numbers belong: every cell reads its error, one host error value for each distinct message", async () => {
+    const n = 100_000;
+    const result = await fns.get("DIST_LUM")!(Array.from({ length: n }, (_, i) => [i % 2 ? "abc" : "def"]));
+    expect(result.length).toBe(n);
+    for (const i of [0, 1, 777, 50_000, n - 1]) {
+      const cell = result[i][0] as HostError;
+      expect(cell, `row ${i}`).toBeInstanceOf(HostError);
+      expect(cell.code).toBe("#VALUE!");
+      const message = String(cell.message);
+      expect(message.startsWith("ZC.DIST_LUM: z: ") && message.includes(`"${i % 2 ? "abc" : "def"}"`), message).toBe(true);
+    }
+    expect(new Set(result.map(([cell]) => cell)).size).toBe(2); // was one a cell: 100,000
+  });
 });
 
 describe("workbook settings that cannot be used", () => {

@@ -340,6 +340,22 @@ describe("stored settings: whatever they hold, a bounded reading and a plain war
     expect(message.length).toBeLessThan(300);
   });
 
+  test(`the first ${maxWorkbookModels} stored entries are read, usable or not: 5,000 valid names with specs that do not parse cost ${maxWorkbookModels} readings`, () => {
+    const entries: Record<string, string> = {};
+    for (let i = 0; i < 5_000; i++) entries[`M${i}`] = `H0=${"1".repeat(480)}x; Om=0.3`;
+    let specsRead = 0;
+    const stored = new Proxy(entries, {
+      get: (target, key, receiver) => {
+        if (typeof key === "string") specsRead++;
+        return Reflect.get(target, key, receiver);
+      },
+    });
+    const models = readWorkbookModels(stored);
+    expect(specsRead).toBe(maxWorkbookModels); // was 5,000: only usable entries counted toward the cap
+    expect(models.specs.size).toBe(0);
+    expect(models.problems.at(-1)).toBe(`only the first ${maxWorkbookModels} workbook models are read; 4900 more are left out`);
+  });
+
   test("two models whose names differ only in case: the one stored last is read, and the pane is told", () => {
     const models = readWorkbookModels({ Team: "W9-ALL", OTHER: "P18-CMB; H0=70", TEAM: "P18-BAO; H0=73" });
     expect([...models.specs]).toEqual([["TEAM", "P18-BAO; H0=73"], ["OTHER", "P18-CMB; H0=70"]]);
@@ -423,12 +439,35 @@ describe("the inspector on a long formula", () => {
     const before = cachedModelCount();
     const reads: string[] = [];
     const t0 = performance.now();
-    const calls = await explainFormula(formula, async (reference) => (reads.push(reference), [[0.5]]), { spec: "P18-BAO", stored: false });
+    const calls = await explainFormula(formula, async (reference) => (reads.push(reference), { cells: 1, values: [[0.5]] }), { spec: "P18-BAO", stored: false });
     const ms = performance.now() - t0;
     console.log(`inspector: ${calls.length} calls explained in ${ms.toFixed(0)} ms`);
     expect(calls.length).toBe(154);
     expect(calls[0].result).toMatch(/^2\d{3}\.\d+ Mpc$/);
     expect(cachedModelCount() - before).toBeLessThanOrEqual(1);
     expect(reads.sort()).toEqual(["A1", "A2"]);
+  });
+});
+
+describe("a column of errors costs one error value per distinct message, not one a cell", () => {
+  const active = { spec: "P18-CMB", stored: false };
+  const column = (n: number, f: (i: number) => unknown) => Array.from({ length: n }, (_, i) => [f(i)]);
+  const distinctErrors = (cells: unknown[][]) => new Set(cells.flat().filter((c) => c instanceof CellError)).size;
+  const n = 20_000;
+  // function      the column holds                 arguments (the column first)                                   distinct messages
+  test.each([
+    ["DIST_LUM",   "text",                           [column(n, () => "abc")],                                      1],
+    ["DIST_LUM",   "two texts",                      [column(n, (i) => (i % 2 ? "abc" : "def"))],                   2],
+    ["DIST_LUM",   "a blueshift",                    [column(n, () => -2)],                                         1],
+    ["SIGMA_CRIT", "text",                           [column(n, () => "abc"), column(n, () => "abc")],              1],
+    ["EXTINCTION", "text",                           [column(n, () => "abc"), 0.1],                                 1],
+    ["COORD_DEG",  "text that is no angle",          [column(n, () => "abc"), "ra"],                                1],
+    ["MAG_AB",     "zero flux densities",            [column(n, () => 0)],                                          1],
+  ] as const)("%s over 20,000 rows of %s: every cell shows the error, one object for each distinct message", (name, _what, args, messages) => {
+    const cells = evaluate(definitions[name], args as readonly unknown[], active);
+    expect(cells.length).toBe(n);
+    expect(cells.every(([c]) => c instanceof CellError)).toBe(true);
+    expect(new Set(cells.map(([c]) => (c as CellError).message)).size).toBe(messages);
+    expect(distinctErrors(cells)).toBe(messages); // was one a cell: n
   });
 });

@@ -5,7 +5,7 @@ import { definitions } from "../functions/definitions.js";
 import { evaluate } from "../functions/evaluate.js";
 import { readWorkbookModels } from "../functions/workbookModels.js";
 import { parentsOf, placeIn } from "../taskpane/broadcastPlace.js";
-import { explainFormula, inspectorReadLimit, type ReferenceReader } from "../taskpane/explainCall.js";
+import { explainFormula, inspectorNestedCellLimit, inspectorReadLimit, type ReferenceReader } from "../taskpane/explainCall.js";
 import { findCalls } from "../taskpane/formulaCalls.js";
 import { publishedModels } from "./fixtures.js";
 import { expectRelative } from "./helpers.js";
@@ -110,11 +110,14 @@ describe("provenance and contrast", () => {
   });
 });
 
+/** A reader for which every reference is one blank cell. */
+const blanks: ReferenceReader = async () => ({ cells: 1, values: [[""]] });
+
 describe("cell inspector", () => {
   test("explains every worksheet function: a summary, an equation and a method for each", async () => {
     const active = { spec: "P18-BAO", stored: false };
     for (const name of Object.keys(definitions)) {
-      const [call] = await explainFormula(`=ZC.${name}()`, async () => [[""]], active);
+      const [call] = await explainFormula(`=ZC.${name}()`, blanks, active);
       expect(call.summary, name).not.toBe("");
       expect(call.equation, name).not.toBe("");
       expect(call.method, name).not.toBe("");
@@ -124,8 +127,58 @@ describe("cell inspector", () => {
     }
   });
 
+  test("a restatement between two models shows each: From model and To model, and its result is under the To model", async () => {
+    const active = { spec: "P18-CMB", stored: false };
+    const [call] = await explainFormula('=ZC.RESCALE(3.2E44,0.84,"luminosity","W9-ALL","EDS")', blanks, active);
+    expect(call.model).toBeUndefined(); // no one model computed it
+    expect(call.modelArgs!.map((m) => [m.label, m.argument, m.model!.spec, m.model!.source])).toEqual([
+      ["From model", "from_model", "W9-ALL", "given in the formula"],
+      ["To model", "to_model", "EDS", "given in the formula"],
+    ]);
+    expect(call.modelArgs![1].model!.description).toMatch(/^flat: matter only; H0 = 70 km\/s\/Mpc/);
+    expect(call.conventions).toContain("Radiation off (Tcmb = 0): no photons, no neutrinos."); // EDS's, the model the result is under
+    // (D_L,EDS / D_L,W9-ALL)² at z = 0.84: EDS from its closed form (Hogg 1999 eq. 16, Ωm = 1), W9-ALL from the independent slow path (Hinshaw et al. 2013 Table 4)
+    const eds = (1 + 0.84) * 2 * (299_792.458 / 70) * (1 - 1 / Math.sqrt(1.84));
+    const w9 = new SlowCosmology(publishedModels["W9-ALL"]).luminosityDistanceMpc(0.84);
+    expectRelative(Number((call.exact ?? call.result).split(" ")[0]), 3.2e44 * (eds / w9) ** 2, 1e-9, "RESCALE luminosity");
+    // a blank to_model is the workbook's, said so
+    const [blank] = await explainFormula('=ZC.RESCALE(3.2E44,0.84,"luminosity","W9-ALL")', blanks, active);
+    expect(blank.modelArgs![1].model).toMatchObject({ spec: "P18-CMB", source: "the workbook's model" });
+  });
+
+  test.each([
+    // formula                                              the result's unit, as the pane shows it
+    ["=ZC.CMB_TEMP(1100)",                                  "K"],
+    ["=ZC.MODULUS(0.1)",                                    "mag"],
+    ["=ZC.EXTINCTION(5500,0.1)",                            "mag"],
+    ["=ZC.COORD_DEG(\"14:05:12.3\",\"ra\")",                "deg"],
+    ["=ZC.PARAM(\"age_today\")",                            "Gyr"],
+    ["=ZC.PARAM(\"H0\")",                                   "km/s/Mpc"],
+    ["=ZC.PARAM(\"Om\")",                                   ""],
+    ["=ZC.OBSERVED_FRAME(1.4,0.05,\"frequency\",\"GHz\")",  "GHz"],
+    ["=ZC.REST_FRAME(7200,0.1,\"wavelength\")",             "(in the value's own unit)"],
+    ["=ZC.LUMINOSITY_REST(2.5,1.1,-0.7,3,1.4,,,\"mJy\")",     "W/Hz"],
+    ["=ZC.LUMINOSITY_REST(2.5,1.1,-0.7,3,1.4,,,\"mJy\",\"Lsun\")", "Lsun"],
+    ["=ZC.FLUX_AB(20)",                                     "Jy"],
+    ["=ZC.CONVERT(1,\"Mpc\",\"Gly\")",                        "Gly"],
+    ["=ZC.RESCALE(-21,0.5,\"magnitude\",\"W9-ALL\")",         "mag"],
+    ["=ZC.BRIGHTNESS_TEMP(50,8.4,2,1,,\"mJy\",,\"mas\")",     "K"],
+    ["=ZC.INDEX_BETWEEN(12.4,1.4,3.1,5)",                   ""],
+  ])("%s: the Result row shows the unit %s", async (formula, unit) => {
+    const [call] = await explainFormula(formula, blanks, { spec: "P18-CMB", stored: false });
+    expect(call.isError, call.result).toBe(false);
+    expect(call.result).toMatch(new RegExp(`^-?[\\d.]+(?:e[+-]\\d+)?${unit ? ` ${unit.replace(/[()/]/g, "\\$&")}` : ""}$`));
+  });
+
+  test("an omitted text argument shows the default it stands for, as the help does", async () => {
+    const [call] = await explainFormula("=ZC.INDEX_BETWEEN(12.4,1.4,3.1,5)", blanks, { spec: "P18-CMB", stored: false });
+    expect(call.args.find((a) => a.name === "band_unit")!.value).toBe('default "GHz"');
+    const [dimming] = await explainFormula("=ZC.DIMMING(1)", blanks, { spec: "P18-CMB", stored: false });
+    expect(dimming.args.find((a) => a.name === "alpha")!.value).toBe("left out: bolometric");
+  });
+
   test("a unit that applies to a value and its error is shown beside both", async () => {
-    const [call] = await explainFormula('=ZC.SIZE_ERR(2,0.1,1,0.01)', async () => [[""]], { spec: "P18-BAO", stored: false });
+    const [call] = await explainFormula('=ZC.SIZE_ERR(2,0.1,1,0.01)', blanks, { spec: "P18-BAO", stored: false });
     expect(call.args.filter((a) => a.unit === "arcsec").map((a) => a.name)).toEqual(["angle", "angle_err"]);
     expect(call.result).toMatch(/ kpc$/);
   });
@@ -148,7 +201,7 @@ describe("an error explained: the argument at fault and how to fix it", () => {
     ['=ZC.REDSHIFT(1E5,"DIST_ANG")',                         undefined, undefined,    /^No value answers these arguments in this model/],
   ];
   test.each(cases)("%s", async (formula, argument, text, fix) => {
-    const [call] = await explainFormula(formula, async () => [[""]], active);
+    const [call] = await explainFormula(formula, blanks, active);
     expect(call.isError).toBe(true);
     expect(call.fault?.argument).toBe(argument);
     expect(call.fault?.text).toBe(text);
@@ -156,28 +209,28 @@ describe("an error explained: the argument at fault and how to fix it", () => {
   });
 
   test("a cell whose arguments only Excel computes gets the advice of its error kind", async () => {
-    const [call] = await explainFormula("=ZC.DIST_LUM(SUM(A1:A3))", async () => [[""]], active, "#NUM!");
+    const [call] = await explainFormula("=ZC.DIST_LUM(SUM(A1:A3))", blanks, active, "#NUM!");
     expect(call.fault).toEqual({ fix: "A value lies outside its physical domain, or the result does: the message says which." });
   });
 
   test("a cell's shown value is a stranger's text: only Excel's own error values get advice", async () => {
     // hostile values a workbook can hold in a cell (object-property names, look-alikes, a huge text)
     for (const shown of ["constructor", "__proto__", "toString", "#num!", "#NUM! ", "#N/A".repeat(10_000)]) {
-      const [call] = await explainFormula("=ZC.DIST_LUM(SUM(A1:A3))", async () => [[""]], active, shown);
+      const [call] = await explainFormula("=ZC.DIST_LUM(SUM(A1:A3))", blanks, active, shown);
       expect(call.fault, JSON.stringify(shown).slice(0, 20)).toBeUndefined();
     }
   });
 
   test("a hostile model text in the formula is quoted, cut, and still named as the argument at fault", async () => {
     const hostile = `${"(((((a+)+)+)+".repeat(5_000)}; H0=model:`;
-    const [call] = await explainFormula(`=ZC.DIST_LUM(1,"${hostile}")`, async () => [[""]], active);
+    const [call] = await explainFormula(`=ZC.DIST_LUM(1,"${hostile}")`, blanks, active);
     expect(call.isError).toBe(true);
     expect(call.fault?.argument).toBe("model");
     expect(call.result.length).toBeLessThan(400); // the message quotes at most 40 characters of it
   });
 
   test("a value that is not an error has no advice", async () => {
-    const [call] = await explainFormula("=ZC.DIST_LUM(1)", async () => [[""]], active);
+    const [call] = await explainFormula("=ZC.DIST_LUM(1)", blanks, active);
     expect(call.fault).toBeUndefined();
   });
 });
@@ -208,7 +261,8 @@ function sheet1(cells: Record<string, unknown[][]>, reads: [string, number][] = 
   return async (reference, maxCells) => {
     reads.push([reference, maxCells]);
     if (!(reference in cells)) throw new Error(`no reference ${reference}`);
-    return { address: `Sheet1!${reference.replaceAll("$", "")}`, values: cells[reference] };
+    const values = cells[reference];
+    return { address: `Sheet1!${reference.replaceAll("$", "")}`, cells: values.length * values[0].length, values };
   };
 }
 
@@ -233,7 +287,9 @@ describe("the inspector at one cell of a spilled result: the model and the argum
   ] as const)("a what-if table at row %i, column %i: z = %s under %s", async (row, col, z, model, modelCell) => {
     const [call] = await explainFormula(table, sheet1(cells), active, undefined, { row, col });
     expect(call.model).toMatchObject({ spec: model, source: "given in the formula", where: `${modelCell} for this cell` });
-    expect(call.model!.description.startsWith(`${model}: `)).toBe(true);
+    // the description follows the name the row shows already, without repeating it
+    expect(call.model!.description).toMatch(/^flat: matter/);
+    expect(call.model!.description.startsWith(model)).toBe(false);
     expect(call.models).toEqual(["EDS", "W9-ALL"]);
     expect(call.args[0].value).toBe(`${z} (Sheet1!A${2 + row} for this cell)`);
     expect(call.args[1].value).toBe(`"${model}" (${modelCell} for this cell)`);
@@ -416,5 +472,67 @@ describe("the inspector reads no reference larger than its limit", () => {
     expect(call.models!.at(-1)).toBe("… and 1,992 more");
     expect(Math.max(...call.models!.map((m) => m.length))).toBeLessThanOrEqual(101);
     expect(call.isError).toBe(true);
+  });
+});
+
+describe("the inspector computes the cell it explains, not the whole result", () => {
+  const active = { spec: "P18-CMB", stored: false };
+  const column = (n: number, f: (i: number) => unknown) => Array.from({ length: n }, (_, i) => [f(i)]);
+
+  /** Counts the calls of a definition's compute (and its kernel) while `run` runs. */
+  async function computesOf<T>(name: string, run: () => Promise<T>): Promise<{ got: T; computes: number }> {
+    const def = definitions[name];
+    const { compute, kernel } = def;
+    let computes = 0;
+    def.compute = (a) => (computes++, compute!(a));
+    if (kernel) def.kernel = { arg: kernel.arg, of: (a, x) => (computes++, kernel.of(a, x)) };
+    try {
+      return { got: await run(), computes };
+    } finally {
+      def.compute = compute;
+      def.kernel = kernel;
+    }
+  }
+
+  test("20,000 distinct model texts that do not parse: the model of the selected cell is resolved, not 20,000", async () => {
+    const models = readWorkbookModels({ TEAM: "P18-BAO; H0=70" }); // a workbook model, so that each resolution asks for its name
+    const specs = models.specs as Map<string, string>;
+    let resolved = 0;
+    const has = specs.has.bind(specs);
+    specs.has = (name) => (resolved++, has(name));
+    const cells = { "$A$1:$A$20000": column(20_000, (i) => 0.01 + i * 1e-5), "$C$1:$C$20000": column(20_000, (i) => `H0=${i}x; Om=0.3`) };
+    const [call] = await explainFormula("=ZC.DIST_LUM($A$1:$A$20000,$C$1:$C$20000)", sheet1(cells), { ...active, models }, undefined, { row: 5, col: 0 });
+    expect(call.isError).toBe(true);
+    expect(call.result).toMatch(/H0: "5x"/);
+    expect(call.result).toMatch(/\(row 6 of 20000×1 values: this cell\)$/);
+    expect(resolved).toBeLessThanOrEqual(3); // was 20,000 and more: every cell's model was resolved
+  });
+
+  test("a what-if grid of 2,000 redshifts × 40 models that Excel never computes (IF(FALSE, …)): one cell computed, not 80,000", async () => {
+    const cells = { "$A$1:$A$2000": column(2_000, (i) => 0.01 + i * 1e-3), "$B$1:$AO$1": [Array.from({ length: 40 }, (_, c) => `P18-CMB; H0=${60 + c / 4}`)] };
+    for (const formula of ["=IF(FALSE,ZC.DIST_LUM($A$1:$A$2000,$B$1:$AO$1))", "=ZC.DIST_LUM($A$1:$A$2000,$B$1:$AO$1)"]) {
+      const { got, computes } = await computesOf("DIST_LUM", () => explainFormula(formula, sheet1(cells), active, undefined, { row: 1999, col: 39 }));
+      const [call] = got;
+      // inside IF the selected cell's place in this call is not known: its first cell is shown, as before
+      const shown = formula.startsWith("=IF") ? "the first of 2000×40 values" : "row 2000, column 40 of 2000×40 values: this cell";
+      expect(call.result, formula).toContain(shown);
+      expect(computes, formula).toBeLessThanOrEqual(2); // was 80,000
+    }
+  });
+
+  test("a call inside another is computed whole only up to the limit; beyond it the caller says so and the call is computed at one cell", async () => {
+    const cells = { "$A$1:$A$2000": column(2_000, (i) => 1 + i * 1e-3), "$A$1:$A$500": column(500, (i) => 1 + i * 1e-3) };
+    const big = await computesOf("AGE", () => explainFormula("=ZC.DIST_LUM(ZC.REDSHIFT(ZC.AGE($A$1:$A$2000),\"AGE\"))", sheet1(cells), active, undefined, { row: 7, col: 0 }));
+    const [, middle, inner] = big.got;
+    expect(middle.args[0].value).toBe(`the result of ZC.AGE, 2,000×1 cells, not computed here (the inspector computes at most ${inspectorNestedCellLimit.toLocaleString("en-US")} cells of calls inside another)`);
+    // the innermost call is computed at one cell: its first, as its caller's cell is not known
+    expect(inner.result).toContain("the first of 2000×1 values");
+    expect(exactOf(inner)).toBe(evaluate(definitions.AGE, [1], active)[0][0]);
+    expect(big.computes).toBeLessThanOrEqual(2); // was 2,000
+    // 500 rows: within the limit, computed whole, and the caller explained at the cell
+    const small = await computesOf("AGE", () => explainFormula("=ZC.REDSHIFT(ZC.AGE($A$1:$A$500),\"AGE\")", sheet1(cells), active, undefined, { row: 7, col: 0 }));
+    expect(small.got[0].args[0].value).toMatch(/^[\d.]+ \(row 8 of the result of ZC\.AGE for this cell\)$/);
+    expectRelative(exactOf(small.got[0]), 1.007, 1e-9, "REDSHIFT of AGE");
+    expect(small.computes).toBe(500);
   });
 });

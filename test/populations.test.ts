@@ -3,6 +3,7 @@
  * Hubble diagram. The samples are invented (made up for the tests, not measurements); expected values
  * are the sums written out independently here, and a numerical minimisation over the offset.
  */
+import fc from "fast-check";
 import { describe, expect, test } from "vitest";
 import { CellError } from "../functions/cellError.js";
 import { sheetCalls } from "./sheetCalls.js";
@@ -85,6 +86,34 @@ describe("CHI2_MODULUS: a Hubble diagram against a model", () => {
     const p18 = run("CHI2_MODULUS", col(z), col(mu), col(err), "P18-CMB")[0][0] as number;
     const eds = run("CHI2_MODULUS", col(z), col(mu), col(err), "EDS")[0][0] as number;
     expect(eds).toBeGreaterThan(p18 + 10);
+  });
+
+  test("one row with the offset minimised is exactly 0: the offset takes up the whole residual", () => {
+    expect(run("CHI2_MODULUS", 0.657, 34.78, 0.18)[0][0]).toBe(0); // 0.3.0 before this fix: -4.55e-13
+    for (const [zz, m, e] of [[0.01, 33.2, 0.05], [1.5, 45.1, 0.3], [0.3, 21.7, 0.12]]) expect(run("CHI2_MODULUS", zz, m, e)[0][0], `z = ${zz}`).toBe(0);
+  });
+
+  test("with the offset minimised: Σ w (Δ − Δ̄)² written out in two passes (weighted mean first), to 1e-12 (or the rounding of μ), never negative (300 random invented samples, offsets up to ±25 mag as for apparent magnitudes)", () => {
+    // Δ_i = μ_i − ZC.MODULUS(z_i), w_i = 1/σ_i²; min over the offset of Σ w (Δ − offset)² is at the
+    // weighted mean Δ̄ (the least-squares mean, common practice)
+    const row = fc.tuple(fc.double({ min: 0.005, max: 3, noNaN: true }), fc.double({ min: -0.5, max: 0.5, noNaN: true }), fc.double({ min: 0.01, max: 1, noNaN: true }));
+    fc.assert(
+      fc.property(fc.double({ min: -25, max: 25, noNaN: true }), fc.array(row, { minLength: 2, maxLength: 30 }), (offset, rows) => {
+        const zz = rows.map((r) => r[0]);
+        const mus = rows.map((r) => (run("MODULUS", r[0])[0][0] as number) + offset + r[1]);
+        const errs = rows.map((r) => r[2]);
+        const delta = mus.map((m, i) => m - (run("MODULUS", zz[i])[0][0] as number));
+        const w = errs.map((e) => 1 / (e * e));
+        const mean = delta.reduce((s, d, i) => s + w[i] * d, 0) / w.reduce((s, x) => s + x, 0);
+        const direct = delta.reduce((s, d, i) => s + w[i] * (d - mean) ** 2, 0);
+        const chi2 = run("CHI2_MODULUS", col(zz), col(mus), col(errs))[0][0] as number;
+        expect(chi2).toBeGreaterThanOrEqual(0);
+        // below 1e-12 of the sum, or below what the rounding of μ itself (4 ulp of the largest) leaves in it
+        const floor = w.reduce((s, x) => s + x, 0) * (4 * Number.EPSILON * Math.max(...mus.map(Math.abs))) ** 2;
+        expect(Math.abs(chi2 - direct), `offset ${offset}, ${rows.length} rows: ${chi2} against ${direct}`).toBeLessThanOrEqual(1e-12 * direct + floor);
+      }),
+      { numRuns: 300, seed: 20260611 },
+    );
   });
 
   test("a non-positive error is #NUM! naming its row; a range for the model is refused", () => {

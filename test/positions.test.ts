@@ -359,7 +359,7 @@ describe("the sheet: text in every position argument, ranges, blanks and errors"
 
 describe("the inspector explains a position call and its errors", () => {
   test("SEPARATION of two texts: the equation, the arguments and the result in arcsec", async () => {
-    const [call] = await explainFormula('=ZC.SEPARATION("12:30:49.4","+12:23:28",B2,"+12:23:29")', async () => [["12:30:49.5"]], active);
+    const [call] = await explainFormula('=ZC.SEPARATION("12:30:49.4","+12:23:28",B2,"+12:23:29")', async () => ({ cells: 1, values: [["12:30:49.5"]] }), active);
     expect(call.summary).toBe("angular separation of two positions (great circle)");
     expect(call.equation).toContain("atan2");
     expect(call.args.map((a) => a.value)).toEqual(['"12:30:49.4"', '"+12:23:28"', '"12:30:49.5"', '"+12:23:29"', 'default "arcsec"']);
@@ -367,7 +367,7 @@ describe("the inspector explains a position call and its errors", () => {
   });
 
   test("a malformed declination names dec1 and says how to write a position", async () => {
-    const [call] = await explainFormula('=ZC.SEPARATION("12:30:49.4","+12:75:00",0,0)', async () => [[""]], active);
+    const [call] = await explainFormula('=ZC.SEPARATION("12:30:49.4","+12:75:00",0,0)', async () => ({ cells: 1, values: [[""]] }), active);
     expect(call.isError).toBe(true);
     expect(call.fault?.argument).toBe("dec1");
     expect(call.fault?.fix).toContain("sexagesimal text: a right ascension in hours (12:30:49.4");

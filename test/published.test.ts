@@ -62,14 +62,14 @@ describe("DESI DR2 presets (DESI Collaboration 2025, arXiv:2503.14738)", () => {
     ["DESI2-CMB-PP",  67.51,  0.3114,  -0.838,   -0.62],
     ["DESI2-CMB-U3",  65.91,  0.3275,  -0.667,   -1.09],
     ["DR2-CMB-DY5",   66.74,  0.3191,  -0.752,   -0.86],
-  ])("%s: H0 %d, Om %d, w0 %d, wa %d, flat, and its description says the values are unverified", (name, H0, Om, w0, wa) => {
+  ])("%s: H0 %d, Om %d, w0 %d, wa %d, flat, and its description says the values are not yet checked", (name, H0, Om, w0, wa) => {
     const m = Cosmology.fromSpec(name);
     expect([m.H0, m.Om, m.parameters.w0, m.parameters.wa, m.Ok]).toEqual([H0, Om, w0, wa, 0]);
     // Ob assumed from Ωb h² = 0.02242 (Planck 2018 VI Table 2), with the preset's own h
     expect(m.Ob * m.h ** 2).toBeCloseTo(0.02242, 12);
     const description = findPreset(name)!.description;
     expect(description).toContain("arXiv:2503.14738");
-    expect(description).toContain("from memory, unverified");
+    expect(description).toContain("not yet checked against the paper's table");
   });
 
   test.each([
@@ -82,7 +82,7 @@ describe("DESI DR2 presets (DESI Collaboration 2025, arXiv:2503.14738)", () => {
     const m = Cosmology.fromSpec(old);
     expect(m.spec).toBe(spec);
     expect(m.parameters).toEqual(Cosmology.fromSpec(spec).parameters);
-    expect(findPreset(old.split(";")[0])!.description).toContain(`called ${old.split(";")[0].toUpperCase()} before zcell 0.3.0`);
+    expect(findPreset(old.split(";")[0])!.description).toContain(`called ${old.split(";")[0].toUpperCase()} in zcell 0.2`);
   });
 
   test("a workbook saved with an old name: its formulas, its stored model and DESCRIBE give the new name", () => {

@@ -28,14 +28,23 @@ const cases: [id: string, spec: string][] = [
   ["Neff=4", "P18-CMB; Neff=4"],
   ["Neff=2.5", "P18-CMB; Neff=2.5"],
   ["Tcmb=2.725", "P18-CMB; Tcmb=2.725"],
+  ["Tcmb=2.72", "P18-CMB; Tcmb=2.72"],
+  ["Tcmb=2.728", "P18-CMB; Tcmb=2.728"],
+  ["Tcmb=2.73", "P18-CMB; Tcmb=2.73"],
 ];
+
+/**
+ * The drag redshift of a model with another CMB temperature: recombination and drag happen at a fixed
+ * photon temperature T0 (1 + z_d), so 1 + z_d scales as 1/Tcmb from its value at 2.7255 K (common practice).
+ */
+const movedWithTcmb = (zd: number, m: Cosmology) => ((1 + zd) * 2.7255) / m.Tcmb - 1;
 
 describe.runIf(referenceAvailable("mpmath", "python3-mpmath"))("against the direct integral of the sound speed (test/reference/sound_horizon_reference.py)", () => {
   const request = (zdOf: (m: Cosmology) => number) =>
     cases.map(([id, spec]) => {
       const m = Cosmology.fromSpec(spec);
       const p = m.parameters;
-      return { id, H0: p.H0, Om: p.Om, Ob: p.Ob, Tcmb: p.Tcmb, Neff: p.Neff, mnu: p.mnu, zd: zdOf(m) };
+      return { id, H0: p.H0, Om: p.Om, Ob: p.Ob, Tcmb: p.Tcmb, Neff: p.Neff, mnu: p.mnu, zd: movedWithTcmb(zdOf(m), m) };
     });
   const p18 = Cosmology.fromSpec("P18-CMB");
   const omegaM = p18.Om * p18.h ** 2;
@@ -50,11 +59,15 @@ describe.runIf(referenceAvailable("mpmath", "python3-mpmath"))("against the dire
   });
 
   test.each([
-    // case        | change the direct integral gives (issue 28: Neff = 4 about −3.0%)
+    // case        | change the direct integral gives (issue 28: Neff = 4 about −3.0%; Tcmb: the review's
+    //             | estimate with Planck's z_drag moved as 1/Tcmb: −0.009%, +0.004%, +0.007%)
     ["Neff=4",      -0.030],
     ["Neff=2.5",    +0.018],
-    ["Tcmb=2.725",  +0.0001],
-  ])("%s changes r_d by the ratio of the direct integrals to the same drag redshift (to 1e-7), about %d", (id, about) => {
+    ["Tcmb=2.725",  -0.00001],
+    ["Tcmb=2.72",   -0.00009],
+    ["Tcmb=2.728",  +0.00004],
+    ["Tcmb=2.73",   +0.00007],
+  ])("%s changes r_d by the ratio of the direct integrals, each to its drag redshift (moved as 1/Tcmb), to 1e-7; about %d", (id, about) => {
     const spec = cases.find(([name]) => name === id)![1];
     const ratio = num("SOUND_HORIZON", spec) / num("SOUND_HORIZON", "P18-CMB");
     const expected = atEH98()[id] / atEH98().standard;
@@ -90,6 +103,16 @@ describe("outside the range where r_d is given: #N/A with the reason", () => {
     const cell = failure("SOUND_HORIZON", spec);
     expect(cell.kind).toBe("na");
     expect(cell.message).toBe(`ZC.SOUND_HORIZON: ${reason}`);
+  });
+
+  test("P18-CMB at fixed fractions is inside the range for H0 from 55.16 to 78.00: ω_b = Ob h² reaches 0.015 and 0.03 there", () => {
+    // h = √(ω_b / Ob) with Ob = 0.02237 / 0.6736² (Planck 2018 VI Table 2, the preset's ω_b and h)
+    const ob = 0.02237 / 0.6736 ** 2;
+    const [low, high] = [100 * Math.sqrt(0.015 / ob), 100 * Math.sqrt(0.03 / ob)];
+    expect(low).toBeCloseTo(55.159, 3);
+    expect(high).toBeCloseTo(78.006, 3);
+    for (const h0 of [55.16, 67.36, 78]) expect(num("SOUND_HORIZON", `P18-CMB; H0=${h0}`), `H0 = ${h0}`).toBeGreaterThan(100);
+    for (const h0 of [55, 55.15, 78.01]) expect(failure("SOUND_HORIZON", `P18-CMB; H0=${h0}`).kind, `H0 = ${h0}`).toBe("na");
   });
 
   test("every preset with Ob is inside the range", () => {

@@ -98,6 +98,23 @@ describe("BRIGHTNESS_TEMP: Rayleigh–Jeans T_b of an elliptical Gaussian", () =
     expectRelative(num("BRIGHTNESS_TEMP", 1, 5, 15, 15), 217.2658703625732, 2e-7, "VLA beam");
   });
 
+  test("the Rayleigh–Jeans T_b is below the Planck brightness temperature, as the help says with its numbers (1 Jy, 300 GHz, 1″: 13.58 K, Planck 19.9 K)", () => {
+    // Planck brightness temperature of the same intensity: I = (2hν³/c²)/(e^{hν/kT} − 1) and T_RJ = I c²/(2kν²) give
+    // T = (hν/k)/ln(1 + hν/(k T_RJ)) (Rybicki & Lightman 1979 §1.5, from memory); h, k exact (SI 2019)
+    const hOverK = 6.62607015e-34 / 1.380649e-23; // K/Hz
+    const planck = (tRJ: number, ghz: number) => (hOverK * ghz * 1e9) / Math.log1p((hOverK * ghz * 1e9) / tRJ);
+    const tRJ = num("BRIGHTNESS_TEMP", 1, 300, 1, 1);
+    expect(tRJ).toBeCloseTo(13.58, 2);
+    expect(hOverK * 300e9).toBeCloseTo(14.4, 1); // hν/k at 300 GHz, the scale where RJ fails
+    expect(planck(tRJ, 300)).toBeCloseTo(19.9, 1);
+    // while T_b ≫ hν/k the two differ by hν/(2k) = 0.024 K per GHz (the series of ln(1 + u) to u²)
+    expect((hOverK * 1e9) / 2).toBeCloseTo(0.024, 3);
+    expect(hOverK * 1e9).toBeCloseTo(0.048, 3);
+    const hot = num("BRIGHTNESS_TEMP", 1, 5, 0.01, 0.01);
+    expect(planck(hot, 5) - hot).toBeCloseTo(5 * 0.024, 3);
+    for (const ghz of [1.4, 22, 230, 850]) expect(planck(num("BRIGHTNESS_TEMP", 0.1, ghz, 0.5, 0.5), ghz)).toBeGreaterThan(num("BRIGHTNESS_TEMP", 0.1, ghz, 0.5, 0.5));
+  });
+
   test("the rest frame's T_b is (1+z) times the observed one; the axes may come in either order", () => {
     fc.assert(
       fc.property(fc.double({ min: 0, max: 20, noNaN: true }), fc.double({ min: 1e-3, max: 100, noNaN: true }), fc.double({ min: 1e-3, max: 100, noNaN: true }), (z, major, minor) => {

@@ -170,9 +170,20 @@ describe("what the help says (the recorded metadata, equal to the build's: test/
     expect(help("SPECTRAL_INDEX").description).toContain("alpha = −value, whatever its sign: a negative radio index, a rising spectrum, gives a positive alpha");
   });
 
-  test("SIGMA_CRIT says physical, and the comoving one is smaller by (1+z_l)²; GROWTH names both neutrino limits; SOUND_HORIZON its dependence on ω_b and ω_cb", () => {
+  test("BRIGHTNESS_TEMP says where Rayleigh–Jeans falls short, with the numbers test/spectralIndexAndBrightness.test.ts checks; REST_FRAME takes photon energies; MAG_AB and FLUX_AB read the wavelength in Angstrom", () => {
+    expect(help("BRIGHTNESS_TEMP").description).toContain("always below the Planck brightness temperature T = (hν/k)/ln(1 + hν/(k T_b))");
+    expect(help("BRIGHTNESS_TEMP").description).toContain("1 Jy at 300 GHz in a 1″ Gaussian gives 13.58 K here, 19.9 K by Planck's law");
+    expect(help("REST_FRAME").description).toContain('"frequency" ν(1+z) (also a photon energy E = hν in keV or eV, and an equivalent width in energy)');
+    for (const id of ["MAG_AB", "FLUX_AB"]) expect(param(id, "wavelength")).toContain("Wavelength in Angstrom (not um: 0.5 µm is 5000), 100 … 1e7 (1 mm)");
+  });
+
+  test("SIGMA_CRIT says physical, and the comoving one is smaller by (1+z_l)²; GROWTH names both neutrino limits, its limits early on and where dark energy stops it; SOUND_HORIZON its dependence on ω_b and ω_cb", () => {
     expect(help("SIGMA_CRIT").description).toContain("mass per physical area at the lens (the default), or per comoving area, smaller by (1+z_l)²");
     expect(help("GROWTH").description).toContain('"smooth" (blank) keeps them out of the source');
+    // before the drag epoch baryons are held by the photons; the equation counts them in the source
+    expect(help("GROWTH").description).toContain("above z ≈ 1000, before the drag epoch, when they are held by the photons and do not cluster, the value is the formal solution of this equation");
+    expect(help("GROWTH_RATE").description).toContain("above z ≈ 1000 the formal solution with baryons in the source");
+    expect(help("GROWTH").description).toContain("w0 + wa above about 0.22 with radiation (P18-CMB's densities), above about −0.07 without (Tcmb = 0)");
     expect(help("SOUND_HORIZON").description).toContain('r_d follows ω_b and ω_cb, not the fractions: "P18-CMB; H0=73" (same Ωb, Ωm) has r_d 6% smaller');
     expect(param("RESCALE", "unit")).toContain("needed when it holds h = H0/100");
   });
@@ -255,9 +266,9 @@ describe("the sound horizon", () => {
     expectRelative(num("SOUND_HORIZON", "H0=70; Om=0.3; Ob=0.045; Tcmb=2.7255; mnu=0.06", "Mpc/h"), expected * h, 1e-14, "in Mpc/h");
   });
 
-  test("a model without Ob is #N/A saying so", () => {
+  test("a model without Ob is #N/A saying so, with that model and Ob as the way out", () => {
     const cell = failure("SOUND_HORIZON", "H0=70; Om=0.3");
     expect(cell.kind).toBe("na");
-    expect(cell.message).toBe("ZC.SOUND_HORIZON: the sound horizon needs the baryon density: give Ob in the model (e.g. P18-CMB; Ob=0.049)");
+    expect(cell.message).toBe('ZC.SOUND_HORIZON: the sound horizon needs the baryon density: add Ob to the model, e.g. "H0=70; Om=0.3; Ob=0.049"');
   });
 });

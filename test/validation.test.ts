@@ -5,7 +5,8 @@ import { Cosmology } from "../core/distances/Cosmology.js";
 import { absoluteMagnitude, fluxWm2, luminosityW } from "../core/observables/photometry.js";
 import { NoSolutionError } from "../core/checks/NoSolutionError.js";
 import { maxVolumeMpc3 } from "../core/observables/fluxLimit.js";
-import { freshModel } from "./helpers.js";
+import { describeModel } from "../functions/describeModel.js";
+import { freshModel, relativeError } from "./helpers.js";
 
 const ok = { H0: 70, Om: 0.3, w0: -1, wa: 0, Tcmb: 2.7255, Neff: 3.046, mnu: [] as number[] };
 
@@ -113,7 +114,7 @@ describe("an OL the model works out (OL not given) is never negative by the numb
     if (!("OL" in change)) expect(m.OL).toBeCloseTo(-m.Or, 15); // OL = −Or: radiation alone
   });
 
-  test("refused exactly when Om + Ok > 1 without OL; never when that same OL is given (500 random models)", () => {
+  test("refused exactly when Om + Ok > 1 + 1e-12 without OL; never when that same OL is given (500 random models)", () => {
     const ourMessage = /^Om = .* makes? OL = .*: give OL explicitly if you mean it/;
     const why = (make: () => unknown): string | undefined => {
       try {
@@ -131,7 +132,7 @@ describe("an OL the model works out (OL not given) is never negative by the numb
         (Om, Ok, Tcmb) => {
           const p = { ...ok, Om, Tcmb, ...(Ok === undefined ? {} : { Ok }) };
           const inferred = why(() => new Cosmology(p));
-          expect(ourMessage.test(inferred ?? ""), `${JSON.stringify(p)}: ${inferred}`).toBe(Om + (Ok ?? 0) > 1);
+          expect(ourMessage.test(inferred ?? ""), `${JSON.stringify(p)}: ${inferred}`).toBe(Om + (Ok ?? 0) > 1 + 1e-12);
           const stated = new Cosmology({ ...ok, Om: 0.3, Tcmb }).Or; // Or depends on H0 and Tcmb only
           const given = { ...ok, Om, Tcmb, OL: 1 - Om - (Ok ?? 0) - stated };
           expect(why(() => new Cosmology(given)) ?? "").not.toMatch(ourMessage);
@@ -139,6 +140,60 @@ describe("an OL the model works out (OL not given) is never negative by the numb
       ),
       { numRuns: 500, seed: 20261203 },
     );
+  });
+});
+
+describe("an OL or Ok that is only the rounding of the others' sum is 0 (|value| < 1e-12 when worked out)", () => {
+  // Om + Ok = 1 read from decimal text is not exactly 1 in binary (2.2 + (−1.2) = 1.0000000000000002):
+  // the OL worked out is rounding noise, not a negative dark energy, and the model is matter only.
+  const thousandths = (from: number, to: number) => Array.from({ length: to - from + 1 }, (_, i) => (from + i) / 1000);
+
+  test("every closed matter-only model on a grid of thousandths (Om = 1.001 … 5, Ok = 1 − Om, no radiation) is a model with OL = 0", () => {
+    const refused: number[] = [];
+    const notMatterOnly: number[] = [];
+    for (const Om of thousandths(1001, 5000)) {
+      const Ok = Number((1 - Om).toFixed(3)); // what a person types, e.g. -1.2
+      let m: Cosmology;
+      try {
+        m = new Cosmology({ ...ok, Tcmb: 0, Om, Ok });
+      } catch {
+        refused.push(Om);
+        continue;
+      }
+      if (!(m.OL === 0 && m.Ok === Ok)) notMatterOnly.push(Om);
+    }
+    console.log(`closed matter-only grid: ${refused.length} of 4000 refused, ${notMatterOnly.length} with OL ≠ 0`);
+    expect(notMatterOnly).toEqual([]);
+    expect(refused).toEqual([]);
+  });
+
+  test("every flat model given as Om and OL = 1 − Om on a grid of thousandths (no radiation) has Ok = 0", () => {
+    for (const Om of thousandths(0, 5000)) {
+      const OL = Number((1 - Om).toFixed(3));
+      expect(new Cosmology({ ...ok, Tcmb: 0, Om, OL }).Ok, `Om = ${Om}, OL = ${OL}`).toBe(0);
+    }
+  });
+
+  test.each([
+    // spec                         | geometry and contents in words
+    ["H0=70; Om=1.2; Ok=-0.2",        "closed: matter only; H0 = 70 km/s/Mpc; Om = 1.2 (matter); OL = 0; Ok = -0.2;"],
+    ["H0=70; Om=2.2; Ok=-1.2",        "closed: matter only; H0 = 70 km/s/Mpc; Om = 2.2 (matter); OL = 0; Ok = -1.2;"],
+    ["H0=70; Om=0.7; OL=0.3",         "flat: matter + Λ; H0 = 70 km/s/Mpc; Om = 0.7 (matter); OL = 0.3; Ok = 0;"],
+  ])("ZC.DESCRIBE of %s says %s", (spec, words) => {
+    expect(describeModel(Cosmology.fromSpec(spec))).toContain(`${spec}: ${words}`);
+  });
+
+  test('"H0=70; Om=2.2; Ok=-1.2" has the luminosity distance of the Mattig relation (Λ = 0, no radiation)', () => {
+    // D_L = 2 D_H z (s + Om − 1) / (Om (s + 1)), s = √(1 + Om z) (Mattig 1958; Hogg 1999 eq. 16 ff., as test/closedForms.test.ts)
+    const m = Cosmology.fromSpec("H0=70; Om=2.2; Ok=-1.2");
+    for (const z of [0.1, 1, 3]) {
+      const s = Math.sqrt(1 + 2.2 * z);
+      expect(relativeError(m.luminosityDistanceMpc(z), (2 * m.hubbleDistanceMpc * z * (s + 2.2 - 1)) / (2.2 * (s + 1))), `z = ${z}`).toBeLessThan(1e-10); // the accuracy zcell states (ZC.VERSION)
+    }
+  });
+
+  test("just past the tolerance is still refused: Om + Ok = 1 + 1e-9 without radiation", () => {
+    expect(() => new Cosmology({ ...ok, Tcmb: 0, Om: 2 + 1e-9, Ok: -1 })).toThrow(/^Om = 2\.000000001 and Ok = -1 make OL = -1e-9 /);
   });
 });
 

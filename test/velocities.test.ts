@@ -50,6 +50,9 @@ describe("worked values from the definitions", () => {
     [["OBSERVED_FRAME", 1.42040575, 0.05, "frequency", "GHz"],   1.42040575 / 1.05, "the 21-cm line (1.42040575 GHz, from memory) at z = 0.05"],
     [["OBSERVED_FRAME", 121.567, 3, "wavelength", "nm"],         486.268,           "Lyman α (121.567 nm, from memory) at z = 3: × 4"],
     [["OBSERVED_FRAME", 10, 0.5, "duration", "s"],               15,                "time dilation, observed"],
+    [["REST_FRAME", 6.4, 0.05, "frequency", "keV"],              6.72,              "a photon energy E = hν scales as ν: 6.4 keV observed at z = 0.05 is 6.72 keV at rest"],
+    [["OBSERVED_FRAME", 6.4, 0.05, "frequency", "keV"],          6.4 / 1.05,        "Fe Kα (6.4 keV, from memory) at z = 0.05"],
+    [["OBSERVED_FRAME", 10.2, 1, "frequency", "eV"],             5.1,               "Lyman α (10.2 eV) at z = 1: halved"],
   ] as const)("%j is %d: %s", (call, expected, _source) => {
     const [name, ...args] = call;
     const got = one(name, ...args);
@@ -72,6 +75,9 @@ describe("worked values from the definitions", () => {
     [["REST_FRAME", 5, 0.1, "wavelength", "GHz"],           "value", 'ZC.REST_FRAME: unit: cannot convert "GHz" (a frequency) to "Angstrom" (a length); a wavelength takes a length (Angstrom, nm, um)'],
     [["OBSERVED_FRAME", 5, 0.1, "duration", "Angstrom"],    "value", 'ZC.OBSERVED_FRAME: unit: cannot convert "Angstrom" (a length) to "d" (a time); a duration takes a time (d, s, yr)'],
     [["REST_FRAME", 5, 0.1, "flux"],                        "value", 'ZC.REST_FRAME: quantity: "flux" is not one of wavelength, frequency, duration, equivalent_width'],
+    [["REST_FRAME", 5, 0.1, "frequency", "Angstrom"],       "value", 'ZC.REST_FRAME: unit: cannot convert "Angstrom" (a length) to "GHz" (a frequency); a frequency takes a frequency (GHz, MHz, Hz) or a photon energy (keV, eV)'],
+    [["REST_FRAME", 5, 0.1, "wavelength", "keV"],           "value", 'ZC.REST_FRAME: unit: cannot convert "keV" (an energy) to "Angstrom" (a length); a wavelength takes a length (Angstrom, nm, um); a photon energy scales as a frequency: give quantity "frequency"'],
+    [["OBSERVED_FRAME", 150, 0.1, "equivalent_width", "eV"], "value", 'ZC.OBSERVED_FRAME: unit: cannot convert "eV" (an energy) to "Angstrom" (a length); an equivalent width takes a length (Angstrom, nm); an equivalent width in energy scales as a frequency: give quantity "frequency"'],
   ] as const)("%j is #%s naming the fix", (call, kind, message) => {
     const [name, ...args] = call;
     const cell = one(name, ...args) as CellError;
@@ -145,6 +151,28 @@ describe("identities over random inputs (fast-check)", () => {
       }),
       { numRuns: 3000, seed: 29 },
     );
+  });
+
+  test("an equivalent width in energy moves as a frequency: W_E = ∫(1 − F_E/F_c) dE and dE_obs = dE_rest/(1+z), so W_E,rest = (1+z) W_E,obs", () => {
+    // the same integral in wavelength gives W_λ,rest = W_λ,obs/(1+z) (common practice); at the line E = hc/λ, so
+    // W_E = W_λ E/λ: a 150 eV width of a 6.4 keV line observed at z = 0.05 (invented numbers) is in Angstrom W_λ = 150 λ_obs/E_obs
+    const [wEv, lineKeV, z] = [150, 6.4, 0.05];
+    const hcKeVAngstrom = (6.62607015e-34 * 299792458) / 1.602176634e-16 / 1e-10; // h c in keV Å (exact constants, SI 2019)
+    const lambdaObs = hcKeVAngstrom / (lineKeV / (1 + z));
+    const wAngstromObs = (wEv / 1000) * (lambdaObs / (lineKeV / (1 + z)));
+    const wAngstromRest = one("REST_FRAME", wAngstromObs, z, "equivalent_width", "Angstrom") as number;
+    const viaWavelength = (wAngstromRest * lineKeV * 1000) / (hcKeVAngstrom / lineKeV); // back to eV at the rest-frame line
+    expectRelative(one("REST_FRAME", wEv, z, "frequency", "eV") as number, viaWavelength, 1e-14, "eV width at rest");
+  });
+
+  test("a photon energy moves as its frequency: REST_FRAME in keV is the frequency's E = hν, in any energy unit", () => {
+    // E = h ν with h = 6.62607015e-34 J s and 1 eV = 1.602176634e-19 J (both exact, SI 2019)
+    const hzPerKeV = 1.602176634e-16 / 6.62607015e-34;
+    for (const [kev, z] of [[6.4, 0.05], [0.5, 3], [2000, 0.001]]) {
+      const restGHz = one("REST_FRAME", (kev * hzPerKeV) / 1e9, z, "frequency", "GHz") as number;
+      expectRelative(one("REST_FRAME", kev, z, "frequency", "keV") as number, (restGHz * 1e9) / hzPerKeV, 1e-14, `${kev} keV at z = ${z}`);
+      expectRelative(one("OBSERVED_FRAME", kev * 1000, z, "frequency", "eV") as number, (1000 * kev) / (1 + z), 1e-15, "eV");
+    }
   });
 
   test("OBSERVED_FRAME∘REST_FRAME is the identity; a frequency and its wavelength shift inversely; durations and widths shift as wavelengths", () => {

@@ -52,7 +52,7 @@ export class Cosmology {
   readonly Ogamma: number;
   /** Density parameter of massive neutrinos today (part of Om). */
   readonly OnuMassive: number;
-  /** Baryon density parameter today (informational; NaN when not given). */
+  /** Baryon density parameter today, used by SOUND_HORIZON only (NaN when not given). */
   readonly Ob: number;
   /** Dark-energy equation of state today. */
   readonly w0: number;

@@ -40,13 +40,14 @@ export function volumeAveragedDistanceMpc(model: Cosmology, z: number): number {
 /**
  * Where SOUND_HORIZON gives r_d: zcell's bounds (the fit's paper states the parameter range of its
  * calibration; it could not be consulted here). They hold the models CMB and BBN analyses explore
- * (ω_b = 0.0224 ± 0.0005, ω_cb ≈ 0.12–0.14, and the P18 presets with H0 from 55 to 77 at fixed
- * fractions), and exclude what is almost surely a typo (Ob = 0.3 in P18-CMB: ω_b = 0.136). Within them
- * the fit's dependence on ω_b and ω_cb agrees to about 1% with a direct integral of the sound speed to
- * the drag redshift of Eisenstein & Hu 1998, eq. 4 (measured when the bounds were chosen; at ω_b = 0.136
- * they differ by 14%). Tcmb: the measured value; the drag redshift moves with it (recombination
- * happens at a fixed temperature), so neither the fit nor the direct integral at a fixed z_d holds far
- * from it.
+ * (ω_b = 0.0224 ± 0.0005, ω_cb ≈ 0.12–0.14, and P18-CMB at fixed fractions with H0 from 55.16 to
+ * 78.00, where ω_b = Ob h² reaches 0.015 and 0.03), and exclude what is almost surely a typo (Ob = 0.3
+ * in P18-CMB: ω_b = 0.136). Within them the fit's dependence on ω_b and ω_cb agrees to about 1% with a
+ * direct integral of the sound speed to the drag redshift of Eisenstein & Hu 1998, eq. 4 (measured
+ * when the bounds were chosen; at ω_b = 0.136 they differ by 14%). Tcmb: the measured value. The
+ * correction for another Tcmb moves the drag redshift as 1/Tcmb (recombination happens at a fixed
+ * photon temperature) but not with the baryon-to-photon ratio, which at fixed ω_b goes as 1/Tcmb³ and
+ * shifts that temperature a little: an approximation only near the measured value.
  */
 export const soundHorizonRange = {
   omegaB: [0.015, 0.03],
@@ -93,14 +94,17 @@ function soundHorizonIntegral(expansion: ExpansionRate, Ob: number, zDrag: numbe
 
 /**
  * How the model's radiation moves r_d from the fit's: the sound-horizon integral of the model over
- * that of the same model with Neff = 3.046 and Tcmb = 2.7255 K (the fit's), both to the same drag
- * redshift. 1 for the standard radiation content.
+ * that of the same model with Neff = 3.046 and Tcmb = 2.7255 K (the fit's), each to its own drag
+ * redshift: z_d of Eisenstein & Hu 1998 for the fit's model, and for the model that redshift moved as
+ * 1 + z_d ∝ 1/Tcmb (recombination and drag happen at a fixed photon temperature; common practice).
+ * 1 for the standard radiation content.
  */
 function radiationFactor(model: Cosmology, omegaM: number, omegaB: number): number {
   if (model.Neff === standardNeff && model.Tcmb === cmbTemperatureK) return 1;
   const standard = new ExpansionRate({ ...model.parameters, Neff: standardNeff, Tcmb: cmbTemperatureK });
   const zDrag = dragRedshiftEH98(omegaM, omegaB);
-  return soundHorizonIntegral(model.expansion, model.Ob, zDrag) / soundHorizonIntegral(standard, model.Ob, zDrag);
+  const zDragModel = ((1 + zDrag) * cmbTemperatureK) / model.Tcmb - 1;
+  return soundHorizonIntegral(model.expansion, model.Ob, zDragModel) / soundHorizonIntegral(standard, model.Ob, zDrag);
 }
 
 /**
@@ -113,8 +117,9 @@ function radiationFactor(model: Cosmology, omegaM: number, omegaB: number): numb
  *
  * Another Neff or Tcmb changes the expansion rate and the baryon-to-photon ratio before the drag
  * epoch: r_d is then the fit times the ratio of the direct integrals ∫ c_s/H dz of the model and of
- * the same model with the standard radiation (Neff = 3.046, Tcmb = 2.7255 K), both to the drag redshift
- * of Eisenstein & Hu 1998 eq. 4. Neff = 4 gives −3.0%.
+ * the same model with the standard radiation (Neff = 3.046, Tcmb = 2.7255 K), to the drag redshift
+ * of Eisenstein & Hu 1998 eq. 4, moved as 1 + z_d ∝ 1/Tcmb for the model. Neff = 4 gives −3.0%;
+ * Tcmb = 2.72 K −0.013%, 2.73 K +0.010%.
  * @param model the cosmology; needs Ob
  * @returns r_d [Mpc]
  * @throws NoSolutionError when the model has no baryon density (Ob), or ω_b, ω_cb, Neff, Tcmb or Σm_ν lies

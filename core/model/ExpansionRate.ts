@@ -43,15 +43,26 @@ function requireFraction(key: string, value: number | undefined): void {
 }
 
 /**
+ * Largest |OL| (or |Ok|) worked out from the other densities that is read as 0: decimal text is not
+ * exact in binary, so 1 − Om − Ok for Om = 2.2, Ok = −1.2 is −2.2e-16, not 0. Our choice: far above
+ * that rounding, far below any density a model means.
+ */
+const roundingOfOne = 1e-12;
+
+/** A density parameter worked out as 1 minus the others: 0 when it is only their rounding. */
+const workedOut = (x: number): number => (Math.abs(x) < roundingOfOne ? 0 : x);
+
+/**
  * Refuses a negative OL that the model infers rather than states: with OL not given, OL = 1 − Om − Ok − Or
  * (Ok = 0 when flat), so Om + Ok > 1 gives OL < −Or, almost always a slip (Om=3 for 0.3). A model that
- * means it gives OL. OL = −Or from radiation alone (Om = 1, flat, Tcmb > 0) is kept: it is not typed.
+ * means it gives OL. OL = −Or from radiation alone (Om = 1, flat, Tcmb > 0) is kept: it is not typed;
+ * so is Om + Ok = 1 to rounding (within 1e-12: "Om=2.2; Ok=-1.2" is matter only, OL = 0).
  * Our rule; massive neutrinos are inside Om, so they add nothing here.
  * @param p the parameters as stated
  * @param inferredOL the OL the model would take
  */
 function refuseInferredNegativeDarkEnergy(p: ModelParameters, inferredOL: number): void {
-  if (p.OL !== undefined || !(p.Om + (p.Ok ?? 0) > 1)) return;
+  if (p.OL !== undefined || !(p.Om + (p.Ok ?? 0) - 1 > roundingOfOne)) return;
   const OL = Number(inferredOL.toPrecision(4));
   const tenth = Number((p.Om / 10).toPrecision(6));
   if (p.Ok === undefined) throw new RangeError(`Om = ${p.Om} makes OL = ${OL} to stay flat: give OL explicitly if you mean it; ${tenth}?`);
@@ -145,12 +156,12 @@ export class ExpansionRate {
     this.coldMatter = p.Om - onuMassive;
     if (p.OL !== undefined) {
       this.OL = p.OL;
-      this.Ok = 1 - p.Om - p.OL - this.Or;
+      this.Ok = workedOut(1 - p.Om - p.OL - this.Or);
     } else if (p.Ok !== undefined) {
       this.Ok = p.Ok;
-      this.OL = 1 - p.Om - p.Ok - this.Or;
+      this.OL = workedOut(1 - p.Om - p.Ok - this.Or);
     } else {
-      this.OL = 1 - p.Om - this.Or;
+      this.OL = workedOut(1 - p.Om - this.Or);
       this.Ok = 0;
     }
     refuseInferredNegativeDarkEnergy(p, this.OL);

@@ -19,7 +19,7 @@ export interface ModelParameters {
   OL?: number;
   /** Curvature density parameter today, instead of OL. */
   Ok?: number;
-  /** Baryon density parameter today (informational), 0 ≤ Ob ≤ Om. */
+  /** Baryon density parameter today, 0 ≤ Ob ≤ Om: used by SOUND_HORIZON only. */
   Ob?: number;
   /** Dark-energy equation of state today. */
   w0: number;

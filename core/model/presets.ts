@@ -23,7 +23,7 @@ export interface Preset {
 
 function preset(name: string, description: string, p: Omit<ModelParameters, "preset">, formerNames?: readonly string[]): Preset {
   if (!formerNames) return { name, description, parameters: { preset: name, ...p } };
-  return { name, description: `${description}; called ${formerNames.join(", ")} before zcell 0.3.0`, parameters: { preset: name, ...p }, formerNames };
+  return { name, description: `${description}; called ${formerNames.join(", ")} in zcell 0.2`, parameters: { preset: name, ...p }, formerNames };
 }
 
 const planckNeff = 3.046;
@@ -37,7 +37,7 @@ export const defaultPresetName = "P18-CMB";
  * 2018 CMB with lensing and BAO), P15-EXT (Planck 2015 with external data),
  * W9-ALL (WMAP nine-year with every external set), W7-BAO (WMAP seven-year with BAO and H0), and
  * DESI2-CMB… (the DESI collaboration's second data release, DR2, with the CMB and each supernova set;
- * called DR2-CMB… in 0.1 and 0.2, names still read: "DR2" alone reads as another survey's release).
+ * called DR2-CMB… in 0.2, names still read: "DR2" alone reads as another survey's release).
  */
 export const presets: readonly Preset[] = [
   preset(
@@ -71,25 +71,25 @@ export const presets: readonly Preset[] = [
   // value, not the paper's); neutrinos as in the P18 sets. Check against the paper before publishing.
   preset(
     "DESI2-CMB",
-    "H0 68.17, Ωm 0.3027, ΛCDM, flat — DESI DR2 BAO + CMB, DESI Collaboration 2025, arXiv:2503.14738 (values from memory, unverified; Ob assumed)",
+    "H0 68.17, Ωm 0.3027, ΛCDM, flat — DESI DR2 BAO + CMB, DESI Collaboration 2025, arXiv:2503.14738 (not yet checked against the paper's table; Ob assumed)",
     { H0: 68.17, Om: 0.3027, Ob: 0.02242 / 0.6817 ** 2, w0: -1, wa: 0, Tcmb: 2.7255, Neff: planckNeff, mnu: [0.06] },
     ["DR2-CMB"],
   ),
   preset(
     "DESI2-CMB-PP",
-    "H0 67.51, Ωm 0.3114, w0 −0.838, wa −0.62, flat — DESI DR2 BAO + CMB + Pantheon+, DESI Collaboration 2025, arXiv:2503.14738 (values from memory, unverified; Ob assumed)",
+    "H0 67.51, Ωm 0.3114, w0 −0.838, wa −0.62, flat — DESI DR2 BAO + CMB + Pantheon+, DESI Collaboration 2025, arXiv:2503.14738 (not yet checked against the paper's table; Ob assumed)",
     { H0: 67.51, Om: 0.3114, Ob: 0.02242 / 0.6751 ** 2, w0: -0.838, wa: -0.62, Tcmb: 2.7255, Neff: planckNeff, mnu: [0.06] },
     ["DR2-CMB-PP"],
   ),
   preset(
     "DESI2-CMB-U3",
-    "H0 65.91, Ωm 0.3275, w0 −0.667, wa −1.09, flat — DESI DR2 BAO + CMB + Union3, DESI Collaboration 2025, arXiv:2503.14738 (values from memory, unverified; Ob assumed)",
+    "H0 65.91, Ωm 0.3275, w0 −0.667, wa −1.09, flat — DESI DR2 BAO + CMB + Union3, DESI Collaboration 2025, arXiv:2503.14738 (not yet checked against the paper's table; Ob assumed)",
     { H0: 65.91, Om: 0.3275, Ob: 0.02242 / 0.6591 ** 2, w0: -0.667, wa: -1.09, Tcmb: 2.7255, Neff: planckNeff, mnu: [0.06] },
     ["DR2-CMB-U3"],
   ),
   preset(
     "DESI2-CMB-DY5",
-    "H0 66.74, Ωm 0.3191, w0 −0.752, wa −0.86, flat — DESI DR2 BAO + CMB + DES Y5 supernovae, DESI Collaboration 2025, arXiv:2503.14738 (values from memory, unverified; Ob assumed)",
+    "H0 66.74, Ωm 0.3191, w0 −0.752, wa −0.86, flat — DESI DR2 BAO + CMB + DES Y5 supernovae, DESI Collaboration 2025, arXiv:2503.14738 (not yet checked against the paper's table; Ob assumed)",
     { H0: 66.74, Om: 0.3191, Ob: 0.02242 / 0.6674 ** 2, w0: -0.752, wa: -0.86, Tcmb: 2.7255, Neff: planckNeff, mnu: [0.06] },
     ["DR2-CMB-DY5"],
   ),

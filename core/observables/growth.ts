@@ -12,19 +12,26 @@
  *   like matter (0 while relativistic, → ρ_ν once non-relativistic; from the Fermi–Dirac integrals,
  *   ρ − 3P = ρ_massless × dF/dln y): the growth on large scales.
  * Without massive neutrinos the two are the same. Radiation (photons and relativistic neutrinos) never
- * clusters. It holds for any curvature, radiation, massive neutrinos and w0–wa dark energy, as long as
- * matter and radiation dominate early on (a dark energy that grows faster into the past is refused).
+ * clusters; baryons are counted in the source at every z, also before the drag epoch (z ≈ 1060), when
+ * they are held by the photons and do not cluster: far above z ≈ 1000 the result is the formal
+ * solution of this equation, not the growth of the coupled baryon–photon universe. It holds for any
+ * curvature, radiation, massive neutrinos and w0–wa dark energy, as long as matter and radiation
+ * dominate early on (the rule below).
  *
  * The ODE runs by classical Runge–Kutta (fourth order) in ln a from a = 1e-8 (z ≈ 1e8, deep in
  * radiation domination), started on the growing mode of matter and radiation, D ∝ a + (2/3) a_eq with
  * a_eq = Ω_r/Ω_cb counting every neutrino as radiation (Mészáros 1974, A&A 37, 225: D ∝ 1 + 3y/2,
  * y = a/a_eq; D ∝ a without radiation), to a = 1. That mode is exact for matter and radiation alone,
- * and every other term is negligible at the start (dark energy ~1e-32 of E² in ΛCDM; the neutrinos'
- * mass ~1e-11 of their density for 0.3 eV), so the result does not depend on where the integration
- * starts, to ~1e-11 (tested against starts from a = 1e-6 to 1e-12 and against an independent
- * integration, test/growth.test.ts). D, dD/dln a and their slopes are kept at
- * every step, so a value between steps is a cubic Hermite interpolation; one table a model and
- * convention, built at first use.
+ * and every other term is small at the start: dark energy ~1e-32 of E² in ΛCDM; the neutrinos' mass,
+ * ~(m/T_ν)² of their density, leaves a trace that starts from a = 1e-10 and 1e-12 move by at most
+ * 9e-11 (f at z = 99999 for 0.3 eV, "clustering"; a start at 1e-6 would move it by 9e-7). A dark energy
+ * that is more than 1e-6 of E² at a = 1e-8 but fades into the past (w0 + wa below radiation's 1/3, or
+ * matter's 0 without radiation) moves the start to the first power of ten below 1e-8 where it is less,
+ * down to a = 1e-30; one still above 1e-6 there is refused with the reason: w0 + wa above about 0.22
+ * with radiation (for P18-CMB's densities), above about −0.07 without. Tested against an independent
+ * integration and for independence from the start (test/growth.test.ts). D, dD/dln a and their
+ * slopes are kept at every step, so a value between steps is a cubic Hermite interpolation; one table
+ * a model and convention, built at first use.
  */
 import { checkRedshift } from "../checks/redshift.js";
 import type { Cosmology } from "../distances/Cosmology.js";
@@ -34,16 +41,18 @@ import { fermiDiracDensityFactorLogSlope } from "../model/fermiDirac.js";
 export const growthNeutrinoConventions = ["smooth", "clustering"] as const;
 export type GrowthNeutrinos = (typeof growthNeutrinoConventions)[number];
 
-/** ln a where the integration starts (a = 1e-8, z ≈ 1e8) and the step in ln a. */
-const lnAStart = Math.log(1e-8);
+/** The step in ln a. */
 const targetStep = 0.018;
 /** Largest redshift asked of the growth (the tables start far above it). */
 const maxRedshift = 99_999;
 /**
- * Largest share of E² at the start held by dark energy (one that grows faster than the dominant term
- * into the past): the starting mode would not be the growing one. Our choice; in ΛCDM it is ~1e-32.
+ * Largest share of E² at the start held by dark energy: the starting mode, matter and radiation's,
+ * would not be the growing one. Our choice; in ΛCDM it is ~1e-32 at a = 1e-8.
  */
 const largestDarkEnergyShareAtStart = 1e-6;
+/** Where the integration starts: a = 1e-8 (z ≈ 1e8), or a power of ten below it down to 1e-30 where dark energy is not yet small there. */
+const latestStartPower = 8;
+const earliestStartPower = 30;
 
 interface GrowthTable {
   lnAStart: number;
@@ -70,6 +79,41 @@ function sourceDensity(model: Cosmology, neutrinos: GrowthNeutrinos, zp: number)
   return source;
 }
 
+/** |Ω_DE(a)|, the share of E² held by dark energy at scale factor a. */
+function darkEnergyShare(model: Cosmology, a: number): number {
+  return Math.abs(model.expansion.densityParameter("darkenergy", 1 / a - 1));
+}
+
+/**
+ * ln a where the integration starts: 1e-8, or the first power of ten below it where dark energy is at
+ * most 1e-6 of E², or 1e-30 (buildTable then refuses the model with the reason); 1e-8 without matter.
+ */
+function startLnA(model: Cosmology): number {
+  if (model.expansion.coldMatter === 0) return Math.log(Number(`1e-${latestStartPower}`)); // no source: D is constant
+  for (let k = latestStartPower; k < earliestStartPower; k++) {
+    const a = Number(`1e-${k}`);
+    if (darkEnergyShare(model, a) <= largestDarkEnergyShareAtStart) return Math.log(a);
+  }
+  return Math.log(Number(`1e-${earliestStartPower}`));
+}
+
+/**
+ * Why a model whose dark energy is still `share` of E² at scale factor a0 has no growing mode to start
+ * on, naming what should dominate early on (radiation, or matter in a model without radiation) and
+ * its w (1/3, 0) against w0 + wa, dark energy's w in the far past.
+ */
+function earlyDarkEnergyMessage(model: Cosmology, share: number, a0: number): string {
+  const w = model.w0 + model.wa;
+  const withRadiation = model.expansion.Or + model.expansion.OnuMassive > 0;
+  const [dominant, wDominant, wText] = withRadiation ? ["radiation", 1 / 3, "1/3"] : ["matter", 0, "0"];
+  const needs = withRadiation
+    ? "linear growth needs matter and radiation to dominate H² early on, but in this model dark energy"
+    : "linear growth needs matter to dominate H² early on (this model has no radiation), but its dark energy";
+  const ws = `w0 + wa = ${Number(w.toPrecision(6))} (${dominant}: ${wText})`;
+  if (w >= wDominant) return `${needs} grows into the past as fast as ${dominant} or faster: ${ws}`;
+  return `${needs} fades into the past too slowly: ${ws}, and it is still ${Number((share * 100).toPrecision(3))}% of H² at a = ${Number(a0.toPrecision(3))}`;
+}
+
 function buildTable(model: Cosmology, neutrinos: GrowthNeutrinos, lnA0: number): GrowthTable {
   const expansion = model.expansion;
   const steps = Math.ceil(-lnA0 / targetStep);
@@ -87,15 +131,10 @@ function buildTable(model: Cosmology, neutrinos: GrowthNeutrinos, lnA0: number):
   const a0 = Math.exp(lnA0);
   const cold = expansion.coldMatter;
   const radiation = expansion.Ogamma + 3 * expansion.neutrinoSpeciesDensity;
-  const zp0 = 1 / a0;
-  const e2Start = expansion.e2(zp0, -lnA0);
-  // dark energy's share (curvature's, Ω_k a/Ω_m at most, only shrinks into the past)
-  const darkEnergy = e2Start - expansion.matterDensity(zp0) - expansion.Or * zp0 ** 4 - expansion.Ok * zp0 * zp0;
-  if (Math.abs(darkEnergy) > largestDarkEnergyShareAtStart * e2Start) {
-    throw new RangeError(
-      `linear growth starts where matter and radiation dominate, but in this model dark energy makes ${Number(((Math.abs(darkEnergy) / e2Start) * 100).toPrecision(3))}% of H² at a = ${Number(a0.toPrecision(3))}`,
-    );
-  }
+  // dark energy's share (curvature's, Ω_k a/Ω_m at most, only shrinks into the past); a model without
+  // matter has no source, and D stays constant whatever dark energy does
+  const share = darkEnergyShare(model, a0);
+  if (share > largestDarkEnergyShareAtStart && cold > 0) throw new RangeError(earlyDarkEnergyMessage(model, share, a0));
   let y = cold * a0 + (2 / 3) * radiation;
   let v = cold * a0;
   if (y === 0) [y, v] = [1, 0];
@@ -134,7 +173,7 @@ function tableOf(model: Cosmology, neutrinos: GrowthNeutrinos): GrowthTable {
   const cache = tables[neutrinos];
   if (!cache) throw new TypeError(`unknown neutrino convention "${String(neutrinos)}": use ${growthNeutrinoConventions.join(" or ")}`);
   let table = cache.get(model);
-  if (!table) cache.set(model, (table = buildTable(model, neutrinos, lnAStart)));
+  if (!table) cache.set(model, (table = buildTable(model, neutrinos, startLnA(model))));
   return table;
 }
 
@@ -185,8 +224,9 @@ export function growthRate(model: Cosmology, z: number, neutrinos: GrowthNeutrin
 }
 
 /**
- * D(z)/D(0) and f(z) from an integration started at scale factor `startA` instead of 1e-8 (a table
- * built for this call, not kept): shows that the result does not depend on the start.
+ * D(z)/D(0) and f(z) from an integration started at scale factor `startA` instead of where
+ * growthFactor starts (a table built for this call, not kept): shows that the result does not depend
+ * on the start.
  * @param model the cosmology
  * @param z redshift, 0 ≤ z < 1/startA − 1
  * @param neutrinos "smooth" or "clustering"

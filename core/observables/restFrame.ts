@@ -4,11 +4,12 @@
  * Goldhaber et al. 2001, ApJ 558, 359, from memory):
  *
  * - "wavelength": λ_rest = λ_obs/(1 + z) (a line's wavelength, or a band's);
- * - "frequency": ν_rest = ν_obs (1 + z);
+ * - "frequency": ν_rest = ν_obs (1 + z); a photon energy E = hν moves the same way, and so does an
+ *   equivalent width measured in energy (W_E = ∫(1 − F_E/F_c) dE, as X-ray lines are quoted in eV);
  * - "duration": Δt_rest = Δt_obs/(1 + z), the time dilation of a light curve (a rise time, a
  *   period, a decline measured in the observer's days);
  * - "equivalent_width": W_rest = W_obs/(1 + z) (W = ∫(1 − F_λ/F_c) dλ integrates over wavelength a
- *   ratio the redshift leaves unchanged, so it stretches as wavelengths do).
+ *   ratio the redshift leaves unchanged, so it stretches as wavelengths do; in energy it is a "frequency").
  *
  * The factor is the same in any unit, so a value keeps its unit.
  */

@@ -303,7 +303,7 @@ export function REDSHIFT(value: any[][], quantity: string, model?: any[][], unit
  * @helpurl https://localhost:3000/help.html#REDSHIFT_CMB
  * @example =ZC.REDSHIFT_CMB(0.05, 150, 20)
  * @param z_helio Heliocentric redshift, > −1 (value or range).
- * @param ra Right ascension (ICRS): a number in angle_unit (deg by default), or sexagesimal text in hours such as "12:30:49.4", "12h30m49.4s" or "12 30 49.4" (value or range).
+ * @param ra Right ascension (ICRS): a number in angle_unit (deg by default), or sexagesimal text in hours such as "12:30:49.4", "12h30m49.4s" or "12 30 49.4"; keep such text as text in cells (Excel may read 12:30:49.4 typed into a cell as a time of day, a number) (value or range).
  * @param dec Declination (ICRS), −90° … 90°: a number in angle_unit (deg by default), or sexagesimal text in degrees such as "+12:23:28", "-05d07m" or "−05°07′" (value or range).
  * @param [angle_unit] Unit of numbers in ra and dec, default "deg" (e.g. "rad"); "hourangle" makes an ra number hours, and dec then stays in degrees.
  * @returns z_cmb.

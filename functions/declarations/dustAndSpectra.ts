@@ -59,7 +59,7 @@ export function INDEX_BETWEEN_ERR(flux_density1: any[][], band1: any[][], flux_d
 }
 
 /**
- * Brightness temperature of a source fitted as an elliptical Gaussian, in the Rayleigh–Jeans limit (hν ≪ kT): T_b = S c²/(2 k ν² Ω), Ω = π θ_maj θ_min/(4 ln 2) for axes given as FWHM. With z, the rest frame's T_b = (1+z) × the observed one (frequency stays the observed one).
+ * Brightness temperature of a source fitted as an elliptical Gaussian, in the Rayleigh–Jeans limit (hν ≪ kT): T_b = S c²/(2 k ν² Ω), Ω = π θ_maj θ_min/(4 ln 2) for axes given as FWHM. With z, the rest frame's T_b = (1+z) × the observed one (frequency stays the observed one). This Rayleigh–Jeans T_b is always below the Planck brightness temperature T = (hν/k)/ln(1 + hν/(k T_b)) (the blackbody of the same intensity), by about hν/(2k) = 0.024 K per GHz while T_b ≫ hν/k = 0.048 K per GHz, by more when not: 1 Jy at 300 GHz in a 1″ Gaussian gives 13.58 K here, 19.9 K by Planck's law.
  * @customfunction BRIGHTNESS_TEMP BRIGHTNESS_TEMP
  * @helpurl https://localhost:3000/help.html#BRIGHTNESS_TEMP
  * @example =ZC.BRIGHTNESS_TEMP(50, 8.4, 2, 1, , "mJy", , "mas")

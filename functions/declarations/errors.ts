@@ -101,7 +101,7 @@ export function SIZE_ERR(angle: any[][], angle_err: any[][], z: any[][], z_err: 
  * @customfunction LUMINOSITY_REST_ERR LUMINOSITY_REST_ERR
  * @helpurl https://localhost:3000/help.html#LUMINOSITY_REST_ERR
  * @example =ZC.LUMINOSITY_REST_ERR(2.5, 0.2, 1.1, 0.01, -0.7, 0.1, 3, 1.4, , , "mJy")
- * @param flux_density Flux density observed at `observed`, ≥ 0 (value or range), in Jy unless in_unit says otherwise (catalogues in mJy: give "mJy").
+ * @param flux_density Flux density at the observed band (the argument observed), ≥ 0 (value or range), in Jy unless in_unit says otherwise (catalogues in mJy: give "mJy").
  * @param flux_density_err 1σ error of the flux density, ≥ 0 (value or range), in Jy unless in_unit says otherwise (catalogues in mJy: give "mJy").
  * @param z Redshift, > 0 (value or range).
  * @param z_err 1σ error of z, ≥ 0 (value or range).

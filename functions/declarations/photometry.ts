@@ -108,7 +108,7 @@ export function MAG_APP(M: any[][], z: any[][], kcorr?: any[][], model?: any[][]
  * @example =ZC.MAG_AB(0.001)
  * @param flux_density Flux density, > 0 (value or range), in Jy unless unit says otherwise (catalogues in mJy: give "mJy").
  * @param [unit] Unit of flux density, default "Jy" (e.g. "uJy", "erg/s/cm2/Hz"), or per wavelength ("erg/s/cm2/Angstrom", "W/m2/um"), which needs the wavelength.
- * @param [wavelength] Wavelength in Angstrom, > 0, of a flux density per wavelength: required with such a unit, not used with a per-frequency one (value or range).
+ * @param [wavelength] Wavelength in Angstrom (not um: 0.5 µm is 5000), 100 … 1e7 (1 mm), of a flux density per wavelength: required with such a unit, not used with a per-frequency one; outside the range #NUM! (value or range).
  * @returns AB magnitude (mag).
  */
 export function MAG_AB(flux_density: any[][], unit?: string, wavelength?: any[][]): any[][] {
@@ -122,7 +122,7 @@ export function MAG_AB(flux_density: any[][], unit?: string, wavelength?: any[][
  * @example =ZC.FLUX_AB(20, "uJy")
  * @param m_ab AB magnitude (value or range).
  * @param [unit] Output unit, default "Jy" (e.g. "uJy", "erg/s/cm2/Hz"), or per wavelength ("erg/s/cm2/Angstrom", "W/m2/um"), which needs the wavelength.
- * @param [wavelength] Wavelength in Angstrom, > 0, for a unit per wavelength: required with such a unit, not used with a per-frequency one (value or range).
+ * @param [wavelength] Wavelength in Angstrom (not um: 0.5 µm is 5000), 100 … 1e7 (1 mm), for a unit per wavelength: required with such a unit, not used with a per-frequency one; outside the range #NUM! (value or range).
  * @returns Flux density (Jy by default).
  */
 export function FLUX_AB(m_ab: any[][], unit?: string, wavelength?: any[][]): any[][] {
@@ -134,7 +134,7 @@ export function FLUX_AB(m_ab: any[][], unit?: string, wavelength?: any[][]): any
  * @customfunction LUMINOSITY_REST LUMINOSITY_REST
  * @helpurl https://localhost:3000/help.html#LUMINOSITY_REST
  * @example =ZC.LUMINOSITY_REST(2.5, 1.1, -0.7, 3, 1.4, , , "mJy")
- * @param flux_density Flux density observed at `observed`, ≥ 0 (value or range), in Jy unless in_unit says otherwise (catalogues in mJy: give "mJy").
+ * @param flux_density Flux density at the observed band (the argument observed), ≥ 0 (value or range), in Jy unless in_unit says otherwise (catalogues in mJy: give "mJy").
  * @param z Redshift, > 0 (value or range).
  * @param alpha Spectral index: S_ν ∝ ν^alpha; synchrotron ≈ −0.7; other conventions via ZC.SPECTRAL_INDEX (value or range).
  * @param observed Observed frequency, wavelength or energy, > 0, in band_unit (value or range).

@@ -9,7 +9,7 @@ import { definitions as d } from "../definitions.js";
 import { callFromSheet } from "../evaluate.js";
 
 /**
- * An angle in degrees from sexagesimal text: a right ascension "12:30:49.4", "12h30m49.4s" or "12 30 49.4" is hours (× 15°; marked d or ° it is degrees), a declination "+12:23:28", "-05d07m" or "−05°07′" is degrees; a number is already degrees (an RA is wrapped into 0–360°). Minutes and seconds ≥ 60, two signs or a declination beyond ±90° are #VALUE! naming the part.
+ * An angle in degrees from sexagesimal text: a right ascension "12:30:49.4", "12h30m49.4s" or "12 30 49.4" is hours (× 15°; marked d or ° it is degrees), a declination "+12:23:28", "-05d07m" or "−05°07′" is degrees; a number is already degrees (an RA is wrapped into 0–360°). Minutes and seconds ≥ 60, two signs or a declination beyond ±90° are #VALUE! naming the part. Keep positions as text in cells (format the column as Text before pasting, or type an apostrophe first): Excel may read 12:30:49.4 typed into a cell as a time of day, which is a number, and a number is read as degrees.
  * @customfunction COORD_DEG COORD_DEG
  * @helpurl https://localhost:3000/help.html#COORD_DEG
  * @example =ZC.COORD_DEG("14:05:12.3", "ra")

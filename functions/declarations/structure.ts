@@ -36,7 +36,7 @@ export function DIST_VOLUME(z: any[][], model?: any[][], unit?: string): any[][]
 }
 
 /**
- * Sound horizon at the drag epoch r_d: the fit of Aubourg et al. 2015 (eq. 16) in ω_b = Ω_b h², ω_cb and ω_ν, made for Neff = 3.046 and Tcmb = 2.7255 K; another Neff (or Tcmb within 2.72–2.73 K) scales it by the direct integral of the sound speed. Needs Ob in the model. r_d follows ω_b and ω_cb, not the fractions: "P18-CMB; H0=73" (same Ωb, Ωm) has r_d 6% smaller. #N/A outside ω_b 0.015–0.03, ω_cb 0.08–0.22, Neff 2–5, Σm_ν ≤ 1 eV. D_M/r_d, D_H/r_d and D_V/r_d are then ratios of cells.
+ * Sound horizon at the drag epoch r_d: the fit of Aubourg et al. 2015 (eq. 16) in ω_b = Ω_b h², ω_cb and ω_ν, made for Neff = 3.046 and Tcmb = 2.7255 K; another Neff (or Tcmb within 2.72–2.73 K) scales it by the direct integral of the sound speed, for another Tcmb to a drag redshift moved as 1/Tcmb (Tcmb = 2.72 K: −0.013%). Needs Ob in the model. r_d follows ω_b and ω_cb, not the fractions: "P18-CMB; H0=73" (same Ωb, Ωm) has r_d 6% smaller. #N/A outside ω_b 0.015–0.03, ω_cb 0.08–0.22, Neff 2–5, Σm_ν ≤ 1 eV. D_M/r_d, D_H/r_d and D_V/r_d are then ratios of cells.
  * @customfunction SOUND_HORIZON SOUND_HORIZON
  * @helpurl https://localhost:3000/help.html#SOUND_HORIZON
  * @example =ZC.SOUND_HORIZON()
@@ -113,7 +113,7 @@ export function HALO_MASS(radius: any[][], z: any[][], definition: any[][], mode
 }
 
 /**
- * Linear growth factor D(z)/D(0), sub-horizon and scale-independent, from the growth equation in ln a (any curvature, radiation, w0–wa dark energy). Massive neutrinos: "smooth" (blank) keeps them out of the source, which is then cold matter (CDM + baryons, as ZC.OMEGA("cold")): the growth on scales inside their free-streaming length, where σ8, halos and most fσ8 measurements are; "clustering" adds their ρ − 3P (nothing while relativistic, all of it once slow): the growth on larger scales. Without massive neutrinos both are the same.
+ * Linear growth factor D(z)/D(0), sub-horizon and scale-independent, from the growth equation in ln a (any curvature, radiation, w0–wa dark energy). Massive neutrinos: "smooth" (blank) keeps them out of the source, which is then cold matter (CDM + baryons, as ZC.OMEGA("cold")): the growth on scales inside their free-streaming length, where σ8, halos and most fσ8 measurements are; "clustering" adds their ρ − 3P (nothing while relativistic, all of it once slow): the growth on larger scales. Without massive neutrinos both are the same. Baryons count in the source at every z: above z ≈ 1000, before the drag epoch, when they are held by the photons and do not cluster, the value is the formal solution of this equation, not the growth of the coupled baryon–photon universe. #NUM! with the reason when dark energy does not fade into the past fast enough for matter and radiation to dominate early on: w0 + wa above about 0.22 with radiation (P18-CMB's densities), above about −0.07 without (Tcmb = 0).
  * @customfunction GROWTH GROWTH
  * @helpurl https://localhost:3000/help.html#GROWTH
  * @example =ZC.GROWTH(1)
@@ -127,7 +127,7 @@ export function GROWTH(z: any[][], model?: any[][], neutrinos?: string): any[][]
 }
 
 /**
- * Linear growth rate f = d ln D / d ln a (same assumptions and neutrinos argument as ZC.GROWTH); fσ8 is f times σ8(z) = σ8 · ZC.GROWTH(z).
+ * Linear growth rate f = d ln D / d ln a (same assumptions, limits and neutrinos argument as ZC.GROWTH: above z ≈ 1000 the formal solution with baryons in the source); fσ8 is f times σ8(z) = σ8 · ZC.GROWTH(z).
  * @customfunction GROWTH_RATE GROWTH_RATE
  * @helpurl https://localhost:3000/help.html#GROWTH_RATE
  * @example =ZC.GROWTH_RATE(0.5)

@@ -65,14 +65,14 @@ export function VELOCITY_PECULIAR(z_obs: any[][], z_cosmo: any[][], unit?: strin
 }
 
 /**
- * An observed value in the source's rest frame: "wavelength" λ/(1+z), "frequency" ν(1+z), "duration" Δt/(1+z) (the time dilation of a light curve), "equivalent_width" W/(1+z). The value keeps its unit.
+ * An observed value in the source's rest frame: "wavelength" λ/(1+z), "frequency" ν(1+z) (also a photon energy E = hν in keV or eV, and an equivalent width in energy), "duration" Δt/(1+z) (the time dilation of a light curve), "equivalent_width" W/(1+z) (in wavelength units). The value keeps its unit.
  * @customfunction REST_FRAME REST_FRAME
  * @helpurl https://localhost:3000/help.html#REST_FRAME
  * @example =ZC.REST_FRAME(7200, 0.1, "wavelength")
  * @param value Observed value: a wavelength or frequency > 0, a duration ≥ 0, an equivalent width of either sign (value or range).
  * @param z Redshift of the source, > −1 (value or range).
  * @param quantity "wavelength", "frequency", "duration" or "equivalent_width" (value or range).
- * @param [unit] Unit of value and result (the same: 1+z has none), checked against the quantity: Angstrom, nm, um for lengths, GHz, MHz for frequencies, d, s for durations; blank = not checked.
+ * @param [unit] Unit of value and result (the same: 1+z has none), checked against the quantity: Angstrom, nm, um for lengths, GHz, MHz or keV, eV for frequencies, d, s for durations; blank = not checked.
  * @returns The rest-frame value, in the unit of value.
  */
 export function REST_FRAME(value: any[][], z: any[][], quantity: any[][], unit?: string): any[][] {
@@ -80,14 +80,14 @@ export function REST_FRAME(value: any[][], z: any[][], quantity: any[][], unit?:
 }
 
 /**
- * A rest-frame value as observed (the inverse of REST_FRAME): "wavelength" λ(1+z), "frequency" ν/(1+z), "duration" Δt(1+z) (time dilation), "equivalent_width" W(1+z). The value keeps its unit.
+ * A rest-frame value as observed (the inverse of REST_FRAME): "wavelength" λ(1+z), "frequency" ν/(1+z) (also a photon energy in keV or eV), "duration" Δt(1+z) (time dilation), "equivalent_width" W(1+z). The value keeps its unit.
  * @customfunction OBSERVED_FRAME OBSERVED_FRAME
  * @helpurl https://localhost:3000/help.html#OBSERVED_FRAME
  * @example =ZC.OBSERVED_FRAME(1.4, 0.05, "frequency", "GHz")
  * @param value Rest-frame value: a wavelength or frequency > 0, a duration ≥ 0, an equivalent width of either sign (value or range).
  * @param z Redshift of the source, > −1 (value or range).
  * @param quantity "wavelength", "frequency", "duration" or "equivalent_width" (value or range).
- * @param [unit] Unit of value and result (the same), checked against the quantity: Angstrom, nm, um, GHz, MHz, d, s; blank = not checked.
+ * @param [unit] Unit of value and result (the same), checked against the quantity: Angstrom, nm, um, GHz, MHz, keV, eV, d, s; blank = not checked.
  * @returns The observed value, in the unit of value.
  */
 export function OBSERVED_FRAME(value: any[][], z: any[][], quantity: any[][], unit?: string): any[][] {

@@ -4,7 +4,7 @@
  * definitions in this folder builds its arguments from these, so one kind reads alike everywhere.
  */
 import { conversionFactor, sexagesimalDegrees, type AnglePart, type Cosmology } from "../../core/index.js";
-import type { Args, ArgSpec } from "../FunctionDef.js";
+import type { Args, ArgSpec, BlankMeaning } from "../FunctionDef.js";
 import { messages } from "../messages.js";
 
 type NumberOptions = Omit<Extract<ArgSpec, { kind: "number" }>, "kind" | "name">;
@@ -31,14 +31,35 @@ export const err = (name: string, extra: NumberOptions = {}) => num(name, { min:
 /** A 1σ error of a magnitude: ≥ 0, and ±99 or any |value| ≥ 50 is a catalogue's missing-value flag (#N/A) as for the magnitude. */
 export const magErr = (name: string, extra: NumberOptions = {}) => num(name, { min: 0, magnitude: true, ...extra });
 /** An optional spectral index whose absence means the bolometric case (NaN stands for "not given"). */
-export const optionalAlpha = num("alpha", { default: Number.NaN, blankMeansDefault: true });
+export const optionalAlpha = num("alpha", { default: Number.NaN, blankMeansDefault: true, blank: { words: "bolometric" } });
 export const isGiven = (x: number) => !Number.isNaN(x);
 /** A sky area argument: all sky when omitted or blank. */
-export const area = num("area", { default: 4 * Math.PI, blankMeansDefault: true, min: 0, max: { value: 4 * Math.PI, what: "the whole sky" } });
+export const area = num("area", { default: 4 * Math.PI, blankMeansDefault: true, min: 0, max: { value: 4 * Math.PI, what: "the whole sky" }, blank: { words: "the whole sky" } });
 /** A survey's sky area, required (a blank would silently mean the whole sky). */
 export const requiredArea = num("area", { min: 0, max: { value: 4 * Math.PI, what: "the whole sky" } });
 export const angle = num("angle", { min: 0, max: { value: Math.PI, what: "180°" } });
-export const optionalText = (name: string): ArgSpec => ({ kind: "text", name, scalar: true, optional: true });
+/** An optional text read once (a unit given as text, a convention): `blank` is what leaving it out means. */
+export const optionalText = (name: string, blank: BlankMeaning): ArgSpec => ({ kind: "text", name, scalar: true, optional: true, blank });
+/** An optional text with a default value one could type (`typed`): blank means that value. */
+export const textWithDefault = (name: string, typed: string, extra: { choices?: readonly string[]; scalar?: boolean } = { scalar: true }): ArgSpec => ({
+  kind: "text",
+  name,
+  optional: true,
+  blank: { typed },
+  ...extra,
+});
+/** A text argument of the cell, or its typed default when blank. */
+export function textOr(a: Args, spec: ArgSpec): string {
+  const given = a[spec.name];
+  if (typeof given === "string" && given !== "") return given;
+  if (spec.kind !== "text" || !spec.blank || !("typed" in spec.blank)) throw new Error(`${spec.name} has no default`);
+  return spec.blank.typed;
+}
+/** The flux-density unit of MAG_AB and FLUX_AB, the band unit of the two-band and rest-frame functions: text (its kind depends on other arguments), with the default shown. */
+export const fluxDensityUnit = textWithDefault("unit", "Jy");
+export const bandUnit = textWithDefault("band_unit", "GHz");
+/** The unit of a rest-frame spectral luminosity: W/Hz gives L_ν, a power unit ν L_ν. */
+export const spectralOutUnit = textWithDefault("out_unit", "W/Hz");
 /** A right ascension (or another longitude): a number in degrees, or sexagesimal text (hours for a right ascension). */
 export const longitude = (name: string) => num(name, { sexagesimal: "ra" });
 /** A declination (or another latitude): a number in degrees within ±90°, or sexagesimal text. */
@@ -70,7 +91,7 @@ export function textUnitFactor(a: Args, name: string, shown: string, reference: 
 
 /** L_ν [W/Hz] at ν [Hz] in the out_unit asked: W/Hz and its kin give L_ν, a power unit (W, erg/s, Lsun) ν L_ν (= λ L_λ). */
 export function inSpectralOrPowerUnit(a: Args, lnuWHz: number, nuHz: number): number {
-  const out = (a.out_unit as string) || "W/Hz";
+  const out = textOr(a, spectralOutUnit);
   const h = m(a).h;
   try {
     return lnuWHz * conversionFactor("W/Hz", out, h);

@@ -108,7 +108,7 @@ export const distancesAndTimes: FunctionDef[] = [
   ofRedshift("VOLUME_ELEMENT", "Mpc3/sr", (x, zz) => x.comovingVolumeElementMpc3Sr(zz)),
   {
     name: "REDSHIFT",
-    args: [num("value"), { kind: "text", name: "quantity", choices: Object.keys(inverses), scalar: true }, model, { kind: "text", name: "unit", scalar: true, optional: true }],
+    args: [num("value"), { kind: "text", name: "quantity", choices: Object.keys(inverses), scalar: true }, model, { kind: "text", name: "unit", scalar: true, optional: true, blank: { words: "the quantity's default unit (Mpc, Gyr, Mpc3 for VOLUME)" } }],
     compute: (a) => invert(m(a), a.quantity as string, n(a, "value"), a.unit as string),
   },
   {

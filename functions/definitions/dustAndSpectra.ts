@@ -22,7 +22,7 @@ import {
 } from "../../core/index.js";
 import type { Args, FunctionDef } from "../FunctionDef.js";
 import { messages } from "../messages.js";
-import { amount, err, num, n, optionalText, unit } from "./argumentKinds.js";
+import { amount, bandUnit, err, num, n, textOr, textWithDefault, unit } from "./argumentKinds.js";
 
 const positive = (name: string) => num(name, { min: 0, minExclusive: true });
 
@@ -42,13 +42,18 @@ function toHz(unitText: string, name: string): (value: number) => number {
   return convert;
 }
 
-/** A band argument of the cell in the call's band unit (blank: `shown`), as a frequency [Hz]. */
-const bandHz = (a: Args, name: string, unitArg: string, shown: string) => toHz((a[unitArg] as string) || shown, unitArg)(n(a, name));
+/** A band argument of the cell in the call's band unit (blank: GHz), as a frequency [Hz]. */
+const bandHz = (a: Args, name: string) => toHz(textOr(a, bandUnit), bandUnit.name)(n(a, name));
 
-/** The law of a cell: blank is Fitzpatrick 1999; the last name read is kept (a column of one law). */
+/** The extinction law: blank is Fitzpatrick 1999. */
+const law = textWithDefault("law", "Fitzpatrick 1999", {});
+/** The unit of EXTINCTION's wavelength: blank is Angstrom. */
+const wavelengthUnit = textWithDefault("wavelength_unit", "Angstrom");
+
+/** The law of a cell; the last name read is kept (a column of one law). */
 let lastLaw: { text: string; law: ExtinctionLaw } | undefined;
-function lawOf(text: string | undefined): ExtinctionLaw {
-  if (text === undefined || text === "") return "Fitzpatrick 1999";
+function lawOf(a: Args): ExtinctionLaw {
+  const text = textOr(a, law);
   if (lastLaw?.text !== text) lastLaw = { text, law: extinctionLawNamed(text) };
   return lastLaw.law;
 }
@@ -75,8 +80,8 @@ function angstromConverter(unitText: string): (value: number) => number {
 
 /** A_λ of one cell for a given E(B−V): the wavelength in its unit (Angstrom, nm, um, or a frequency or energy); outside the law's range, the range in that unit. */
 function extinction(a: Args, ebv: number): number {
-  const law = lawOf(a.law as string | undefined);
-  const unitText = (a.wavelength_unit as string) || "Angstrom";
+  const law = lawOf(a);
+  const unitText = textOr(a, wavelengthUnit);
   const given = n(a, "wavelength");
   const angstrom = angstromConverter(unitText)(given);
   if (!inRange(angstrom, law)) {
@@ -92,8 +97,8 @@ export const dustAndSpectra: FunctionDef[] = [
   {
     name: "EXTINCTION",
     args: [
-      positive("wavelength"), amount("ebv"), { kind: "text", name: "law", optional: true },
-      num("r_v", { default: Number.NaN, blankMeansDefault: true, min: 0, minExclusive: true }), optionalText("wavelength_unit"),
+      positive("wavelength"), amount("ebv"), law,
+      num("r_v", { default: Number.NaN, blankMeansDefault: true, min: 0, minExclusive: true, blank: { words: "3.1, or 4.05 (R′_V) for Calzetti 2000" } }), wavelengthUnit,
     ],
     compute: (a) => extinction(a, n(a, "ebv")),
     // the common range: a column of E(B−V), one per source, at one band
@@ -101,23 +106,20 @@ export const dustAndSpectra: FunctionDef[] = [
   },
   {
     name: "INDEX_BETWEEN",
-    args: [positive("flux_density1"), positive("band1"), positive("flux_density2"), positive("band2"), optionalText("band_unit")],
-    compute: (a) => spectralIndexBetween(n(a, "flux_density1"), bandHz(a, "band1", "band_unit", "GHz"), n(a, "flux_density2"), bandHz(a, "band2", "band_unit", "GHz")),
+    args: [positive("flux_density1"), positive("band1"), positive("flux_density2"), positive("band2"), bandUnit],
+    compute: (a) => spectralIndexBetween(n(a, "flux_density1"), bandHz(a, "band1"), n(a, "flux_density2"), bandHz(a, "band2")),
   },
   {
     name: "INDEX_BETWEEN_ERR",
-    args: [positive("flux_density1"), positive("band1"), positive("flux_density2"), positive("band2"), err("err1"), err("err2"), optionalText("band_unit")],
-    compute: (a) =>
-      spectralIndexBetweenError(
-        n(a, "flux_density1"), bandHz(a, "band1", "band_unit", "GHz"), n(a, "flux_density2"), bandHz(a, "band2", "band_unit", "GHz"), n(a, "err1"), n(a, "err2"),
-      ),
+    args: [positive("flux_density1"), positive("band1"), positive("flux_density2"), positive("band2"), err("err1"), err("err2"), bandUnit],
+    compute: (a) => spectralIndexBetweenError(n(a, "flux_density1"), bandHz(a, "band1"), n(a, "flux_density2"), bandHz(a, "band2"), n(a, "err1"), n(a, "err2")),
   },
   {
     name: "BRIGHTNESS_TEMP",
     args: [
       amount("flux_density"), positive("frequency"), positive("major"), positive("minor"), num("z", { default: 0, blankMeansDefault: true }),
-      unit("flux_unit", "Jy", "Jy", "flux_density"), optionalText("band_unit"), unit("angle_unit", "rad", "arcsec", ["major", "minor"]),
+      unit("flux_unit", "Jy", "Jy", "flux_density"), bandUnit, unit("angle_unit", "rad", "arcsec", ["major", "minor"]),
     ],
-    compute: (a) => brightnessTemperatureK(n(a, "flux_density") * janskySI, bandHz(a, "frequency", "band_unit", "GHz"), n(a, "major"), n(a, "minor"), n(a, "z")),
+    compute: (a) => brightnessTemperatureK(n(a, "flux_density") * janskySI, bandHz(a, "frequency"), n(a, "major"), n(a, "minor"), n(a, "z")),
   },
 ];

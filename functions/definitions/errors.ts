@@ -14,7 +14,7 @@ import {
   spectralLuminosityErrorWHz,
 } from "../../core/index.js";
 import type { FunctionDef } from "../FunctionDef.js";
-import { num, amount, model, unit, z, err, magErr, angle, optionalAlpha, optionalText, m, n, inSpectralOrPowerUnit } from "./argumentKinds.js";
+import { num, amount, model, unit, z, err, magErr, angle, m, n, inSpectralOrPowerUnit, bandUnit, spectralOutUnit, textOr } from "./argumentKinds.js";
 
 /** Uncertainties functions, in the order of their declarations. */
 export const errors: FunctionDef[] = [
@@ -41,7 +41,7 @@ export const errors: FunctionDef[] = [
   },
   {
     name: "MAG_ABS_ERR",
-    args: [magErr("m_err"), z, err("z_err"), magErr("kcorr_err", { default: 0, blankMeansDefault: true }), model, optionalAlpha],
+    args: [magErr("m_err"), z, err("z_err"), magErr("kcorr_err", { default: 0, blankMeansDefault: true }), model, num("alpha", { default: Number.NaN, blankMeansDefault: true, blank: { words: "K taken as fixed in z" } })],
     compute: (a) => absoluteMagnitudeErrorMag(m(a), n(a, "m_err"), n(a, "z"), n(a, "z_err"), n(a, "kcorr_err"), n(a, "alpha")),
   },
   {
@@ -53,10 +53,10 @@ export const errors: FunctionDef[] = [
     name: "LUMINOSITY_REST_ERR",
     args: [
       amount("flux_density"), err("flux_density_err"), z, err("z_err"), num("alpha"), err("alpha_err"), num("observed"), num("rest"), model,
-      optionalText("band_unit"), unit("in_unit", "Jy", "Jy", ["flux_density", "flux_density_err"]), optionalText("out_unit"),
+      bandUnit, unit("in_unit", "Jy", "Jy", ["flux_density", "flux_density_err"]), spectralOutUnit,
     ],
     compute: (a) => {
-      const band = (a.band_unit as string) || "GHz";
+      const band = textOr(a, bandUnit);
       const restHz = frequencyHz(n(a, "rest"), band, "rest");
       const sigma = restFrameSpectralLuminosityErrorWHz(
         m(a), n(a, "flux_density") * janskySI, n(a, "flux_density_err") * janskySI, n(a, "z"), n(a, "z_err"), n(a, "alpha"), n(a, "alpha_err"),

@@ -141,7 +141,7 @@ export const limitsAndPopulations: FunctionDef[] = [
   },
   {
     name: "CHI2_MODULUS",
-    args: [column("z"), column("mu"), column("mu_err"), model, num("offset", { default: Number.NaN, blankMeansDefault: true })],
+    args: [column("z"), column("mu"), column("mu_err"), model, num("offset", { default: Number.NaN, blankMeansDefault: true, blank: { words: "the best one (fitted)" } })],
     over: {
       columns: ["z", "mu", "mu_err"],
       compute: (c, a) => {

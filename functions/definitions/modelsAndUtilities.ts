@@ -58,8 +58,8 @@ export const modelsAndUtilities: FunctionDef[] = [
     args: [
       model,
       ...Array.from({ length: modelPairs }, (_, i): ArgSpec[] => [
-        { kind: "text", name: `key${i + 1}`, optional: true },
-        { kind: "numberOrText", name: `value${i + 1}` },
+        { kind: "text", name: `key${i + 1}`, optional: true, blank: { words: "no change" } },
+        { kind: "numberOrText", name: `value${i + 1}`, blank: { words: "no change" } },
       ]).flat(),
     ],
     compute: (a) => {
@@ -108,7 +108,7 @@ export const modelsAndUtilities: FunctionDef[] = [
     args: [
       num("value"), z, { kind: "text", name: "quantity", choices: rescaleQuantities },
       { kind: "model", name: "from_model", required: true }, { kind: "model", name: "to_model" },
-      { kind: "text", name: "unit", scalar: true, optional: true },
+      { kind: "text", name: "unit", scalar: true, optional: true, blank: { words: "a unit without h" } },
     ],
     compute: (a) => rescaledValue(n(a, "value"), n(a, "z"), a.quantity as RescaleQuantity, a.from_model as Cosmology, a.to_model as Cosmology, a.unit as string),
   },

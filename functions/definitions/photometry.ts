@@ -29,10 +29,12 @@ import {
 import { CellError } from "../cellError.js";
 import type { Args, FunctionDef } from "../FunctionDef.js";
 import { messages } from "../messages.js";
-import { num, amount, mag, model, unit, z, optionalAlpha, isGiven, optionalText, m, n, inSpectralOrPowerUnit } from "./argumentKinds.js";
+import { num, amount, mag, model, unit, z, optionalAlpha, isGiven, m, n, inSpectralOrPowerUnit, bandUnit, fluxDensityUnit, spectralOutUnit, textOr } from "./argumentKinds.js";
 
 /** The optional wavelength [Å] of a per-wavelength flux density (MAG_AB, FLUX_AB): NaN when not given. */
-const fluxDensityWavelength = num("wavelength", { default: Number.NaN, blankMeansDefault: true, min: 0, minExclusive: true });
+const fluxDensityWavelength = num("wavelength", {
+  default: Number.NaN, blankMeansDefault: true, min: 0, minExclusive: true, unit: "Angstrom", blank: { words: "needed only with a unit per wavelength" },
+});
 
 /** The last flux-density unit and wavelength read, and their factor (a column in one unit at one band). */
 let lastFactor = { text: "Jy", wavelength: Number.NaN, factor: 1 };
@@ -42,7 +44,7 @@ let lastFactor = { text: "Jy", wavelength: Number.NaN, factor: 1 };
  * wavelength (f_ν = f_λ λ²/c). Blank is Jy; "MJy" is refused as for every flux-density unit.
  */
 function unitFactorJy(a: Args): number {
-  const text = (a.unit as string) || "Jy";
+  const text = textOr(a, fluxDensityUnit);
   const wavelength = n(a, "wavelength");
   if (text === lastFactor.text && Object.is(wavelength, lastFactor.wavelength)) return lastFactor.factor;
   if (/(^|[^A-Za-z])MJy(?![A-Za-z])/.test(text)) throw new CellError("value", messages.megajansky("unit", text));
@@ -91,13 +93,13 @@ export const photometry: FunctionDef[] = [
   },
   {
     name: "MAG_AB",
-    args: [num("flux_density", { min: 0, minExclusive: true }), optionalText("unit"), fluxDensityWavelength],
+    args: [num("flux_density", { min: 0, minExclusive: true }), fluxDensityUnit, fluxDensityWavelength],
     compute: (a) => abMagnitude(n(a, "flux_density") * unitFactorJy(a)),
     kernel: { arg: "flux_density", of: (a, x) => abMagnitude(x * unitFactorJy(a)) },
   },
   {
     name: "FLUX_AB",
-    args: [mag("m_ab"), optionalText("unit"), fluxDensityWavelength],
+    args: [mag("m_ab"), fluxDensityUnit, fluxDensityWavelength],
     compute: (a) => abFluxDensityJy(n(a, "m_ab")) / unitFactorJy(a),
     kernel: { arg: "m_ab", of: (a, x) => abFluxDensityJy(x) / unitFactorJy(a) },
   },
@@ -105,10 +107,10 @@ export const photometry: FunctionDef[] = [
     name: "LUMINOSITY_REST",
     args: [
       amount("flux_density"), z, num("alpha"), num("observed"), num("rest"), model,
-      optionalText("band_unit"), unit("in_unit", "Jy", "Jy", "flux_density"), optionalText("out_unit"),
+      bandUnit, unit("in_unit", "Jy", "Jy", "flux_density"), spectralOutUnit,
     ],
     compute: (a) => {
-      const band = (a.band_unit as string) || "GHz";
+      const band = textOr(a, bandUnit);
       const restHz = frequencyHz(n(a, "rest"), band, "rest");
       const lnu = restFrameSpectralLuminosityWHz(
         m(a), n(a, "flux_density") * janskySI, n(a, "z"), n(a, "alpha"), frequencyHz(n(a, "observed"), band, "observed"), restHz,

@@ -34,7 +34,7 @@ export const positions: FunctionDef[] = [
     args: [
       num("degrees", { sexagesimal: "either" }),
       { kind: "text", name: "part", choices: parts },
-      num("decimals", { default: Number.NaN, blankMeansDefault: true, min: 0, max: { value: 9, what: "nine decimals" } }),
+      num("decimals", { default: Number.NaN, blankMeansDefault: true, min: 0, max: { value: 9, what: "nine decimals" }, blank: { words: "2 for ra (0.01 s), 1 for dec (0.1″)" } }),
     ],
     compute: (a) => {
       const decimals = n(a, "decimals");

@@ -16,17 +16,21 @@ import {
   hubbleDistanceAtMpc,
   lensingCoordinates,
   type LensingCoordinates,
+  NoSolutionError,
   soundHorizonDragMpc,
   volumeAveragedDistanceMpc,
 } from "../../core/index.js";
 import type { Args, ArgSpec, FunctionDef } from "../FunctionDef.js";
-import { amount, m, model, n, num, unit, z } from "./argumentKinds.js";
+import { messages } from "../messages.js";
+import { amount, m, model, n, num, textOr, textWithDefault, unit, z } from "./argumentKinds.js";
 
 const definition: ArgSpec = { kind: "text", name: "definition" };
 const def = (a: Args) => a.definition as string;
 /** How massive neutrinos enter the growth: "smooth" (blank) or "clustering". */
-const neutrinos: ArgSpec = { kind: "text", name: "neutrinos", choices: growthNeutrinoConventions, scalar: true, optional: true };
-const nu = (a: Args) => ((a.neutrinos as string) || "smooth") as GrowthNeutrinos;
+const neutrinos = textWithDefault("neutrinos", "smooth", { choices: growthNeutrinoConventions, scalar: true });
+const nu = (a: Args) => textOr(a, neutrinos) as GrowthNeutrinos;
+/** Σ_cr per physical (blank) or comoving area. */
+const coordinates = textWithDefault("coordinates", "physical", { choices: lensingCoordinates, scalar: true });
 
 /** Structure functions, in the order of their declarations. */
 export const structure: FunctionDef[] = [
@@ -45,12 +49,16 @@ export const structure: FunctionDef[] = [
   {
     name: "SOUND_HORIZON",
     args: [model, unit("unit", "Mpc")],
-    compute: (a) => soundHorizonDragMpc(m(a)),
+    compute: (a) => {
+      // the core refuses a model without Ob too; here the message can show the model the cell names
+      if (!Number.isFinite(m(a).Ob)) throw new NoSolutionError(messages.soundHorizonNeedsOb(m(a).spec));
+      return soundHorizonDragMpc(m(a));
+    },
   },
   {
     name: "SIGMA_CRIT",
-    args: [num("z_lens"), num("z_source"), model, unit("unit", "Msun/pc2"), { kind: "text", name: "coordinates", choices: lensingCoordinates, scalar: true, optional: true }],
-    compute: (a) => criticalSurfaceDensityMsunPc2(m(a), n(a, "z_lens"), n(a, "z_source"), ((a.coordinates as string) || "physical") as LensingCoordinates),
+    args: [num("z_lens"), num("z_source"), model, unit("unit", "Msun/pc2"), coordinates],
+    compute: (a) => criticalSurfaceDensityMsunPc2(m(a), n(a, "z_lens"), n(a, "z_source"), textOr(a, coordinates) as LensingCoordinates),
   },
   {
     name: "OVERDENSITY",

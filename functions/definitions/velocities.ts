@@ -20,21 +20,35 @@ import {
 } from "../../core/index.js";
 import type { Args, ArgSpec, FunctionDef } from "../FunctionDef.js";
 import { messages } from "../messages.js";
-import { n, num, optionalText, unit } from "./argumentKinds.js";
+import { n, num, optionalText, textOr, textWithDefault, unit } from "./argumentKinds.js";
 
 /** A redshift of a source that may be blueshifted: > −1. */
 const anyRedshift = (name: string) => num(name, { min: -1, minExclusive: true });
 /** The Doppler convention: blank means "optical" (cz). */
-const convention: ArgSpec = { kind: "text", name: "convention", choices: dopplerConventions, optional: true };
-const conventionOf = (a: Args) => (a.convention as DopplerConvention | undefined) ?? "optical";
+const convention = textWithDefault("convention", "optical", { choices: dopplerConventions });
+const conventionOf = (a: Args) => textOr(a, convention) as DopplerConvention;
 
-/** Each rest-frame quantity's unit of reference (any unit of the same kind may be given) and examples for messages. */
-const kindOf: Record<RestFrameQuantity, { unit: string; examples: string }> = {
-  wavelength: { unit: "Angstrom", examples: "a length (Angstrom, nm, um)" },
-  frequency: { unit: "GHz", examples: "a frequency (GHz, MHz, Hz)" },
-  duration: { unit: "d", examples: "a time (d, s, yr)" },
-  equivalent_width: { unit: "Angstrom", examples: "a length (Angstrom, nm)" },
+/**
+ * Each rest-frame quantity's units of reference (any unit of the same kind as one of them may be given)
+ * and examples for messages. A photon energy E = hν moves as its frequency, and so does an equivalent
+ * width in energy (X-ray lines in eV): both go with "frequency".
+ */
+const kindOf: Record<RestFrameQuantity, { units: readonly string[]; examples: string }> = {
+  wavelength: { units: ["Angstrom"], examples: "a length (Angstrom, nm, um)" },
+  frequency: { units: ["GHz", "keV"], examples: "a frequency (GHz, MHz, Hz) or a photon energy (keV, eV)" },
+  duration: { units: ["d"], examples: "a time (d, s, yr)" },
+  equivalent_width: { units: ["Angstrom"], examples: "a length (Angstrom, nm)" },
 };
+
+/** Why a unit does not convert to `reference` ("" when it does). */
+function whyNot(unit: string, reference: string): string {
+  try {
+    conversionFactor(unit, reference);
+    return "";
+  } catch (e) {
+    return (e as Error).message;
+  }
+}
 
 /** The last unit checked against a quantity, so a column of one quantity checks its unit once. */
 let lastChecked = { unit: "", quantity: "" };
@@ -44,17 +58,20 @@ function checkUnit(a: Args): RestFrameQuantity {
   const quantity = a.quantity as RestFrameQuantity;
   const text = a.unit as string;
   if (text && (text !== lastChecked.unit || quantity !== lastChecked.quantity)) {
-    try {
-      conversionFactor(text, kindOf[quantity].unit);
-    } catch (e) {
-      throw new TypeError(messages.unitArgument("unit", `${(e as Error).message}; a ${quantity.replace("_", " ")} takes ${kindOf[quantity].examples}`));
+    const { units, examples } = kindOf[quantity];
+    const reasons = units.map((u) => whyNot(text, u));
+    if (reasons.every(Boolean)) {
+      const article = quantity === "equivalent_width" ? "an" : "a";
+      const what = quantity === "equivalent_width" ? "an equivalent width in energy" : "a photon energy";
+      const energy = quantity !== "frequency" && !whyNot(text, "keV") ? `; ${what} scales as a frequency: give quantity "frequency"` : "";
+      throw new TypeError(messages.unitArgument("unit", `${reasons[0]}; ${article} ${quantity.replace("_", " ")} takes ${examples}${energy}`));
     }
     lastChecked = { unit: text, quantity };
   }
   return quantity;
 }
 
-const restFrameArgs: ArgSpec[] = [num("value"), anyRedshift("z"), { kind: "text", name: "quantity", choices: restFrameQuantities }, optionalText("unit")];
+const restFrameArgs: ArgSpec[] = [num("value"), anyRedshift("z"), { kind: "text", name: "quantity", choices: restFrameQuantities }, optionalText("unit", { words: "not checked: the value keeps its own unit" })];
 
 /** Velocity and rest-frame functions, in the order of their declarations. */
 export const velocities: FunctionDef[] = [

@@ -11,6 +11,8 @@
     // notes and threaded comments on cells: { address, text }, some possibly crafted by a test
     notes: init.notes ? init.notes.slice() : [],
     comments: init.comments ? init.comments.slice() : [],
+    // how many comments each load of a sheet's comments read
+    commentReads: [],
     // charts the pane inserted: type, source, titles, position and series (name, x and y ranges)
     charts: [],
     handlers: [],
@@ -268,15 +270,32 @@
           };
         },
       },
-      comments: {
-        load() { return this; },
-        get items() {
-          return fake.comments.filter((c) => (parse(c.address).sheet || name) === name).map((c) => ({
-            content: c.text,
-            getLocation() { return { address: c.address, load() { return this; } }; },
-            delete() { fake.comments.splice(fake.comments.indexOf(c), 1); },
-          }));
-        },
+      // the sheet's comments: all of them, or a page ($top, $skip: CollectionLoadOptions, @types/office-js);
+      // each load records how many comments it read in __fake.commentReads
+      comments: sheetComments(name),
+    };
+  }
+  // a sheet's comment collection (only the members Excel.CommentCollection declares; the page loaded is kept aside)
+  function sheetComments(name) {
+    let page = null;
+    const onSheet = () => fake.comments.filter((c) => (parse(c.address).sheet || name) === name);
+    const listed = () => {
+      const all = onSheet();
+      return page ? all.slice(page.skip, page.top === undefined ? undefined : page.skip + page.top) : all;
+    };
+    return {
+      load(options) {
+        page = options && typeof options === "object" ? { top: options.$top, skip: options.$skip || 0 } : null;
+        fake.commentReads.push(listed().length);
+        return this;
+      },
+      getCount() { return { value: onSheet().length }; },
+      get items() {
+        return listed().map((c) => ({
+          content: c.text,
+          getLocation() { return { address: c.address, load() { return this; } }; },
+          delete() { fake.comments.splice(fake.comments.indexOf(c), 1); },
+        }));
       },
     };
   }

@@ -294,6 +294,51 @@ describe.runIf(browserAvailable())("a crafted shared workbook against the pane",
     await page.close();
   });
 
+  test("Replace with values asks each reference's size before reading it: a whole column and a name over 1,200,000 cells are not read", async () => {
+    const sheets = {
+      Sheet1: {
+        A1: { value: 0.5 },
+        B1: { formula: "=ZC.DIST_LUM(A:A)", value: 2919.6 },
+        C1: { formula: "=ZC.DIST_LUM(BigData)", value: 2919.6 },
+        D1: { formula: '=ZC.DIST_LUM(A1,"W9-ALL")', value: 2951.2 },
+      },
+    };
+    const page = await openPane(host, { settings: {}, sheets, selection: "Sheet1!B1:D1", names: { BigData: "Sheet1!A1:B600000" } });
+    await page.getByRole("tab", { name: "Values" }).click();
+    await page.evaluate("window.__fake.reads.length = 0");
+    await page.locator("#freeze").click();
+    await expect.poll(() => page.locator("#freeze-confirm-text").textContent()).toMatch(/^Replace 3 ZC formulas by their values/);
+    // before: one request of 1,048,576 cells for A:A and one of 1,200,000 for BigData
+    const reads = (await fakeState(page, "reads")) as number[];
+    expect(Math.max(...reads)).toBeLessThanOrEqual(100_000);
+    await page.locator("#freeze-go").click();
+    await expect.poll(() => page.locator("#freeze-status").textContent()).toMatch(/^Replaced 3 cells with values/);
+    const notes = (await fakeState(page, "notes")) as { address: string; text: string }[];
+    expect(notes.map((n) => /\nModel: (.*)/.exec(n.text)?.[1])).toEqual(["P18-CMB", "P18-CMB", "W9-ALL"]);
+    expect(page.errors).toEqual([]);
+    await page.close();
+  });
+
+  test("Apply counts the ZC formulas of a sheet spanning A1:XFD200 in chunks, never all at once, and says where it did not count", async () => {
+    const sheets = { Big: { A1: { value: 1 }, XFD200: { value: "far" } }, Sheet1: { A1: { formula: "=ZC.AGE()", value: 13.8 } } };
+    const page = await openPane(host, { settings: {}, sheets, selection: "Sheet1!A1" });
+    // the repair scan at the start reads Big in chunks too: let it end first
+    await expect.poll(() => page.locator("#repair-text").textContent(), { timeout: 60_000 }).toMatch(/Not every cell was looked at: Big/);
+    await page.evaluate("window.__fake.reads.length = 0");
+    await page.selectOption("#preset", "W9-ALL");
+    await page.locator("#apply").click();
+    await expect.poll(() => page.locator("#apply-status").textContent(), { timeout: 60_000 }).toBe(
+      "Applied W9-ALL; the workbook recalculated (1 ZC formula counted). Not every cell was looked at: Big scanned rows 1–64 of A1:XFD200 only (the first 1,048,576 cells).",
+    );
+    // before: one request of 3,276,800 cells (the whole used range)
+    const reads = (await fakeState(page, "reads")) as number[];
+    expect(Math.max(...reads)).toBeLessThanOrEqual(50_000);
+    expect(reads.reduce((a, b) => a + b, 0)).toBeLessThanOrEqual(1_048_577);
+    expect(await fakeState(page, "calculations")).toEqual(["Full"]);
+    expect(page.errors).toEqual([]);
+    await page.close();
+  });
+
   test("Apply says exactly what happened when the model was stored but Excel did not recalculate", async () => {
     const page = await openPane(host, { settings: {}, sheets: {}, calculateFails: true });
     await page.selectOption("#preset", "W9-ALL");

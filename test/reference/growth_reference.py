@@ -13,7 +13,10 @@ The neutrino integrals (energy density and ρ − 3P, Fermi–Dirac, relative to
 use Gauss–Legendre panels in plain floats, checked against mpmath.quad (Debian python3-mpmath) at
 start-up to 1e-13.
 
-Reads JSON from stdin: {"models": [{"id", "H0", "Om", "Tcmb", "Neff", "mnu": [eV ...]}] (flat, Λ),
+Dark energy: w(a) = w0 + wa (1 − a), ρ_DE ∝ a^(−3(1 + w0 + wa)) exp(−3 wa (1 − a)) (Chevallier & Polarski
+2001; Linder 2003, PRL 90, 091301, eq. 3), w0 = −1 and wa = 0 (Λ) unless given.
+
+Reads JSON from stdin: {"models": [{"id", "H0", "Om", "Tcmb", "Neff", "mnu": [eV ...], "w0"?, "wa"?}] (flat),
 "z": [...], "conventions": ["smooth", "clustering"]} and writes {id: {convention: {"d": [D(z)/D(0)],
 "f": [dlnD/dlna]}}}. Constants: SI 2019 exact values, CODATA 2018 G and k_B, IAU 2012/2015 au and pc.
 """
@@ -111,10 +114,14 @@ def background(m):
     o_nu_today = sum(one_species * rho(y) for y in y0)
     o_cold = m["Om"] - o_nu_today
     o_lambda = 1 - m["Om"] - o_rad
+    w0, wa = m.get("w0", -1.0), m.get("wa", 0.0)
+
+    def dark_energy(a):
+        return o_lambda * math.exp(-3 * (1 + w0 + wa) * math.log(a) - 3 * wa * (1 - a))
 
     def e(a):
         nu = sum(rho(y * a) for y in y0) * one_species / a**4
-        return math.sqrt(o_cold / a**3 + o_rad / a**4 + nu + o_lambda)
+        return math.sqrt(o_cold / a**3 + o_rad / a**4 + nu + dark_energy(a))
 
     def source(a, clustering):
         s = o_cold / a**3
