@@ -231,4 +231,19 @@ describe("neutrino edge cases against the slow path", () => {
     const m = new Cosmology({ ...lcdmParameters, H0: 70, Om: 1, mnu: [0, 0] });
     for (const z of [0.5, 3, 1e4, 1e8]) expectRelative(m.comovingDistanceMpc(z), 2 * m.hubbleDistanceMpc * -Math.expm1(-0.5 * Math.log1p(z)), 1e-12, `z=${z}`);
   });
+
+  test("with radiation, a species listed with a mass of 0 is a massless one (counted in Ω_r, not in Ω_m)", () => {
+    // the core takes masses ≥ 0 (the spec parser drops zeros before, so only a caller of the core
+    // gives one): mnu = [0.06, 0, 0] is one massive species and two massless ones, as mnu = [0.06]
+    const listed = new Cosmology({ ...lcdm, H0: 67.66, Om: 0.3111, mnu: [0.06, 0, 0] });
+    const one = new Cosmology({ ...lcdm, H0: 67.66, Om: 0.3111, mnu: [0.06] });
+    // Ω_r = Ω_γ (1 + (2/3) N_eff (7/8)(4/11)^{4/3}): two of the three species massless, each (7/8)(4/11)^{4/3}
+    // of the photons' density per unit of N_eff/3 (the relic-neutrino temperature T_ν = (4/11)^{1/3} T_γ; common practice)
+    expectRelative(listed.Or, listed.Ogamma * (1 + (2 / 3) * 3.046 * (7 / 8) * (4 / 11) ** (4 / 3)), 1e-12, "Ω_r");
+    expect(listed.OnuMassive).toBe(one.OnuMassive);
+    for (const z of [0, 1, 1e3, 1e6]) {
+      expect(listed.expansionRate(z), `E z=${z}`).toBe(one.expansionRate(z));
+      expect(listed.densityParameter("radiation", z), `Ω_r(z) z=${z}`).toBe(one.densityParameter("radiation", z));
+    }
+  });
 });

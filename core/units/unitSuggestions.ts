@@ -6,6 +6,7 @@
  * the FITS symbol (`tradeSpelling`). Any other unit that does not parse gets the nearest spellings
  * astronomers use (`nearestUnits`), or the same with "/" where the word "per" was typed (`slashForPer`).
  */
+import { editDistance } from "./editDistance.js";
 
 /** Symbols that parse but are almost surely a trade unit in the wrong case: symbol → what was meant. */
 const caseSlips: Readonly<Record<string, { meant: string; reads: string }>> = {
@@ -75,17 +76,6 @@ const sameUnit: Readonly<Record<string, string>> = { Lsun: "solLum", solLum: "Ls
 /** Lower case without spaces, underscores or a plural s on erg. */
 function loose(text: string): string {
   return text.toLowerCase().replace(/[\s_]/g, "").replace(/ergs/g, "erg");
-}
-
-/** Levenshtein distance (insertions, deletions, substitutions). */
-function editDistance(a: string, b: string): number {
-  let previous = Array.from({ length: b.length + 1 }, (_, j) => j);
-  for (let i = 1; i <= a.length; i++) {
-    const row = [i];
-    for (let j = 1; j <= b.length; j++) row[j] = Math.min(previous[j] + 1, row[j - 1] + 1, previous[j - 1] + (a[i - 1] === b[j - 1] ? 0 : 1));
-    previous = row;
-  }
-  return previous[b.length];
 }
 
 /** How many times "/" occurs in a text. */
