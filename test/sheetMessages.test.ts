@@ -32,11 +32,18 @@ const table = (rows: Row[]) =>
 const keys = "H0, Om, OL, Ok, Ob, w0, wa, Tcmb, Neff, mnu";
 
 describe("h70 and other powers of h a unit cannot mean", () => {
+  // the survey notations of h scaled to H0 = 70 (common practice): the same fix as h70, never "did you mean Mpc/h?"
+  const survey = (written: string) => `zcell's h is H0/100 (as in Mpc/h), and ${written} is not a unit zcell reads: give the values in a unit without h (e.g. Mpc) and the model`;
   const h70 = `zcell's h is H0/100 (as in Mpc/h), and "h70" would be h to the power 70; h70 = H0/70 is not a unit zcell reads: give the values in a unit without h (e.g. Mpc) and the model`;
   table([
     [["DIST_LUM", 0.5, null, "Mpc/h70"],   "value", `ZC.DIST_LUM: unit: "Mpc/h70": ${h70}`],
     [["CONVERT", 1, "Mpc/h70", "Mpc"],     "value", `ZC.CONVERT: from: "Mpc/h70": ${h70}`],
     [["DIST_LUM", 0.5, null, "h70-1 Mpc"], "value", `ZC.DIST_LUM: unit: "h70-1 Mpc": ${h70}`],
+    [["CONVERT", 1, "Mpc/h_70", "Mpc"],    "value", `ZC.CONVERT: from: "Mpc/h_70": ${survey('"h_70" = H0/70')}`],
+    [["CONVERT", 1, "Mpc h_70^-1", "Mpc"], "value", `ZC.CONVERT: from: "Mpc h_70^-1": ${survey('"h_70" = H0/70')}`],
+    [["CONVERT", 1, "Mpc/h0.7", "Mpc"],    "value", `ZC.CONVERT: from: "Mpc/h0.7": ${survey('"h0.7" = H0/70')}`],
+    [["CONVERT", 1, "Mpc/(h/0.7)", "Mpc"], "value", `ZC.CONVERT: from: "Mpc/(h/0.7)": ${survey('"h/0.7" = H0/70')}`],
+    [["DIST_LUM", 0.5, null, "Mpc/h_70"],  "value", `ZC.DIST_LUM: unit: "Mpc/h_70": ${survey('"h_70" = H0/70')}`],
     [["DIST_LUM", 0.5, null, "Mpc/h100"],  "value", 'ZC.DIST_LUM: unit: "Mpc/h100": zcell\'s h is already H0/100, and "h100" would be h to the power 100: write "Mpc/h"'],
     [["DIST_LUM", 0.5, null, "(Mpc/h)4"],  "value", 'ZC.DIST_LUM: unit: "(Mpc/h)4": h to the power -4: h-scaled units carry h to a power from -3 to 3 (h3 Mpc-3)'],
     [["CONVERT", 1, "h-1Msun", "Msun"],    "value", 'ZC.CONVERT: from: "h-1Msun": put a space after the power, as in "h-1 Msun"'],

@@ -128,6 +128,11 @@ function isDigit(code: number): boolean {
   return code >= 48 && code <= 57;
 }
 
+/** After `h`: "_" and any number ("h_70"), or a decimal number ("h0.7"), a survey's h scaled to H0 = 70. */
+const surveyH = /(_)([\d.]*)|()(\d*\.\d+)/y;
+/** The number after "h/" ("0.7" of "h/0.7"). */
+const surveyNumber = /[\d.]+/y;
+
 class UnitParser {
   private i = 0;
   private depth = 0;
@@ -211,11 +216,18 @@ class UnitParser {
       while (this.i < this.s.length && isSymbolLetter(this.s.charCodeAt(this.i))) this.i++;
       if (this.i === start) {
         if (c === "") this.fail("a unit is missing");
+        if (isDigit(c.charCodeAt(0)) && /(?:^|[^A-Za-z])h *\/ *$/.test(this.s.slice(Math.max(0, start - 8), start))) {
+          // "h/0.7": h in units of 0.7, i.e. H0/70
+          surveyNumber.lastIndex = start;
+          const value = surveyNumber.exec(this.s)![0];
+          this.failSurveyH(`h/${value}`, Number(value));
+        }
         this.unexpected();
       }
       const typed = this.s.slice(start, this.i);
       const symbol = typed.replace(/^[µμ]/, "u");
       if (symbol === "h") {
+        this.hSurveyNotation();
         if (isDigit(this.s.charCodeAt(this.i))) this.hWithDigits(start);
         base = { factor: 1, dimensions: [...none, 1] };
       } else {
@@ -226,6 +238,32 @@ class UnitParser {
     }
     const power = this.power();
     return power === 1 ? base : { factor: base.factor ** power, dimensions: base.dimensions.map((x) => x * power) };
+  }
+
+  /**
+   * `h` followed by "_" ("h_70") or by a decimal number ("h0.7"): a survey's h scaled to H0 = 70,
+   * which zcell does not read (its h is H0/100), refused with the same fix as h70.
+   */
+  private hSurveyNotation(): void {
+    surveyH.lastIndex = this.i;
+    const match = surveyH.exec(this.s);
+    if (!match) return;
+    const underscore = match[1] !== undefined;
+    const value = underscore ? match[2] : match[4];
+    this.failSurveyH(`h${underscore ? "_" : ""}${value}`, Number(value));
+  }
+
+  /**
+   * A survey's h refused (zcell's h is H0/100): `written` as typed, `scale` the number in it, an H0
+   * ("h_70": H0/70) or, below 10, a fraction of 100 km/s/Mpc ("h0.7", "h/0.7": H0/70).
+   */
+  private failSurveyH(written: string, scale: number): never {
+    const per = scale < 10 ? 100 * scale : scale;
+    const as = Number.isFinite(per) && per > 0 && per !== 100 ? ` = H0/${Number(per.toPrecision(6))}` : "";
+    this.fail(
+      `zcell's h is H0/100 (as in Mpc/h), and ${quoted(written)}${as} is not a unit zcell reads: give the values in a unit without h (e.g. Mpc) and the model`,
+      true,
+    );
   }
 
   /** `h` followed at once by digits: a power of h up to 3 ("h3 Mpc-3"); h70 or h100 is the survey notation H0/70, H0/100, which zcell does not read as such. */
