@@ -63,9 +63,18 @@ describe("the trade's spellings FITS does not read get the FITS symbol", () => {
     [["CONVERT", 1, "nm", "Å"],                      "value", 'ZC.CONVERT: to: "Å" is not FITS for the ångström: write "Angstrom"'],
     [["CONVERT", 1, "micron", "nm"],                 "value", 'ZC.CONVERT: from: "micron" is not FITS for the micrometre: write "um"'],
     [["CONVERT", 1, "hours", "s"],                   "value", 'ZC.CONVERT: from: "hours" is not a FITS unit: write h for hours of time, or hourangle for hours of right ascension'],
+    // square degrees as the trade writes them (common practice); FITS writes deg2 (FITS 4.0 §4.3, a power after the symbol)
+    [["VOLUME_SHELL", 0.1, 0.2, 100, null, null, "sqdeg"],  "value", 'ZC.VOLUME_SHELL: area_unit: "sqdeg" is not FITS for the square degree: write "deg2"'],
+    [["VOLUME_SHELL", 0.1, 0.2, 100, null, null, "sq.deg"], "value", 'ZC.VOLUME_SHELL: area_unit: "sq.deg" is not FITS for the square degree: write "deg2"'],
+    [["CONVERT", 1, "Mpc3/sq deg", "Mpc3/sr"],       "value", 'ZC.CONVERT: from: "Mpc3/sq deg": "sq deg" is not FITS for the square degree: write "Mpc3/deg2"'],
+    [["CONVERT", 1, "sqarcmin", "sr"],               "value", 'ZC.CONVERT: from: "sqarcmin" is not FITS for the square arcminute: write "arcmin2"'],
     [["REDSHIFT_CMB", 0.01, 12, 30, "hours"],        "value", 'ZC.REDSHIFT_CMB: angle_unit: "hours" is hours of time, not an angle: for a right ascension in hours use "hourangle"'],
     [["REDSHIFT_CMB", 0.01, 12, 30, "h"],            "value", 'ZC.REDSHIFT_CMB: angle_unit: "h" is hours of time, not an angle: for a right ascension in hours use "hourangle"'],
   ]);
+
+  test("deg^2 is the square degree, as deg2 is (FITS 4.0 §4.3: ^ before a power)", () => {
+    expect(one("VOLUME_SHELL", 0.1, 0.2, 100, null, null, "deg^2")).toBe(one("VOLUME_SHELL", 0.1, 0.2, 100, null, null, "deg2"));
+  });
 
   test("one hour angle is exactly 15° (360° a day of 24 hours, common practice)", () => {
     expect(one("CONVERT", 1, "hourangle", "deg")).toBe(15);

@@ -47,6 +47,11 @@ const tradeSpellings: ReadonlyMap<string, TradeSpelling> = new Map([
   ["angstroms", forAngstrom],
   ["micron", forMicrometre],
   ["microns", forMicrometre],
+  // square angles as the trade writes them (common practice); FITS writes a power after the symbol
+  ["sqdeg", { reads: "is not FITS for the square degree", write: "deg2" }],
+  ["sqdegs", { reads: "is not FITS for the square degree", write: "deg2" }],
+  ["sqarcmin", { reads: "is not FITS for the square arcminute", write: "arcmin2" }],
+  ["sqarcsec", { reads: "is not FITS for the square arcsecond", write: "arcsec2" }],
   ["hour", forHours],
   ["hours", forHours],
   ["hr", forHours],

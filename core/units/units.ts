@@ -286,7 +286,10 @@ class UnitParser {
   /** A symbol's definition (with a prefix, an alias), or the reason it has none: a case slip, a trade spelling, a magnitude, unknown. */
   private resolve(symbol: string, typed: string, start: number): { factor: number; dimensions: Dimensions } {
     const whole = this.s;
-    const replaced = (by: string) => `${whole.slice(0, start)}${by}${whole.slice(start + typed.length)}`;
+    // "sq.deg", "sq deg": the trade's square degree in two symbols, read as one trade spelling
+    const square = symbol === "sq" ? /^[. *]?(deg|arcmin|arcsec)s?(?![A-Za-z\d^*])/.exec(whole.slice(start + 2, start + 12)) : null;
+    const length = square ? 2 + square[0].length : typed.length;
+    const replaced = (by: string) => `${whole.slice(0, start)}${by}${whole.slice(start + length)}`;
     const slip = caseSlip(symbol);
     if (slip) {
       this.fixed = true;
@@ -301,11 +304,12 @@ class UnitParser {
         if (def?.prefixable) return { factor: prefixes[prefix] * def.factor, dimensions: def.dimensions };
       }
     }
-    const trade = tradeSpelling(typed);
+    const trade = tradeSpelling(square ? `sq${square[1]}` : typed);
     if (trade) {
       this.fixed = true;
-      const what = `${quoted(typed)} ${trade.reads}${trade.write === undefined ? "" : `: write ${quoted(replaced(trade.write))}`}`;
-      throw new TypeError(typed === whole ? what : `${quoted(whole)}: ${what}`);
+      const spelled = whole.slice(start, start + length);
+      const what = `${quoted(spelled)} ${trade.reads}${trade.write === undefined ? "" : `: write ${quoted(replaced(trade.write))}`}`;
+      throw new TypeError(spelled === whole ? what : `${quoted(whole)}: ${what}`);
     }
     if (symbol === "mag") {
       this.fixed = true;
