@@ -108,6 +108,10 @@ describe("model specs: the fix for what was typed", () => {
     [["DIST_LUM", 1, "P18-CMB; mnu=0.06 eV"],   "value", 'ZC.DIST_LUM: model: mnu: "0.06 eV": give the number alone (mnu is in eV)'],
     [["DIST_LUM", 1, "P18-CMB; Tcmb=2.7 K"],    "value", 'ZC.DIST_LUM: model: Tcmb: "2.7 K": give the number alone (Tcmb is in K)'],
     [["DIST_LUM", 1, "H0: 70; Om: 0.3"],        "value", 'ZC.DIST_LUM: model: "H0: 70": write each key as key=value, e.g. "H0=70"'],
+    [["DIST_LUM", 1, "H0 70; Om 0.3"],          "value", 'ZC.DIST_LUM: model: "H0 70": write each key as key=value, e.g. "H0=70"'],
+    [["DIST_LUM", 1, "P18-CMB; om  0.3"],       "value", 'ZC.DIST_LUM: model: "om  0.3": write each key as key=value, e.g. "Om=0.3"'],
+    [["DIST_LUM", 1, "Planck 18"],              "value", `ZC.DIST_LUM: model: unknown preset "Planck 18": use one of P18-CMB, P18-BAO, P15-EXT, W9-ALL, W7-BAO, DESI2-CMB, DESI2-CMB-PP, DESI2-CMB-U3, DESI2-CMB-DY5, CONCORDANCE, EDS`], // quoted as typed, not "Planck18"
+    [["DIST_LUM", 1, "P18-CMB; x y"],           "value", 'ZC.DIST_LUM: model: "x y" is not key=value (a preset name may only come first)'],
     [["DIST_LUM", 1, "P18-CMB; H0: 73"],        "value", 'ZC.DIST_LUM: model: "H0: 73": write each key as key=value, e.g. "H0=73"'],
     [["DIST_LUM", 1, "P18-CMB; mnu=0,06"],      "value", 'ZC.DIST_LUM: model: mnu: "0,06" reads as two masses, 0 and 06 eV: for one mass write mnu=0.06 (a list is written heaviest first, "0.05,0.01")'],
     [["DIST_LUM", 1, "H0=1e999; Om=0.3"],       "value", 'ZC.DIST_LUM: model: H0: "1e999" is too large a number'],
@@ -231,6 +235,7 @@ describe("a stranger's text is quoted at most 40 characters, with its length", (
     [["GROWTH", 1, null, long("w")],              "value", `ZC.GROWTH: neutrinos: ${quotedLong("w")} is not one of smooth, clustering`],
     [["SIGMA_CRIT", 0.3, 1, null, null, long("v")], "value", `ZC.SIGMA_CRIT: coordinates: ${quotedLong("v")} is not one of physical, comoving`],
     [["COORD_CONVERT", 1, 1, long("u"), "galactic", "lon"], "value", `ZC.COORD_CONVERT: from_frame: ${quotedLong("u")} is not one of equatorial, galactic, supergalactic, ecliptic`],
+    [["DIST_LUM", 1, "per ".repeat(8191) + "pe"], "value", `ZC.DIST_LUM: model: unknown preset "${"per ".repeat(9)}per…" (32,766 characters): use one of P18-CMB, P18-BAO, P15-EXT, W9-ALL, W7-BAO, DESI2-CMB, DESI2-CMB-PP, DESI2-CMB-U3, DESI2-CMB-DY5, CONCORDANCE, EDS`],
     [["DIST_LUM", 1, null, long("q")],            "value", `ZC.DIST_LUM: unit: unknown unit ${quotedLong("q")}`],
     [["DIST_LUM", `${"1".repeat(32766)}x`],       "value", `ZC.DIST_LUM: z: text ${quotedLong("1")} where a number belongs`],
     [["DIST_LUM", 1, null, "(".repeat(16383) + "m" + ")".repeat(16383)], "value", `ZC.DIST_LUM: unit: ${quotedLong("(")}: parentheses nested more than 16 deep`],
