@@ -140,6 +140,12 @@ describe("numbers: in the user's unit, with the likely slip named", () => {
     [["FLUX_AB", 20, "erg/s/cm2/Angstrom"],  "value", 'ZC.FLUX_AB: wavelength is needed with "erg/s/cm2/Angstrom", a flux density per wavelength (f_λ): give it in Angstrom (the last argument), for f_ν = f_λ λ²/c'],
     [["DIST_LUM", "0,5"],                    "value", 'ZC.DIST_LUM: z: text "0,5" is not a number: use a point for decimals, 0.5'],
     [["LUMINOSITY_NU", 1, 0.5, "-0,7"],      "value", 'ZC.LUMINOSITY_NU: alpha: text "-0,7" is not a number: use a point for decimals, -0.7'],
+    [["LUMINOSITY", "1,5e-14", 0.5],         "value", 'ZC.LUMINOSITY: flux: text "1,5e-14" is not a number: use a point for decimals, 1.5e-14'],
+    [["DIST_LUM", "1,000e3"],                "value", 'ZC.DIST_LUM: z: text "1,000e3" is not a number: use a point for decimals, 1.000e3'], // an exponent: not a thousands comma
+    [["DIST_LUM", "1,234.5"],                "value", 'ZC.DIST_LUM: z: text "1,234.5" where a number belongs'], // a thousands comma and a point: no hint
+    // U+2212 MINUS SIGN and U+2013 EN DASH are not U+002D HYPHEN-MINUS (The Unicode Standard, code charts)
+    [["DIST_LUM", "\u22120.5"],              "value", 'ZC.DIST_LUM: z: text "\u22120.5" is not a number: write the minus as the hyphen-minus "-", -0.5'],
+    [["LUMINOSITY_NU", 1, 0.5, "\u20130,7"], "value", 'ZC.LUMINOSITY_NU: alpha: text "\u20130,7" is not a number: write the minus as the hyphen-minus "-" and use a point for decimals, -0.7'],
     [["DIST_LUM", "5%"],                     "value", 'ZC.DIST_LUM: z: text "5%" is not a number: it is a percentage, write 0.05'],
     [["DIST_LUM", "1,000"],                  "value", 'ZC.DIST_LUM: z: text "1,000" is not a number: write 1000 without the thousands comma, or 1.000 for a decimal comma'],
   ]);
