@@ -131,6 +131,8 @@ describe("numbers: in the user's unit, with the likely slip named", () => {
   table([
     [["EXTINCTION", 0.55, 0.1],              "na",  `ZC.EXTINCTION: wavelength = 0.55 Angstrom is outside Fitzpatrick 1999's range, 1150 to 35000 Angstrom: the law is not defined there; if 0.55 is in um, give "um" as wavelength_unit (5th argument)`],
     [["EXTINCTION", 500, 0.1],               "na",  `ZC.EXTINCTION: wavelength = 500 Angstrom is outside Fitzpatrick 1999's range, 1150 to 35000 Angstrom: the law is not defined there; if 500 is in nm, give "nm" as wavelength_unit (5th argument)`],
+    [["EXTINCTION", 5500, 0.1, null, null, "nm"], "na", `ZC.EXTINCTION: wavelength = 5500 nm is outside Fitzpatrick 1999's range, 115 to 3500 nm: the law is not defined there; if 5500 is in Angstrom, give "Angstrom" as wavelength_unit (5th argument)`],
+    [["EXTINCTION", 4000, 0.1, null, null, "nm"], "na", `ZC.EXTINCTION: wavelength = 4000 nm is outside Fitzpatrick 1999's range, 115 to 3500 nm: the law is not defined there`], // 1.14 times the edge: no other unit guessed
     [["EXTINCTION", 1149, 0.1],              "na",  `ZC.EXTINCTION: wavelength = 1149 Angstrom is outside Fitzpatrick 1999's range, 1150 to 35000 Angstrom: the law is not defined there`], // just past the edge: no other unit guessed
     [["ANGLE", 30, 0],                       "num", "ZC.ANGLE: z = 0 puts the source at zero distance: give z > 0"],
     [["ANGLE", 1e9, 0.001, null, "pc"],      "num", "ZC.ANGLE: size = 1000000000 pc at z = 0.001 would subtend more than 180°: at most 13964700 pc (π D_A) there"],
