@@ -68,6 +68,12 @@ describe("the trade's spellings FITS does not read get the FITS symbol", () => {
     [["VOLUME_SHELL", 0.1, 0.2, 100, null, null, "sq.deg"], "value", 'ZC.VOLUME_SHELL: area_unit: "sq.deg" is not FITS for the square degree: write "deg2"'],
     [["CONVERT", 1, "Mpc3/sq deg", "Mpc3/sr"],       "value", 'ZC.CONVERT: from: "Mpc3/sq deg": "sq deg" is not FITS for the square degree: write "Mpc3/deg2"'],
     [["CONVERT", 1, "sqarcmin", "sr"],               "value", 'ZC.CONVERT: from: "sqarcmin" is not FITS for the square arcminute: write "arcmin2"'],
+    // km/s and a reciprocal as the trade writes them (common practice); FITS writes km/s and Gyr-1 (FITS 4.0 §4.3)
+    [["VELOCITY", 0.1, null, "kms"],                 "value", 'ZC.VELOCITY: unit: "kms" is not FITS for kilometres per second: write "km/s"'],
+    [["VELOCITY", 0.1, null, "kms-1"],               "value", 'ZC.VELOCITY: unit: unknown unit "kms" in "kms-1"'], // km s-1 meant: "km/s-1" is not offered
+    [["HUBBLE", 0, null, "1/Gyr"],                   "value", 'ZC.HUBBLE: unit: "1/Gyr": write the reciprocal as a power, "Gyr-1"'],
+    [["HUBBLE", 0, null, "/Gyr"],                    "value", 'ZC.HUBBLE: unit: "/Gyr": write the reciprocal as a power, "Gyr-1"'],
+    [["HUBBLE", 0, null, "/xyz"],                    "value", 'ZC.HUBBLE: unit: "/xyz": unexpected "/"'], // no unit either way: no power offered
     [["REDSHIFT_CMB", 0.01, 12, 30, "hours"],        "value", 'ZC.REDSHIFT_CMB: angle_unit: "hours" is hours of time, not an angle: for a right ascension in hours use "hourangle"'],
     [["REDSHIFT_CMB", 0.01, 12, 30, "h"],            "value", 'ZC.REDSHIFT_CMB: angle_unit: "h" is hours of time, not an angle: for a right ascension in hours use "hourangle"'],
   ]);

@@ -216,6 +216,7 @@ class UnitParser {
       while (this.i < this.s.length && isSymbolLetter(this.s.charCodeAt(this.i))) this.i++;
       if (this.i === start) {
         if (c === "") this.fail("a unit is missing");
+        if (this.i === 0) this.reciprocal();
         if (isDigit(c.charCodeAt(0)) && /(?:^|[^A-Za-z])h *\/ *$/.test(this.s.slice(Math.max(0, start - 8), start))) {
           // "h/0.7": h in units of 0.7, i.e. H0/70
           surveyNumber.lastIndex = start;
@@ -238,6 +239,19 @@ class UnitParser {
     }
     const power = this.power();
     return power === 1 ? base : { factor: base.factor ** power, dimensions: base.dimensions.map((x) => x * power) };
+  }
+
+  /** A whole unit written as a reciprocal, "1/Gyr" or "/Gyr": refused with the power that reads, "Gyr-1". */
+  private reciprocal(): void {
+    const match = /^(?:1 *)?\/ *([A-Za-z]+)$/.exec(this.s);
+    if (!match) return;
+    const power = `${match[1]}-1`;
+    try {
+      parseUnit(power);
+    } catch {
+      return; // not a unit either way: the parse message
+    }
+    this.fail(`write the reciprocal as a power, ${quoted(power)}`, true);
   }
 
   /**
@@ -304,7 +318,9 @@ class UnitParser {
         if (def?.prefixable) return { factor: prefixes[prefix] * def.factor, dimensions: def.dimensions };
       }
     }
-    const trade = tradeSpelling(square ? `sq${square[1]}` : typed);
+    // "kms" alone, not "kms-1" (a power follows: km s-1 is meant, and "km/s-1" would not be it)
+    const glued = typed === "kms" && /^[-+\d^*]/.test(whole.slice(start + 3, start + 4)) ? "kms-" : typed;
+    const trade = tradeSpelling(square ? `sq${square[1]}` : glued);
     if (trade) {
       this.fixed = true;
       const spelled = whole.slice(start, start + length);
