@@ -47,15 +47,49 @@ function domain(spec: Extract<ArgSpec, { kind: "number" }>): string | undefined 
   return undefined;
 }
 
-/** The unit argument that converts `name`, if any. */
-function unitOf(def: FunctionDef, name: string): Extract<ArgSpec, { kind: "unit" }> | undefined {
+/** The unit argument that converts `name`, if any: its name and default. */
+function unitOf(def: FunctionDef, name: string): { name: string; default: string } | undefined {
   for (const spec of def.args) {
-    if (spec.kind !== "unit") continue;
-    const applies = typeof spec.applies === "string" ? [spec.applies] : spec.applies;
-    if (applies.includes(name)) return spec;
+    if (spec.kind === "unit") {
+      const applies = typeof spec.applies === "string" ? [spec.applies] : spec.applies;
+      if (applies.includes(name)) return spec;
+    } else if (spec.kind === "text" && spec.unit?.applies?.includes(name)) {
+      return { name: spec.name, default: textUnitDefault(spec) };
+    }
   }
   return undefined;
 }
+
+/** What a blank text unit stands for, as the help shows it ("" when it is required or has no one value). */
+function textUnitDefault(spec: Extract<ArgSpec, { kind: "text" }>): string {
+  return spec.blank && "typed" in spec.blank ? spec.blank.typed : "";
+}
+
+/**
+ * Where a message's own fix begins: after ": " or "; ", an imperative of our messages ("give …",
+ * "write …", "did you mean …?", "if 0.55 is in um, give …", "for a right ascension in hours use …").
+ */
+const fixStart = /(?:: |; )(?=((?:if [^;:]{1,80}?, )?(?:give|write|use|put|leave|add|check|separate|did you mean|for [^;:]{1,80}? use)\b))/g;
+
+/**
+ * The fix a message names itself, as a sentence, or undefined when it names none. `typed` holds the
+ * texts the formula and its cells gave (a stranger's): a fix never begins inside one, so a cell's own
+ * text quoted in the message ("x: give …") is never shown as our advice.
+ */
+function messageFix(text: string, typed: readonly string[], argument: string | undefined): string | undefined {
+  for (const match of text.matchAll(fixStart)) {
+    // messages quote a text as typed (never in another case): its words appear in it as they do here
+    const lead = text.slice(match.index, match.index + 2 + match[1].search(/\s|$/));
+    if (typed.some((t) => t.includes(lead))) continue;
+    let fix = text.slice(match.index + 2);
+    if (argument) fix = fix.replace(/^give it\b/, `give ${argument}`);
+    return `${fix[0].toUpperCase()}${fix.slice(1)}${/[.?]$/.test(fix) ? "" : "."}`;
+  }
+  return undefined;
+}
+
+/** A number argument's message that says the value is outside the argument's own domain (below its least, above its most, past the pole). */
+const outsideDomain = /must be [<>≤≥]|is above|is beyond/;
 
 const byKind: Record<ErrorKind, string> = {
   value:
@@ -65,14 +99,18 @@ const byKind: Record<ErrorKind, string> = {
 };
 
 /**
- * Advice for an error a ZC function gave.
+ * Advice for an error a ZC function gave: the message's own fix when it names one (the pane then
+ * says what the cell says), else the advice of the argument's kind, never a domain the value meets.
  * @param def the function
  * @param kind the error kind (#VALUE!, #NUM!, #N/A)
  * @param message the error's message as the cell holds it
+ * @param typed the texts the formula and the cells it reads gave (a stranger's), kept out of the advice
  * @returns the argument the message is about, when it names one, and how to fix it
  */
-export function adviseOnError(def: FunctionDef, kind: ErrorKind, message: string): ErrorAdvice {
+export function adviseOnError(def: FunctionDef, kind: ErrorKind, message: string, typed: readonly string[] = []): ErrorAdvice {
   const spec = argumentAtFault(def, message);
+  const own = messageFix(message.replace(new RegExp(`^ZC\\.${escape(def.name)}: `), ""), typed, spec?.name);
+  if (own) return spec ? { argument: spec.name, fix: own } : { fix: own };
   if (!spec) return { fix: byKind[kind] };
   const argument = spec.name;
   switch (spec.kind) {
@@ -87,6 +125,10 @@ export function adviseOnError(def: FunctionDef, kind: ErrorKind, message: string
         fix: `Type a unit in its FITS spelling, case as shown (default "${spec.default}"); the Units section of the help lists them, and the message names the nearest ones.`,
       };
     case "text":
+      if (spec.unit) {
+        const blank = textUnitDefault(spec);
+        return { argument, fix: `Type a unit in its FITS spelling, case as shown${blank ? ` (default "${blank}")` : ""}; the Units section of the help lists them.` };
+      }
       return { argument, fix: spec.choices ? `Use one of: ${spec.choices.join(", ")}.` : byKind[kind] };
     case "number": {
       if (spec.magnitude && /flag|99/.test(message)) {
@@ -102,7 +144,7 @@ export function adviseOnError(def: FunctionDef, kind: ErrorKind, message: string
         };
       }
       if (kind === "value") return { argument, fix: `Give ${argument} a number${inUnit}; text that is not a number is refused.` };
-      if (range) return { argument, fix: `Give ${argument} a value ${range}${inUnit}.` };
+      if (range && outsideDomain.test(message)) return { argument, fix: `Give ${argument} a value ${range}${inUnit}.` };
       if (/^z(?![a-z])/.test(argument)) {
         return { argument, fix: `Give ${argument} a redshift ≥ 0 (> 0 where the result needs the source's distance; a blueshifted source needs a distance that does not come from its redshift).` };
       }

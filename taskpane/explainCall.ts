@@ -319,6 +319,16 @@ function resultUnitOf(
   return typeof own === "function" ? own(text) : own;
 }
 
+/** The texts a call was given, in the formula and in the cells it reads (a stranger's): the error advice keeps them out of its own words. */
+function typedTexts(e: EvaluatedCall): string[] {
+  const texts = e.call.args.filter((text): text is string => typeof text === "string");
+  for (const arg of e.args) {
+    if (!arg.known) continue;
+    for (const row of matrixOf(arg.value) ?? [[arg.value]]) for (const value of row) if (typeof value === "string") texts.push(value);
+  }
+  return texts;
+}
+
 /** A call explained at one cell of its result (`place`), or as a whole when the place is not known. */
 function explainAt(e: EvaluatedCall, at: CellPlace | undefined, active: ActiveModelSetting, cellValue: unknown): CallExplanation {
   const { call, def } = e;
@@ -366,7 +376,7 @@ function explainAt(e: EvaluatedCall, at: CellPlace | undefined, active: ActiveMo
     if (cell instanceof CellError) {
       isError = true;
       result = `${cell.excelText} — ${cell.message}${which}`;
-      const advice = adviseOnError(def, cell.kind, cell.message);
+      const advice = adviseOnError(def, cell.kind, cell.message, typedTexts(e));
       const named = args.find((a) => a.name === advice.argument);
       fault = { ...advice, text: named?.text, value: named?.value };
     } else {

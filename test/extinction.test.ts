@@ -99,7 +99,9 @@ describe("ranges and errors, in the sheet's words", () => {
 
   test.each([
     // arguments                                 kind     message
-    [[5000, 0.1, "Cardeli 1989"],               "value", 'ZC.EXTINCTION: law: "Cardeli 1989" is not one of Fitzpatrick 1999, Cardelli 1989, ODonnell 1994, Calzetti 2000 (case and an apostrophe are ignored)'],
+    [[5000, 0.1, "Cardeli 1989"],               "value", 'ZC.EXTINCTION: law: "Cardeli 1989" is not one of Fitzpatrick 1999, Cardelli 1989, ODonnell 1994, Calzetti 2000 (case, spaces, "_", "-" and an apostrophe are ignored)'],
+    [[5000, 0.1, "Calzetti"],                   "value", 'ZC.EXTINCTION: law: "Calzetti" is not one of Fitzpatrick 1999, Cardelli 1989, ODonnell 1994, Calzetti 2000 (case, spaces, "_", "-" and an apostrophe are ignored): did you mean Calzetti 2000?'],
+    [[5000, 0.1, "o'donnell"],                  "value", 'ZC.EXTINCTION: law: "o\'donnell" is not one of Fitzpatrick 1999, Cardelli 1989, ODonnell 1994, Calzetti 2000 (case, spaces, "_", "-" and an apostrophe are ignored): did you mean ODonnell 1994?'],
     [[5000, -0.1],                              "num",   "ZC.EXTINCTION: ebv = -0.1 must be ≥ 0"],
     [[-5000, 0.1],                              "num",   "ZC.EXTINCTION: wavelength = -5000 Angstrom must be > 0 Angstrom"],
     [[5000, 0.1, "", 0],                        "num",   "ZC.EXTINCTION: r_v = 0 must be > 0"],
@@ -162,6 +164,13 @@ describe("rules that hold for every input", () => {
       }),
     );
     expect(one(5000, 0.1, "O’Donnell 1994")).toBe(one(5000, 0.1, "ODonnell 1994"));
+  });
+
+  test("a law's name is read without its spaces, or with \"_\" or \"-\" for them, as the sheet's other choices are", () => {
+    for (const [typed, l] of [["Calzetti2000", "Calzetti 2000"], ["calzetti_2000", "Calzetti 2000"], ["odonnell1994", "ODonnell 1994"], ["Cardelli-1989", "Cardelli 1989"], ["F itzpatrick 1999", "Fitzpatrick 1999"]] as const) {
+      expect(one(5000, 0.1, typed), typed).toBe(one(5000, 0.1, l));
+    }
+    expect(one(5000, 0.1, "Calzetti2000")).not.toBe(one(5000, 0.1, "Cardelli 1989")); // the laws differ at 5000 Å
   });
 });
 

@@ -166,9 +166,9 @@ describe("model spec text: slips that read as another number, or as nothing", ()
     ["P18-CMB; w0=90%",                    'w0: "90%" is a percentage: write w0 as a plain number'],
     ["Om=31.5%",                           'Om: "31.5%" is a percentage: write the fraction, Om=0.315'],   // the value before the missing H0
     ["H0=70; Om=31,5%",                    `Om: "31,5%" is not a number: use a point for decimals, 31.5%`],
-    ["P18-CMB, H0=73",                     `"P18-CMB,H0=73": separate the parts with ';', e.g. "P18-CMB; H0=73"`],
-    ["H0=70, Om=0.3; OL=0.7",              `"H0=70,Om=0.3": separate the parts with ';', e.g. "H0=70; Om=0.3"`],
-    ["P18-CMB; H0=70, mnu=0.06,0.01",      `"H0=70,mnu=0.06,0.01": separate the parts with ';', e.g. "H0=70; mnu=0.06,0.01"`],
+    ["P18-CMB, H0=73",                     `"P18-CMB, H0=73": separate the parts with ';', e.g. "P18-CMB; H0=73"`],
+    ["H0=70, Om=0.3; OL=0.7",              `"H0=70, Om=0.3": separate the parts with ';', e.g. "H0=70; Om=0.3"`],
+    ["P18-CMB; H0=70, mnu=0.06,0.01",      `"H0=70, mnu=0.06,0.01": separate the parts with ';', e.g. "H0=70; mnu=0.06,0.01"`],
     ["H0=70; Om=0,3",                      `Om: "0,3" is not a number: use a point for decimals, 0.3`],       // a decimal comma is not a separator
     ["H0=73",                              'Om is required (or start from a preset, e.g. "P18-CMB; H0=73")'],
     ["Om=0.3; w0=-0.9",                    'H0 is required (or start from a preset, e.g. "P18-CMB; Om=0.3; w0=-0.9")'],

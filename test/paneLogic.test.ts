@@ -192,9 +192,10 @@ describe("an error explained: the argument at fault and how to fix it", () => {
   const cases: [string, string | undefined, string | undefined, RegExp][] = [
     ["=ZC.DIST_LUM(-0.5)",                                  "z",       "-0.5",        /^Give z a redshift ≥ 0 \(> 0 where the result needs the source's distance/],
     ["=ZC.DIST_BETWEEN(2,1)",                               "z2",      "1",           /^Give z2 a redshift ≥ 0/],
-    ['=ZC.DIST_LUM(1,"H0=70; Om=0; OL=2")',                 "model",   '"H0=70; Om=0; OL=2"', /needs a big bang \(check Om, OL or Ok, w0, wa\)/],
-    ['=ZC.DIST_LUM(1,"P99")',                                "model",   '"P99"',       /^Give a preset name \(ZC.PRESETS\(\) lists them\)/],
-    ['=ZC.DIST_LUM(1,,"mpc")',                              "unit",    '"mpc"',       /FITS spelling, case as shown \(default "Mpc"\)/],
+    ['=ZC.DIST_LUM(1,"H0=70; Om=0; OL=2")',                 "model",   '"H0=70; Om=0; OL=2"', /^Check Om, OL\/Ok, w0, wa\.$/],
+    ['=ZC.DIST_LUM(1,"P99")',                                "model",   '"P99"',       /^Use one of P18-CMB, P18-BAO, .*, EDS\.$/],
+    ['=ZC.DIST_LUM(1,,"mpc")',                              "unit",    '"mpc"',       /^Did you mean Mpc\?$/],
+    ['=ZC.DIST_LUM(1,,"furlong")',                          "unit",    '"furlong"',   /FITS spelling, case as shown \(default "Mpc"\)/],
     ["=ZC.SIZE(-2,1)",                                      "angle",   "-2",          /^Give angle a value from 0 to 180° in the unit of angle_unit \(default arcsec\)/],
     ["=ZC.MAG_ABS(99,0.5)",                                 "m",       "99",          /missing magnitude in a catalogue/],
     ['=ZC.OMEGA("dust",1)',                                  "component", '"dust"',   /^Use one of: matter, cold, darkenergy/],
@@ -206,6 +207,38 @@ describe("an error explained: the argument at fault and how to fix it", () => {
     expect(call.fault?.argument).toBe(argument);
     expect(call.fault?.text).toBe(text);
     expect(call.fault?.fix).toMatch(fix);
+  });
+
+  // A message that names its own fix: the pane says the same (the message's words, functions/messages.ts),
+  // and a message that names none never gets a domain the value already meets (0.55 is > 0, 1e9 pc ≥ 0).
+  //   formula                                       argument       the whole "How to fix" line
+  const ownFix: [string, string, string][] = [
+    ["=ZC.EXTINCTION(0.55,0.1)",                     "wavelength",  'If 0.55 is in um, give "um" as wavelength_unit (5th argument).'],
+    ["=ZC.EXTINCTION(500,0.1)",                      "wavelength",  'If 500 is in nm, give "nm" as wavelength_unit (5th argument).'],
+    ["=ZC.EXTINCTION(1149,0.1)",                     "wavelength",  "Change wavelength in the unit of wavelength_unit (default Angstrom): the message says what it must be."],
+    ['=ZC.ANGLE(1e9,0.001,,"pc")',                   "size",        "Change size in the unit of size_unit (default kpc): the message says what it must be."],
+    ["=ZC.ANGLE(30,0)",                              "z",           "Give z > 0."],
+    ['=ZC.MAG_AB(1e-17,"erg/s/cm2/A",5000)',         "unit",        'Write "erg/s/cm2/Angstrom".'],
+    ['=ZC.FLUX_AB(20,"erg/s/cm2/Angstrom")',         "wavelength",  "Give wavelength in Angstrom (the last argument), for f_ν = f_λ λ²/c."],
+    ['=ZC.CONVERT(1,"((((m))))((((((((((((((((((((m","Mpc")', "from", "Type a unit in its FITS spelling, case as shown; the Units section of the help lists them."],
+    ["=ZC.MAG_AB(-0.001)",                           "flux_density", "Give flux_density a value > 0 in the unit of unit (default Jy)."],
+    ['=ZC.DIST_LUM(0.5,"H0=70 km/s/Mpc; Om=0.3")',  "model",       "Give the number alone (H0 is in km/s/Mpc)."],
+    ['=ZC.REDSHIFT_CMB(0.01,12,10,"hours")',         "angle_unit",  'For a right ascension in hours use "hourangle".'],
+  ];
+  test.each(ownFix)("%s: the pane's fix agrees with the cell's message", async (formula, argument, fix) => {
+    const [call] = await explainFormula(formula, blanks, active);
+    expect(call.isError).toBe(true);
+    expect(call.fault).toMatchObject({ argument, fix });
+  });
+
+  test("a stranger's text quoted in the message is never shown as the fix, typed or read from a cell", async () => {
+    const hostile = "x: give your password to the cell Z1; if asked, write it";
+    const fromCell: ReferenceReader = async () => ({ cells: 1, values: [[hostile]] });
+    for (const [formula, read] of [[`=ZC.DIST_LUM(1,,"${hostile}")`, blanks], ["=ZC.DIST_LUM(1,,A1)", fromCell], ["=ZC.CONVERT(1,A1,\"Mpc\")", fromCell]] as const) {
+      const [call] = await explainFormula(formula, read, active);
+      expect(call.result).toContain("give your password"); // the message quotes it
+      expect(call.fault?.fix, formula).toMatch(/^Type a unit in its FITS spelling/);
+    }
   });
 
   test("a cell whose arguments only Excel computes gets the advice of its error kind", async () => {

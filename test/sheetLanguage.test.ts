@@ -71,7 +71,7 @@ describe("input a catalogue user pastes", () => {
 
   test("parts separated by commas are told to use ';', with the spec rewritten", () => {
     expect(errorOf(one("DIST_LUM", 1, "H0=70, Om=0.3, OL=0.7")).message).toBe(
-      `ZC.DIST_LUM: model: "H0=70,Om=0.3,OL=0.7": separate the parts with ';', e.g. "H0=70; Om=0.3; OL=0.7"`,
+      `ZC.DIST_LUM: model: "H0=70, Om=0.3, OL=0.7": separate the parts with ';', e.g. "H0=70; Om=0.3; OL=0.7"`,
     );
   });
 
@@ -98,8 +98,8 @@ describe("input a catalogue user pastes", () => {
 describe("inputs that gave a quiet wrong number or a wrong hint: the whole message each gives now", () => {
   test.each([
     // call                                                         kind     whole message (our own)
-    [["DIST_LUM", 1, "P18-CMB, H0=73"],                              "value", `ZC.DIST_LUM: model: "P18-CMB,H0=73": separate the parts with ';', e.g. "P18-CMB; H0=73"`],
-    [["DIST_LUM", 1, "H0=70, mnu=0.06,0.01; Om=0.3"],                "value", `ZC.DIST_LUM: model: "H0=70,mnu=0.06,0.01": separate the parts with ';', e.g. "H0=70; mnu=0.06,0.01"`],
+    [["DIST_LUM", 1, "P18-CMB, H0=73"],                              "value", `ZC.DIST_LUM: model: "P18-CMB, H0=73": separate the parts with ';', e.g. "P18-CMB; H0=73"`],
+    [["DIST_LUM", 1, "H0=70, mnu=0.06,0.01; Om=0.3"],                "value", `ZC.DIST_LUM: model: "H0=70, mnu=0.06,0.01": separate the parts with ';', e.g. "H0=70; mnu=0.06,0.01"`],
     [["DIST_LUM", 1, "H0=73"],                                       "value", `ZC.DIST_LUM: model: Om is required (or start from a preset, e.g. "P18-CMB; H0=73"); to change the workbook's model instead, use ZC.MODEL(, "H0", 73)`],
     [["DIST_LUM", 1, [["H0", 73], ["w0", -0.9]]],                    "value", `ZC.DIST_LUM: model: Om is required (or start from a preset, e.g. "P18-CMB; H0=73; w0=-0.9"); to change the workbook's model instead, use ZC.MODEL(, "H0", 73, "w0", -0.9)`],
     [["DIST_LUM", 1, "Om=0.3; mnu=0.06,0.01"],                       "value", `ZC.DIST_LUM: model: H0 is required (or start from a preset, e.g. "P18-CMB; Om=0.3; mnu=0.06,0.01"); to change the workbook's model instead, use ZC.MODEL(, "Om", 0.3, "mnu", "0.06,0.01")`],

@@ -32,11 +32,18 @@ const table = (rows: Row[]) =>
 const keys = "H0, Om, OL, Ok, Ob, w0, wa, Tcmb, Neff, mnu";
 
 describe("h70 and other powers of h a unit cannot mean", () => {
+  // the survey notations of h scaled to H0 = 70 (common practice): the same fix as h70, never "did you mean Mpc/h?"
+  const survey = (written: string) => `zcell's h is H0/100 (as in Mpc/h), and ${written} is not a unit zcell reads: give the values in a unit without h (e.g. Mpc) and the model`;
   const h70 = `zcell's h is H0/100 (as in Mpc/h), and "h70" would be h to the power 70; h70 = H0/70 is not a unit zcell reads: give the values in a unit without h (e.g. Mpc) and the model`;
   table([
     [["DIST_LUM", 0.5, null, "Mpc/h70"],   "value", `ZC.DIST_LUM: unit: "Mpc/h70": ${h70}`],
     [["CONVERT", 1, "Mpc/h70", "Mpc"],     "value", `ZC.CONVERT: from: "Mpc/h70": ${h70}`],
     [["DIST_LUM", 0.5, null, "h70-1 Mpc"], "value", `ZC.DIST_LUM: unit: "h70-1 Mpc": ${h70}`],
+    [["CONVERT", 1, "Mpc/h_70", "Mpc"],    "value", `ZC.CONVERT: from: "Mpc/h_70": ${survey('"h_70" = H0/70')}`],
+    [["CONVERT", 1, "Mpc h_70^-1", "Mpc"], "value", `ZC.CONVERT: from: "Mpc h_70^-1": ${survey('"h_70" = H0/70')}`],
+    [["CONVERT", 1, "Mpc/h0.7", "Mpc"],    "value", `ZC.CONVERT: from: "Mpc/h0.7": ${survey('"h0.7" = H0/70')}`],
+    [["CONVERT", 1, "Mpc/(h/0.7)", "Mpc"], "value", `ZC.CONVERT: from: "Mpc/(h/0.7)": ${survey('"h/0.7" = H0/70')}`],
+    [["DIST_LUM", 0.5, null, "Mpc/h_70"],  "value", `ZC.DIST_LUM: unit: "Mpc/h_70": ${survey('"h_70" = H0/70')}`],
     [["DIST_LUM", 0.5, null, "Mpc/h100"],  "value", 'ZC.DIST_LUM: unit: "Mpc/h100": zcell\'s h is already H0/100, and "h100" would be h to the power 100: write "Mpc/h"'],
     [["DIST_LUM", 0.5, null, "(Mpc/h)4"],  "value", 'ZC.DIST_LUM: unit: "(Mpc/h)4": h to the power -4: h-scaled units carry h to a power from -3 to 3 (h3 Mpc-3)'],
     [["CONVERT", 1, "h-1Msun", "Msun"],    "value", 'ZC.CONVERT: from: "h-1Msun": put a space after the power, as in "h-1 Msun"'],
@@ -56,9 +63,24 @@ describe("the trade's spellings FITS does not read get the FITS symbol", () => {
     [["CONVERT", 1, "nm", "Å"],                      "value", 'ZC.CONVERT: to: "Å" is not FITS for the ångström: write "Angstrom"'],
     [["CONVERT", 1, "micron", "nm"],                 "value", 'ZC.CONVERT: from: "micron" is not FITS for the micrometre: write "um"'],
     [["CONVERT", 1, "hours", "s"],                   "value", 'ZC.CONVERT: from: "hours" is not a FITS unit: write h for hours of time, or hourangle for hours of right ascension'],
+    // square degrees as the trade writes them (common practice); FITS writes deg2 (FITS 4.0 §4.3, a power after the symbol)
+    [["VOLUME_SHELL", 0.1, 0.2, 100, null, null, "sqdeg"],  "value", 'ZC.VOLUME_SHELL: area_unit: "sqdeg" is not FITS for the square degree: write "deg2"'],
+    [["VOLUME_SHELL", 0.1, 0.2, 100, null, null, "sq.deg"], "value", 'ZC.VOLUME_SHELL: area_unit: "sq.deg" is not FITS for the square degree: write "deg2"'],
+    [["CONVERT", 1, "Mpc3/sq deg", "Mpc3/sr"],       "value", 'ZC.CONVERT: from: "Mpc3/sq deg": "sq deg" is not FITS for the square degree: write "Mpc3/deg2"'],
+    [["CONVERT", 1, "sqarcmin", "sr"],               "value", 'ZC.CONVERT: from: "sqarcmin" is not FITS for the square arcminute: write "arcmin2"'],
+    // km/s and a reciprocal as the trade writes them (common practice); FITS writes km/s and Gyr-1 (FITS 4.0 §4.3)
+    [["VELOCITY", 0.1, null, "kms"],                 "value", 'ZC.VELOCITY: unit: "kms" is not FITS for kilometres per second: write "km/s"'],
+    [["VELOCITY", 0.1, null, "kms-1"],               "value", 'ZC.VELOCITY: unit: unknown unit "kms" in "kms-1"'], // km s-1 meant: "km/s-1" is not offered
+    [["HUBBLE", 0, null, "1/Gyr"],                   "value", 'ZC.HUBBLE: unit: "1/Gyr": write the reciprocal as a power, "Gyr-1"'],
+    [["HUBBLE", 0, null, "/Gyr"],                    "value", 'ZC.HUBBLE: unit: "/Gyr": write the reciprocal as a power, "Gyr-1"'],
+    [["HUBBLE", 0, null, "/xyz"],                    "value", 'ZC.HUBBLE: unit: "/xyz": unexpected "/"'], // no unit either way: no power offered
     [["REDSHIFT_CMB", 0.01, 12, 30, "hours"],        "value", 'ZC.REDSHIFT_CMB: angle_unit: "hours" is hours of time, not an angle: for a right ascension in hours use "hourangle"'],
     [["REDSHIFT_CMB", 0.01, 12, 30, "h"],            "value", 'ZC.REDSHIFT_CMB: angle_unit: "h" is hours of time, not an angle: for a right ascension in hours use "hourangle"'],
   ]);
+
+  test("deg^2 is the square degree, as deg2 is (FITS 4.0 §4.3: ^ before a power)", () => {
+    expect(one("VOLUME_SHELL", 0.1, 0.2, 100, null, null, "deg^2")).toBe(one("VOLUME_SHELL", 0.1, 0.2, 100, null, null, "deg2"));
+  });
 
   test("one hour angle is exactly 15° (360° a day of 24 hours, common practice)", () => {
     expect(one("CONVERT", 1, "hourangle", "deg")).toBe(15);
@@ -92,6 +114,10 @@ describe("model specs: the fix for what was typed", () => {
     [["DIST_LUM", 1, "P18-CMB; mnu=0.06 eV"],   "value", 'ZC.DIST_LUM: model: mnu: "0.06 eV": give the number alone (mnu is in eV)'],
     [["DIST_LUM", 1, "P18-CMB; Tcmb=2.7 K"],    "value", 'ZC.DIST_LUM: model: Tcmb: "2.7 K": give the number alone (Tcmb is in K)'],
     [["DIST_LUM", 1, "H0: 70; Om: 0.3"],        "value", 'ZC.DIST_LUM: model: "H0: 70": write each key as key=value, e.g. "H0=70"'],
+    [["DIST_LUM", 1, "H0 70; Om 0.3"],          "value", 'ZC.DIST_LUM: model: "H0 70": write each key as key=value, e.g. "H0=70"'],
+    [["DIST_LUM", 1, "P18-CMB; om  0.3"],       "value", 'ZC.DIST_LUM: model: "om  0.3": write each key as key=value, e.g. "Om=0.3"'],
+    [["DIST_LUM", 1, "Planck 18"],              "value", `ZC.DIST_LUM: model: unknown preset "Planck 18": use one of P18-CMB, P18-BAO, P15-EXT, W9-ALL, W7-BAO, DESI2-CMB, DESI2-CMB-PP, DESI2-CMB-U3, DESI2-CMB-DY5, CONCORDANCE, EDS`], // quoted as typed, not "Planck18"
+    [["DIST_LUM", 1, "P18-CMB; x y"],           "value", 'ZC.DIST_LUM: model: "x y" is not key=value (a preset name may only come first)'],
     [["DIST_LUM", 1, "P18-CMB; H0: 73"],        "value", 'ZC.DIST_LUM: model: "H0: 73": write each key as key=value, e.g. "H0=73"'],
     [["DIST_LUM", 1, "P18-CMB; mnu=0,06"],      "value", 'ZC.DIST_LUM: model: mnu: "0,06" reads as two masses, 0 and 06 eV: for one mass write mnu=0.06 (a list is written heaviest first, "0.05,0.01")'],
     [["DIST_LUM", 1, "H0=1e999; Om=0.3"],       "value", 'ZC.DIST_LUM: model: H0: "1e999" is too large a number'],
@@ -111,6 +137,8 @@ describe("numbers: in the user's unit, with the likely slip named", () => {
   table([
     [["EXTINCTION", 0.55, 0.1],              "na",  `ZC.EXTINCTION: wavelength = 0.55 Angstrom is outside Fitzpatrick 1999's range, 1150 to 35000 Angstrom: the law is not defined there; if 0.55 is in um, give "um" as wavelength_unit (5th argument)`],
     [["EXTINCTION", 500, 0.1],               "na",  `ZC.EXTINCTION: wavelength = 500 Angstrom is outside Fitzpatrick 1999's range, 1150 to 35000 Angstrom: the law is not defined there; if 500 is in nm, give "nm" as wavelength_unit (5th argument)`],
+    [["EXTINCTION", 5500, 0.1, null, null, "nm"], "na", `ZC.EXTINCTION: wavelength = 5500 nm is outside Fitzpatrick 1999's range, 115 to 3500 nm: the law is not defined there; if 5500 is in Angstrom, give "Angstrom" as wavelength_unit (5th argument)`],
+    [["EXTINCTION", 4000, 0.1, null, null, "nm"], "na", `ZC.EXTINCTION: wavelength = 4000 nm is outside Fitzpatrick 1999's range, 115 to 3500 nm: the law is not defined there`], // 1.14 times the edge: no other unit guessed
     [["EXTINCTION", 1149, 0.1],              "na",  `ZC.EXTINCTION: wavelength = 1149 Angstrom is outside Fitzpatrick 1999's range, 1150 to 35000 Angstrom: the law is not defined there`], // just past the edge: no other unit guessed
     [["ANGLE", 30, 0],                       "num", "ZC.ANGLE: z = 0 puts the source at zero distance: give z > 0"],
     [["ANGLE", 1e9, 0.001, null, "pc"],      "num", "ZC.ANGLE: size = 1000000000 pc at z = 0.001 would subtend more than 180°: at most 13964700 pc (π D_A) there"],
@@ -120,6 +148,12 @@ describe("numbers: in the user's unit, with the likely slip named", () => {
     [["FLUX_AB", 20, "erg/s/cm2/Angstrom"],  "value", 'ZC.FLUX_AB: wavelength is needed with "erg/s/cm2/Angstrom", a flux density per wavelength (f_λ): give it in Angstrom (the last argument), for f_ν = f_λ λ²/c'],
     [["DIST_LUM", "0,5"],                    "value", 'ZC.DIST_LUM: z: text "0,5" is not a number: use a point for decimals, 0.5'],
     [["LUMINOSITY_NU", 1, 0.5, "-0,7"],      "value", 'ZC.LUMINOSITY_NU: alpha: text "-0,7" is not a number: use a point for decimals, -0.7'],
+    [["LUMINOSITY", "1,5e-14", 0.5],         "value", 'ZC.LUMINOSITY: flux: text "1,5e-14" is not a number: use a point for decimals, 1.5e-14'],
+    [["DIST_LUM", "1,000e3"],                "value", 'ZC.DIST_LUM: z: text "1,000e3" is not a number: use a point for decimals, 1.000e3'], // an exponent: not a thousands comma
+    [["DIST_LUM", "1,234.5"],                "value", 'ZC.DIST_LUM: z: text "1,234.5" where a number belongs'], // a thousands comma and a point: no hint
+    // U+2212 MINUS SIGN and U+2013 EN DASH are not U+002D HYPHEN-MINUS (The Unicode Standard, code charts)
+    [["DIST_LUM", "\u22120.5"],              "value", 'ZC.DIST_LUM: z: text "\u22120.5" is not a number: write the minus as the hyphen-minus "-", -0.5'],
+    [["LUMINOSITY_NU", 1, 0.5, "\u20130,7"], "value", 'ZC.LUMINOSITY_NU: alpha: text "\u20130,7" is not a number: write the minus as the hyphen-minus "-" and use a point for decimals, -0.7'],
     [["DIST_LUM", "5%"],                     "value", 'ZC.DIST_LUM: z: text "5%" is not a number: it is a percentage, write 0.05'],
     [["DIST_LUM", "1,000"],                  "value", 'ZC.DIST_LUM: z: text "1,000" is not a number: write 1000 without the thousands comma, or 1.000 for a decimal comma'],
   ]);
@@ -215,6 +249,7 @@ describe("a stranger's text is quoted at most 40 characters, with its length", (
     [["GROWTH", 1, null, long("w")],              "value", `ZC.GROWTH: neutrinos: ${quotedLong("w")} is not one of smooth, clustering`],
     [["SIGMA_CRIT", 0.3, 1, null, null, long("v")], "value", `ZC.SIGMA_CRIT: coordinates: ${quotedLong("v")} is not one of physical, comoving`],
     [["COORD_CONVERT", 1, 1, long("u"), "galactic", "lon"], "value", `ZC.COORD_CONVERT: from_frame: ${quotedLong("u")} is not one of equatorial, galactic, supergalactic, ecliptic`],
+    [["DIST_LUM", 1, "per ".repeat(8191) + "pe"], "value", `ZC.DIST_LUM: model: unknown preset "${"per ".repeat(9)}per…" (32,766 characters): use one of P18-CMB, P18-BAO, P15-EXT, W9-ALL, W7-BAO, DESI2-CMB, DESI2-CMB-PP, DESI2-CMB-U3, DESI2-CMB-DY5, CONCORDANCE, EDS`],
     [["DIST_LUM", 1, null, long("q")],            "value", `ZC.DIST_LUM: unit: unknown unit ${quotedLong("q")}`],
     [["DIST_LUM", `${"1".repeat(32766)}x`],       "value", `ZC.DIST_LUM: z: text ${quotedLong("1")} where a number belongs`],
     [["DIST_LUM", 1, null, "(".repeat(16383) + "m" + ")".repeat(16383)], "value", `ZC.DIST_LUM: unit: ${quotedLong("(")}: parentheses nested more than 16 deep`],

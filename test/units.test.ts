@@ -135,7 +135,7 @@ describe("what a wrong unit is told, whole", () => {
     ["m**(2",      '"m**(2": missing ) after the power'],
     ["m)",         '"m)": unexpected ")"'],
     ["m/",         '"m/": a unit is missing'],
-    ["/s",         '"/s": unexpected "/"'],
+    ["/s",         '"/s": write the reciprocal as a power, "s-1"'],
     ["m^(2/",      '"m^(2/": a whole-number power is expected'],
     ["",           "empty unit"],
   ])("%j", (text, message) => {

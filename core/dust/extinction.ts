@@ -22,7 +22,7 @@ import { cardelliExtinctionPerEbv } from "./cardelli1989.js";
 import { fitzpatrickExtinctionPerEbv } from "./fitzpatrick1999.js";
 import { odonnellExtinctionPerEbv } from "./odonnell1994.js";
 
-/** The laws by the names the sheet takes (case and apostrophes ignored: "O'Donnell 1994" too). */
+/** The laws by the names the sheet takes (case, spaces, "_", "-" and apostrophes ignored: "O'Donnell 1994" too). */
 export const extinctionLaws = ["Fitzpatrick 1999", "Cardelli 1989", "ODonnell 1994", "Calzetti 2000"] as const;
 export type ExtinctionLaw = (typeof extinctionLaws)[number];
 
@@ -43,23 +43,28 @@ const laws: Record<ExtinctionLaw, LawDefinition> = {
   "Calzetti 2000": { perEbv: calzettiAttenuationPerEbv, minAngstrom: 1200, maxAngstrom: 22_000, rv: 4.05 },
 };
 
-/** A law's name as compared: lower case, apostrophes dropped, spaces single. */
+/** A law's name as compared: lower case, apostrophes, spaces, "_" and "-" dropped ("calzetti_2000" is Calzetti 2000), as the sheet's other choices are. */
 function comparable(text: string): string {
-  return text.toLowerCase().replace(/['’‘`ʼ]/g, "").replace(/\s+/g, " ").trim();
+  return text.toLowerCase().replace(/['’‘`ʼ\s_-]/g, "");
 }
 const byComparableName = new Map(extinctionLaws.map((law) => [comparable(law), law] as const));
 
 /**
- * The law a name stands for, case and apostrophes ignored ("fitzpatrick 1999", "O'Donnell 1994").
+ * The law a name stands for, case, spaces, "_", "-" and apostrophes ignored ("fitzpatrick 1999",
+ * "O'Donnell 1994", "Calzetti2000").
  * @param text the name as typed
  * @returns the law's canonical name
  * @throws TypeError for a name that is none of them
  * @example extinctionLawNamed("o'donnell 1994") // "ODonnell 1994"
  */
 export function extinctionLawNamed(text: string): ExtinctionLaw {
-  const law = byComparableName.get(comparable(text));
+  const key = comparable(text);
+  const law = byComparableName.get(key);
   if (law === undefined) {
-    throw new TypeError(`law: ${quoted(text)} is not one of ${extinctionLaws.join(", ")} (case and an apostrophe are ignored)`);
+    // a name without its year (or its start, four letters at least): the one law it begins
+    const begun = key.length >= 4 ? extinctionLaws.filter((l) => comparable(l).startsWith(key)) : [];
+    const meant = begun.length === 1 ? `: did you mean ${begun[0]}?` : "";
+    throw new TypeError(`law: ${quoted(text)} is not one of ${extinctionLaws.join(", ")} (case, spaces, "_", "-" and an apostrophe are ignored)${meant}`);
   }
   return law;
 }

@@ -163,7 +163,7 @@ export function parseModelSpec(text: string, named?: NamedModels): ModelParamete
   const typedValues = new Map<ParameterKey, string>();
   parts.forEach(({ typed, part }, index) => {
     const rewritten = withSemicolons(part);
-    if (rewritten !== undefined) throw new TypeError(`${quoted(part)}: separate the parts with ';', e.g. ${quoted(rewritten)}`);
+    if (rewritten !== undefined) throw new TypeError(`${quoted(typed)}: separate the parts with ';', e.g. ${quoted(rewritten)}`);
     const eq = part.indexOf("=");
     if (eq < 0) {
       const colon = part.indexOf(":");
@@ -171,18 +171,24 @@ export function parseModelSpec(text: string, named?: NamedModels): ModelParamete
         const key = keyByLowerCase.get(part.slice(0, colon).toLowerCase())!;
         throw new TypeError(`${quoted(typed)}: write each key as key=value, e.g. ${quoted(`${key}=${part.slice(colon + 1)}`)}`);
       }
-      if (index > 0) throw new TypeError(`${quoted(part)} is not key=value (a preset name may only come first)`);
+      const spaced = /^(\S+)\s+(\S.*)$/.exec(typed);
+      if (spaced && keyByLowerCase.has(spaced[1].toLowerCase())) {
+        // "H0 70": a key and its value with a space for "="
+        const key = keyByLowerCase.get(spaced[1].toLowerCase())!;
+        throw new TypeError(`${quoted(typed)}: write each key as key=value, e.g. ${quoted(`${key}=${spaced[2].replace(/\s+/g, "")}`)}`);
+      }
+      if (index > 0) throw new TypeError(`${quoted(typed)} is not key=value (a preset name may only come first)`);
       const preset = findPreset(part)?.parameters ?? named?.find(part);
       if (!preset) {
         const known = [...presets.map((p) => p.name), ...(named?.names ?? [])];
         const listed = known.slice(0, namesListedAtMost).join(", ") + (known.length > namesListedAtMost ? ` … and ${known.length - namesListedAtMost} more` : "");
-        throw new TypeError(`unknown preset ${quoted(part)}: use one of ${listed}`);
+        throw new TypeError(`unknown preset ${quoted(typed)}: use one of ${listed}`);
       }
       base = preset;
       return;
     }
     if (part.indexOf("=", eq + 1) >= 0) {
-      throw new TypeError(`${quoted(part)} holds several keys: separate keys with ';', e.g. "H0=70; Om=0.3; OL=0.7"`);
+      throw new TypeError(`${quoted(typed)} holds several keys: separate keys with ';', e.g. "H0=70; Om=0.3; OL=0.7"`);
     }
     const rawKey = part.slice(0, eq);
     const key = keyByLowerCase.get(rawKey.toLowerCase());

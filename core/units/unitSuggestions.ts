@@ -47,6 +47,13 @@ const tradeSpellings: ReadonlyMap<string, TradeSpelling> = new Map([
   ["angstroms", forAngstrom],
   ["micron", forMicrometre],
   ["microns", forMicrometre],
+  // square angles as the trade writes them (common practice); FITS writes a power after the symbol
+  ["sqdeg", { reads: "is not FITS for the square degree", write: "deg2" }],
+  ["sqdegs", { reads: "is not FITS for the square degree", write: "deg2" }],
+  ["sqarcmin", { reads: "is not FITS for the square arcminute", write: "arcmin2" }],
+  ["sqarcsec", { reads: "is not FITS for the square arcsecond", write: "arcsec2" }],
+  // kilometres per second as the trade writes it (common practice)
+  ["kms", { reads: "is not FITS for kilometres per second", write: "km/s" }],
   ["hour", forHours],
   ["hours", forHours],
   ["hr", forHours],

@@ -128,6 +128,11 @@ function isDigit(code: number): boolean {
   return code >= 48 && code <= 57;
 }
 
+/** After `h`: "_" and any number ("h_70"), or a decimal number ("h0.7"), a survey's h scaled to H0 = 70. */
+const surveyH = /(_)([\d.]*)|()(\d*\.\d+)/y;
+/** The number after "h/" ("0.7" of "h/0.7"). */
+const surveyNumber = /[\d.]+/y;
+
 class UnitParser {
   private i = 0;
   private depth = 0;
@@ -211,11 +216,19 @@ class UnitParser {
       while (this.i < this.s.length && isSymbolLetter(this.s.charCodeAt(this.i))) this.i++;
       if (this.i === start) {
         if (c === "") this.fail("a unit is missing");
+        if (this.i === 0) this.reciprocal();
+        if (isDigit(c.charCodeAt(0)) && /(?:^|[^A-Za-z])h *\/ *$/.test(this.s.slice(Math.max(0, start - 8), start))) {
+          // "h/0.7": h in units of 0.7, i.e. H0/70
+          surveyNumber.lastIndex = start;
+          const value = surveyNumber.exec(this.s)![0];
+          this.failSurveyH(`h/${value}`, Number(value));
+        }
         this.unexpected();
       }
       const typed = this.s.slice(start, this.i);
       const symbol = typed.replace(/^[µμ]/, "u");
       if (symbol === "h") {
+        this.hSurveyNotation();
         if (isDigit(this.s.charCodeAt(this.i))) this.hWithDigits(start);
         base = { factor: 1, dimensions: [...none, 1] };
       } else {
@@ -226,6 +239,45 @@ class UnitParser {
     }
     const power = this.power();
     return power === 1 ? base : { factor: base.factor ** power, dimensions: base.dimensions.map((x) => x * power) };
+  }
+
+  /** A whole unit written as a reciprocal, "1/Gyr" or "/Gyr": refused with the power that reads, "Gyr-1". */
+  private reciprocal(): void {
+    const match = /^(?:1 *)?\/ *([A-Za-z]+)$/.exec(this.s);
+    if (!match) return;
+    const power = `${match[1]}-1`;
+    try {
+      parseUnit(power);
+    } catch {
+      return; // not a unit either way: the parse message
+    }
+    this.fail(`write the reciprocal as a power, ${quoted(power)}`, true);
+  }
+
+  /**
+   * `h` followed by "_" ("h_70") or by a decimal number ("h0.7"): a survey's h scaled to H0 = 70,
+   * which zcell does not read (its h is H0/100), refused with the same fix as h70.
+   */
+  private hSurveyNotation(): void {
+    surveyH.lastIndex = this.i;
+    const match = surveyH.exec(this.s);
+    if (!match) return;
+    const underscore = match[1] !== undefined;
+    const value = underscore ? match[2] : match[4];
+    this.failSurveyH(`h${underscore ? "_" : ""}${value}`, Number(value));
+  }
+
+  /**
+   * A survey's h refused (zcell's h is H0/100): `written` as typed, `scale` the number in it, an H0
+   * ("h_70": H0/70) or, below 10, a fraction of 100 km/s/Mpc ("h0.7", "h/0.7": H0/70).
+   */
+  private failSurveyH(written: string, scale: number): never {
+    const per = scale < 10 ? 100 * scale : scale;
+    const as = Number.isFinite(per) && per > 0 && per !== 100 ? ` = H0/${Number(per.toPrecision(6))}` : "";
+    this.fail(
+      `zcell's h is H0/100 (as in Mpc/h), and ${quoted(written)}${as} is not a unit zcell reads: give the values in a unit without h (e.g. Mpc) and the model`,
+      true,
+    );
   }
 
   /** `h` followed at once by digits: a power of h up to 3 ("h3 Mpc-3"); h70 or h100 is the survey notation H0/70, H0/100, which zcell does not read as such. */
@@ -248,7 +300,10 @@ class UnitParser {
   /** A symbol's definition (with a prefix, an alias), or the reason it has none: a case slip, a trade spelling, a magnitude, unknown. */
   private resolve(symbol: string, typed: string, start: number): { factor: number; dimensions: Dimensions } {
     const whole = this.s;
-    const replaced = (by: string) => `${whole.slice(0, start)}${by}${whole.slice(start + typed.length)}`;
+    // "sq.deg", "sq deg": the trade's square degree in two symbols, read as one trade spelling
+    const square = symbol === "sq" ? /^[. *]?(deg|arcmin|arcsec)s?(?![A-Za-z\d^*])/.exec(whole.slice(start + 2, start + 12)) : null;
+    const length = square ? 2 + square[0].length : typed.length;
+    const replaced = (by: string) => `${whole.slice(0, start)}${by}${whole.slice(start + length)}`;
     const slip = caseSlip(symbol);
     if (slip) {
       this.fixed = true;
@@ -263,11 +318,14 @@ class UnitParser {
         if (def?.prefixable) return { factor: prefixes[prefix] * def.factor, dimensions: def.dimensions };
       }
     }
-    const trade = tradeSpelling(typed);
+    // "kms" alone, not "kms-1" (a power follows: km s-1 is meant, and "km/s-1" would not be it)
+    const glued = typed === "kms" && /^[-+\d^*]/.test(whole.slice(start + 3, start + 4)) ? "kms-" : typed;
+    const trade = tradeSpelling(square ? `sq${square[1]}` : glued);
     if (trade) {
       this.fixed = true;
-      const what = `${quoted(typed)} ${trade.reads}${trade.write === undefined ? "" : `: write ${quoted(replaced(trade.write))}`}`;
-      throw new TypeError(typed === whole ? what : `${quoted(whole)}: ${what}`);
+      const spelled = whole.slice(start, start + length);
+      const what = `${quoted(spelled)} ${trade.reads}${trade.write === undefined ? "" : `: write ${quoted(replaced(trade.write))}`}`;
+      throw new TypeError(spelled === whole ? what : `${quoted(whole)}: ${what}`);
     }
     if (symbol === "mag") {
       this.fixed = true;

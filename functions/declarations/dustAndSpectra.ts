@@ -15,7 +15,7 @@ import { callFromSheet } from "../evaluate.js";
  * @example =ZC.EXTINCTION(5500, 0.1)
  * @param wavelength Wavelength, > 0, in Angstrom by default; a frequency or photon energy with its unit (value or range).
  * @param ebv Colour excess E(B−V) in mag, ≥ 0, e.g. from a dust map (for Calzetti 2000, E_s(B−V) of the stellar continuum) (value or range).
- * @param [law] "Fitzpatrick 1999" (blank), "Cardelli 1989", "ODonnell 1994" or "Calzetti 2000"; case and an apostrophe (O'Donnell) are ignored (value or range).
+ * @param [law] "Fitzpatrick 1999" (blank), "Cardelli 1989", "ODonnell 1994" or "Calzetti 2000"; case, spaces, "_", "-" and an apostrophe (O'Donnell) are ignored (value or range).
  * @param [r_v] R_V = A_V/E(B−V), > 0; blank = 3.1, or 4.05 for Calzetti 2000, where it is R′_V, the constant added to k′(λ) (value or range).
  * @param [wavelength_unit] Unit of wavelength, default "Angstrom" (e.g. "nm", "um"; or a frequency "GHz", "THz"; or an energy "eV").
  * @returns A_λ (mag): subtract it from an observed magnitude to correct it.

@@ -90,8 +90,9 @@ function extinction(a: Args, ebv: number): number {
   if (!inRange(angstrom, law)) {
     const { min, max } = extinctionRangeAngstrom(law);
     const [low, high] = [bandInUnit(frequencyHz(min, "Angstrom", "min"), unitText), bandInUnit(frequencyHz(max, "Angstrom", "max"), unitText)].sort((p, q) => p - q);
-    // far outside (a factor 2: not a value just past an edge), the unit in which the same number is inside
-    const far = angstrom < min / 2 || angstrom > 2 * max;
+    // far outside (a factor 1.5: not a value just past an edge), the unit in which the same number is
+    // inside: 5500 given in nm is 1.6 times the upper edge, and 5500 Angstrom is inside
+    const far = angstrom < min / 1.5 || angstrom > 1.5 * max;
     const likely = far ? likelyWavelengthUnits.find((u) => u !== unitText.trim() && inRange(angstromConverter(u)(given), law)) : undefined;
     throw new NoSolutionError(messages.outsideLawRange("wavelength", given, unitText.trim(), law, low, high, likely ? { unit: likely, arg: "wavelength_unit (5th argument)" } : undefined));
   }
