@@ -565,7 +565,7 @@ describe("the inspector computes the cell it explains, not the whole result", ()
     // 500 rows: within the limit, computed whole, and the caller explained at the cell
     const small = await computesOf("AGE", () => explainFormula("=ZC.REDSHIFT(ZC.AGE($A$1:$A$500),\"AGE\")", sheet1(cells), active, undefined, { row: 7, col: 0 }));
     expect(small.got[0].args[0].value).toMatch(/^[\d.]+ \(row 8 of the result of ZC\.AGE for this cell\)$/);
-    expectRelative(exactOf(small.got[0]), 1.007, 1e-9, "REDSHIFT of AGE");
+    expectRelative(exactOf(small.got[0]), 1.007, 1e-9, "REDSHIFT of AGE"); // row 8 holds 1 + 7e-3: REDSHIFT inverts AGE (identity)
     expect(small.computes).toBe(500);
   });
 });

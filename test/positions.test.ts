@@ -22,11 +22,10 @@ import { formatValue } from "../functions/messages.js";
 import { adviseOnError } from "../taskpane/errorAdvice.js";
 import { explainFormula } from "../taskpane/explainCall.js";
 import { definitions } from "../functions/definitions.js";
-import { evaluate, type Cell } from "../functions/evaluate.js";
+import { sheetCalls } from "./sheetCalls.js";
 
 const active = { spec: "P18-BAO", stored: false };
-const sheet = (name: string, ...args: unknown[]): Cell[][] => evaluate(definitions[name], args, active);
-const one = (name: string, ...args: unknown[]): Cell => sheet(name, ...args)[0][0];
+const { run: sheet, one } = sheetCalls(active.spec);
 const mas = 1 / 3.6e6; // degrees
 const degree = Math.PI / 180;
 
@@ -275,6 +274,7 @@ describe("sky frames", () => {
 describe("the sheet: text in every position argument, ranges, blanks and errors", () => {
   test("COORD_DEG reads a row of parts against two columns of text, and blank in is blank out", () => {
     const out = sheet("COORD_DEG", [["12:30:49.4", "+12:23:28"], ["", "−05°07′"], [187.5, -5]], [["ra", "dec"]]);
+    // 15 × (12 + 30/60 + 49.4/3600) and 12 + 23/60 + 28/3600; −(5 + 7/60) (sexagesimal, common practice)
     expect(out[0][0]).toBeCloseTo(187.70583333333333, 12);
     expect(out[0][1]).toBeCloseTo(12.391111111111111, 12);
     expect(out[1][0]).toBe("");

@@ -18,13 +18,10 @@ import {
   type DopplerConvention,
 } from "../core/index.js";
 import { CellError } from "../functions/cellError.js";
-import { definitions } from "../functions/definitions.js";
-import { evaluate, type Cell } from "../functions/evaluate.js";
 import { expectRelative, relativeError } from "./helpers.js";
+import { sheetCalls } from "./sheetCalls.js";
 
-const active = { spec: "P18-BAO", stored: false };
-const sheet = (name: string, ...args: unknown[]): Cell[][] => evaluate(definitions[name], args, active);
-const one = (name: string, ...args: unknown[]): Cell => sheet(name, ...args)[0][0];
+const { run: sheet, one } = sheetCalls("P18-BAO");
 const c = speedOfLightKmPerS; // 299792.458 km/s, exact (SI 2019)
 
 describe("worked values from the definitions", () => {
