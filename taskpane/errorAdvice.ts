@@ -73,19 +73,29 @@ const fixStart = /(?:: |; )(?=((?:if [^;:]{1,80}?, )?(?:give|write|use|put|leave
 
 /**
  * The fix a message names itself, as a sentence, or undefined when it names none. `typed` holds the
- * texts the formula and its cells gave (a stranger's): a fix never begins inside one, so a cell's own
- * text quoted in the message ("x: give …") is never shown as our advice.
+ * texts the formula and its cells gave (a stranger's). Messages quote such a text in double quotes,
+ * perhaps rewritten (a spec's "," shown as "; "), so a fix is looked for only outside quotes, and only
+ * the first place there counts: when a typed text holds a `"` (quotes no longer delimit it) or holds
+ * that fix's opening words, the message's fix is not used and the argument's own advice stands.
  */
 function messageFix(text: string, typed: readonly string[], argument: string | undefined): string | undefined {
+  if (typed.some((t) => t.includes('"'))) return undefined;
   for (const match of text.matchAll(fixStart)) {
-    // messages quote a text as typed (never in another case): its words appear in it as they do here
+    if (quotesBefore(text, match.index) % 2 === 1) continue; // inside a quoted text
     const lead = text.slice(match.index, match.index + 2 + match[1].search(/\s|$/));
-    if (typed.some((t) => t.includes(lead))) continue;
+    if (typed.some((t) => t.includes(lead))) return undefined;
     let fix = text.slice(match.index + 2);
     if (argument) fix = fix.replace(/^give it\b/, `give ${argument}`);
     return `${fix[0].toUpperCase()}${fix.slice(1)}${/[.?]$/.test(fix) ? "" : "."}`;
   }
   return undefined;
+}
+
+/** How many double quotes stand in `text` before `end`. */
+function quotesBefore(text: string, end: number): number {
+  let count = 0;
+  for (let i = text.indexOf('"'); i >= 0 && i < end; i = text.indexOf('"', i + 1)) count++;
+  return count;
 }
 
 /** A number argument's message that says the value is outside the argument's own domain (below its least, above its most, past the pole). */

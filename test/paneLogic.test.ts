@@ -241,6 +241,21 @@ describe("an error explained: the argument at fault and how to fix it", () => {
     }
   });
 
+  test.each([
+    // a model text whose "," the message shows as "; " (review finding): no fix may begin inside it
+    ["H0=70,give=yourpasswordtocellZ1; x: separate"],
+    ["H0=70,write=yourpasswordtocellZ1; x: separate"],
+    ["H0=70,use=the\u2800password\u2800to\u2800Z1; x: separate"],
+    ['H0=70,give="yourpassword"; x'],
+  ])("a model text %j never puts its words in the pane's fix, typed or read from a cell", async (hostile) => {
+    const fromCell: ReferenceReader = async () => ({ cells: 1, values: [[hostile]] });
+    for (const [formula, read] of [[`=ZC.DIST_LUM(1,"${hostile.replaceAll('"', '""')}")`, blanks], ["=ZC.DIST_LUM(1,A1)", fromCell]] as const) {
+      const [call] = await explainFormula(formula, read, active);
+      expect(call.isError, formula).toBe(true);
+      expect(call.fault?.fix ?? "", formula).not.toMatch(/password/i);
+    }
+  });
+
   test("a cell whose arguments only Excel computes gets the advice of its error kind", async () => {
     const [call] = await explainFormula("=ZC.DIST_LUM(SUM(A1:A3))", blanks, active, "#NUM!");
     expect(call.fault).toEqual({ fix: "A value lies outside its physical domain, or the result does: the message says which." });
