@@ -47,7 +47,17 @@ describe("h70 and other powers of h a unit cannot mean", () => {
     [["DIST_LUM", 0.5, null, "Mpc/h100"],  "value", 'ZC.DIST_LUM: unit: "Mpc/h100": zcell\'s h is already H0/100, and "h100" would be h to the power 100: write "Mpc/h"'],
     [["DIST_LUM", 0.5, null, "(Mpc/h)4"],  "value", 'ZC.DIST_LUM: unit: "(Mpc/h)4": h to the power -4: h-scaled units carry h to a power from -3 to 3 (h3 Mpc-3)'],
     [["CONVERT", 1, "h-1Msun", "Msun"],    "value", 'ZC.CONVERT: from: "h-1Msun": put a space after the power, as in "h-1 Msun"'],
+    // h scaled to H0 = 100 is zcell's own h (review finding): write h alone
+    [["CONVERT", 1, "Mpc/h_100", "Mpc"],   "value", 'ZC.CONVERT: from: "Mpc/h_100": zcell\'s h is already H0/100: write h alone, as in Mpc/h ("h_100" is not a unit zcell reads)'],
+    [["CONVERT", 1, "Mpc/h1.0", "Mpc"],    "value", 'ZC.CONVERT: from: "Mpc/h1.0": zcell\'s h is already H0/100: write h alone, as in Mpc/h ("h1.0" is not a unit zcell reads)'],
+    [["CONVERT", 1, "Mpc/(h/1)", "Mpc"],   "value", 'ZC.CONVERT: from: "Mpc/(h/1)": zcell\'s h is already H0/100: write h alone, as in Mpc/h ("h/1" is not a unit zcell reads)'],
   ]);
+
+  test('"h_" with no number after it is no survey h: "h_sun" is an unknown unit with its suggestions (review finding)', () => {
+    const cell = one("CONVERT", 1, "h_sun", "W");
+    expect(cell).toBeInstanceOf(CellError);
+    expect((cell as CellError).message).not.toContain("zcell's h is H0/100");
+  });
 
   test("h up to the third power still reads (survey units, common practice)", () => {
     expect(one("CONVERT", 1, "h3 Mpc-3", "Mpc-3", "H0=50; Om=0.3")).toBeCloseTo(0.125, 15);

@@ -58,7 +58,7 @@ function isDigit(code: number): boolean {
 }
 
 /** After `h`: "_" and any number ("h_70"), or a decimal number ("h0.7"), a survey's h scaled to H0 = 70. */
-const surveyH = /(_)([\d.]*)|()(\d*\.\d+)/y;
+const surveyH = /(_)([\d.]+)|()(\d*\.\d+)/y;
 /** The number after "h/" ("0.7" of "h/0.7"). */
 const surveyNumber = /[\d.]+/y;
 
@@ -202,6 +202,7 @@ class UnitParser {
    */
   private failSurveyH(written: string, scale: number): never {
     const per = scale < 10 ? 100 * scale : scale;
+    if (per === 100) this.fail(`zcell's h is already H0/100: write h alone, as in Mpc/h (${quoted(written)} is not a unit zcell reads)`, true);
     const as = Number.isFinite(per) && per > 0 && per !== 100 ? ` = H0/${Number(per.toPrecision(6))}` : "";
     this.fail(
       `zcell's h is H0/100 (as in Mpc/h), and ${quoted(written)}${as} is not a unit zcell reads: give the values in a unit without h (e.g. Mpc) and the model`,
