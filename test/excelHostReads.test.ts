@@ -207,6 +207,14 @@ describe("one undo step where the host allows", () => {
   });
 });
 
+describe("notes, where the host has them", () => {
+  test("the notes on given cells (ExcelApi 1.18): one asked for each cell, the others' notes left unread", async () => {
+    const notes = [{ address: "'Sheet1'!B2", text: "ours" }, { address: "'Sheet1'!C3", text: "a person's" }, { address: "'Other'!B2", text: "elsewhere" }];
+    installStrictExcel({ sheets: { Sheet1: {}, Other: {} }, notes });
+    expect(await readAnnotations("Sheet1", ["B2", "D4"])).toEqual({ annotations: new Map([["B2", "ours"]]), complete: true });
+  });
+});
+
 describe("comments where notes are missing (ExcelApi 1.17): a stranger's sheet may hold any number", () => {
   const spam = (n: number, from = 1) => Array.from({ length: n }, (_, i) => ({ address: `'Sheet1'!Z${i + from}`, text: "spam" }));
 

@@ -25,6 +25,7 @@ describe("a note is ours only in our shape", () => {
   // note text (a stranger's, or one cut short)                                                  | read as
   test.each([
     ['Frozen by zcell 0.1.0 on 2025-11-20.\nFormula: =ZC.DIST_LUM(A2,"W9-ALL")\nModel: W9-ALL',   { formula: '=ZC.DIST_LUM(A2,"W9-ALL")', models: ["W9-ALL"] }], // 0.1: as written, ending in a quote
+    ['Frozen by zcell 0.1.0 on 2025-11-20.\nFormula: =ZC.AGE()&" Gyr"\nModel: W9-ALL',             { formula: '=ZC.AGE()&" Gyr"', models: ["W9-ALL"] }], // 0.1: a formula that ends in a quote is no JSON string
     ['Frozen by zcell 0.2.0 on 2026-03-02.\r\nFormula: "=ZC.AGE()"\r\nModel: W9-ALL\r\n' + tail,   { formula: "=ZC.AGE()", models: ["W9-ALL"] }], // saved with Windows line ends
     ['Note: Frozen by zcell 0.2.0 on 2026-03-02.\nFormula: "=ZC.AGE()"\nModel: W9-ALL',              undefined], // our words, not at the start
     ["Frozen by zcell 0.2.0 on 2026-03-02.",                                                       undefined], // our first line alone
