@@ -4,10 +4,11 @@
  * ("The property '{0}' is not available. Before reading the property's value, call the load method
  * on the containing object and call "context.sync()" on the associated request context": the
  * PropertyNotLoaded message of office.js, @microsoft/office-js dist/excel-web-16.00.debug.js). A load
- * that names no property is refused outright: it asks for every property of the object (Microsoft's
- * advice is never to do an empty load: OfficeDev/office-js issue 179), which for a range means all
- * its cells. Also: formatting that widens a sheet's used range unless values-only is asked
- * (Worksheet.getUsedRangeOrNullObject(valuesOnly), @types/office-js).
+ * that names no property (`load()`, `load("")`) is refused outright: the pane names what it reads (an
+ * empty load asks for every property of the object, which for a range means all its cells; its
+ * maintainers advise never to do one: OfficeDev/office-js issue 179). Also: formatting that widens a
+ * sheet's used range unless values-only is asked (Worksheet.getUsedRangeOrNullObject(valuesOnly),
+ * @types/office-js). Counted for the tests: each load, and the properties set before each sync.
  */
 import { readFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
