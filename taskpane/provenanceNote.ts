@@ -41,7 +41,7 @@ export interface Provenance {
 export function parseProvenanceNote(text: string): Provenance | undefined {
   if (text.length > maxNoteLength) return undefined;
   const lines = text.split(/\r?\n/);
-  if (!/^(?:Replaced with its value|Frozen) by zcell \S+ on /.test(lines[0] ?? "")) return undefined;
+  if (!/^(?:Replaced with its value|Frozen) by zcell \S+ on /.test(lines[0])) return undefined;
   const start = lines.findIndex((l) => l.startsWith("Formula: "));
   let end = lines.length - 1;
   while (end > start && !lines[end].startsWith("Model: ")) end--;

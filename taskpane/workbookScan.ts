@@ -73,10 +73,6 @@ async function scanUsedCells(
     for (const { sheet, range } of used) {
       if (sheet.protection.protected) locked.add(sheet.name);
       if (range.isNullObject) continue;
-      if (control.cancelled) {
-        gaps.push({ sheet: sheet.name, what: "not scanned (stopped)" });
-        continue;
-      }
       const local = splitAddress(range.address).address;
       const origin = topLeft(local);
       const rowsPerChunk = Math.max(1, Math.floor(scanChunkCells / range.columnCount));
@@ -98,8 +94,9 @@ async function scanUsedCells(
         const last = origin.row + scanned - 1;
         gaps.push({
           sheet: sheet.name,
+          // the loop reads at least one chunk unless stopped (rowsToScan ≥ 1), so nothing read means stopped
           what: scanned === 0
-            ? `not scanned (${control.cancelled ? "stopped" : "too large"})`
+            ? "not scanned (stopped)"
             : `scanned rows ${origin.row}–${last} of ${local} only (${control.cancelled ? "stopped" : `the first ${(scanned * range.columnCount).toLocaleString("en-US")} cells`})`,
         });
       }
