@@ -136,7 +136,7 @@ export function modelFromForm(v: FormValues, named: NamedModels = noNamed): Form
     return { spec: namedBase && formatModelSpec(namedBase) === spec ? base : spec, model, errors };
   } catch (e) {
     const message = (e as Error).message;
-    const field = formFields.find((f) => message.startsWith(`${f} `) || message.startsWith(`${f} =`));
+    const field = formFields.find((f) => message.startsWith(`${f} `));
     errors[field ?? "model"] = message;
     return { errors };
   }
