@@ -1,13 +1,13 @@
 /**
  * The workbook's model: which cosmology a cell without a model argument is computed under, read from
- * the workbook's add-in settings (written by whoever saved the file), and when a formula may read it.
- * Documented in functions/activeModel.ts and README ("the workbook's model"); the fallback sentence is
- * zcell's (functions/messages.ts activeModelFallback), pinned here as the interface. Office is replaced
- * here by small objects that hold just what each case needs: Office.onReady, and
- * Office.context.document.settings.get, which returns null for a key never set (Office.Settings.get,
- * Office JavaScript API reference).
+ * the workbook's add-in settings (written by whoever saved the file). Documented in
+ * functions/activeModel.ts and README ("The model travels with the file"); the fallback sentence is
+ * zcell's (functions/messages.ts activeModelFallback), pinned here as the interface. Office is
+ * replaced by small objects holding just Office.context.document.settings.get, which returns null for
+ * a key never set (Office.Settings.get, Office JavaScript API reference). When formulas wait for the
+ * settings: test/formulasWaitForSettings.test.ts and test/formulasOutsideOffice.test.ts.
  */
-import { afterEach, describe, expect, test, vi } from "vitest";
+import { afterEach, describe, expect, test } from "vitest";
 import { Cosmology } from "../core/index.js";
 import { readActiveModel } from "../functions/activeModel.js";
 import { definitions } from "../functions/definitions.js";
@@ -104,66 +104,5 @@ describe("a formula per row reads the setting each time: it is read again only w
 
     stored["zcell.activeModel"] = "EDS";
     expect(readActiveModel()).toMatchObject({ spec: "EDS", stored: true });
-  });
-});
-
-describe("formulas wait for Office to load the settings, once", () => {
-  /** A fresh copy of the modules (the wait is started once per load of the add-in). */
-  async function freshLoad() {
-    vi.resetModules();
-    const active = await import("../functions/activeModel.js");
-    const { callFromSheet } = await import("../functions/evaluate.js");
-    const { definitions: defs } = await import("../functions/definitions.js");
-    return { ...active, callFromSheet, ageEDS: () => callFromSheet(defs.AGE, [0, "EDS"]) };
-  }
-  const edsAgeGyr = Cosmology.fromSpec("EDS").ageTodayGyr;
-
-  /** An Office whose onReady resolves when `release` is called, counting the calls. */
-  function slowOffice() {
-    const office = { calls: 0, release: () => {}, onReady: () => Promise.resolve() as Promise<unknown> };
-    office.onReady = () => {
-      office.calls++;
-      return new Promise((resolve) => (office.release = () => resolve({ host: "Excel" })));
-    };
-    g.Office = { ...office, onReady: office.onReady, context: { document: { settings: { get: () => null } } } };
-    return office;
-  }
-
-  test("before Office is ready a formula gets a Promise of its value; afterwards the value itself", async () => {
-    const office = slowOffice();
-    const { settingsReady, whenSettingsReady, ageEDS } = await freshLoad();
-    expect(settingsReady()).toBe(false);
-    const early = ageEDS();
-    expect(early).toBeInstanceOf(Promise);
-    expect(whenSettingsReady()).toBe(whenSettingsReady()); // one wait, shared
-    office.release();
-    expect(await early).toEqual([[edsAgeGyr]]);
-    expect(settingsReady()).toBe(true);
-    expect(ageEDS()).toEqual([[edsAgeGyr]]); // no Promise any more
-    expect(office.calls).toBe(1);
-  });
-
-  test("asking whether the settings are ready starts the wait", async () => {
-    const office = slowOffice();
-    const { settingsReady, whenSettingsReady } = await freshLoad();
-    expect(settingsReady()).toBe(false);
-    expect(office.calls).toBe(1);
-    office.release();
-    await whenSettingsReady();
-    expect(settingsReady()).toBe(true);
-    expect(office.calls).toBe(1);
-  });
-
-  test.each([
-    // Office as it is         | where
-    [undefined,                  "outside Office"],
-    [{},                         "an Office object without onReady"],
-  ])("%j: ready at once (%s)", async (office, _where) => {
-    if (office === undefined) delete g.Office;
-    else g.Office = office;
-    const { settingsReady, whenSettingsReady, ageEDS } = await freshLoad();
-    await whenSettingsReady();
-    expect(settingsReady()).toBe(true);
-    expect(ageEDS()).toEqual([[edsAgeGyr]]);
   });
 });
