@@ -2,8 +2,9 @@
  * Which model a cell is computed under when its model argument is a range: a two-column key/value
  * block (H0 | 70, Om | 0.3, …, with or without a header row) is one model, spelt as a spec; any other
  * range is not a block (its cells are models one by one). The rules are the documented behaviour of
- * `keyValueBlockSpec` (functions/modelArgument.ts) and the README's "model argument" section; the
- * message for a misspelt key is zcell's (functions/messages.ts), pinned here as the interface.
+ * `keyValueBlockSpec` (functions/modelArgument.ts; README function reference: "preset, spec or
+ * key/value block"); the message for a misspelt key is zcell's (functions/messages.ts), pinned here
+ * as the interface.
  */
 import { describe, expect, test } from "vitest";
 import { CellError } from "../functions/cellError.js";
