@@ -39,8 +39,8 @@ export function keyValueBlockSpec(matrix: unknown[][]): string | undefined {
   if (matrix.length === 0 || matrix[0].length !== 2) return undefined;
   let rows = matrix.filter(([key]) => !isBlank(key));
   const [first] = rows;
-  if (rows.length > 1 && first && !isKey(first[0]) && typeof first[1] === "string" && Number.isNaN(Number(first[1]))) rows = rows.slice(1);
-  if (rows.length === 0 || rows.some(([key]) => typeof key !== "string")) return undefined;
+  if (first && !isKey(first[0]) && typeof first[1] === "string" && Number.isNaN(Number(first[1]))) rows = rows.slice(1);
+  if (rows.some(([key]) => typeof key !== "string")) return undefined;
   const known = rows.filter(([key]) => isKey(key)).length;
   const hasNumber = rows.some(([, value]) => typeof value === "number");
   if (known === 0 || (2 * known < rows.length && !hasNumber)) return undefined;
