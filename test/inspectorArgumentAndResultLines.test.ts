@@ -35,7 +35,8 @@ describe("an argument left out shows what it stands for, as the help says", () =
     expect(call.args.map((a) => a.text)).toEqual(["1", '""', '""']);
     const [cells] = await explainFormula("=ZC.DIST_LUM(1,B2)", sheet1({ B2: [[""]] }), p18Cmb);
     expect(valuesOf(cells).model).toBe("blank");
-    expect(cells.model).toMatchObject({ spec: "P18-CMB", source: "the workbook's model" });
+    expect(cells.model).toMatchObject({ spec: "P18-CMB", source: "the workbook's model", where: undefined });
+    expect(cells.modelArgs).toBeUndefined(); // one model argument: one Model row
   });
 
   test("an argument given shows its value: text quoted, a number as written", async () => {
@@ -74,6 +75,15 @@ describe("the Result row: the value the cell shows, with its unit and every digi
     const [call] = await explainFormula("=ZC.CMB_TEMP(0)", blanks, p18Cmb);
     expect(call.result).toBe("2.7255 K"); // Tcmb of P18-CMB (Fixsen 2009)
     expect(call.exact).toBeUndefined();
+  });
+
+  test("a table of whole columns: its columns named, its arguments read whole, not at the selected cell", async () => {
+    // three sources of 1/V_max = 1/100, 1/200, 1/300 Mpc⁻³ in the bins [9.5, 10.5) and [10.5, 11.5]
+    const ranges = sheet1({ "$V$1:$V$3": [[10], [11], [12]], "$W$1:$W$3": [[100], [200], [300]], "$X$1:$X$3": [[9.5], [10.5], [11.5]] });
+    const [call] = await explainFormula("=ZC.LUMINOSITY_FUNCTION($V$1:$V$3,$W$1:$W$3,$X$1:$X$3)", ranges, p18Cmb, undefined, { row: 1, col: 0 });
+    expect(call.columns).toEqual(["low", "high", "N", "Φ", "σ_Φ"]);
+    expect(call.args.map((a) => a.value)).toEqual(["range 3×1, first 10", "range 3×1, first 100", "range 3×1, first 9.5"]);
+    expect(call.result).toBe("10.5 (row 2, column 1 of 2×5 values: this cell)"); // the second bin's low edge
   });
 
   test("an array constant is read cell by cell, each cell named in the array", async () => {

@@ -6,7 +6,7 @@
  */
 import { describe, expect, test } from "vitest";
 import { readWorkbookModels } from "../functions/workbookModels.js";
-import { explainFormula } from "../taskpane/explainCall.js";
+import { explainFormula, type ReferenceReader } from "../taskpane/explainCall.js";
 import { blanks, p18Cmb, sheet1 } from "./inspectorSheet.js";
 
 const allMatter = "Om is all matter today, massive neutrinos included.";
@@ -94,6 +94,23 @@ describe("the Model row names the model and where it came from", () => {
     const constant = '{"H0",70;"Foo",1;"Om",0.3}';
     const [inFormula] = await explainFormula(`=ZC.DIST_LUM(1,${constant})`, blanks, p18Cmb);
     expect(inFormula.model).toEqual({ spec: constant, source: "given in the formula", where: `the key/value block ${constant}`, description: why });
+  });
+
+  test("a key/value block whose address Excel does not give is named as written", async () => {
+    const noAddress: ReferenceReader = async () => ({ cells: 4, values: [["H0", 70], ["Om", 0.3]] });
+    const [call] = await explainFormula("=ZC.DIST_LUM(1,Params)", noAddress, p18Cmb);
+    expect(call.model).toMatchObject({ spec: "H0=70; Om=0.3", where: "the key/value block Params" });
+  });
+
+  test("a function of two models names each, and only what the pane shows of each", async () => {
+    const [call] = await explainFormula('=ZC.RESCALE(100,0.5,"distance","EDS",B1)', sheet1({ B1: [["W9-ALL"]] }), p18Cmb);
+    expect([call.model, call.models, call.modelNote]).toEqual([undefined, undefined, undefined]);
+    const [from, to] = call.modelArgs!;
+    expect(Object.keys(from).sort()).toEqual(["argument", "label", "model", "modelNote", "models"]);
+    expect(from).toMatchObject({ label: "From model", argument: "from_model", model: { spec: "EDS", source: "given in the formula", where: undefined } });
+    expect(to).toMatchObject({ label: "To model", argument: "to_model", model: { spec: "W9-ALL", source: "given in the formula", where: undefined } });
+    // the result is stated under the To model: W9-ALL's radiation (Tcmb = 2.725 K, Neff = 3.04)
+    expect(call.conventions[1]).toBe("Radiation on: photons at Tcmb = 2.725 K and neutrinos with Neff = 3.04, T_ν = (4/11)^(1/3) Tcmb.");
   });
 
   test("a key/value block written in the formula is one model, named by its text", async () => {

@@ -59,6 +59,7 @@ describe("the cell of a call inside another that the selected cell reads", () =>
   test("a unit given by a call is read at its first cell, whatever the cell explained", async () => {
     const [convert, text] = await explainFormula('=ZC.CONVERT($A$1:$A$2,"Mpc",ZC.COORD_TEXT($C$1:$C$2,"ra"))', cells, p18Cmb, undefined, { row: 1, col: 0 });
     expect(convert.fault?.argument).toBe("to");
+    expect(convert.args[2].value).toBe('range 2×1, first "10:00:00.00"'); // a unit is one cell: the range is not read cell by cell
     // 150° = 10 h of right ascension (15° an hour, common practice)
     expect(text.result).toBe('"10:00:00.00" (row 1 of 2×1 values: this cell)');
     expect(text.args[0].value).toBe("150 (Sheet1!C1 for this cell)");
@@ -76,5 +77,47 @@ describe("the cell of a call inside another that the selected cell reads", () =>
     const [age] = await explainFormula("=ZC.AGE($A$1:$A$2)", cells, p18Cmb);
     expect(age.result).toMatch(new RegExp(`^5\\.8423 Gyr \\(the first of 2×1 values; ${unknownCell}\\)$`));
     expect(age.args[0].value).toBe("range 2×1, first 1");
+  });
+
+  test("a unit argument given by a call: read at its first cell too", async () => {
+    const [, text] = await explainFormula('=ZC.DIST_LUM($A$1:$A$2,,ZC.COORD_TEXT($C$1:$C$2,"ra"))', cells, p18Cmb, undefined, { row: 1, col: 0 });
+    expect(text.result).toBe('"10:00:00.00" (row 1 of 2×1 values: this cell)');
+  });
+
+  test("a call written after the last argument is read by no argument: its cell is not known", async () => {
+    const [, extra] = await explainFormula('=ZC.AGE(1,,"Gyr",ZC.AGE($A$1:$A$2))', cells, p18Cmb, undefined, { row: 0, col: 0 });
+    expect(extra.result).toMatch(new RegExp(`^5\\.8423 Gyr \\(the first of 2×1 values; ${unknownCell}\\)$`));
+  });
+
+  test("a call whose argument Excel computes is not computed, nor is its caller", async () => {
+    const [outer, inner] = await explainFormula("=ZC.DIST_LUM(ZC.AGE(SUM(B1)))", blanks, p18Cmb, 7000);
+    expect(inner.result).toBe("7000 (as Excel shows it; an argument is computed by Excel)");
+    expect(outer.args[0].value).toBe("computed by Excel");
+  });
+
+  test("a call that is not computed still shows the arguments of the selected cell", async () => {
+    const [call] = await explainFormula("=ZC.DIST_LUM($A$1:$A$2,SUM(B1))", cells, p18Cmb, undefined, { row: 1, col: 0 });
+    expect(call.args[0].value).toBe("2 (Sheet1!A2 for this cell)");
+    expect(call.modelNote).toBe("computed by Excel: not known here");
+  });
+});
+
+describe("calls inside others share one budget of cells computed whole", () => {
+  const column = (n: number) => Array.from({ length: n }, (_, i) => [1 + i * 1e-3]);
+  const long = sheet1({ "$A$1:$A$600": column(600), "$A$1:$A$1000": column(1_000) });
+
+  test("exactly the limit, 1,000 cells, is computed whole", async () => {
+    const [redshift] = await explainFormula('=ZC.REDSHIFT(ZC.AGE($A$1:$A$1000),"AGE")', long, p18Cmb, undefined, { row: 7, col: 0 });
+    expect(redshift.args[0].value).toMatch(/^5\.814\d+ \(row 8 of the result of ZC\.AGE for this cell\)$/);
+  });
+
+  test("two calls of 600 cells: the first is computed whole, the second would pass the limit and is not", async () => {
+    const [outer, middle, inner] = await explainFormula('=ZC.DIST_LUM(ZC.REDSHIFT(ZC.AGE($A$1:$A$600),"AGE"))', long, p18Cmb, undefined, { row: 7, col: 0 });
+    expect(inner.result).toMatch(/^5\.81404 Gyr \(row 8 of 600×1 values: this cell\)$/);
+    expect(middle.args[0].value).toMatch(/\(row 8 of the result of ZC\.AGE for this cell\)$/);
+    expect(outer.args[0].value).toBe(
+      "the result of ZC.REDSHIFT, 600×1 cells, not computed here (the inspector computes at most 1,000 cells of calls inside another)",
+    );
+    expect(outer.result).toBe("omitted (as Excel shows it; an argument is not read)");
   });
 });
