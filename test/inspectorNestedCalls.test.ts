@@ -73,6 +73,11 @@ describe("the cell of a call inside another that the selected cell reads", () =>
     expect(modulus.args[0].value).toBe("range 2×1, first 0.1");
   });
 
+  test("a formula that is one call, spaces around it, is explained at the selected cell", async () => {
+    const [age] = await explainFormula("=  ZC.AGE($A$1:$A$2)  ", cells, p18Cmb, undefined, { row: 1, col: 0 });
+    expect(age.result).toMatch(/^3\.27014 Gyr \(row 2 of 2×1 values: this cell\)$/);
+  });
+
   test("the selected cell's place is not known: a call's first cell is shown, and said so", async () => {
     const [age] = await explainFormula("=ZC.AGE($A$1:$A$2)", cells, p18Cmb);
     expect(age.result).toMatch(new RegExp(`^5\\.8423 Gyr \\(the first of 2×1 values; ${unknownCell}\\)$`));
