@@ -86,6 +86,27 @@ describe("the Result row: the value the cell shows, with its unit and every digi
     expect(call.result).toBe("10.5 (row 2, column 1 of 2×5 values: this cell)"); // the second bin's low edge
   });
 
+  test("a single cell given beside a range is shown as it is, not as a cell of the range", async () => {
+    const [call] = await explainFormula("=ZC.DIST_LUM($A$1:$A$2,B1)", sheet1({ "$A$1:$A$2": [[1], [2]], B1: [["EDS"]] }), p18Cmb, undefined, { row: 1, col: 0 });
+    expect(valuesOf(call)).toEqual({ z: "2 (Sheet1!A2 for this cell)", model: '"EDS"', unit: 'default "Mpc"' });
+  });
+
+  test("a range of keys and values given where a number belongs is a range, not a model", async () => {
+    const [call] = await explainFormula("=ZC.DIST_LUM($E$1:$F$2)", sheet1({ "$E$1:$F$2": [["H0", 70], ["Om", 0.3]] }), p18Cmb);
+    expect(call.args[0].value).toBe('range 2×2, first "H0"');
+  });
+
+  test("a required number left out is said to be omitted", async () => {
+    const [call] = await explainFormula("=ZC.DIST_LUM()", blanks, p18Cmb);
+    expect(call.args[0].value).toBe("omitted");
+    expect(call.result).toBe("#VALUE! — ZC.DIST_LUM: z is required");
+  });
+
+  test("a unit text of spaces reads as left out: the value keeps its own unit", async () => {
+    const [call] = await explainFormula('=ZC.REST_FRAME(7200,0.1,"wavelength","  ")', blanks, p18Cmb);
+    expect(call.result).toBe("6545.45 (in the value's own unit)"); // λ/(1+z) = 7200/1.1
+  });
+
   test("an array constant is read cell by cell, each cell named in the array", async () => {
     const [call] = await explainFormula("=ZC.DIST_LUM({0.5;1},\"EDS\")", blanks, p18Cmb, undefined, { row: 1, col: 0 });
     expect(call.args[0].value).toBe("1 (row 2 of the array for this cell)");

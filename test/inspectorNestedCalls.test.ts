@@ -18,7 +18,7 @@ const unknownCell = "which one this cell shows is not known here";
 
 describe("which calls of a formula the inspector explains", () => {
   test("only the ZC functions zcell defines, outermost first", async () => {
-    const calls = await explainFormula("=ZC.NOPE(1)+SUM(ZC.AGE(1),ZC.HUBBLE(0))", blanks, p18Cmb);
+    const calls = await explainFormula("=ZC.NOPE(1)+SUM(ZC.AGE(1),ZC.HUBBLE(0))+ABCAGE(2)", blanks, p18Cmb);
     expect(calls.map((c) => c.name)).toEqual(["ZC.AGE", "ZC.HUBBLE"]);
     expect(calls[1].result).toBe("67.36 km/s/Mpc"); // H(0) = H0 of P18-CMB (Planck 2018 VI Table 2)
   });
@@ -114,6 +114,27 @@ describe("calls inside others share one budget of cells computed whole", () => {
   test("exactly the limit, 1,000 cells, is computed whole", async () => {
     const [redshift] = await explainFormula('=ZC.REDSHIFT(ZC.AGE($A$1:$A$1000),"AGE")', long, p18Cmb, undefined, { row: 7, col: 0 });
     expect(redshift.args[0].value).toMatch(/^5\.814\d+ \(row 8 of the result of ZC\.AGE for this cell\)$/);
+  });
+
+  const row = (n: number) => [Array.from({ length: n }, (_, i) => 1 + i * 1e-3)];
+  const rows = sheet1({ "$A$1:$WB$1": row(600), "$A$1:$ATF$1": row(1_200) });
+
+  test("a row of 1,200 cells passes the limit", async () => {
+    const [redshift] = await explainFormula('=ZC.REDSHIFT(ZC.AGE($A$1:$ATF$1),"AGE")', rows, p18Cmb, undefined, { row: 0, col: 7 });
+    expect(redshift.args[0].value).toBe(
+      "the result of ZC.AGE, 1×1,200 cells, not computed here (the inspector computes at most 1,000 cells of calls inside another)",
+    );
+  });
+
+  test("two rows of 600 cells: the second would pass the limit", async () => {
+    const [outer] = await explainFormula('=ZC.DIST_LUM(ZC.REDSHIFT(ZC.AGE($A$1:$WB$1),"AGE"))', rows, p18Cmb, undefined, { row: 0, col: 7 });
+    expect(outer.args[0].value).toMatch(/^the result of ZC\.REDSHIFT, 1×600 cells, not computed here/);
+  });
+
+  test("a call inside a function Excel computes takes none of the budget", async () => {
+    const formula = '=SUM(ZC.AGE($A$1:$A$600))+ZC.REDSHIFT(ZC.AGE($A$1:$A$600),"AGE")';
+    const [, redshift] = await explainFormula(formula, long, p18Cmb, undefined, { row: 7, col: 0 });
+    expect(redshift.args[0].value).toMatch(/^range 600×1, first 5\.8422/); // computed whole: its first cell is AGE(1)
   });
 
   test("two calls of 600 cells: the first is computed whole, the second would pass the limit and is not", async () => {
