@@ -322,9 +322,7 @@ function resultUnitOf(
 /** The texts a call was given, in the formula and in the cells it reads (a stranger's): the error advice keeps them out of its own words. */
 function typedTexts(e: EvaluatedCall): string[] {
   // a string literal of the formula as its text (without its quotes, "" read as ")
-  const texts = e.call.args
-    .filter((text): text is string => typeof text === "string")
-    .map((text) => (/^"[^]*"$/.test(text) ? text.slice(1, -1).replaceAll('""', '"') : text));
+  const texts = e.call.args.map((text) => (/^"[^]*"$/.test(text) ? text.slice(1, -1).replaceAll('""', '"') : text));
   for (const arg of e.args) {
     if (!arg.known) continue;
     for (const row of matrixOf(arg.value) ?? [[arg.value]]) for (const value of row) if (typeof value === "string") texts.push(value);

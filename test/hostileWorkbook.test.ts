@@ -15,7 +15,9 @@ import { readActiveModel } from "../functions/activeModel.js";
 import { CellError } from "../functions/cellError.js";
 import { definitions } from "../functions/definitions.js";
 import { evaluate } from "../functions/evaluate.js";
+import { cachedModelCount } from "../functions/modelCache.js";
 import { maxSpecLength, maxWorkbookModels, readWorkbookModels } from "../functions/workbookModels.js";
+import { explainFormula } from "../taskpane/explainCall.js";
 import { findUnboundFormulas, scanCellLimit, scanChunkCells } from "../taskpane/workbookScan.js";
 import { tokenize } from "../taskpane/formulaCalls.js";
 import { parseProvenanceNote, provenanceNote } from "../taskpane/provenanceNote.js";
@@ -432,8 +434,6 @@ describe("the repair scan is bounded", () => {
 
 describe("the inspector on a long formula", () => {
   test("154 calls with one model build it at most once and read each reference once", async () => {
-    const { explainFormula } = await import("../taskpane/explainCall.js");
-    const { cachedModelCount } = await import("../functions/modelCache.js");
     const formula = "=" + Array.from({ length: 154 }, (_, i) => `ZC.DIST_LUM(A${1 + (i % 2)},"P18-BAO; H0=70.25")`).join("+");
     expect(formula.length).toBeGreaterThan(5000);
     const before = cachedModelCount();
