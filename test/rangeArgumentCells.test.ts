@@ -135,6 +135,13 @@ describe("ranges that do not fit together", () => {
     expect(shown(run("DIST_LUM", z, model))).toEqual([[`#value ZC.DIST_LUM: ${message}`]]);
   });
 
+  test("a result of more than four whole columns (4,194,304 cells) is refused before any cell is read", () => {
+    // 2049 rows against 2048 columns: 4,196,352 cells
+    const rows = Array.from({ length: 2049 }, () => [0.1]);
+    const cols = [new Array(2048).fill(0.2)];
+    expect(shown(run("Z_COMBINE", rows, cols))).toEqual([["#value ZC.Z_COMBINE: the result would have 4,196,352 cells; at most 4,194,304 are allowed"]]);
+  });
+
   test("a row against a column spans both", () => {
     const cells = run("DIST_LUM", [[0.1, 0.2]], column("P18-CMB", "W9-ALL"));
     expect([cells.length, cells[0].length]).toEqual([2, 2]);
