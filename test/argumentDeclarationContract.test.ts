@@ -37,6 +37,19 @@ describe("a minimum other than zero, in the unit given", () => {
   });
 });
 
+describe("a maximum without a minimum, in a range", () => {
+  // at most 10, nothing below: every cell of a range is checked against the maximum alone
+  const def: FunctionDef = {
+    name: "AT_MOST_TEN",
+    args: [{ kind: "number", name: "x", max: { value: 10, what: "ten" } }],
+    compute: (a) => a.x as number,
+  };
+  test("each cell is checked, in a column as in one cell", () => {
+    expect(evaluate(def, [[[-5], [10], [11]]], active).map(([c]) => shown(c))).toEqual([-5, 10, "#num ZC.AT_MOST_TEN: x = 11 is above 10 (ten)"]);
+    expect(call(def, 11)).toBe("#num ZC.AT_MOST_TEN: x = 11 is above 10 (ten)");
+  });
+});
+
 describe("hourangle is for the right ascension", () => {
   // the angle unit's default is radians here: a declination beside an hourangle ra is still in degrees
   const def: FunctionDef = {
