@@ -22,6 +22,8 @@ describe("the calls of a formula and their arguments", () => {
     // a group's commas are not the call's separators
     ["=ZC.DIST_LUM((A1,B1), 2)",             [["ZC.DIST_LUM", ["(A1,B1)", "2"], 0, "ZC.DIST_LUM((A1,B1), 2)"]]],
     ["=(ZC.AGE(1))*2",                       [["ZC.AGE", ["1"], 0, "ZC.AGE(1)"]]],
+    // a separator outside any call (a union written at the top of the formula) separates no argument
+    ["=ZC.AGE(1)+(A1,B1)",                   [["ZC.AGE", ["1"], 0, "ZC.AGE(1)"]]],
     // a stray closing parenthesis outside any call is passed over
     ["=1)+ZC.AGE(2)",                        [["ZC.AGE", ["2"], 0, "ZC.AGE(2)"]]],
     // nested calls: each with its depth and its own text, the outer one first
@@ -75,6 +77,9 @@ describe("array constants as the inspector reads them", () => {
     ["{1\\2;3\\4}",                   [[1, 2], [3, 4]]],
     ["{true,False, TRUE }",           [[true, false, true]]],
     ["{-1.5e3, .25}",                 [[-1500, 0.25]]],
+    // what a stranger may write that is neither: not a number (NaN), never a boolean or text
+    ["{TRUEX,XFALSE}",                [[Number.NaN, Number.NaN]]],
+    ['{1"x"}',                        [[Number.NaN]]],
   ];
   test.each(cases)("%s", (text, rows) => {
     expect(parseArrayConstant(text)).toEqual(rows);

@@ -26,6 +26,7 @@ describe("the tokens of a formula", () => {
     ["=A1<B1",                 ["ref A1 @1", "op < @3", "ref B1 @4"]],
     ["=1>2",                   ["number 1 @1", "op > @2", "number 2 @3"]],
     ["=A1=<B1",                ["ref A1 @1", "op = @3", "op < @4", "ref B1 @5"]],
+    ["=1=2",                   ["number 1 @1", "op = @2", "number 2 @3"]],
     ["=A1>>B1",                ["ref A1 @1", "op > @3", "op > @4", "ref B1 @5"]],
     ["=-A1%^2&\"x\"",          ["op - @1", "ref A1 @2", "op % @4", "op ^ @5", "number 2 @6", "op & @7", "string \"x\" @8"]],
     // a closing brace inside a string of an array constant does not end it
@@ -38,6 +39,8 @@ describe("the tokens of a formula", () => {
     ["=A$",                    ["name A @1", "op $ @2"]],
     ["=!A1",                   ["op ! @1", "ref A1 @2"]],
     ["=@ZC.AGE(1)",            ["op @ @1", "func ZC.AGE @2", "open ( @8", "number 1 @9", "close ) @10"]],
+    // a defined name may start with a backslash (Excel's rules for names, from memory)
+    ["=\\x+1",                 ["name \\x @1", "op + @3", "number 1 @4"]],
     // names and sheets that start with a letter beyond ASCII
     ["=Ànorm*2",               ["name Ànorm @1", "op * @6", "number 2 @7"]],
     ["=Été!A1",                ["ref Été!A1 @1"]],
