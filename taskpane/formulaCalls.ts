@@ -97,9 +97,9 @@ export function tokenize(formula: string): Token[] {
       push("error", matchAt(errorPattern, s, i) ?? c);
     } else if ((c === "<" || c === ">") && s[i + 1] === "=") push("op", c + "=");
     else if (c === "<" && s[i + 1] === ">") push("op", "<>");
-    else if ("+-*/^&=<>%:".includes(c)) push("op", c);
     else {
-      // only the patterns that can start with this character are tried
+      // only the patterns that can start with this character are tried; a character that starts
+      // none of them (an operator such as + or :, or a stray ! $ @ |) is an operator of its own
       const code = s.charCodeAt(i);
       const letter = (code | 32) >= 97 && (code | 32) <= 122;
       const digit = code >= 48 && code <= 57;

@@ -84,13 +84,13 @@ function readReference(text: string, sheets: readonly string[] | undefined): Rea
   return { sheet, multiCell };
 }
 
-/** Our exact name of a function token, or why it is refused. */
-function functionName(token: Token, next: Token | undefined): { name: string } | { problem: string } {
+/** Our exact name of a function token (the tokenizer makes one only of a name followed by "("), or why it is refused. */
+function functionName(token: Token): { name: string } | { problem: string } {
   if (!/^[A-Za-z0-9_.]+$/.test(token.text)) return { problem: `it calls ${shown(token.text)}, whose name is not plain ASCII, so it is not a zcell function` };
   const name = token.text.toUpperCase();
   if (!name.startsWith("ZC.")) return { problem: `it calls ${shown(name)}, which is not a zcell function` };
   if (!zcNames.has(name)) return { problem: `${shown(name)} is not a zcell function` };
-  return next?.kind === "open" ? { name } : { problem: `it cannot be read near ${shown(name)}` };
+  return { name };
 }
 
 /** Why a token other than a function or a reference is not allowed, or undefined when it is. */
@@ -103,7 +103,6 @@ function tokenProblem(token: Token): string | undefined {
     case "name":
       return `it uses the name ${shown(token.text)}, and a name can stand for any formula`;
     case "op":
-      if (token.text === "|") return "it holds a DDE link (|), which can start another program";
       if (token.text === "[" || token.text === "]") return "it refers to another workbook";
       return allowedOperators.has(token.text) ? undefined : `it holds "${shown(token.text)}", which zcell does not restore`;
     default:
@@ -126,6 +125,7 @@ export function restorableFormula(formula: unknown, options: RestoreOptions): Re
   } catch {
     return { ok: false, reason: "zcell cannot read it (an unterminated string, sheet name or array)" };
   }
+  // every "|" read as an operator (not inside a string, sheet name or array) is refused here, before any other token is judged
   if (tokens.some((t) => t.kind === "op" && t.text === "|")) return { ok: false, reason: "it holds a DDE link (|), which can start another program" };
   const written: string[] = ["="];
   let calls = 0;
@@ -135,7 +135,7 @@ export function restorableFormula(formula: unknown, options: RestoreOptions): Re
     let text = token.text;
     let spills = token.kind === "array";
     if (token.kind === "func") {
-      const read = functionName(token, tokens[i + 1]);
+      const read = functionName(token);
       if ("problem" in read) return { ok: false, reason: read.problem };
       text = read.name;
       spills = tableFunctions.has(read.name);
