@@ -142,7 +142,7 @@ function allCells(def: FunctionDef, call: CallArguments, seen: { error: boolean 
           out[r] = [shown(classify(e, def.name))];
           continue;
         }
-        out[r] = [v - v === 0 ? (v === 0 ? 0 : v) : shown((notFinite ??= new CellError("num", messages.notFiniteResult(def.name))))];
+        out[r] = [v - v === 0 ? (v === 0 ? 0 : v) : shown((notFinite ??= notFiniteResult(def.name)))];
       } else if (value instanceof CellError || value === blank) {
         out[r] = [shown(value)];
       } else {
@@ -251,8 +251,13 @@ function modelGroups(ranges: readonly Column[], upTo: number): { range: Column; 
   return best;
 }
 
+/** A result that is not a finite number: #NUM!, named once (the message already starts with the ZC name the sheet shows). */
+function notFiniteResult(fn: string): CellError {
+  return new CellError("num", messages.notFiniteResult(`ZC.${fn}`));
+}
+
 function cleanNumber(x: number, fn: string): number | CellError {
-  if (!Number.isFinite(x)) return new CellError("num", messages.notFiniteResult(fn));
+  if (!Number.isFinite(x)) return notFiniteResult(fn);
   return x === 0 ? 0 : x;
 }
 

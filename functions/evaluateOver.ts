@@ -78,7 +78,7 @@ function readColumnCells(name: string, raw: unknown): ColumnCells {
         continue;
       }
       const isNumber = typeof value === "number" || (typeof value === "string" && isNumberText(value.trim()));
-      const x = isNumber ? Number(typeof value === "string" ? value.trim() : value) : Number.NaN;
+      const x = isNumber ? Number(value) : Number.NaN; // Number() skips the same white space as trim()
       if (x - x === 0) numbers[i] = x;
       else if (isBlank(value)) numbers[i] = Number.NaN;
       else {

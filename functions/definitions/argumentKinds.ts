@@ -96,16 +96,6 @@ export function degreesOf(a: Args, name: string, part: AnglePart): number {
   return typeof x === "number" ? x : sexagesimalDegrees(x as string, part, name);
 }
 
-/** A unit given as text whose meaning depends on other arguments (blank: `shown`), as a factor into `reference`. */
-export function textUnitFactor(a: Args, name: string, shown: string, reference: string): number {
-  const text = (a[name] as string) || shown;
-  try {
-    return conversionFactor(text, reference, m(a).h);
-  } catch (e) {
-    throw new TypeError(messages.unitArgument(name, (e as Error).message));
-  }
-}
-
 /** L_ν [W/Hz] at ν [Hz] in the out_unit asked: W/Hz and its kin give L_ν, a power unit (W, erg/s, Lsun) ν L_ν (= λ L_λ). */
 export function inSpectralOrPowerUnit(a: Args, lnuWHz: number, nuHz: number): number {
   const out = textOr(a, spectralOutUnit);

@@ -93,8 +93,8 @@ function extinction(a: Args, ebv: number): number {
     // far outside (a factor 1.5: not a value just past an edge), the unit in which the same number is
     // inside: 5500 given in nm is 1.6 times the upper edge, and 5500 Angstrom is inside
     const far = angstrom < min / 1.5 || angstrom > 1.5 * max;
-    const likely = far ? likelyWavelengthUnits.find((u) => u !== unitText.trim() && inRange(angstromConverter(u)(given), law)) : undefined;
-    throw new NoSolutionError(messages.outsideLawRange("wavelength", given, unitText.trim(), law, low, high, likely ? { unit: likely, arg: "wavelength_unit (5th argument)" } : undefined));
+    const likely = far ? likelyWavelengthUnits.find((u) => u !== unitText && inRange(angstromConverter(u)(given), law)) : undefined;
+    throw new NoSolutionError(messages.outsideLawRange("wavelength", given, unitText, law, low, high, likely ? { unit: likely, arg: "wavelength_unit (5th argument)" } : undefined));
   }
   return extinctionMag(angstrom, ebv, law, n(a, "r_v"));
 }
