@@ -32,6 +32,17 @@ describe("Cardelli 1989 and O'Donnell 1994 in every piece, at R_V = 3.1 and 5", 
   });
 });
 
+test.each([
+  // λ [Å]              Cardelli 1989         O'Donnell 1994        (python3-extinction 0.4.6, ccm89/odonnell94(λ, 3.1, 3.1): a point on a boundary takes the piece above)
+  [1e4 / 1.1,           1.461051175592572,    1.4608806309320068],
+  [1e4 / 3.3,           5.587033553522268,    5.587033553522268],
+  [1e4 / 8,             10.3437,              10.3437],
+  [1e4 / 5.9,           7.789425823092936,    7.789425823092936],
+])("on a boundary between CCM's pieces, %d Å", (w, ccm, odonnell) => {
+  expectClose(extinctionMag(w, 1, "Cardelli 1989"), ccm, 1e-12, "Cardelli 1989");
+  expectClose(extinctionMag(w, 1, "ODonnell 1994"), odonnell, 1e-12, "ODonnell 1994");
+});
+
 describe("Calzetti 2000 on both sides of 0.63 µm", () => {
   // k′(λ) = A_λ/E_s(B−V), from python3-extinction 0.4.6: extinction.calzetti00(λ, a_v=R′_V, r_v=R′_V)
   const waves = [1250, 3000, 5000, 6000, 7000, 15000, 22000];
@@ -44,6 +55,8 @@ describe("Calzetti 2000 on both sides of 0.63 µm", () => {
 
   test("without R′_V it is 4.05 (Calzetti et al. 2000 eq. 5); the Milky Way laws take 3.1", () => {
     expectClose(extinctionMag(5000, 1, "Calzetti 2000"), 4.470122, relative, "Calzetti 2000 default");
+    // 6300 Å, the join, takes the long-wavelength piece: python3-extinction 0.4.6, calzetti00([6300.], 4.05, 4.05)
+    expectClose(extinctionMag(6300, 1, "Calzetti 2000"), 3.501697317460317, 1e-12, "Calzetti 2000 at 0.63 µm");
     expect(defaultRv("Calzetti 2000")).toBe(4.05);
     for (const law of ["Fitzpatrick 1999", "Cardelli 1989", "ODonnell 1994"] as const) expect(defaultRv(law)).toBe(3.1);
     expectClose(extinctionMag(1e4 / 2.5, 1, "Cardelli 1989"), 4.54012267912, relative, "Cardelli 1989 default R_V");
@@ -129,6 +142,9 @@ describe("a law is found by the name a sheet gives", () => {
     ["CARDELLI_1989", "Cardelli 1989"],
     [" calzetti\t2000 ", "Calzetti 2000"],
     ["O`Donnell 1994", "ODonnell 1994"],
+    ["O‘Donnell 1994", "ODonnell 1994"],
+    ["Oʼdonnell 1994", "ODonnell 1994"],
+    ["Fitzpatrick\n1999", "Fitzpatrick 1999"],
   ] as const)("%j is %s", (text, law) => {
     expect(extinctionLawNamed(text)).toBe(law);
   });

@@ -59,6 +59,7 @@ describe("sexagesimal text a stranger may type is refused with a message that sa
     ["12:+30",         "dec",  `dec: "12:+30" ${sign}`],
     ["12:−30",         "dec",  `dec: "12:−30" ${sign}`],
     ["12''",           "ra",   `ra: "12''" has "'" where h, d, °, ":" or a space belongs; ${raHint}`],
+    ["12:30:15'",      "dec",  `dec: "12:30:15'" has "'" where s, ″ or ", ":" or a space belongs; ${decHint}`],
     ["12x",            "ra",   `ra: "12x" has "x" where h, d, °, ":" or a space belongs; ${raHint}`],
     ["12:30:15x",      "ra",   `ra: "12:30:15x" has "x" where s, ″ or ", ":" or a space belongs; ${raHint}`],
     ["12 ;",           "dec",  `dec: "12 ;" has ";" where h, d, °, ":" or a space belongs; ${decHint}`],
