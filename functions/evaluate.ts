@@ -38,7 +38,7 @@ function evaluateNoting(def: FunctionDef, raw: readonly unknown[], active: Activ
     }
     if (def.over) {
       seen.error = true;
-      return evaluateOver(def, raw, active);
+      return evaluateOver(def, raw, active).map((row) => row.map((cell) => (typeof cell === "number" ? cleanNumber(cell, def.name) : cell)));
     }
     const call = readCall(def, raw, active);
     if (call.ranges.length > 0) return allCells(def, call, seen);

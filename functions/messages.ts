@@ -79,7 +79,7 @@ export const messages = {
   /** SOUND_HORIZON of a model without Ob: the user's own model with Ob added (0.049, Planck 2018's Ωb), not a preset that has one already. */
   soundHorizonNeedsOb: (spec: string) => `the sound horizon needs the baryon density: add Ob to the model, e.g. "${quotedText(spec)}; Ob=0.049"`,
   noEquality: "z_eq: this model has no radiation (Tcmb = 0), so no matter–radiation equality",
-  internal: (fn: string, detail: string) => `${fn}: unexpected problem (${detail}); please report it`,
+  internal: (fn: string, detail: string) => `ZC.${fn}: unexpected problem (${detail}); please report it`,
   activeModelFallback: (detail: string) =>
     `the workbook's stored cosmology could not be read (${detail}); using ${defaultPresetName} (the default) until one is applied`,
 } as const;

@@ -3,6 +3,7 @@
  * notation, its numerical method (with a one-line plain version) and its result's unit where no
  * unit argument sets it.
  */
+import { choiceKey } from "../functions/readArguments.js";
 
 const tabled =
   "quintic Hermite tables in ln(1+z) built once per model from Gauss–Legendre panels of the exact integrals " +
@@ -32,8 +33,9 @@ export type ResultUnit = string | ((text: (name: string) => string | undefined) 
 const ownUnit = (text: (name: string) => string | undefined) => text("unit") ?? "(in the value's own unit)";
 /** ZC.PARAM's values that have a unit. */
 const parameterUnits: Record<string, string> = { H0: "km/s/Mpc", Tcmb: "K", mnu: "eV", age_today: "Gyr", hubble_time: "Gyr", hubble_distance: "Mpc" };
-/** The unit of ZC.PARAM's value `name`, whose case the function ignores ("tcmb" is Tcmb). */
-const parameterUnit = (name: string | undefined) => Object.entries(parameterUnits).find(([key]) => key.toLowerCase() === name?.toLowerCase())?.[1];
+/** The unit of ZC.PARAM's value `name`, compared as the function compares it ("tcmb", "Hubble distance" and "hubble-distance" name Tcmb and hubble_distance). */
+const parameterUnit = (name: string | undefined) =>
+  name === undefined ? undefined : Object.entries(parameterUnits).find(([key]) => choiceKey(key) === choiceKey(name))?.[1];
 
 /** What each function computes, in plain notation, and how. */
 export const about: Record<string, { summary: string; equation: string; method: string; kcorr?: boolean; unit?: ResultUnit; columns?: string[] }> = {
@@ -96,7 +98,7 @@ export const about: Record<string, { summary: string; equation: string; method: 
   HALO_MASS: { summary: "halo mass within a radius at mean density Δ·ρ_crit(z)", equation: "M = (4π/3)·Δ·ρ_crit(z)·R³", method: closedForm },
   GROWTH: { summary: "linear growth factor D(z)/D(0)", equation: "D″ + (2 + ½·dlnE²/dlna)·D′ − (3/2)·Ω_s(a)·D = 0 in ln a; Ω_s: CDM + baryons (neutrinos \"smooth\") or + ρ_ν − 3P_ν (\"clustering\")", method: growthMethod },
   GROWTH_RATE: { summary: "linear growth rate f = dlnD/dlna", equation: "f = D′/D from the growth equation", method: growthMethod },
-  RESCALE: { summary: "a published value restated under another cosmology", equation: "× D_M ratio (distance), × D_L² ratio (luminosity), × D_A ratio (size), + 5·log10(D_L,from/D_L,to) (magnitude), × dV/dz ratio (density)", method: tabled, unit: (text) => (text("quantity")?.toLowerCase() === "magnitude" ? "mag" : ownUnit(text)) },
+  RESCALE: { summary: "a published value restated under another cosmology", equation: "× D_M ratio (distance), × D_L² ratio (luminosity), × D_A ratio (size), + 5·log10(D_L,from/D_L,to) (magnitude), × dV/dz ratio (density)", method: tabled, unit: (text) => (choiceKey(text("quantity") ?? "") === "magnitude" ? "mag" : ownUnit(text)) },
   SURFACE_LUM: { summary: "intrinsic surface luminosity density", equation: "Σ = 10^(−0.4(μ − 10·log10(1+z) − K − M☉ − 21.572)) L☉/pc²", method: closedForm, unit: "Lsun/pc2" },
   SURFACE_MAG: { summary: "observed surface brightness of a surface luminosity density", equation: "μ = M☉ + 21.572 − 2.5·log10(Σ) + 10·log10(1+z) + K", method: closedForm, unit: "mag/arcsec2" },
   COORD_DEG: { summary: "an angle in degrees from sexagesimal text", equation: "RA (hours): 15°·(h + m/60 + s/3600); Dec: ±(d + m/60 + s/3600)°; a number stays degrees", method: closedForm, unit: "deg" },

@@ -62,3 +62,25 @@ describe("LUMINOSITY_FUNCTION's bins", () => {
     expect(message.endsWith(`; ${hint}`)).toBe(true);
   });
 });
+
+describe("a whole-column result that overflows is #NUM!, as a single cell's is", () => {
+  // χ² = Σ ((μ − μ_model − offset)/σ)²: with σ = 1e-300 the squares overflow a double (IEEE 754
+  // binary64's largest finite value is about 1.8e308); the same for φ = count/(V_max·Δ) with V_max
+  // = 1e-320. Expected text: messages.notFiniteResult (functions/messages.ts), pinned as the interface.
+  const notFinite = (fn: string) => ["#NUM!", `ZC.${fn}: the result is not a finite number for these arguments`];
+
+  test("CHI2_MODULUS with errors of 1e-300 mag", () => {
+    expect(shown(run("CHI2_MODULUS", col([0.1, 0.2]), col([38, 40]), col([1e-300, 1e-300])))).toEqual(notFinite("CHI2_MODULUS"));
+  });
+
+  test("LUMINOSITY_FUNCTION with a V_max of 1e-320 Mpc³: the φ cells, not the bin edges or counts", () => {
+    const cells = run("LUMINOSITY_FUNCTION", col([42.5]), col([1e-320]), col([42, 43]));
+    expect(cells.length).toBe(1);
+    const [low, high, count, phi, phiError] = cells[0];
+    expect([low, high, count]).toEqual([42, 43, 1]);
+    for (const cell of [phi, phiError]) {
+      expect(cell).toBeInstanceOf(CellError);
+      expect([(cell as CellError).excelText, (cell as CellError).message]).toEqual(notFinite("LUMINOSITY_FUNCTION"));
+    }
+  });
+});

@@ -97,8 +97,8 @@ describe("a thrown value as the error it stands for", () => {
     [new NoSolutionError("no z gives this"),  "na",    "no z gives this"],
     [new RangeError("z must be > -1"),         "num",   "z must be > -1"],
     [new TypeError("z: not a number"),         "value", "z: not a number"],
-    [new Error("boom"),                        "value", "DIST_LUM: unexpected problem (boom); please report it"],
-    ["a string thrown",                        "value", "DIST_LUM: unexpected problem (a string thrown); please report it"],
+    [new Error("boom"),                        "value", "ZC.DIST_LUM: unexpected problem (boom); please report it"],
+    ["a string thrown",                        "value", "ZC.DIST_LUM: unexpected problem (a string thrown); please report it"],
   ])("%s → #%s", (thrown, kind, message) => {
     const e = classify(thrown, "DIST_LUM");
     expect({ kind: e.kind, message: e.message }).toEqual({ kind, message });

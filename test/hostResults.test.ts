@@ -64,7 +64,7 @@ describe("a cell computed before and after the workbook's settings are read", ()
     const { call } = await freshSheet();
     const [[cell]] = await (call("CONVERT", 1, "pc", "lyr") as unknown as Promise<unknown[][]>);
     // messages.internal (functions/messages.ts), pinned as the interface
-    expect(cell).toEqual(new HostError("#VALUE!", "CONVERT: unexpected problem (the host went away); please report it"));
+    expect(cell).toEqual(new HostError("#VALUE!", "ZC.CONVERT: unexpected problem (the host went away); please report it"));
   });
 
   test("a host that fails when its settings are read gives the cell an error value, not an exception", async () => {
@@ -75,7 +75,7 @@ describe("a cell computed before and after the workbook's settings are read", ()
     };
     const { call, whenSettingsReady } = await freshSheet();
     await whenSettingsReady();
-    expect(call("DIST_LUM", 1)).toEqual([[new HostError("#VALUE!", "DIST_LUM: unexpected problem (settings unavailable); please report it")]]);
+    expect(call("DIST_LUM", 1)).toEqual([[new HostError("#VALUE!", "ZC.DIST_LUM: unexpected problem (settings unavailable); please report it")]]);
   });
 });
 

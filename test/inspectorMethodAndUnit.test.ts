@@ -42,9 +42,13 @@ describe("the Result row's unit where the function decides it", () => {
     ["=ZC.FLUX_AB(20,\"erg/s/cm2/Angstrom\",5000)",                              "erg/s/cm2/Angstrom"],
     ["=ZC.PARAM(\"Tcmb\",\"EDS\")",                                              "K"],
     ["=ZC.PARAM(\"hubble_distance\")",                                           "Mpc"],
-    // the functions read these texts whatever their case: so does the unit
+    // the functions read these texts whatever their case, spaces, "_" and "-" (choiceKey): so does the unit
     ["=ZC.PARAM(\"tcmb\")",                                                      "K"],
     ["=ZC.RESCALE(-21,0.5,\"Magnitude\",\"W9-ALL\")",                           "mag"],
+    ["=ZC.PARAM(\"hubble distance\")",                                           "Mpc"],
+    ["=ZC.PARAM(\"HubbleDistance\")",                                            "Mpc"],
+    ["=ZC.PARAM(\"age-today\")",                                                 "Gyr"],
+    ["=ZC.RESCALE(-21,0.5,\"MAG NITUDE\",\"W9-ALL\")",                          "mag"],
   ])("%s: %s", async (formula, unit) => {
     const [call] = await explainFormula(formula, blanks, p18Cmb);
     expect(call.isError, call.result).toBe(false);
