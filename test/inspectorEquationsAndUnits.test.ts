@@ -91,6 +91,7 @@ describe("the Result row's unit is the unit the function returns", () => {
     ['=ZC.OBSERVED_FRAME(1.4,0.05,"frequency")',                             "(in the value's own unit)"],
     ['=ZC.RESCALE(100,0.5,"distance","W9-ALL","EDS","Mpc")',                 "Mpc"],      // "in the value's unit"
     ['=ZC.RESCALE(-21,0.5,"magnitude","W9-ALL")',                            "mag"],      // a magnitude is in mag whatever the unit argument
+    ['=ZC.RESCALE(100,0.5,{"distance";"luminosity"},"W9-ALL","EDS")',        "(in the value's own unit)"], // the quantity of the cell shown is not known here
     ['=ZC.CONVERT(1,"Mpc","Gly")',                                           "Gly"],      // "the value in the wanted unit"
     ['=ZC.PARAM("Om","EDS")',                                                ""],         // a density parameter has no unit
   ])("%s: %s", async (formula, unit) => {
