@@ -5,11 +5,10 @@
  * stands for), and the columns it names are the columns of the function's result. The texts are the
  * inspector's (taskpane/functionAbout.ts), pinned as the interface.
  *
- * The inspector and its table are loaded afresh inside each test (`fresh`), as in
- * test/inspectorFunctionLines.test.ts: the table is built when its module loads.
+ * Each test loads the inspector and its table afresh (test/freshInspector.ts says why).
  */
 import { readdirSync, readFileSync } from "node:fs";
-import { describe, expect, test, vi } from "vitest";
+import { describe, expect, test } from "vitest";
 import {
   abZeroPointJy,
   bolometricZeroPointW,
@@ -24,15 +23,8 @@ import {
   supergalacticFrameDeg,
 } from "../core/units/constants.js";
 import { surfaceBrightnessOffsetMag } from "../core/observables/surfaceBrightness.js";
+import { freshInspector } from "./freshInspector.js";
 import { blanks, p18Cmb, sheet1 } from "./inspectorSheet.js";
-
-async function fresh() {
-  vi.resetModules();
-  const { explainFormula } = await import("../taskpane/explainCall.js");
-  const { about } = await import("../taskpane/functionAbout.js");
-  const { definitions } = await import("../functions/definitions.js");
-  return { explainFormula, about, definitions };
-}
 
 /** The number and the unit of a Result row, from its every-digit value where it has one ("1.5 Mpc" → [1.5, "Mpc"]). */
 function valueAndUnit(call: { result: string; exact?: string }): [number, string] {
@@ -54,7 +46,7 @@ describe("the constants an equation quotes are the core's", () => {
     ["SURFACE_LUM",    `M☉ − ${surfaceBrightnessOffsetMag.toFixed(3)}`],                                 // 5·log10(648000/π / 10) mag (core/observables/surfaceBrightness.ts)
     ["SURFACE_MAG",    `μ = M☉ + ${surfaceBrightnessOffsetMag.toFixed(3)} − 2.5·log10(Σ)`],
   ])("%s quotes %s", async (name, text) => {
-    const { about } = await fresh();
+    const { about } = await freshInspector();
     expect(about[name].equation).toContain(text);
   });
 });
@@ -68,7 +60,7 @@ describe("the Result row's unit is the unit the function returns", () => {
   }
 
   test("a fixed unit is the one the function's declaration gives for its result; a function with a unit argument for its result has none of its own", async () => {
-    const { about, definitions } = await fresh();
+    const { about, definitions } = await freshInspector();
     const fixed = Object.entries(about).filter(([, info]) => typeof info.unit === "string");
     expect(fixed.length).toBeGreaterThan(10);
     for (const [name, info] of fixed) {
@@ -95,14 +87,14 @@ describe("the Result row's unit is the unit the function returns", () => {
     ['=ZC.CONVERT(1,"Mpc","Gly")',                                           "Gly"],      // "the value in the wanted unit"
     ['=ZC.PARAM("Om","EDS")',                                                ""],         // a density parameter has no unit
   ])("%s: %s", async (formula, unit) => {
-    const { explainFormula } = await fresh();
+    const { explainFormula } = await freshInspector();
     const [call] = await explainFormula(formula, blanks, p18Cmb);
     expect(call.isError, call.result).toBe(false);
     expect(valueAndUnit(call)[1]).toBe(unit);
   });
 
   test("ZC.PARAM's values are shown in the unit the model states them in", async () => {
-    const { explainFormula } = await fresh();
+    const { explainFormula } = await freshInspector();
     const hubbleTimeGyr = megaparsecKm / 70 / secondsPerGyr; // t_H = 1/H0 with H0 = 70 km/s/Mpc (EDS preset)
     //  formula                                                value                         unit         source of the value
     const cases: [string, number, string][] = [
@@ -122,7 +114,7 @@ describe("the Result row's unit is the unit the function returns", () => {
   });
 
   test("a range of parameter names whose cell for the selected one is not known shows the first value, with no unit", async () => {
-    const { explainFormula } = await fresh();
+    const { explainFormula } = await freshInspector();
     const cells = sheet1({ "A1:A2": [["H0"], ["Om"]] });
     const [call] = await explainFormula('=ZC.PARAM(A1:A2,"EDS")', cells, p18Cmb); // the cell explained is not known
     expect(call.result).toBe("70 (the first of 2×1 values; which one this cell shows is not known here)");
@@ -131,7 +123,7 @@ describe("the Result row's unit is the unit the function returns", () => {
 
 describe("the columns the pane names are the columns of the function's result", () => {
   test("ZC.LUMINOSITY_FUNCTION: low edge, high edge, count, Φ and its error, per bin", async () => {
-    const { explainFormula } = await fresh();
+    const { explainFormula } = await freshInspector();
     // invented sources: log L of 42.1 and 42.4 in the first bin [42, 42.5), with V_max 3e5 and 1.2e6 Mpc³
     const formula = "=ZC.LUMINOSITY_FUNCTION({42.1;42.4;42.8;43.2},{3E5;1.2E6;6.8E6;6E7},{42;42.5;43;43.5})";
     const width = 0.5;

@@ -6,20 +6,11 @@
  * the interface a reader meets; the units are those the declarations give for each result
  * (`@returns`, or the default of the unit argument that sets it).
  *
- * The inspector and its table of texts are loaded afresh inside each test (`fresh`): the table is
- * built when its module loads, and mutation testing (per-test coverage) credits code run while a
- * module loads only to the test that loads it.
+ * Each test loads the inspector and its table afresh (test/freshInspector.ts says why).
  */
-import { expect, test, vi } from "vitest";
+import { expect, test } from "vitest";
+import { freshInspector } from "./freshInspector.js";
 import { blanks, p18Cmb } from "./inspectorSheet.js";
-
-async function fresh() {
-  vi.resetModules();
-  const { explainFormula } = await import("../taskpane/explainCall.js");
-  const { about } = await import("../taskpane/functionAbout.js");
-  const { definitions } = await import("../functions/definitions.js");
-  return { explainFormula, about, definitions };
-}
 
 /** The Method row's detail and its plain line, by kind of method (the inspector's texts, taskpane/functionAbout.ts). */
 const methods: Record<string, [detail: string, plain: string]> = {
@@ -299,14 +290,14 @@ const rows: Row[] = [
 ];
 
 test("every worksheet function has the inspector's lines, and no line names a function that does not exist", async () => {
-  const { about, definitions } = await fresh();
+  const { about, definitions } = await freshInspector();
   expect(Object.keys(about).sort()).toEqual(Object.keys(definitions).sort());
   // each has its help example here
   expect(rows.map(([formula]) => /^=ZC\.(\w+)\(/.exec(formula)![1]).sort()).toEqual(Object.keys(definitions).sort());
 });
 
 test("for each function's help example the pane shows its summary, equation, method, the unit of the result and the K-correction convention", async () => {
-  const { explainFormula } = await fresh();
+  const { explainFormula } = await freshInspector();
   for (const [formula, unit, method, summary, equation] of rows) {
     const [call] = await explainFormula(formula, blanks, p18Cmb);
     const name = call.name.slice(3);
