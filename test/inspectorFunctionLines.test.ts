@@ -4,7 +4,7 @@
  * notation, the method (its detail and its plain line), the unit on the Result row and the
  * K-correction convention. The texts are the inspector's (taskpane/functionAbout.ts), pinned here as
  * the interface a reader meets; the units are those the declarations give for each result
- * (`@returns`, or the default of the unit argument that sets it).
+ * (`@returns`, or the default of the unit argument that sets it), or the unit the example asks for.
  *
  * Each test loads the inspector and its table afresh (test/freshInspector.ts says why).
  */
