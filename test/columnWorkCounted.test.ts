@@ -2,9 +2,10 @@
  * What a whole column of one call costs in the per-call work the adapters keep (functions/definitions):
  * the extinction law read from its name, the wavelength or band unit's converter, the flux-density
  * unit's factor, the rest-frame unit's check. Each is worked out once for the column, not once per
- * row: counted in calls of the core functions that do that work (spies around core/index.js, the
- * only way the adapters reach them), never timed. Without these keeps a column of 100k rows costs
- * several times as much (EXTINCTION, MAG_AB: measured with scripts/benchBundle.mjs).
+ * row, and a formula filled down a column (one call per cell) in a few units works each unit out once:
+ * counted in calls of the core functions that do that work (spies around core/index.js, the only way
+ * the adapters reach them), never timed. Without these keeps a column of 100k rows costs several
+ * times as much (EXTINCTION, MAG_AB: measured with scripts/benchBundle.mjs).
  */
 import { beforeEach, describe, expect, test, vi } from "vitest";
 
@@ -94,3 +95,23 @@ describe("a whole column of one call reads its law and units once, not once per 
     expect(calls.conversionFactor).toBeLessThanOrEqual(10);
   });
 });
+
+describe("a formula filled down a column, one call per cell, in two units alternating row by row", () => {
+  const cells = 200;
+  /** The cell of each call, one call per row; fails on any cell that is not a number. */
+  const calls1 = (call: (i: number) => unknown[][]) => Array.from({ length: cells }, (_, i) => numbers(call(i))[0]);
+
+  test("EXTINCTION in nm and um builds each unit's converter once, not once per cell", () => {
+    const a = calls1((i) => run("EXTINCTION", i % 2 ? 0.55 : 550, 0.1, null, null, i % 2 ? "um" : "nm"));
+    // 550 nm and 0.55 um are the same wavelength: the same A_λ
+    expect(a[1]).toBe(a[0]);
+    expect(calls.conversionFactor).toBeLessThanOrEqual(4);
+  });
+
+  test("INDEX_BETWEEN in GHz and MHz works out each band unit once, not once per cell", () => {
+    const a = calls1((i) => (i % 2 ? run("INDEX_BETWEEN", 1, 1400, 2, 5000, "MHz") : run("INDEX_BETWEEN", 1, 1.4, 2, 5, "GHz")));
+    expect(Math.abs(a[1] - a[0])).toBeLessThanOrEqual(1e-12); // the same bands: the same α
+    expect(calls.frequencyHz).toBeLessThanOrEqual(4);
+  });
+});
+
