@@ -7,7 +7,7 @@
  * the adapters reach them), never timed. Without these keeps a column of 100k rows costs several
  * times as much (EXTINCTION, MAG_AB: measured with scripts/benchBundle.mjs).
  */
-import { beforeEach, describe, expect, test, vi } from "vitest";
+import { afterEach, beforeEach, describe, expect, test, vi } from "vitest";
 
 const calls = { extinctionLawNamed: 0, conversionFactor: 0, frequencyHz: 0, fluxDensityFactorJy: 0 };
 vi.mock("../core/index.js", async (importOriginal) => {
@@ -112,6 +112,31 @@ describe("a formula filled down a column, one call per cell, in two units altern
     const a = calls1((i) => (i % 2 ? run("INDEX_BETWEEN", 1, 1400, 2, 5000, "MHz") : run("INDEX_BETWEEN", 1, 1.4, 2, 5, "GHz")));
     expect(Math.abs(a[1] - a[0])).toBeLessThanOrEqual(1e-12); // the same bands: the same α
     expect(calls.frequencyHz).toBeLessThanOrEqual(4);
+  });
+});
+
+describe("columns of a catalogue are read in place, not copied (a million-row column would be copied whole)", () => {
+  afterEach(() => {
+    vi.restoreAllMocks();
+  });
+
+  test("CHI2_MODULUS over three full columns of 1000 rows copies none of them, and gives χ² = Σ ((δ − mean δ)/σ)²", () => {
+    const z = column((i) => 0.01 + i / 1000);
+    const mu = z.map(([zz], i) => [(run("MODULUS", zz)[0][0] as number) + (i % 2 ? 0.1 : -0.1)]);
+    const copies = vi.spyOn(Float64Array, "from");
+    const [[chi2]] = run("CHI2_MODULUS", z, mu, column(() => 0.1));
+    // residuals ±0.1 mag in equal numbers, σ = 0.1: the fitted offset is 0 and each row adds 1 (χ² definition, common practice)
+    expect(Math.abs((chi2 as number) - rows)).toBeLessThanOrEqual(1e-6);
+    expect(copies).not.toHaveBeenCalled();
+  });
+
+  test("a column shorter than the others (its last rows blank) is the only one padded", () => {
+    const copies = vi.spyOn(Float64Array, "from");
+    const values = column((i) => 42 + i / rows);
+    const cell = run("LUMINOSITY_FUNCTION", values, [...column(() => 1e6).slice(0, rows - 1), [null]], [[42], [43]]);
+    // the last row is blank in v_max only (the message zcell shows, functions/messages.ts, pinned as the interface)
+    expect(cell[0][0]).toMatchObject({ kind: "value", message: "ZC.LUMINOSITY_FUNCTION: v_max in row 1000 of the range: blank where the other columns of the row hold values" });
+    expect(copies).toHaveBeenCalledTimes(1);
   });
 });
 
