@@ -38,6 +38,7 @@ describe("givenIn: a text unit with the number arguments given in it", () => {
 
   test.each([
     [num("z"),                                                     "z"],
+    [num("wavelength", { unit: "Angstrom" }),                      "wavelength"], // a number argument with a unit of its own
     [textWithDefault("law", "Fitzpatrick 1999", {}),               "law"],
   ])("%o is not a text unit: refused naming it", (spec, name) => {
     expect(() => givenIn(spec, "x")).toThrow(new Error(`${name} is not a text unit`));
