@@ -39,7 +39,7 @@ export const area = num("area", { default: 4 * Math.PI, blankMeansDefault: true,
 export const requiredArea = num("area", { min: 0, max: { value: 4 * Math.PI, what: "the whole sky" } });
 export const angle = num("angle", { min: 0, max: { value: Math.PI, what: "180°" } });
 /** An optional text with a default value one could type (`typed`): blank means that value. */
-export const textWithDefault = (name: string, typed: string, extra: { choices?: readonly string[]; scalar?: boolean } = { scalar: true }): ArgSpec => ({
+export const textWithDefault = (name: string, typed: string, extra: { choices?: readonly string[]; scalar?: boolean }): ArgSpec => ({
   kind: "text",
   name,
   optional: true,

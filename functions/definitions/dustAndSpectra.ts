@@ -91,9 +91,10 @@ function extinction(a: Args, ebv: number): number {
     const { min, max } = extinctionRangeAngstrom(law);
     const [low, high] = [bandInUnit(frequencyHz(min, "Angstrom", "min"), unitText), bandInUnit(frequencyHz(max, "Angstrom", "max"), unitText)].sort((p, q) => p - q);
     // far outside (a factor 1.5: not a value just past an edge), the unit in which the same number is
-    // inside: 5500 given in nm is 1.6 times the upper edge, and 5500 Angstrom is inside
+    // inside: 5500 given in nm is 1.6 times the upper edge, and 5500 Angstrom is inside (the unit given
+    // is never named: the same number in it is the wavelength found outside)
     const far = angstrom < min / 1.5 || angstrom > 1.5 * max;
-    const likely = far ? likelyWavelengthUnits.find((u) => u !== unitText && inRange(angstromConverter(u)(given), law)) : undefined;
+    const likely = far ? likelyWavelengthUnits.find((u) => inRange(angstromConverter(u)(given), law)) : undefined;
     throw new NoSolutionError(messages.outsideLawRange("wavelength", given, unitText, law, low, high, likely ? { unit: likely, arg: "wavelength_unit (5th argument)" } : undefined));
   }
   return extinctionMag(angstrom, ebv, law, n(a, "r_v"));
