@@ -22,29 +22,27 @@ export function naturalCubicSpline(xs: readonly number[], ys: readonly number[])
   if (n < 2 || ys.length !== n) throw new RangeError("a spline needs at least 2 knots and one value for each");
   for (let i = 1; i < n; i++) if (!(xs[i] > xs[i - 1])) throw new RangeError("spline knots must be strictly increasing");
   const m = new Float64Array(n); // second derivatives; m[0] = m[n−1] = 0
-  if (n > 2) {
-    // forward sweep over the inner knots 1 … n−2, then back substitution
-    const diagonal = new Float64Array(n);
-    const right = new Float64Array(n);
-    for (let i = 1; i < n - 1; i++) {
-      const hl = xs[i] - xs[i - 1];
-      const hr = xs[i + 1] - xs[i];
-      diagonal[i] = 2 * (hl + hr);
-      right[i] = 6 * ((ys[i + 1] - ys[i]) / hr - (ys[i] - ys[i - 1]) / hl);
-      if (i > 1) {
-        const w = hl / diagonal[i - 1];
-        diagonal[i] -= w * hl;
-        right[i] -= w * right[i - 1];
-      }
+  // forward sweep over the inner knots 1 … n−2, then back substitution (with 2 knots there are none: a straight line)
+  const diagonal = new Float64Array(n);
+  const right = new Float64Array(n);
+  for (let i = 1; i < n - 1; i++) {
+    const hl = xs[i] - xs[i - 1];
+    const hr = xs[i + 1] - xs[i];
+    diagonal[i] = 2 * (hl + hr);
+    right[i] = 6 * ((ys[i + 1] - ys[i]) / hr - (ys[i] - ys[i - 1]) / hl);
+    if (i > 1) {
+      const w = hl / diagonal[i - 1];
+      diagonal[i] -= w * hl;
+      right[i] -= w * right[i - 1];
     }
-    for (let i = n - 2; i >= 1; i--) m[i] = (right[i] - (xs[i + 1] - xs[i]) * m[i + 1]) / diagonal[i];
   }
+  for (let i = n - 2; i >= 1; i--) m[i] = (right[i] - (xs[i + 1] - xs[i]) * m[i + 1]) / diagonal[i];
   const x0 = xs[0];
   const xEnd = xs[n - 1];
   return (x: number) => {
     if (!(x >= x0 && x <= xEnd)) throw new RangeError(`x = ${x} is outside the spline's knots [${x0}, ${xEnd}]`);
     let i = 0;
-    while (i < n - 2 && x > xs[i + 1]) i++;
+    while (x > xs[i + 1]) i++; // stops at n − 2 at the latest: x ≤ xs[n − 1] was checked above
     const h = xs[i + 1] - xs[i];
     const a = xs[i + 1] - x;
     const b = x - xs[i];
