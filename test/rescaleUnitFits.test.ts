@@ -33,7 +33,7 @@ describe("units each quantity accepts: EDS at H0 = 70 restated at H0 = 35 (dista
     ["luminosity",   "W/Hz",         4,                        "a power per Hz"],
     ["luminosity",   "Lsun",         4,                        "a solar luminosity"],
     ["density",      "Mpc-3",        1 / 8,                    "dV/dz ∝ H0⁻³"],
-  ] as const)("%s in %s: × %d (%s)", async (quantity, unit, factor) => {
+  ] as const)("%s in %s: × %d (%s)", async (quantity, unit, factor, _why) => {
     const rescaledValue = await freshRescale();
     expect(rescaledValue(1000, z, quantity, eds70, eds35, unit) / 1000 / factor - 1).toBeCloseTo(0, 12);
   });
