@@ -68,6 +68,20 @@ describe("a unit that does not fit the quantity: TypeError naming what the quant
 });
 
 describe("blank units and magnitudes", () => {
+  test("the unit may be left out: a unit without h (D_M ratio 2)", async () => {
+    const rescaledValue = await freshRescale();
+    expect(rescaledValue(1000, z, "distance", eds70, eds35)).toBeCloseTo(2000, 9);
+  });
+
+  test.each([
+    // unit      | message: "unit: " and what the unit reader says (core/units/units.ts)
+    ["Mpc**",     'unit: "Mpc**": a whole-number power is expected: did you mean Mpc or Mpc3?'],
+    ["furlong",   'unit: unknown unit "furlong"'],
+  ])("a unit zcell cannot read (%s) is refused naming the argument", async (unit, message) => {
+    const rescaledValue = await freshRescale();
+    expect(() => rescaledValue(1000, z, "distance", eds70, eds35, unit)).toThrow(new TypeError(message));
+  });
+
   test('a unit of spaces is no unit: the same as "" (D_M ratio 2)', async () => {
     const rescaledValue = await freshRescale();
     expect(rescaledValue(1000, z, "distance", eds70, eds35, "   ")).toBe(rescaledValue(1000, z, "distance", eds70, eds35, ""));
