@@ -68,10 +68,9 @@ function hPowerOf(unitText: string, quantity: RescaleQuantity): number {
  * @example rescaledValue(1000, 1, "distance", Cosmology.fromSpec("EDS"), Cosmology.fromSpec("EDS; H0=35"), "Mpc/h") // 1000 (D_M h does not depend on H0)
  */
 export function rescaledValue(value: number, z: number, quantity: RescaleQuantity, from: Cosmology, to: Cosmology, unit = ""): number {
-  if (typeof value !== "number" || !Number.isFinite(value)) throw new RangeError("value must be a finite number");
+  if (!Number.isFinite(value)) throw new RangeError("value must be a finite number"); // Number.isFinite is false for a non-number too
   checkSourceRedshift(z);
   const power = unit.trim() === "" ? 0 : hPowerOf(unit, quantity);
-  if (power === 0) return rescaledPhysical(value, z, quantity, from, to);
   return rescaledPhysical(value * from.h ** power, z, quantity, from, to) / to.h ** power;
 }
 
