@@ -113,6 +113,5 @@ function formulaValue(text: string): string {
 function describeValue(value: unknown): string {
   if (typeof value === "string") return `text ${quoted(value)}`;
   if (typeof value === "boolean") return value ? "TRUE" : "FALSE";
-  if (value === undefined || value === null) return "a blank";
   return typeof value === "number" ? formatValue(value) : "a value";
 }

@@ -92,7 +92,7 @@ function singleCell(raw: unknown): unknown {
   if (!Array.isArray(raw)) return raw ?? undefined;
   if (raw.length !== 1) return raw.length === 0 ? undefined : several;
   const row = raw[0];
-  if (!Array.isArray(row)) return raw.length === 1 ? row : several;
+  if (!Array.isArray(row)) return row;
   return row.length === 1 ? row[0] : row.length === 0 ? undefined : several;
 }
 
@@ -123,9 +123,8 @@ function readArg(
     }
     case "number": {
       if (isBlank(value)) {
-        if (given && !spec.blankMeansDefault) return blank;
-        if (spec.default === undefined) return blank;
-        return spec.default;
+        // a blank meaning the default, or left out: such an argument has a default (one without is required)
+        return given && !spec.blankMeansDefault ? blank : spec.default;
       }
       if (typeof value === "string") {
         // text that reads as a number is one (as Excel's own functions read it), in a position too:
@@ -138,7 +137,6 @@ function readArg(
     }
     case "numberOrText": {
       if (isBlank(value)) return spec.default;
-      if (typeof value === "string" && isNumberText(value.trim())) return Number(value.trim());
       if (typeof value === "number" || typeof value === "string") return value;
       return new CellError("value", messages.notANumber(spec.name, value));
     }
@@ -272,7 +270,7 @@ function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): Fixed
     if (singleCell(raw[i]) === several) throw new CellError("value", messages.oneValueOnly(spec.name));
     let conversion: Conversion;
     try {
-      conversion = unitConversion(def.name, spec, Array.isArray(raw[i]) ? toMatrix(raw[i])?.[0]?.[0] : raw[i]);
+      conversion = unitConversion(def.name, spec, Array.isArray(raw[i]) ? toMatrix(raw[i])?.[0][0] : raw[i]);
     } catch (e) {
       throw unitInModelSlot(def, raw) ?? e;
     }
@@ -291,7 +289,7 @@ function readFixed(def: FunctionDef, raw: readonly unknown[], plan: Plan): Fixed
   for (const i of plan.scalarTexts) {
     const spec = def.args[i] as Extract<ArgSpec, { kind: "text" }>;
     if (singleCell(raw[i]) === several) throw new CellError("value", messages.oneValueOnly(spec.name));
-    const text = toMatrix(raw[i])?.[0]?.[0];
+    const text = toMatrix(raw[i])?.[0][0];
     if (isBlank(text) && !spec.optional) throw new CellError("value", messages.required(spec.name));
     const read = isBlank(text) ? "" : readText(spec, text);
     args[spec.name] = read;
@@ -335,15 +333,14 @@ function singleModel(text: string, active: ActiveModelSetting): Cosmology | Cell
  * left out, not left blank: ZC.LUMINOSITY(F2, B2, "erg/s/cm2", "Lsun")), the error that says so.
  */
 function unitInModelSlot(def: FunctionDef, raw: readonly unknown[]): CellError | undefined {
-  const at = def.args.findIndex((a) => a.kind === "model");
-  const given = at < 0 ? undefined : singleCell(raw[at]);
-  if (typeof given !== "string" || given.trim() === "" || isModelText(given.trim())) return undefined;
+  const given = singleCell(raw[def.args.findIndex((a) => a.kind === "model")]); // no model argument: raw[-1], undefined
   try {
-    parseUnit(given.trim());
+    // throws for all but a unit: not text, blank, or a model (no preset or key=value spec reads as one)
+    parseUnit(given as string);
   } catch {
     return undefined;
   }
-  return new CellError("value", messages.unitInModelSlot(given.trim()));
+  return new CellError("value", messages.unitInModelSlot((given as string).trim()));
 }
 
 /** Why a model argument's text gives no model: a unit typed where the model belongs, or the spec's own problem. */
@@ -399,7 +396,7 @@ function readRanges(def: FunctionDef, raw: readonly unknown[], active: ActiveMod
       if (block !== undefined) matrix = [[block]];
     }
     if (!matrix && isRequired(spec)) throw new CellError("value", messages.required(spec.name));
-    given.push({ spec, matrix, rows: matrix?.length ?? 1, cols: matrix?.[0]?.length ?? 1 });
+    given.push({ spec, matrix, rows: matrix?.length ?? 1, cols: matrix?.[0].length ?? 1 });
   }
 
   let rows = 1;
