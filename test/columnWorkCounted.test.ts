@@ -141,3 +141,27 @@ describe("columns of a catalogue are read in place, not copied (a million-row co
   });
 });
 
+
+describe("the kept unit converters are bounded: a sheet of many spellings of a unit cannot grow them without limit", () => {
+  // 70 spellings of one unit (u·m^k/m^k reads as u), more than the 64 converters kept per kind
+  const spellings = (unit: string) => Array.from({ length: 70 }, (_, k) => `${unit}*m^${k + 1}/m^${k + 1}`);
+
+  test("EXTINCTION: after 69 other wavelength-unit spellings, the first is worked out again (at most 64 kept)", () => {
+    const [first, ...others] = spellings("nm");
+    const once = run("EXTINCTION", 550, 0.1, null, null, first);
+    // every spelling reads as nm, so each gives the value of 550 nm (the same unit, common practice)
+    for (const u of others) expect(run("EXTINCTION", 550, 0.1, null, null, u)).toEqual(once);
+    calls.conversionFactor = 0;
+    expect(run("EXTINCTION", 550, 0.1, null, null, first)).toEqual(once);
+    expect(calls.conversionFactor).toBeGreaterThanOrEqual(1);
+  });
+
+  test("INDEX_BETWEEN: after 69 other band-unit spellings, the first is worked out again (at most 64 kept)", () => {
+    const [first, ...others] = spellings("GHz");
+    const once = run("INDEX_BETWEEN", 1, 1.4, 2, 5, first);
+    for (const u of others) expect(run("INDEX_BETWEEN", 1, 1.4, 2, 5, u)).toEqual(once);
+    calls.frequencyHz = 0;
+    expect(run("INDEX_BETWEEN", 1, 1.4, 2, 5, first)).toEqual(once);
+    expect(calls.frequencyHz).toBeGreaterThanOrEqual(1);
+  });
+});
